@@ -1,0 +1,292 @@
+/**
+ * The `coversweep` command line: arguments -> case or plan -> model -> stdout or an atomic file.
+ * Exit codes: 0 success, 1 unexpected internal error, 2 invalid input or usage (messages on stderr,
+ * nothing on stdout, no file written).
+ */
+import { readFileSync } from 'node:fs';
+import { resolve } from 'node:path';
+import { parseArgs } from 'node:util';
+import { parseCaseFile, type ResultDocument, solveCase } from '../compute/caseFile';
+import {
+  type ExpandedCase,
+  type ExpandedPlan,
+  parsePlanFile,
+  runSweep,
+  type SweepOptions,
+} from '../compute/planFile';
+import { csvHeader, documentCsvLines } from '../compute/resultTable';
+import { exampleCase, examplePlan } from './examples';
+import { CliInputError, type CliIo, EXIT_INPUT, EXIT_INTERNAL, EXIT_OK, processIo } from './io';
+import { AtomicFile, checkOutputPath } from './outputFile';
+import { progressReporter } from './progress';
+
+export const HELP: Record<string, string> = {
+  main: `coversweep: reduced-order aerodynamics of covered and deep-rim bicycle wheels
+
+Usage:
+  coversweep example [--plan]              print an example case (or plan) file
+  coversweep solve CASE.json [--out F]     solve one case; the result document (JSON) on stdout or in F
+  coversweep sweep PLAN.json [--out F]     solve every case of a plan; CSV (or JSON if F ends in .json)
+  coversweep <command> --help              help on one command
+
+Options:
+  --help, -h      show help
+  --version       print the version
+
+Exit codes: 0 success, 1 internal error, 2 invalid input or usage (nothing on stdout, no file written).
+Results are estimates from a reduced-order model: allow margin for gusts and lighter riders, and rely on
+qualified testing and the competition's rules before riding a design.
+`,
+  example: `Usage: coversweep example [--plan]
+
+Print an example case file (an invented wheel, "Demo 50 mm half-cover") on stdout, or with --plan an
+example plan file that varies rim depth and cover fraction. Save it, edit it, then run
+  coversweep solve case.json      or      coversweep sweep plan.json --out results.csv
+`,
+  solve: `Usage: coversweep solve CASE.json [--out RESULT.json] [--force]
+
+Solve one case file: every airspeed x yaw angle it lists. Prints the result document (JSON,
+format "coversweep-result") on stdout, or writes it to --out atomically.
+
+Options:
+  --out FILE   write the document to FILE instead of stdout (refuses to overwrite without --force)
+  --force      allow --out to replace an existing file
+  --help       show this help
+`,
+  sweep: `Usage: coversweep sweep PLAN.json [--out results.csv|results.json] [--force]
+
+Expand a plan file (a case file whose leaves may be lists or {"from","to","step"} ranges) into the
+Cartesian product of its cases, solve them all, and write a table: one row per case and operating
+point, the varied parameters first (named by key path), then the result columns. Without --out the
+CSV goes to stdout. Progress is shown on stderr.
+
+Options:
+  --out FILE   write to FILE (.csv: the table; .json: every case's result document), atomically
+  --force      allow --out to replace an existing file
+  --help       show this help
+`,
+};
+
+function version(): string {
+  try {
+    const pkg = JSON.parse(readFileSync(new URL('../../package.json', import.meta.url), 'utf8')) as {
+      version?: string;
+    };
+    return pkg.version ?? 'unknown';
+  } catch {
+    return 'unknown';
+  }
+}
+
+/** Run an argument parser, turning its complaints into usage errors (exit 2). */
+function parseCommandArgs<T>(command: string, parse: () => T): T {
+  try {
+    return parse();
+  } catch (error) {
+    throw new CliInputError(`${command}: ${error instanceof Error ? error.message : String(error)}`, [
+      `see: coversweep ${command} --help`,
+    ]);
+  }
+}
+
+const HELP_OPTION = { help: { type: 'boolean', short: 'h' } } as const;
+const OUT_OPTIONS = { out: { type: 'string' }, force: { type: 'boolean' }, ...HELP_OPTION } as const;
+
+function readInputFile(path: string, cwd: string, what: string): string {
+  try {
+    return readFileSync(resolve(cwd, path), 'utf8');
+  } catch (error) {
+    const code = (error as NodeJS.ErrnoException).code;
+    const reason =
+      code === 'ENOENT'
+        ? 'no such file'
+        : code === 'EISDIR'
+          ? 'is a folder, not a file'
+          : code === 'EACCES'
+            ? 'permission denied'
+            : error instanceof Error
+              ? error.message
+              : String(error);
+    throw new CliInputError(`cannot read the ${what} ${path}: ${reason}`);
+  }
+}
+
+function onePositional(command: string, positionals: string[], what: string): string {
+  if (positionals.length === 0)
+    throw new CliInputError(`${command}: missing the ${what} argument`, [HELP[command]!]);
+  if (positionals.length > 1) {
+    throw new CliInputError(
+      `${command}: expected one ${what}, got ${positionals.length}: ${positionals.join(' ')}`,
+    );
+  }
+  return positionals[0]!;
+}
+
+function commandExample(args: string[], io: CliIo): number {
+  const { values, positionals } = parseCommandArgs('example', () =>
+    parseArgs({ args, options: { plan: { type: 'boolean' }, ...HELP_OPTION }, allowPositionals: true }),
+  );
+  if (values.help) {
+    io.stdout(HELP.example!);
+    return EXIT_OK;
+  }
+  if (positionals.length > 0) throw new CliInputError(`example: unexpected argument ${positionals[0]}`);
+  io.stdout(`${JSON.stringify(values.plan ? examplePlan() : exampleCase(), null, 2)}\n`);
+  return EXIT_OK;
+}
+
+function commandSolve(args: string[], io: CliIo): number {
+  const { values, positionals } = parseCommandArgs('solve', () =>
+    parseArgs({ args, options: OUT_OPTIONS, allowPositionals: true }),
+  );
+  if (values.help) {
+    io.stdout(HELP.solve!);
+    return EXIT_OK;
+  }
+  const path = onePositional('solve', positionals, 'case file');
+  const outPath = values.out === undefined ? undefined : resolve(io.cwd, values.out);
+  if (outPath !== undefined) checkOutputPath(outPath, values.force === true);
+  const parsed = parseCaseFile(readInputFile(path, io.cwd, 'case file'));
+  if (!parsed.ok) throw new CliInputError(`invalid case file ${path}:`, parsed.errors);
+  const text = `${JSON.stringify(solveCase(parsed.value), null, 2)}\n`;
+  if (outPath === undefined) {
+    io.stdout(text);
+  } else {
+    const file = new AtomicFile(outPath, values.force === true);
+    try {
+      file.write(text);
+      file.commit();
+    } catch (error) {
+      file.abort();
+      throw error;
+    }
+    io.stderr(`wrote ${values.out}\n`);
+  }
+  return EXIT_OK;
+}
+
+/** Write a sweep's results as CSV or as a JSON list of documents to `sink`, streaming case by case. */
+export async function writeSweep(
+  plan: ExpandedPlan,
+  format: 'csv' | 'json',
+  sink: (text: string) => void,
+  onProgress?: SweepOptions['onProgress'],
+): Promise<void> {
+  const keys = plan.variedKeys;
+  if (format === 'csv') {
+    sink(csvHeader(keys));
+  } else {
+    sink(
+      `{\n  "format": "coversweep-sweep",\n  "version": 1,\n  "varied_keys": ${JSON.stringify(keys)},\n  "point_count": ${plan.pointCount},\n  "runs": [`,
+    );
+  }
+  let first = true;
+  await runSweep(plan.cases, {
+    ...(onProgress ? { onProgress } : {}),
+    onResult: (expanded: ExpandedCase, document: ResultDocument) => {
+      if (format === 'csv') {
+        sink(documentCsvLines(document, keys, expanded.varied));
+      } else {
+        const run = { index: expanded.index, varied: expanded.varied, result: document };
+        sink(`${first ? '\n' : ',\n'}${JSON.stringify(run)}`);
+        first = false;
+      }
+    },
+  });
+  if (format === 'json') sink('\n  ]\n}\n');
+}
+
+async function commandSweep(args: string[], io: CliIo): Promise<number> {
+  const { values, positionals } = parseCommandArgs('sweep', () =>
+    parseArgs({ args, options: OUT_OPTIONS, allowPositionals: true }),
+  );
+  if (values.help) {
+    io.stdout(HELP.sweep!);
+    return EXIT_OK;
+  }
+  const path = onePositional('sweep', positionals, 'plan file');
+  const force = values.force === true;
+  const outPath = values.out === undefined ? undefined : resolve(io.cwd, values.out);
+  let format: 'csv' | 'json' = 'csv';
+  if (outPath !== undefined) {
+    const lower = outPath.toLowerCase();
+    if (lower.endsWith('.json')) format = 'json';
+    else if (!lower.endsWith('.csv')) {
+      throw new CliInputError(`--out ${values.out}: must end in .csv (a table) or .json (result documents)`);
+    }
+    checkOutputPath(outPath, force);
+  }
+  const parsed = parsePlanFile(readInputFile(path, io.cwd, 'plan file'));
+  if (!parsed.ok) throw new CliInputError(`invalid plan file ${path}:`, parsed.errors);
+  const plan = parsed.value;
+  const progress = progressReporter(io.stderr, io.stderrIsTTY);
+  io.stderr(`sweep: ${plan.cases.length} case(s), ${plan.pointCount} operating point(s)\n`);
+  if (outPath === undefined) {
+    await writeSweep(plan, format, io.stdout, progress);
+    return EXIT_OK;
+  }
+  const file = new AtomicFile(outPath, force);
+  const onSignal = () => {
+    file.abort();
+    io.stderr('\nsweep: interrupted; no file written\n');
+    process.exit(130);
+  };
+  process.once('SIGINT', onSignal);
+  process.once('SIGTERM', onSignal);
+  try {
+    await writeSweep(plan, format, (text) => file.write(text), progress);
+    file.commit();
+  } catch (error) {
+    file.abort();
+    throw error;
+  } finally {
+    process.off('SIGINT', onSignal);
+    process.off('SIGTERM', onSignal);
+  }
+  io.stderr(`wrote ${values.out}\n`);
+  return EXIT_OK;
+}
+
+/** Run the command line on `argv` (without node and the script). Returns the exit code. */
+export async function main(argv: readonly string[], ioOverrides: Partial<CliIo> = {}): Promise<number> {
+  const io: CliIo = { ...processIo(), ...ioOverrides };
+  const [command, ...rest] = argv;
+  try {
+    switch (command) {
+      case undefined:
+        io.stderr(HELP.main!);
+        return EXIT_INPUT;
+      case '--help':
+      case '-h':
+        io.stdout(HELP.main!);
+        return EXIT_OK;
+      case 'help': {
+        const topic = rest[0];
+        io.stdout((topic !== undefined && topic !== 'main' && HELP[topic]) || HELP.main!);
+        return EXIT_OK;
+      }
+      case '--version':
+        io.stdout(`${version()}\n`);
+        return EXIT_OK;
+      case 'example':
+        return commandExample([...rest], io);
+      case 'solve':
+        return commandSolve([...rest], io);
+      case 'sweep':
+        return await commandSweep([...rest], io);
+      default:
+        throw new CliInputError(`unknown command "${command}"`, [
+          'commands: example, solve, sweep (see coversweep --help)',
+        ]);
+    }
+  } catch (error) {
+    if (error instanceof CliInputError) {
+      io.stderr(`coversweep: error: ${error.message}\n`);
+      for (const m of error.messages) io.stderr(`  ${m.trimEnd().replace(/\n/g, '\n  ')}\n`);
+      return EXIT_INPUT;
+    }
+    const detail = error instanceof Error ? (error.stack ?? error.message) : String(error);
+    io.stderr(`coversweep: internal error (please report it): ${detail}\n`);
+    return EXIT_INTERNAL;
+  }
+}

@@ -1,0 +1,7 @@
+export { BoundedCache } from './boundedCache';
+export { FLAG_CODES, POINT_COLUMN_COUNT, POINT_COLUMNS, packPoints, unpackPoints } from './packPoints';
+export { type PlanJobsOptions, planJobs } from './planJobs';
+export type * from './protocol';
+export { type RunSweepOptions, runSweep, type SweepOutcome, type SweepProgress } from './runSweep';
+export { solveJob, solverApi, transferablesOf } from './solverApi';
+export { type PoolRunOptions, type PoolRunSummary, type SpawnWorker, type WorkerHandle, WorkerPool } from './workerPool';

@@ -1,0 +1,120 @@
+import type { Remote } from 'comlink';
+import type { JobResult, SolveJob, SolverApi } from './protocol';
+
+/** A live worker as the pool sees it; made by the environment's spawn function. */
+export interface WorkerHandle {
+  api: Remote<SolverApi>;
+  /** Resolves... never; rejects when the worker dies or reports an uncaught error. */
+  failed: Promise<never>;
+  terminate(): void;
+}
+
+/** Environment-specific: the page spawns a Web Worker, the command line a worker thread. */
+export type SpawnWorker = () => WorkerHandle;
+
+export interface PoolRunOptions {
+  signal?: AbortSignal;
+  /** Called after each finished job with the job and its result. */
+  onJobDone?: (job: SolveJob, result: JobResult) => void;
+  /** Called when a job's worker failed and the job failed its retry too. */
+  onJobFailed?: (job: SolveJob, error: string) => void;
+}
+
+export interface PoolRunSummary {
+  cancelled: boolean;
+  /** Workers replaced after a crash during this run. */
+  workersReplaced: number;
+}
+
+/**
+ * A fixed-size pool of solver workers, free of environment code. Jobs are dealt dynamically (a free
+ * worker takes the next job), so uneven jobs balance. A worker that dies or throws is replaced and its
+ * job retried once on a fresh worker; a job that fails twice is reported through onJobFailed and the run
+ * goes on. Cancelling stops dealing and terminates busy workers at once (they are respawned on the next
+ * run): every finished job has already been delivered through onJobDone.
+ */
+export class WorkerPool {
+  private readonly workers: Array<WorkerHandle | null>;
+
+  constructor(
+    private readonly spawn: SpawnWorker,
+    readonly size: number,
+  ) {
+    if (!(Number.isInteger(size) && size >= 1)) throw new RangeError(`pool size must be an integer >= 1, got ${size}`);
+    this.workers = new Array<WorkerHandle | null>(size).fill(null);
+  }
+
+  private worker(slot: number): WorkerHandle {
+    let w = this.workers[slot];
+    if (!w) {
+      w = this.spawn();
+      // A failure with nobody waiting must not become an unhandled rejection.
+      w.failed.catch(() => undefined);
+      this.workers[slot] = w;
+    }
+    return w;
+  }
+
+  private replace(slot: number): void {
+    this.workers[slot]?.terminate();
+    this.workers[slot] = null;
+  }
+
+  /** Start every worker and wait until each answers (so timings exclude start-up). */
+  async warm(): Promise<void> {
+    await Promise.all(this.workers.map((_, slot) => this.worker(slot).api.ping()));
+  }
+
+  async run(jobs: readonly SolveJob[], options: PoolRunOptions = {}): Promise<PoolRunSummary> {
+    const { signal } = options;
+    const queue: Array<{ job: SolveJob; attempt: number }> = jobs.map((job) => ({ job, attempt: 0 }));
+    let replaced = 0;
+    let cancelled = signal?.aborted ?? false;
+    let wakeCancel: () => void = () => undefined;
+    const cancelPromise = new Promise<'cancelled'>((resolve) => {
+      wakeCancel = () => resolve('cancelled');
+    });
+    const onAbort = () => {
+      cancelled = true;
+      wakeCancel();
+    };
+    signal?.addEventListener('abort', onAbort, { once: true });
+
+    const lane = async (slot: number): Promise<void> => {
+      while (!cancelled) {
+        const next = queue.shift();
+        if (!next) return;
+        const w = this.worker(slot);
+        let outcome: JobResult | 'cancelled' | Error;
+        try {
+          outcome = await Promise.race([w.api.solveJob(next.job), w.failed, cancelPromise]);
+        } catch (err) {
+          outcome = err instanceof Error ? err : new Error(String(err));
+        }
+        if (outcome === 'cancelled') {
+          this.replace(slot);
+          return;
+        }
+        if (outcome instanceof Error) {
+          this.replace(slot);
+          replaced++;
+          if (next.attempt === 0) queue.push({ job: next.job, attempt: 1 });
+          else options.onJobFailed?.(next.job, outcome.message || 'worker failed');
+          continue;
+        }
+        options.onJobDone?.(next.job, outcome);
+      }
+    };
+    try {
+      if (!cancelled) await Promise.all(this.workers.map((_, slot) => lane(slot)));
+    } finally {
+      signal?.removeEventListener('abort', onAbort);
+    }
+    return { cancelled, workersReplaced: replaced };
+  }
+
+  /** Stop every worker. The pool can be used again: workers are respawned on demand. */
+  close(): void {
+    for (let slot = 0; slot < this.workers.length; slot++) this.replace(slot);
+  }
+}

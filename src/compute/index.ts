@@ -1,0 +1,4 @@
+export * from './caseFile';
+export * from './planFile';
+export * from './resultTable';
+export * from './units';

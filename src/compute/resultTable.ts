@@ -1,0 +1,116 @@
+/**
+ * The result table (CSV): a header row, then one row per case and operating point. Columns: the
+ * plan's varied parameters by key path, then the result columns in the output document's order,
+ * components flattened (surface_axial_N, ...), uncertainty as gci_axial_N / gci_side_N, flags joined
+ * with ';'. Numbers are printed in JavaScript's shortest round-trip form (ECMA-262 Number::toString),
+ * empty for null; text is quoted per RFC 4180 when it holds a comma, quote or line break. Lines end
+ * with "\n".
+ */
+import {
+  COMPONENT_KEYS,
+  COMPONENT_NAMES,
+  RESULT_SCALAR_KEYS,
+  type ResultDocument,
+  type ResultRow,
+} from './caseFile';
+import type { PlanValue } from './planFile';
+
+/** The result columns after the varied parameters, in order. */
+export function resultColumnNames(): string[] {
+  const names: string[] = [...RESULT_SCALAR_KEYS];
+  for (const c of COMPONENT_NAMES) for (const k of COMPONENT_KEYS) names.push(`${c}_${k}`);
+  names.push('gci_axial_N', 'gci_side_N', 'flags');
+  return names;
+}
+
+/** All columns of a table whose cases vary `variedKeys`. */
+export function tableColumns(variedKeys: readonly string[]): string[] {
+  const result = resultColumnNames();
+  const clash = variedKeys.find((k) => result.includes(k));
+  if (clash !== undefined) throw new RangeError(`variedKeys: "${clash}" clashes with a result column name`);
+  return [...variedKeys, ...result];
+}
+
+/** One CSV field. */
+export function csvField(value: PlanValue | undefined): string {
+  if (value === null || value === undefined) return '';
+  if (typeof value === 'number') return Number.isFinite(value) ? String(value) : '';
+  const text = String(value);
+  return /[",\r\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
+}
+
+export function csvLine(fields: readonly (PlanValue | undefined)[]): string {
+  return `${fields.map(csvField).join(',')}\n`;
+}
+
+export function csvHeader(variedKeys: readonly string[]): string {
+  return csvLine(tableColumns(variedKeys));
+}
+
+function rowValues(row: ResultRow): PlanValue[] {
+  const out: PlanValue[] = RESULT_SCALAR_KEYS.map((k) => row[k]);
+  for (const c of COMPONENT_NAMES) for (const k of COMPONENT_KEYS) out.push(row.components[c][k]);
+  out.push(row.uncertainty.axial_N, row.uncertainty.side_N, row.flags.join(';'));
+  return out;
+}
+
+/** The CSV lines (no header) of one case's document: one per operating point. */
+export function documentCsvLines(
+  document: ResultDocument,
+  variedKeys: readonly string[],
+  varied: Readonly<Record<string, PlanValue>>,
+): string {
+  const prefix = variedKeys.map((k) => varied[k] ?? null);
+  let out = '';
+  for (const row of document.results) out += csvLine([...prefix, ...rowValues(row)]);
+  return out;
+}
+
+/** A whole table in memory (for small sweeps and tests). */
+export function resultsToCsv(
+  runs: readonly { varied: Readonly<Record<string, PlanValue>>; document: ResultDocument }[],
+  variedKeys: readonly string[],
+): string {
+  let out = csvHeader(variedKeys);
+  for (const run of runs) out += documentCsvLines(run.document, variedKeys, run.varied);
+  return out;
+}
+
+/** Split one CSV line written by csvLine back into fields (RFC 4180 quoting). For tests and tools. */
+export function parseCsvLine(line: string): string[] {
+  const fields: string[] = [];
+  let i = 0;
+  const text = line.endsWith('\n') ? line.slice(0, -1) : line;
+  while (true) {
+    if (text[i] === '"') {
+      let value = '';
+      i++;
+      while (i < text.length) {
+        if (text[i] === '"') {
+          if (text[i + 1] === '"') {
+            value += '"';
+            i += 2;
+          } else {
+            i++;
+            break;
+          }
+        } else {
+          value += text[i];
+          i++;
+        }
+      }
+      fields.push(value);
+    } else {
+      const end = text.indexOf(',', i);
+      fields.push(end < 0 ? text.slice(i) : text.slice(i, end));
+      i = end < 0 ? text.length : end;
+    }
+    if (i >= text.length) break;
+    i++; // the comma
+    if (i === text.length) {
+      fields.push('');
+      break;
+    }
+  }
+  return fields;
+}

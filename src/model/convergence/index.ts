@@ -1,0 +1,6 @@
+export type {
+  ConvergenceStatus,
+  GridConvergenceInput,
+  GridConvergenceResult,
+} from './gridConvergenceIndex';
+export { gridConvergenceIndex } from './gridConvergenceIndex';

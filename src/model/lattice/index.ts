@@ -1,0 +1,17 @@
+export { assembleSystem } from './assembleSystem';
+export type { DiscLatticeOptions } from './buildDiscLattice';
+export { buildDiscLattice } from './buildDiscLattice';
+export type { StripLatticeSpec } from './buildStripLattice';
+export { buildStripLattice } from './buildStripLattice';
+export { DEFAULT_CHORD_COUNT, DEFAULT_SPAN_COUNT } from './defaults';
+export { factorLattice } from './factorLattice';
+export { influenceMatrix } from './influenceMatrix';
+export { latticeVelocity } from './latticeVelocity';
+export { planarSegmentNormalVelocity } from './planarSegmentNormalVelocity';
+export { planarWakeNormalVelocity } from './planarWakeNormalVelocity';
+export { segmentVelocity } from './segmentVelocity';
+export { semiInfiniteSegmentVelocity } from './semiInfiniteSegmentVelocity';
+export { solveFactored } from './solveFactored';
+export { solveLattice } from './solveLattice';
+export type { DiscLattice, LatticeFactor, LatticeSolution, StripLattice } from './types';
+export { trefftzInducedDrag } from './trefftzInducedDrag';

@@ -1,0 +1,2 @@
+export { luFactor } from './luFactor';
+export { luSolve } from './luSolve';

@@ -1,0 +1,12 @@
+export { checkRideSetup } from './checkRideSetup';
+export { martinAeroPowerW } from './martinAeroPowerW';
+export { martinBearingPowerW } from './martinBearingPowerW';
+export { martinGravityPowerW } from './martinGravityPowerW';
+export { martinKineticPowerW } from './martinKineticPowerW';
+export { type MartinInput, type MartinPower, martinPower } from './martinPower';
+export { martinRollingPowerW } from './martinRollingPowerW';
+export { ridePower } from './ridePower';
+export { speedForPower } from './speedForPower';
+export type * from './types';
+export { validateWheelYawCurve } from './validateWheelYawCurve';
+export { wheelYawCurveLoads } from './wheelYawCurveLoads';

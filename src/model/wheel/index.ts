@@ -1,0 +1,13 @@
+export { assemblePoint } from './assemblePoint';
+export { DEFAULT_MODEL_OPTIONS, DEFAULT_STEERING, DEMO_WHEEL } from './defaults';
+export { meanAbsSinusoid } from './meanAbsSinusoid';
+export { panelOpenness } from './panelOpenness';
+export { rimTyreSection } from './rimTyreLoads';
+export { solveWheel, type WheelInput } from './solveWheel';
+export { screenOpenness, spokeScreenResistance } from './spokeScreen';
+export { groundTrailM, steeringMoment } from './steeringAxis';
+export { type SurfaceCoefficients, surfaceCoefficients } from './surfaceCoefficients';
+export { surfaceKey } from './surfaceKey';
+export type * from './types';
+export { FLAG_MESSAGES, VALIDITY } from './validity';
+export { coveredAreaFraction, type WheelRadii, wheelRadii } from './wheelRadii';

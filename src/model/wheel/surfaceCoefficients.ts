@@ -1,0 +1,107 @@
+import { gridConvergenceIndex } from '../convergence';
+import { solveLattice } from '../lattice';
+import { cachedDiscLattice } from './latticeCache';
+import { panelOpenness } from './panelOpenness';
+import type { ConvergenceEstimate, ModelOptions, WheelGeometry } from './types';
+import type { WheelRadii } from './wheelRadii';
+
+/** The lifting surface's coefficients for one wheel and rotation ratio; yaw and speed scale them. */
+export interface SurfaceCoefficients {
+  /** Potential normal-force slope Kp per radian, on S = pi R^2. */
+  normalSlope: number;
+  /** Ki = C_Di / C_N^2 (Trefftz plane). */
+  inducedDragFactor: number;
+  /** Porous dissipation drag per sin^2(beta), on S. */
+  porousDragSlope: number;
+  /** Potential leading-edge suction per sin^2(beta), on S: Kp - Kp^2 Ki - Kd (Polhamus 1966). */
+  suctionSlope: number;
+  centreXM: number;
+  centreZM: number;
+  panels: number;
+  /** Convergence of Kp and of the suction slope over three lattices (null when not asked). */
+  normalSlopeConvergence: ConvergenceEstimate | null;
+  suctionSlopeConvergence: ConvergenceEstimate | null;
+}
+
+function coefficientsOn(
+  wheel: WheelGeometry,
+  radii: WheelRadii,
+  options: ModelOptions,
+  rotationRatio: number,
+  spanCount: number,
+  chordCount: number,
+) {
+  const lattice = cachedDiscLattice(radii.outerRadiusM, spanCount, chordCount, options.ground);
+  const openness = panelOpenness(lattice, wheel, radii, rotationRatio, options.porosityScale);
+  const s = solveLattice(lattice, openness);
+  return {
+    kp: s.normalSlope,
+    ki: s.inducedDragFactor,
+    kd: s.porousDragSlope,
+    kt: s.normalSlope - s.normalSlope * s.normalSlope * s.inducedDragFactor - s.porousDragSlope,
+    cx: s.centreX,
+    cz: s.centreZ,
+    n: lattice.panelCount,
+  };
+}
+
+function estimate(h: number[], phi: number[]): ConvergenceEstimate {
+  const g = gridConvergenceIndex({ h1: h[0]!, h2: h[1]!, h3: h[2]!, phi1: phi[0]!, phi2: phi[1]!, phi3: phi[2]! });
+  return {
+    fine: phi[0]!,
+    extrapolated: g.extrapolated,
+    observedOrder: g.observedOrder,
+    gciRelative: g.gciRelative,
+  };
+}
+
+/**
+ * Solve the lifting surface of a wheel (vortex lattice with porous spoked region and optional ground
+ * image) and, when asked, two coarser lattices (each count divided by 1.5 and 2.25) for a
+ * grid-convergence index (Roache 1994; Celik et al. 2008) with representative size h = sqrt(S / n).
+ */
+export function surfaceCoefficients(
+  wheel: WheelGeometry,
+  radii: WheelRadii,
+  options: ModelOptions,
+  rotationRatio: number,
+): SurfaceCoefficients {
+  const span = options.latticeSpanCount;
+  const chord = options.latticeChordCount;
+  const fine = coefficientsOn(wheel, radii, options, rotationRatio, span, chord);
+  let normalConv: ConvergenceEstimate | null = null;
+  let suctionConv: ConvergenceEstimate | null = null;
+  if (options.gridConvergence) {
+    const medium = coefficientsOn(
+      wheel,
+      radii,
+      options,
+      rotationRatio,
+      Math.max(4, Math.round(span / 1.5)),
+      Math.max(2, Math.round(chord / 1.5)),
+    );
+    const coarse = coefficientsOn(
+      wheel,
+      radii,
+      options,
+      rotationRatio,
+      Math.max(3, Math.round(span / 2.25)),
+      Math.max(2, Math.round(chord / 2.25)),
+    );
+    const area = Math.PI * radii.outerRadiusM * radii.outerRadiusM;
+    const h = [fine.n, medium.n, coarse.n].map((n) => Math.sqrt(area / n));
+    normalConv = estimate(h, [fine.kp, medium.kp, coarse.kp]);
+    suctionConv = estimate(h, [fine.kt, medium.kt, coarse.kt]);
+  }
+  return {
+    normalSlope: fine.kp,
+    inducedDragFactor: fine.ki,
+    porousDragSlope: fine.kd,
+    suctionSlope: fine.kt,
+    centreXM: fine.cx,
+    centreZM: fine.cz,
+    panels: fine.n,
+    normalSlopeConvergence: normalConv,
+    suctionSlopeConvergence: suctionConv,
+  };
+}

@@ -1,0 +1,12 @@
+export { type ApparentWind, apparentWind } from './apparentWind';
+export { lanczosGamma } from './lanczosGamma';
+export { logWindProfileRatio } from './logWindProfileRatio';
+export { rayleighScaleMps } from './rayleighScaleMps';
+export { weibullMean } from './weibullMean';
+export { weibullQuantile } from './weibullQuantile';
+export { weightedHistogram } from './weightedHistogram';
+export { weightedQuantile } from './weightedQuantile';
+export { type WindAveragedWheelLoads, windAveragedWheelLoads } from './windAveragedWheelLoads';
+export { type WindDirectionDistribution, windDirectionNodes } from './windDirectionNodes';
+export { type WindSpeedDistribution, windSpeedNodes } from './windSpeedNodes';
+export { type WindStates, windStates } from './windStates';

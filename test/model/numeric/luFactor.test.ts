@@ -1,0 +1,119 @@
+import { describe, expect, it } from 'vitest';
+import { luFactor } from '../../../src/model/numeric/luFactor';
+import { luSolve } from '../../../src/model/numeric/luSolve';
+import { matVec, norm2, seededMatrix } from './seeded';
+
+const EPS = Number.EPSILON;
+
+/** Rebuilds P A from the packed factors: L U, then undoes the interchanges in reverse order. */
+function reconstruct(lu: Float64Array, n: number, pivots: Int32Array): Float64Array {
+  const out = new Float64Array(n * n);
+  for (let i = 0; i < n; i++) {
+    for (let j = 0; j < n; j++) {
+      let s = 0;
+      const kMax = Math.min(i, j);
+      for (let k = 0; k <= kMax; k++) {
+        const l = k === i ? 1 : lu[i * n + k]!;
+        s += l * lu[k * n + j]!;
+      }
+      out[i * n + j] = s;
+    }
+  }
+  for (let k = n - 1; k >= 0; k--) {
+    const p = pivots[k]!;
+    if (p !== k) {
+      for (let j = 0; j < n; j++) {
+        const t = out[k * n + j]!;
+        out[k * n + j] = out[p * n + j]!;
+        out[p * n + j] = t;
+      }
+    }
+  }
+  return out;
+}
+
+describe('luFactor', () => {
+  it('solves the textbook 3x3 system (Strang, Introduction to Linear Algebra, ch. 2 elimination example, from memory)', () => {
+    // 2u + v + w = 5, 4u - 6v = -2, -2u + 7v + 2w = 9  ->  u = 1, v = 1, w = 2.
+    const a = Float64Array.from([2, 1, 1, 4, -6, 0, -2, 7, 2]);
+    const b = Float64Array.from([5, -2, 9]);
+    const pivots = new Int32Array(3);
+    luFactor(a, 3, pivots);
+    luSolve(a, 3, pivots, b);
+    const expected = [1, 1, 2];
+    const tol = 16 * EPS;
+    for (let i = 0; i < 3; i++) {
+      const err = Math.abs(b[i]! - expected[i]!);
+      expect(err, `x[${i}] got=${b[i]} expected=${expected[i]} tol=${tol}`).toBeLessThanOrEqual(tol);
+    }
+    // Partial pivoting picks the largest |a_i0| = 4 (row 1) first.
+    expect(pivots[0], `pivots[0] got=${pivots[0]} expected=1`).toBe(1);
+  });
+
+  it('needs pivoting for a zero leading entry (permutation matrix, exact)', () => {
+    const a = Float64Array.from([0, 1, 1, 0]);
+    const b = Float64Array.from([3, 7]);
+    const pivots = new Int32Array(2);
+    luFactor(a, 2, pivots);
+    luSolve(a, 2, pivots, b);
+    expect(b[0], `x0 got=${b[0]} expected=7`).toBe(7);
+    expect(b[1], `x1 got=${b[1]} expected=3`).toBe(3);
+  });
+
+  it('reproduces P A = L U across block boundaries (relative error within 1e3 n eps)', () => {
+    for (const n of [1, 2, 7, 47, 48, 49, 97, 130]) {
+      const a = seededMatrix(n, 1000 + n, 0);
+      const lu = Float64Array.from(a);
+      const pivots = new Int32Array(n);
+      luFactor(lu, n, pivots);
+      const pa = reconstruct(lu, n, pivots);
+      let err = 0;
+      let scale = 0;
+      for (let i = 0; i < n * n; i++) {
+        err = Math.max(err, Math.abs(pa[i]! - a[i]!));
+        scale = Math.max(scale, Math.abs(a[i]!));
+      }
+      const tol = 1e3 * n * EPS * scale;
+      expect(err, `n=${n} max|LU - PA| got=${err} expected=0 tol=${tol}`).toBeLessThanOrEqual(tol);
+      for (let k = 0; k < n; k++) {
+        for (let i = k + 1; i < n; i++) {
+          // Partial pivoting bounds the multipliers: |l_ik| <= 1 (Golub & Van Loan sec. 3.4.3).
+          expect(Math.abs(lu[i * n + k]!), `n=${n} |l[${i},${k}]|`).toBeLessThanOrEqual(1);
+        }
+      }
+    }
+  });
+
+  it('solves random well-conditioned systems: ||Ax - b|| / ||b|| within 1e3 n eps', () => {
+    for (const n of [5, 48, 100, 200]) {
+      const a = seededMatrix(n, 7 * n + 3, 0.5 * Math.sqrt(n));
+      const xTrue = seededMatrix(1, 99 + n, 0).subarray(0, 1);
+      const x0 = new Float64Array(n);
+      for (let i = 0; i < n; i++) x0[i] = Math.sin(i + xTrue[0]!);
+      const b = matVec(a, n, x0);
+      const lu = Float64Array.from(a);
+      const pivots = new Int32Array(n);
+      luFactor(lu, n, pivots);
+      const x = luSolve(lu, n, pivots, Float64Array.from(b));
+      const r = matVec(a, n, x);
+      for (let i = 0; i < n; i++) r[i]! -= b[i]!;
+      const rel = norm2(r) / norm2(b);
+      const tol = 1e3 * n * EPS;
+      expect(rel, `n=${n} residual got=${rel} expected=0 tol=${tol}`).toBeLessThanOrEqual(tol);
+    }
+  });
+
+  it('throws a clear error for a singular matrix', () => {
+    const a = Float64Array.from([1, 2, 3, 2, 4, 6, 1, 0, 1]); // row 2 = 2 row 1
+    expect(() => luFactor(a, 3, new Int32Array(3))).toThrow(/singular/);
+    const z = new Float64Array(4);
+    expect(() => luFactor(z, 2, new Int32Array(2))).toThrow(/singular/);
+  });
+
+  it('checks its arguments', () => {
+    expect(() => luFactor(new Float64Array(3), 2, new Int32Array(2))).toThrow(/a.length=3/);
+    expect(() => luFactor(new Float64Array(4), 2, new Int32Array(1))).toThrow(/pivots.length=1/);
+    expect(() => luFactor(new Float64Array(4), 0, new Int32Array(1))).toThrow(/n=0/);
+    expect(() => luFactor(Float64Array.from([1, Number.NaN, 0, 1]), 2, new Int32Array(2))).toThrow(/singular|finite/);
+  });
+});
