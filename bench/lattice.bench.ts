@@ -85,7 +85,9 @@ for (const n of [400, 1000]) {
       sink += a[n * n - 1]!;
     }
     const ms = median(times);
-    console.log(`LU n=${n} ${name}: ${ms.toFixed(1)} ms, ${(flops / (ms * 1e6)).toFixed(2)} GFLOP/s (median of 3)`);
+    console.log(
+      `LU n=${n} ${name}: ${ms.toFixed(1)} ms, ${(flops / (ms * 1e6)).toFixed(2)} GFLOP/s (median of 3)`,
+    );
   }
 }
 console.log(`(checksum ${sink.toPrecision(6)})`);

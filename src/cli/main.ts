@@ -3,10 +3,19 @@
  * Exit codes: 0 success, 1 unexpected internal error, 2 invalid input or usage (messages on stderr,
  * nothing on stdout, no file written).
  */
-import { readFileSync } from 'node:fs';
+import { readFileSync, statSync } from 'node:fs';
+import { availableParallelism } from 'node:os';
 import { resolve } from 'node:path';
 import { parseArgs } from 'node:util';
-import { parseCaseFile, type ResultDocument, solveCase } from '../compute/caseFile';
+import {
+  caseToModelInput,
+  parseCaseFile,
+  type ResultDocument,
+  solutionToDocument,
+  solveCase,
+} from '../compute/caseFile';
+import { runSweep as runPooledSweep } from '../compute/engine/runSweep';
+import { WorkerPool } from '../compute/engine/workerPool';
 import {
   type ExpandedCase,
   type ExpandedPlan,
@@ -14,11 +23,17 @@ import {
   runSweep,
   type SweepOptions,
 } from '../compute/planFile';
-import { csvHeader, documentCsvLines } from '../compute/resultTable';
+import { csvHeader, documentCsvLines, errorCsvLine } from '../compute/resultTable';
 import { exampleCase, examplePlan } from './examples';
 import { CliInputError, type CliIo, EXIT_INPUT, EXIT_INTERNAL, EXIT_OK, processIo } from './io';
+import { runCompare } from './compareCommand';
+import { nodeWorkerSpawner } from './nodeWorker';
 import { AtomicFile, checkOutputPath } from './outputFile';
 import { progressReporter } from './progress';
+import { runRide } from './rideCommand';
+
+/** Below this many cases a sweep runs in-process by default: worker start-up (~1 s) would dominate. */
+const MIN_CASES_FOR_POOL = 8;
 
 export const HELP: Record<string, string> = {
   main: `coversweep: reduced-order aerodynamics of covered and deep-rim bicycle wheels
@@ -27,6 +42,10 @@ Usage:
   coversweep example [--plan]              print an example case (or plan) file
   coversweep solve CASE.json [--out F]     solve one case; the result document (JSON) on stdout or in F
   coversweep sweep PLAN.json [--out F]     solve every case of a plan; CSV (or JSON if F ends in .json)
+  coversweep ride RIDE.json                a design against a baseline on the road: watts, seconds,
+                                           wind-averaged drag, crosswind handling (JSON on stdout)
+  coversweep compare CASE.json DATA.csv    hold measured or simulated data against the model:
+                                           unit and axis slips, residuals, --calibrate
   coversweep <command> --help              help on one command
 
 Options:
@@ -53,7 +72,7 @@ Options:
   --force      allow --out to replace an existing file
   --help       show this help
 `,
-  sweep: `Usage: coversweep sweep PLAN.json [--out results.csv|results.json] [--force]
+  sweep: `Usage: coversweep sweep PLAN.json [--out results.csv|results.json] [--workers N] [--force]
 
 Expand a plan file (a case file whose leaves may be lists or {"from","to","step"} ranges) into the
 Cartesian product of its cases, solve them all, and write a table: one row per case and operating
@@ -61,9 +80,14 @@ point, the varied parameters first (named by key path), then the result columns.
 CSV goes to stdout. Progress is shown on stderr.
 
 Options:
-  --out FILE   write to FILE (.csv: the table; .json: every case's result document), atomically
-  --force      allow --out to replace an existing file
-  --help       show this help
+  --out FILE     write to FILE (.csv: the table; .json: every case's result document), atomically
+  --workers N    solver worker threads (default: the machine's core count; plans of fewer than
+                 ${MIN_CASES_FOR_POOL} cases run in this process unless N is given; 0 = in this process)
+  --force        allow --out to replace an existing file
+  --help         show this help
+
+A case the model rejects becomes a row with its message in the "error" column; the sweep goes on and
+reports how many failed (exit code 0 when some cases ran, 2 when every case failed).
 `,
 };
 
@@ -165,13 +189,15 @@ function commandSolve(args: string[], io: CliIo): number {
   return EXIT_OK;
 }
 
-/** Write a sweep's results as CSV or as a JSON list of documents to `sink`, streaming case by case. */
+/** Write a sweep's results as CSV or as a JSON list of documents to `sink`, streaming case by case in
+ * plan order (a pool's out-of-order results wait for their turn). Returns how many cases failed. */
 export async function writeSweep(
   plan: ExpandedPlan,
   format: 'csv' | 'json',
   sink: (text: string) => void,
   onProgress?: SweepOptions['onProgress'],
-): Promise<void> {
+  pool?: WorkerPool,
+): Promise<number> {
   const keys = plan.variedKeys;
   if (format === 'csv') {
     sink(csvHeader(keys));
@@ -181,24 +207,57 @@ export async function writeSweep(
     );
   }
   let first = true;
-  await runSweep(plan.cases, {
-    ...(onProgress ? { onProgress } : {}),
-    onResult: (expanded: ExpandedCase, document: ResultDocument) => {
-      if (format === 'csv') {
-        sink(documentCsvLines(document, keys, expanded.varied));
-      } else {
-        const run = { index: expanded.index, varied: expanded.varied, result: document };
-        sink(`${first ? '\n' : ',\n'}${JSON.stringify(run)}`);
-        first = false;
-      }
-    },
-  });
+  const emit = (expanded: ExpandedCase, document: ResultDocument | null, error: string | null) => {
+    if (format === 'csv') {
+      sink(
+        document
+          ? documentCsvLines(document, keys, expanded.varied)
+          : errorCsvLine(keys, expanded.varied, error ?? ''),
+      );
+    } else {
+      const run = document
+        ? { index: expanded.index, varied: expanded.varied, result: document }
+        : { index: expanded.index, varied: expanded.varied, error };
+      sink(`${first ? '\n' : ',\n'}${JSON.stringify(run)}`);
+      first = false;
+    }
+  };
+  let failed = 0;
+  if (!pool) {
+    await runSweep(plan.cases, {
+      ...(onProgress ? { onProgress } : {}),
+      onResult: (expanded: ExpandedCase, document: ResultDocument) => emit(expanded, document, null),
+    });
+  } else {
+    const waiting = new Map<number, () => void>();
+    let next = 0;
+    const outcome = await runPooledSweep(
+      pool,
+      plan.cases.map((c) => caseToModelInput(c.caseFile)),
+      {
+        ...(onProgress ? { onProgress } : {}),
+        onCase: (i, solution, error) => {
+          const expanded = plan.cases[i]!;
+          waiting.set(i, () =>
+            emit(expanded, solution ? solutionToDocument(expanded.caseFile, solution) : null, error),
+          );
+          for (let flush = waiting.get(next); flush; flush = waiting.get(next)) {
+            flush();
+            waiting.delete(next);
+            next++;
+          }
+        },
+      },
+    );
+    failed = outcome.failedCount;
+  }
   if (format === 'json') sink('\n  ]\n}\n');
+  return failed;
 }
 
 async function commandSweep(args: string[], io: CliIo): Promise<number> {
   const { values, positionals } = parseCommandArgs('sweep', () =>
-    parseArgs({ args, options: OUT_OPTIONS, allowPositionals: true }),
+    parseArgs({ args, options: { ...OUT_OPTIONS, workers: { type: 'string' } }, allowPositionals: true }),
   );
   if (values.help) {
     io.stdout(HELP.sweep!);
@@ -216,14 +275,34 @@ async function commandSweep(args: string[], io: CliIo): Promise<number> {
     }
     checkOutputPath(outPath, force);
   }
+  let workers: number | undefined;
+  if (values.workers !== undefined) {
+    workers = Number(values.workers);
+    if (!/^\d+$/.test(values.workers) || workers > 64) {
+      throw new CliInputError(`--workers ${values.workers}: must be a whole number from 0 to 64`);
+    }
+  }
   const parsed = parsePlanFile(readInputFile(path, io.cwd, 'plan file'));
   if (!parsed.ok) throw new CliInputError(`invalid plan file ${path}:`, parsed.errors);
   const plan = parsed.value;
   const progress = progressReporter(io.stderr, io.stderrIsTTY);
-  io.stderr(`sweep: ${plan.cases.length} case(s), ${plan.pointCount} operating point(s)\n`);
+  workers ??= plan.cases.length < MIN_CASES_FOR_POOL ? 0 : availableParallelism();
+  workers = Math.min(workers, plan.cases.length);
+  io.stderr(
+    `sweep: ${plan.cases.length} case(s), ${plan.pointCount} operating point(s), ${workers > 0 ? `${workers} worker thread(s)` : 'in this process'}\n`,
+  );
+  const pool = workers > 0 ? new WorkerPool(nodeWorkerSpawner(), workers) : undefined;
+  const finish = (failed: number): number => {
+    if (failed > 0)
+      io.stderr(`sweep: ${failed} of ${plan.cases.length} case(s) failed; see the error column\n`);
+    return failed > 0 && failed === plan.cases.length ? EXIT_INPUT : EXIT_OK;
+  };
   if (outPath === undefined) {
-    await writeSweep(plan, format, io.stdout, progress);
-    return EXIT_OK;
+    try {
+      return finish(await writeSweep(plan, format, io.stdout, progress, pool));
+    } finally {
+      pool?.close();
+    }
   }
   const file = new AtomicFile(outPath, force);
   const onSignal = () => {
@@ -233,18 +312,20 @@ async function commandSweep(args: string[], io: CliIo): Promise<number> {
   };
   process.once('SIGINT', onSignal);
   process.once('SIGTERM', onSignal);
+  let failed = 0;
   try {
-    await writeSweep(plan, format, (text) => file.write(text), progress);
+    failed = await writeSweep(plan, format, (text) => file.write(text), progress, pool);
     file.commit();
   } catch (error) {
     file.abort();
     throw error;
   } finally {
+    pool?.close();
     process.off('SIGINT', onSignal);
     process.off('SIGTERM', onSignal);
   }
   io.stderr(`wrote ${values.out}\n`);
-  return EXIT_OK;
+  return finish(failed);
 }
 
 /** Run the command line on `argv` (without node and the script). Returns the exit code. */
@@ -274,9 +355,22 @@ export async function main(argv: readonly string[], ioOverrides: Partial<CliIo> 
         return commandSolve([...rest], io);
       case 'sweep':
         return await commandSweep([...rest], io);
+      case 'ride':
+        return runRide([...rest], {
+          stdout: io.stdout,
+          stderr: io.stderr,
+          readFile: (path) => readFileSync(resolve(io.cwd, path), 'utf8'),
+        });
+      case 'compare':
+        return runCompare([...rest], {
+          stdout: io.stdout,
+          stderr: io.stderr,
+          readFile: (path) => readFileSync(resolve(io.cwd, path), 'utf8'),
+          fileSize: (path) => statSync(resolve(io.cwd, path)).size,
+        });
       default:
         throw new CliInputError(`unknown command "${command}"`, [
-          'commands: example, solve, sweep (see coversweep --help)',
+          'commands: example, solve, sweep, ride, compare (see coversweep --help)',
         ]);
     }
   } catch (error) {

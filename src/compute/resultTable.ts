@@ -2,7 +2,7 @@
  * The result table (CSV): a header row, then one row per case and operating point. Columns: the
  * plan's varied parameters by key path, then the result columns in the output document's order,
  * components flattened (surface_axial_N, ...), uncertainty as gci_axial_N / gci_side_N, flags joined
- * with ';'. Numbers are printed in JavaScript's shortest round-trip form (ECMA-262 Number::toString),
+ * with ';', and last `error` (empty, or why the case failed: its other result fields are then empty). Numbers are printed in JavaScript's shortest round-trip form (ECMA-262 Number::toString),
  * empty for null; text is quoted per RFC 4180 when it holds a comma, quote or line break. Lines end
  * with "\n".
  */
@@ -19,7 +19,7 @@ import type { PlanValue } from './planFile';
 export function resultColumnNames(): string[] {
   const names: string[] = [...RESULT_SCALAR_KEYS];
   for (const c of COMPONENT_NAMES) for (const k of COMPONENT_KEYS) names.push(`${c}_${k}`);
-  names.push('gci_axial_N', 'gci_side_N', 'flags');
+  names.push('gci_axial_N', 'gci_side_N', 'flags', 'error');
   return names;
 }
 
@@ -50,8 +50,20 @@ export function csvHeader(variedKeys: readonly string[]): string {
 function rowValues(row: ResultRow): PlanValue[] {
   const out: PlanValue[] = RESULT_SCALAR_KEYS.map((k) => row[k]);
   for (const c of COMPONENT_NAMES) for (const k of COMPONENT_KEYS) out.push(row.components[c][k]);
-  out.push(row.uncertainty.axial_N, row.uncertainty.side_N, row.flags.join(';'));
+  out.push(row.uncertainty.axial_N, row.uncertainty.side_N, row.flags.join(';'), '');
   return out;
+}
+
+/** The one CSV line of a case that failed: its varied parameters, empty results, and the message. */
+export function errorCsvLine(
+  variedKeys: readonly string[],
+  varied: Readonly<Record<string, PlanValue>>,
+  message: string,
+): string {
+  const empty = resultColumnNames()
+    .slice(0, -1)
+    .map(() => null);
+  return csvLine([...variedKeys.map((k) => varied[k] ?? null), ...empty, message]);
 }
 
 /** The CSV lines (no header) of one case's document: one per operating point. */

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
+import { nodeWorkerSpawner } from '../../src/cli/nodeWorker';
 import { runSweep } from '../../src/compute/engine/runSweep';
 import { type SpawnWorker, WorkerPool } from '../../src/compute/engine/workerPool';
-import { nodeWorkerSpawner } from '../../src/cli/nodeWorker';
 import { smallSweep } from '../compute/engine/fixtures';
 
 // Real Node worker_threads running the TypeScript worker entry (through tsx). Start-up is ~1 s each.

@@ -9,7 +9,7 @@ import {
 } from '../../src/compute/resultTable';
 
 describe('result table columns (the documented order)', () => {
-  it('varied keys first, then results, components, uncertainty and flags', () => {
+  it('varied keys first, then results, components, uncertainty, flags and error', () => {
     const cols = tableColumns(['wheel.cover.fraction', 'wheel.rim_depth_m']);
     expect(cols.slice(0, 6)).toEqual([
       'wheel.cover.fraction',
@@ -48,7 +48,7 @@ describe('result table columns (the documented order)', () => {
       'surface_vertical_N',
       'surface_axle_torque_Nm',
     ]);
-    expect(r.slice(-7)).toEqual([
+    expect(r.slice(-8)).toEqual([
       'friction_axial_N',
       'friction_side_N',
       'friction_vertical_N',
@@ -56,8 +56,9 @@ describe('result table columns (the documented order)', () => {
       'gci_axial_N',
       'gci_side_N',
       'flags',
+      'error',
     ]);
-    expect(r).toHaveLength(20 + 5 * 4 + 3);
+    expect(r).toHaveLength(20 + 5 * 4 + 4);
   });
 });
 

@@ -190,8 +190,10 @@ export class CsvReader {
       this.headers = rec.map((h) => h.trim());
       const seen = new Set<string>();
       for (const [k, h] of this.headers.entries()) {
-        if (h === '') this.error(`line ${this.recordLine}: header column ${k + 1} is empty (every column needs a name)`);
-        else if (seen.has(h)) this.error(`line ${this.recordLine}: header "${h}" appears twice (column names must be unique)`);
+        if (h === '')
+          this.error(`line ${this.recordLine}: header column ${k + 1} is empty (every column needs a name)`);
+        else if (seen.has(h))
+          this.error(`line ${this.recordLine}: header "${h}" appears twice (column names must be unique)`);
         seen.add(h);
       }
       return;
@@ -239,10 +241,14 @@ export class CsvReader {
         this.endRecord();
       }
     }
-    if (this.headers === null) return { ok: false, errors: ['the data file is empty (no header line and no data)'] };
+    if (this.headers === null)
+      return { ok: false, errors: ['the data file is empty (no header line and no data)'] };
     if (this.errors.length > 0) return { ok: false, errors: this.errors };
     if (this.rows.length === 0) {
-      return { ok: false, errors: [`the data file has a header (${this.headers.join(', ')}) but no data rows`] };
+      return {
+        ok: false,
+        errors: [`the data file has a header (${this.headers.join(', ')}) but no data rows`],
+      };
     }
     const d = this.delimiter!;
     return {
@@ -300,7 +306,9 @@ export async function readCsvStream(
         await reader.cancel();
         return {
           ok: false,
-          errors: [`${checkDataSize(bytes, maxBytes)} (stopped reading after ${(bytes / (1024 * 1024)).toFixed(1)} MB)`],
+          errors: [
+            `${checkDataSize(bytes, maxBytes)} (stopped reading after ${(bytes / (1024 * 1024)).toFixed(1)} MB)`,
+          ],
         };
       }
       let text = decoder.decode(value, { stream: true });

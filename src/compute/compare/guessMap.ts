@@ -4,7 +4,13 @@
  */
 import { type CsvTable, parseNumberCell } from './csv';
 import { MAP_FORMAT, MAP_VERSION, type MapColumn, type MapFile, mapRules } from './mapFile';
-import { COEFFICIENT_QUANTITIES, QUANTITY_UNITS, type Quantity, type Unit } from './quantities';
+import {
+  COEFFICIENT_QUANTITIES,
+  QUANTITY_OUTPUT,
+  QUANTITY_UNITS,
+  type Quantity,
+  type Unit,
+} from './quantities';
 
 export interface MapGuess {
   map: MapFile;
@@ -92,7 +98,11 @@ function medianAbs(table: CsvTable | undefined, column: number): number {
 }
 
 /** Guess the mapping of every header; columns that cannot be recognised are mapped to "ignore". */
-export function guessMap(headers: readonly string[], table: CsvTable | undefined, context: GuessContext): MapGuess {
+export function guessMap(
+  headers: readonly string[],
+  table: CsvTable | undefined,
+  context: GuessContext,
+): MapGuess {
   const columns: Record<string, MapColumn> = {};
   const notes: string[] = [];
   for (const [k, header] of headers.entries()) {
@@ -132,15 +142,27 @@ export function guessMap(headers: readonly string[], table: CsvTable | undefined
   }
   const map: MapFile = { format: MAP_FORMAT, version: MAP_VERSION, columns, side_force_sign: 1 };
   notes.push(
-    'side_force_sign 1 assumed: positive side force pushes the wheel to the rider\'s left when the wind comes from the right (yaw > 0): CHECK',
+    "side_force_sign 1 assumed: positive side force pushes the wheel to the rider's left when the wind comes from the right (yaw > 0): CHECK",
   );
   const hasSpeed = Object.values(columns).some((c) => c.quantity === 'speed');
   if (!hasSpeed && context.airspeedMps !== undefined) {
     map.airspeed_mps = context.airspeedMps;
     notes.push(`no speed column: airspeed ${context.airspeedMps} m/s assumed (from the case): CHECK`);
   }
-  notes.push('no air density given: the case\'s air density will be used (set air_density_kgpm3 to override)');
-  // Two columns guessed to the same output: keep the first, ignore the rest.
+  notes.push("no air density given: the case's air density will be used (set air_density_kgpm3 to override)");
+  // Two columns guessed to the same output (or two yaw/speed columns): keep the first, ignore the rest.
+  const taken = new Map<string, string>();
+  for (const [header, col] of Object.entries(columns)) {
+    if (col.quantity === 'ignore') continue;
+    const key = QUANTITY_OUTPUT[col.quantity] ?? col.quantity;
+    const first = taken.get(key);
+    if (first !== undefined) {
+      columns[header] = { quantity: 'ignore', unit: col.unit };
+      notes.push(`"${header}": looks like the same quantity as "${first}", ignored: CHECK`);
+    } else {
+      taken.set(key, header);
+    }
+  }
   const problems = mapRules(map);
   return { map, notes, problems };
 }

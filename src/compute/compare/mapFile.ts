@@ -22,8 +22,8 @@ import { z } from 'zod';
 import { describeValue, keyPathText, parseJsonText } from '../caseFile';
 import {
   COEFFICIENT_QUANTITIES,
-  type Output,
   OUTPUT_LABEL,
+  type Output,
   QUANTITIES,
   QUANTITY_OUTPUT,
   QUANTITY_UNITS,
@@ -60,9 +60,13 @@ const sign = z.union([z.literal(1), z.literal(-1)], {
 });
 const positive = (max: number, unit: string) =>
   z
-    .number({ error: (iss) => `must be a number greater than 0 and at most ${max} ${unit}, got ${describeValue(iss.input)}` })
+    .number({
+      error: (iss) =>
+        `must be a number greater than 0 and at most ${max} ${unit}, got ${describeValue(iss.input)}`,
+    })
     .refine((v) => Number.isFinite(v) && v > 0 && v <= max, {
-      error: (iss) => `must be a number greater than 0 and at most ${max} ${unit}, got ${describeValue(iss.input)}`,
+      error: (iss) =>
+        `must be a number greater than 0 and at most ${max} ${unit}, got ${describeValue(iss.input)}`,
     });
 
 const columnSchema = z.strictObject(
@@ -78,9 +82,12 @@ const columnSchema = z.strictObject(
 
 const mapSchema = z.strictObject(
   {
-    format: z.literal(MAP_FORMAT, { error: (iss) => `must be "${MAP_FORMAT}", got ${describeValue(iss.input)}` }),
+    format: z.literal(MAP_FORMAT, {
+      error: (iss) => `must be "${MAP_FORMAT}", got ${describeValue(iss.input)}`,
+    }),
     version: z.literal(MAP_VERSION, {
-      error: (iss) => `unsupported map-file version ${describeValue(iss.input)}; this program reads version ${MAP_VERSION}`,
+      error: (iss) =>
+        `unsupported map-file version ${describeValue(iss.input)}; this program reads version ${MAP_VERSION}`,
     }),
     columns: z.record(z.string(), columnSchema, {
       error: (iss) => `must be an object of column headers, got ${describeValue(iss.input)}`,
@@ -93,7 +100,15 @@ const mapSchema = z.strictObject(
   { error: (iss) => `must be an object (a CoverSweep map file), got ${describeValue(iss.input)}` },
 );
 
-const ALLOWED_TOP = ['format', 'version', 'columns', 'side_force_sign', 'yaw_moment_sign', 'airspeed_mps', 'air_density_kgpm3'];
+const ALLOWED_TOP = [
+  'format',
+  'version',
+  'columns',
+  'side_force_sign',
+  'yaw_moment_sign',
+  'airspeed_mps',
+  'air_density_kgpm3',
+];
 
 /** Validate an already-parsed JSON value as a map file. Never throws. */
 export function validateMap(raw: unknown): MapParsed {
@@ -106,7 +121,9 @@ export function validateMap(raw: unknown): MapParsed {
         const where = path.map(String).join('.');
         const allowed = where === '' ? ALLOWED_TOP : ['quantity', 'unit', 'reference_area_m2'];
         for (const key of issue.keys) {
-          errors.push(`${where === '' ? key : `${where}.${key}`}: unknown key (allowed here: ${allowed.join(', ')})`);
+          errors.push(
+            `${where === '' ? key : `${where}.${key}`}: unknown key (allowed here: ${allowed.join(', ')})`,
+          );
         }
         continue;
       }
@@ -131,7 +148,9 @@ export function mapRules(map: MapFile): string[] {
     const at = `columns.${header}`;
     const allowed = QUANTITY_UNITS[col.quantity];
     if (!allowed.includes(col.unit)) {
-      errors.push(`${at}.unit: must be one of ${list(allowed)} for quantity "${col.quantity}", got "${col.unit}"`);
+      errors.push(
+        `${at}.unit: must be one of ${list(allowed)} for quantity "${col.quantity}", got "${col.unit}"`,
+      );
     }
     const isCoefficient = COEFFICIENT_QUANTITIES.includes(col.quantity);
     if (isCoefficient && col.reference_area_m2 === undefined) {
@@ -140,7 +159,9 @@ export function mapRules(map: MapFile): string[] {
       );
     }
     if (!isCoefficient && col.reference_area_m2 !== undefined) {
-      errors.push(`${at}.reference_area_m2: only used with coefficient quantities, got ${col.reference_area_m2} for "${col.quantity}"`);
+      errors.push(
+        `${at}.reference_area_m2: only used with coefficient quantities, got ${col.reference_area_m2} for "${col.quantity}"`,
+      );
     }
     if (col.quantity === 'yaw_deg') yaw++;
     if (col.quantity === 'speed') speed++;
@@ -150,7 +171,9 @@ export function mapRules(map: MapFile): string[] {
       compared++;
       const other = byOutput.get(out);
       if (other !== undefined) {
-        errors.push(`${at}.quantity: ${OUTPUT_LABEL[out]} is already given by column "${other}" (one column per quantity)`);
+        errors.push(
+          `${at}.quantity: ${OUTPUT_LABEL[out]} is already given by column "${other}" (one column per quantity)`,
+        );
       } else {
         byOutput.set(out, header);
       }
@@ -160,16 +183,22 @@ export function mapRules(map: MapFile): string[] {
   if (speed > 1) errors.push(`columns: at most one column may have quantity "speed", got ${speed}`);
   if (density > 1) errors.push(`columns: at most one column may have quantity "air_density", got ${density}`);
   if (compared === 0) {
-    errors.push('columns: no column holds a force, drag area, coefficient or moment to compare (map at least one)');
+    errors.push(
+      'columns: no column holds a force, drag area, coefficient or moment to compare (map at least one)',
+    );
   }
   if (speed === 0 && map.airspeed_mps === undefined) {
-    errors.push('airspeed_mps: is required when no column has quantity "speed" (the airspeed of the measurements, m/s)');
+    errors.push(
+      'airspeed_mps: is required when no column has quantity "speed" (the airspeed of the measurements, m/s)',
+    );
   }
   if (speed === 1 && map.airspeed_mps !== undefined) {
     errors.push(`airspeed_mps: cannot be given together with a "speed" column, got ${map.airspeed_mps}`);
   }
   if (density === 1 && map.air_density_kgpm3 !== undefined) {
-    errors.push(`air_density_kgpm3: cannot be given together with an "air_density" column, got ${map.air_density_kgpm3}`);
+    errors.push(
+      `air_density_kgpm3: cannot be given together with an "air_density" column, got ${map.air_density_kgpm3}`,
+    );
   }
   return errors;
 }

@@ -91,7 +91,11 @@ export const QUANTITY_UNITS: Readonly<Record<Quantity, readonly Unit[]>> = {
 };
 
 /** Quantities that need a reference area. */
-export const COEFFICIENT_QUANTITIES: readonly Quantity[] = ['drag_coefficient', 'drag_coefficient_wind', 'side_coefficient'];
+export const COEFFICIENT_QUANTITIES: readonly Quantity[] = [
+  'drag_coefficient',
+  'drag_coefficient_wind',
+  'side_coefficient',
+];
 
 /** The compared outputs (every data quantity becomes one of these, in SI). */
 export const OUTPUTS = ['axial_N', 'wind_drag_N', 'side_N', 'yaw_moment_Nm', 'steering_moment_Nm'] as const;

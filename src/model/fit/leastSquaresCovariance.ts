@@ -30,7 +30,9 @@ export function leastSquaresCovariance(
   fixed: readonly boolean[] = [],
 ): LeastSquaresCovariance {
   if (!Number.isInteger(m) || !Number.isInteger(n) || m < 1 || n < 1 || jacobian.length !== m * n) {
-    throw new RangeError(`jacobian.length=${jacobian.length}, m=${m}, n=${n}: must satisfy length = m n with m, n >= 1`);
+    throw new RangeError(
+      `jacobian.length=${jacobian.length}, m=${m}, n=${n}: must satisfy length = m n with m, n >= 1`,
+    );
   }
   if (!(sumOfSquares >= 0)) throw new RangeError(`sumOfSquares=${sumOfSquares}: must be >= 0`);
   const idx: number[] = [];
@@ -53,7 +55,8 @@ export function leastSquaresCovariance(
     }
   }
   for (let u = 0; u < p; u++) scale[u] = Math.sqrt(a[u * p + u]!) || 1;
-  for (let u = 0; u < p; u++) for (let v = 0; v < p; v++) a[u * p + v] = a[u * p + v]! / (scale[u]! * scale[v]!);
+  for (let u = 0; u < p; u++)
+    for (let v = 0; v < p; v++) a[u * p + v] = a[u * p + v]! / (scale[u]! * scale[v]!);
   const l = new Float64Array(p * p);
   for (let j = 0; j < p; j++) {
     let d = a[j * p + j]!;

@@ -91,7 +91,10 @@ function choleskySolve(m: Float64Array, b: Float64Array, n: number, h: Float64Ar
 /**
  * @throws RangeError when the sizes, bounds or start are invalid, or the residuals are not finite at the start.
  */
-export function levenbergMarquardt(problem: LeastSquaresProblem, options: LeastSquaresOptions = {}): LeastSquaresResult {
+export function levenbergMarquardt(
+  problem: LeastSquaresProblem,
+  options: LeastSquaresOptions = {},
+): LeastSquaresResult {
   const m = problem.residualCount;
   const n = problem.initial.length;
   if (!Number.isInteger(m) || m < 1) throw new RangeError(`residualCount=${m}: must be a positive integer`);
@@ -109,7 +112,9 @@ export function levenbergMarquardt(problem: LeastSquaresProblem, options: LeastS
     lo[j] = problem.lower ? problem.lower[j]! : Number.NEGATIVE_INFINITY;
     hi[j] = problem.upper ? problem.upper[j]! : Number.POSITIVE_INFINITY;
     if (Number.isNaN(lo[j]!) || Number.isNaN(hi[j]!) || lo[j]! > hi[j]!) {
-      throw new RangeError(`bounds of parameter ${j}: lower=${lo[j]} upper=${hi[j]}: must satisfy lower <= upper`);
+      throw new RangeError(
+        `bounds of parameter ${j}: lower=${lo[j]} upper=${hi[j]}: must satisfy lower <= upper`,
+      );
     }
     const x0 = problem.initial[j]!;
     if (!Number.isFinite(x0)) throw new RangeError(`initial[${j}]=${x0}: must be finite`);
@@ -152,7 +157,8 @@ export function levenbergMarquardt(problem: LeastSquaresProblem, options: LeastS
 
   evaluate(x, r);
   let cost = sumSquares(r);
-  if (!Number.isFinite(cost)) throw new RangeError(`residuals at the start ${Array.from(x).join(', ')}: not finite`);
+  if (!Number.isFinite(cost))
+    throw new RangeError(`residuals at the start ${Array.from(x).join(', ')}: not finite`);
   jacobianAt(x, r);
 
   const a = new Float64Array(n * n);
@@ -207,7 +213,8 @@ export function levenbergMarquardt(problem: LeastSquaresProblem, options: LeastS
     }
     if (freeIndex.length === 0 || gradientSmall()) {
       converged = true;
-      reason = freeIndex.length === 0 ? 'every parameter held at a bound' : 'gradient orthogonal to the residuals';
+      reason =
+        freeIndex.length === 0 ? 'every parameter held at a bound' : 'gradient orthogonal to the residuals';
       break;
     }
     const nf = freeIndex.length;

@@ -14,7 +14,11 @@ import type { StripLattice } from './types';
  * (Katz & Plotkin, Low-Speed Aerodynamics, 2nd ed., sec. 12.3), o = 1 a panel that carries no load.
  * Allocation-free when `out` (length >= n*n) is given.
  */
-export function assembleSystem(lattice: StripLattice, openness: Float64Array, out?: Float64Array): Float64Array {
+export function assembleSystem(
+  lattice: StripLattice,
+  openness: Float64Array,
+  out?: Float64Array,
+): Float64Array {
   const n = lattice.panelCount;
   if (openness.length !== n) {
     throw new RangeError(`assembleSystem: openness.length=${openness.length} must equal panelCount=${n}`);

@@ -39,7 +39,11 @@ export function buildStripLattice(spec: StripLatticeSpec): StripLattice {
   if (edgeLeadingX.length !== spanCount + 1 || edgeChordM.length !== spanCount + 1) {
     throw new RangeError(`buildStripLattice: edge arrays must have edgeZ.length=${spanCount + 1} values`);
   }
-  if (controlZ.length !== spanCount || controlLeadingX.length !== spanCount || controlChordM.length !== spanCount) {
+  if (
+    controlZ.length !== spanCount ||
+    controlLeadingX.length !== spanCount ||
+    controlChordM.length !== spanCount
+  ) {
     throw new RangeError(`buildStripLattice: control arrays must have spanCount=${spanCount} values`);
   }
   if (chordFractions[0] !== 0 || chordFractions[chordCount] !== 1) {
@@ -49,7 +53,9 @@ export function buildStripLattice(spec: StripLatticeSpec): StripLattice {
   }
   for (let m = 0; m < chordCount; m++) {
     if (!(chordFractions[m + 1]! > chordFractions[m]!)) {
-      throw new RangeError(`buildStripLattice: chordFractions[${m + 1}]=${chordFractions[m + 1]} must increase`);
+      throw new RangeError(
+        `buildStripLattice: chordFractions[${m + 1}]=${chordFractions[m + 1]} must increase`,
+      );
     }
   }
   for (let k = 0; k <= spanCount; k++) {
@@ -59,18 +65,26 @@ export function buildStripLattice(spec: StripLatticeSpec): StripLattice {
       );
     }
     if (k > 0 && !(edgeZ[k]! > edgeZ[k - 1]!)) {
-      throw new RangeError(`buildStripLattice: edgeZ[${k}]=${edgeZ[k]} must exceed edgeZ[${k - 1}]=${edgeZ[k - 1]}`);
+      throw new RangeError(
+        `buildStripLattice: edgeZ[${k}]=${edgeZ[k]} must exceed edgeZ[${k - 1}]=${edgeZ[k - 1]}`,
+      );
     }
   }
   for (let s = 0; s < spanCount; s++) {
     if (!(controlZ[s]! > edgeZ[s]! && controlZ[s]! < edgeZ[s + 1]!)) {
-      throw new RangeError(`buildStripLattice: controlZ[${s}]=${controlZ[s]} must lie strictly inside its strip`);
+      throw new RangeError(
+        `buildStripLattice: controlZ[${s}]=${controlZ[s]} must lie strictly inside its strip`,
+      );
     }
     if (!(edgeChordM[s]! + edgeChordM[s + 1]! > 0)) {
-      throw new RangeError(`buildStripLattice: strip ${s} has zero chord on both edges (its area must be > 0)`);
+      throw new RangeError(
+        `buildStripLattice: strip ${s} has zero chord on both edges (its area must be > 0)`,
+      );
     }
     if (!(controlChordM[s]! > 0) || !Number.isFinite(controlLeadingX[s]!)) {
-      throw new RangeError(`buildStripLattice: controlChordM[${s}]=${controlChordM[s]} must be > 0 and finite`);
+      throw new RangeError(
+        `buildStripLattice: controlChordM[${s}]=${controlChordM[s]} must be > 0 and finite`,
+      );
     }
   }
   if (!(spec.referenceAreaM2 > 0)) {

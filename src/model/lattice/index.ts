@@ -13,5 +13,5 @@ export { segmentVelocity } from './segmentVelocity';
 export { semiInfiniteSegmentVelocity } from './semiInfiniteSegmentVelocity';
 export { solveFactored } from './solveFactored';
 export { solveLattice } from './solveLattice';
-export type { DiscLattice, LatticeFactor, LatticeSolution, StripLattice } from './types';
 export { trefftzInducedDrag } from './trefftzInducedDrag';
+export type { DiscLattice, LatticeFactor, LatticeSolution, StripLattice } from './types';

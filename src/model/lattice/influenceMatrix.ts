@@ -8,7 +8,7 @@ import { planarWakeNormalVelocity } from './planarWakeNormalVelocity';
  * unit circulation on ring j, its wake and (when groundZM is finite) its mirror image about the
  * plane z = groundZM carrying the opposite circulation (method of images: the image of a vortex
  * segment in a plane wall has the mirrored end points and the opposite circulation, so the wall's
- * normal velocity cancels; Katz & Plotkin sec. 3.x "ground effect", Milne-Thomson).
+ * normal velocity cancels; Milne-Thomson, Theoretical Hydrodynamics, method of images - from memory).
  *
  * Each unique segment is evaluated once per control point and scattered to the (at most two)
  * rings sharing it: spanwise segment (s, m) is ring (s, m)'s bound (leading) segment, +z, and ring
@@ -30,7 +30,9 @@ export function influenceMatrix(
   const n = spanCount * chordCount;
   const cols = chordCount + 1;
   if (nodeX.length !== (spanCount + 1) * cols) {
-    throw new RangeError(`influenceMatrix: nodeX.length=${nodeX.length} must be (spanCount+1)*(chordCount+1)`);
+    throw new RangeError(
+      `influenceMatrix: nodeX.length=${nodeX.length} must be (spanCount+1)*(chordCount+1)`,
+    );
   }
   if (controlX.length !== n || controlZ.length !== n) {
     throw new RangeError(`influenceMatrix: control arrays must have spanCount*chordCount=${n} values`);

@@ -22,7 +22,9 @@ export function latticeVelocity(
 ): Float64Array {
   const { spanCount, chordCount, edgeZ, nodeX, groundZM } = lattice;
   if (gamma.length !== lattice.panelCount) {
-    throw new RangeError(`latticeVelocity: gamma.length=${gamma.length} must equal panelCount=${lattice.panelCount}`);
+    throw new RangeError(
+      `latticeVelocity: gamma.length=${gamma.length} must equal panelCount=${lattice.panelCount}`,
+    );
   }
   if (out.length < 3) throw new RangeError(`latticeVelocity: out.length=${out.length} must be at least 3`);
   const ground = Number.isFinite(groundZM);

@@ -52,7 +52,8 @@ export function segmentVelocity(
   const r1 = Math.sqrt(r1x * r1x + r1y * r1y + r1z * r1z);
   const r2 = Math.sqrt(r2x * r2x + r2y * r2y + r2z * r2z);
   const k =
-    ((gamma / FOUR_PI) * (r0x * (r1x / r1 - r2x / r2) + r0y * (r1y / r1 - r2y / r2) + r0z * (r1z / r1 - r2z / r2))) /
+    ((gamma / FOUR_PI) *
+      (r0x * (r1x / r1 - r2x / r2) + r0y * (r1y / r1 - r2y / r2) + r0z * (r1z / r1 - r2z / r2))) /
     c2;
   out[0] = k * cx;
   out[1] = k * cy;

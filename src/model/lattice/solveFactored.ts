@@ -30,7 +30,7 @@ export function solveFactored(factor: LatticeFactor, normalVelocityMps?: Float64
     if (!Number.isFinite(vn)) {
       throw new RangeError(`solveFactored: normalVelocityMps[${i}]=${vn} must be finite`);
     }
-    gamma[i] = -(1 - openness[i]!) * vn;
+    gamma[i] = (openness[i]! - 1) * vn;
   }
   luSolve(lu, n, pivots, gamma);
   const qS = 0.5 * lattice.referenceAreaM2;

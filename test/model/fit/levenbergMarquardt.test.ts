@@ -36,9 +36,10 @@ describe('levenbergMarquardt', () => {
       checks.push(['residual sd', Math.sqrt(cov.residualVariance), 1.018787633e-1, 6]);
       for (const [name, got, exp, digits] of checks) {
         const l = lre(got, exp);
-        expect(l, `${name}: got=${got} expected=${exp} digits=${l.toFixed(2)} required=${digits}`).toBeGreaterThanOrEqual(
-          digits,
-        );
+        expect(
+          l,
+          `${name}: got=${got} expected=${exp} digits=${l.toFixed(2)} required=${digits}`,
+        ).toBeGreaterThanOrEqual(digits);
       }
       expect(cov.dof).toBe(12);
     });
@@ -55,7 +56,12 @@ describe('levenbergMarquardt', () => {
     });
     expect(fit.params[0]).toBe(200);
     expect(fit.atBound).toEqual([true, false]);
-    const free = levenbergMarquardt({ residualCount: X.length, residuals, initial: [150, 1e-3], lower: [0, 0] });
+    const free = levenbergMarquardt({
+      residualCount: X.length,
+      residuals,
+      initial: [150, 1e-3],
+      lower: [0, 0],
+    });
     expect(fit.sumOfSquares).toBeGreaterThan(free.sumOfSquares);
     const cov = leastSquaresCovariance(fit.jacobian, X.length, 2, fit.sumOfSquares, fit.atBound);
     expect(Number.isNaN(cov.standardErrors[0]!)).toBe(true);
@@ -90,10 +96,14 @@ describe('levenbergMarquardt', () => {
   });
 
   it('rejects bad input naming the argument', () => {
-    expect(() => levenbergMarquardt({ residualCount: 0, residuals, initial: [1, 1] })).toThrow(/residualCount=0/);
+    expect(() => levenbergMarquardt({ residualCount: 0, residuals, initial: [1, 1] })).toThrow(
+      /residualCount=0/,
+    );
     expect(() =>
       levenbergMarquardt({ residualCount: 14, residuals, initial: [1, 1], lower: [2, 0], upper: [1, 1] }),
     ).toThrow(/lower=2/);
-    expect(() => levenbergMarquardt({ residualCount: 14, residuals, initial: [Number.NaN, 1] })).toThrow(/initial\[0\]/);
+    expect(() => levenbergMarquardt({ residualCount: 14, residuals, initial: [Number.NaN, 1] })).toThrow(
+      /initial\[0\]/,
+    );
   });
 });

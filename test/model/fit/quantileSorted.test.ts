@@ -15,7 +15,10 @@ describe('quantileSorted', () => {
     for (const [data, p, exp] of cases) {
       const got = quantileSorted(Float64Array.from(data), p);
       const tol = 2 * Number.EPSILON * Math.abs(exp);
-      expect(Math.abs(got - exp), `data=${data} p=${p} got=${got} expected=${exp} tol=${tol}`).toBeLessThanOrEqual(tol);
+      expect(
+        Math.abs(got - exp),
+        `data=${data} p=${p} got=${got} expected=${exp} tol=${tol}`,
+      ).toBeLessThanOrEqual(tol);
     }
   });
   it('rejects empty data and p outside [0, 1]', () => {

@@ -15,9 +15,10 @@ describe('regularizedIncompleteBeta', () => {
     for (const [x, a, b, exp] of cases) {
       const got = regularizedIncompleteBeta(x, a, b);
       const tol = 1e-13 * Math.max(1e-3, Math.abs(exp));
-      expect(Math.abs(got - exp), `x=${x} a=${a} b=${b} got=${got} expected=${exp} tol=${tol}`).toBeLessThanOrEqual(
-        Math.max(tol, 1e-15),
-      );
+      expect(
+        Math.abs(got - exp),
+        `x=${x} a=${a} b=${b} got=${got} expected=${exp} tol=${tol}`,
+      ).toBeLessThanOrEqual(Math.max(tol, 1e-15));
     }
   });
   it('rejects bad arguments naming them', () => {

@@ -21,7 +21,9 @@ describe('studentTQuantile', () => {
     for (const [dof, exp] of table) {
       const got = studentTQuantile(0.975, dof);
       const tol = 5e-4;
-      expect(Math.abs(got - exp), `dof=${dof} got=${got} expected=${exp} tol=${tol}`).toBeLessThanOrEqual(tol);
+      expect(Math.abs(got - exp), `dof=${dof} got=${got} expected=${exp} tol=${tol}`).toBeLessThanOrEqual(
+        tol,
+      );
     }
   });
 
@@ -33,8 +35,12 @@ describe('studentTQuantile', () => {
       const e2 = (2 * p - 1) / Math.sqrt(2 * p * (1 - p));
       const g1 = studentTQuantile(p, 1);
       const g2 = studentTQuantile(p, 2);
-      expect(Math.abs(g1 - e1), `p=${p} dof=1 got=${g1} expected=${e1}`).toBeLessThanOrEqual(1e-12 * Math.abs(e1));
-      expect(Math.abs(g2 - e2), `p=${p} dof=2 got=${g2} expected=${e2}`).toBeLessThanOrEqual(1e-12 * Math.abs(e2));
+      expect(Math.abs(g1 - e1), `p=${p} dof=1 got=${g1} expected=${e1}`).toBeLessThanOrEqual(
+        1e-12 * Math.abs(e1),
+      );
+      expect(Math.abs(g2 - e2), `p=${p} dof=2 got=${g2} expected=${e2}`).toBeLessThanOrEqual(
+        1e-12 * Math.abs(e2),
+      );
     }
   });
 

@@ -114,6 +114,8 @@ describe('luFactor', () => {
     expect(() => luFactor(new Float64Array(3), 2, new Int32Array(2))).toThrow(/a.length=3/);
     expect(() => luFactor(new Float64Array(4), 2, new Int32Array(1))).toThrow(/pivots.length=1/);
     expect(() => luFactor(new Float64Array(4), 0, new Int32Array(1))).toThrow(/n=0/);
-    expect(() => luFactor(Float64Array.from([1, Number.NaN, 0, 1]), 2, new Int32Array(2))).toThrow(/singular|finite/);
+    expect(() => luFactor(Float64Array.from([1, Number.NaN, 0, 1]), 2, new Int32Array(2))).toThrow(
+      /singular|finite/,
+    );
   });
 });

@@ -13,7 +13,10 @@ describe('uniformInRange', () => {
     for (const [u, a, b, exp] of cases) {
       const got = uniformInRange(u, a, b);
       const tol = 2 * Number.EPSILON * Math.max(1, Math.abs(exp));
-      expect(Math.abs(got - exp), `u=${u} a=${a} b=${b} got=${got} expected=${exp} tol=${tol}`).toBeLessThanOrEqual(tol);
+      expect(
+        Math.abs(got - exp),
+        `u=${u} a=${a} b=${b} got=${got} expected=${exp} tol=${tol}`,
+      ).toBeLessThanOrEqual(tol);
     }
   });
   it('rejects bad arguments naming them', () => {

@@ -8,7 +8,10 @@ describe('apparentWind', () => {
   it('head wind adds to the ground speed at zero yaw (wind triangle, exact)', () => {
     const got = apparentWind(10, 3, 0);
     const tol = 4 * EPS * 13;
-    expect(Math.abs(got.airspeedMps - 13), `v=10 w=3 psi=0 got=${got.airspeedMps} expected=13 tol=${tol}`).toBeLessThanOrEqual(tol);
+    expect(
+      Math.abs(got.airspeedMps - 13),
+      `v=10 w=3 psi=0 got=${got.airspeedMps} expected=13 tol=${tol}`,
+    ).toBeLessThanOrEqual(tol);
     expect(got.yawRad, `got yaw=${got.yawRad} expected=0`).toBe(0);
   });
 
@@ -19,8 +22,14 @@ describe('apparentWind', () => {
     const expV = 13;
     const expYaw = Math.atan2(5, 12);
     const tol = 8 * EPS * 13;
-    expect(Math.abs(got.airspeedMps - expV), `got=${got.airspeedMps} expected=${expV} tol=${tol}`).toBeLessThanOrEqual(tol);
-    expect(Math.abs(got.yawRad - expYaw), `got=${got.yawRad} expected=${expYaw} tol=${8 * EPS}`).toBeLessThanOrEqual(8 * EPS);
+    expect(
+      Math.abs(got.airspeedMps - expV),
+      `got=${got.airspeedMps} expected=${expV} tol=${tol}`,
+    ).toBeLessThanOrEqual(tol);
+    expect(
+      Math.abs(got.yawRad - expYaw),
+      `got=${got.yawRad} expected=${expYaw} tol=${8 * EPS}`,
+    ).toBeLessThanOrEqual(8 * EPS);
     const left = apparentWind(v, w, -90 * DEG);
     expect(left.yawRad, `wind from the left: got yaw=${left.yawRad}, expected < 0`).toBeLessThan(0);
   });
@@ -34,16 +43,24 @@ describe('apparentWind', () => {
       const exp = Math.asin(w / v);
       const at = apparentWind(v, w, Math.acos(-w / v));
       const tolExact = 16 * EPS;
-      expect(Math.abs(at.yawRad - exp), `v=${v} w=${w} got=${at.yawRad} expected=${exp} tol=${tolExact}`).toBeLessThanOrEqual(
-        tolExact,
-      );
+      expect(
+        Math.abs(at.yawRad - exp),
+        `v=${v} w=${w} got=${at.yawRad} expected=${exp} tol=${tolExact}`,
+      ).toBeLessThanOrEqual(tolExact);
       // No direction exceeds it (scan of 36000 directions).
       let max = 0;
       const out = { airspeedMps: 0, yawRad: 0 };
-      for (let k = 0; k < 36000; k++) max = Math.max(max, apparentWind(v, w, (k * 2 * Math.PI) / 36000, out).yawRad);
+      for (let k = 0; k < 36000; k++)
+        max = Math.max(max, apparentWind(v, w, (k * 2 * Math.PI) / 36000, out).yawRad);
       const tolScan = 1e-6;
-      expect(max - exp, `v=${v} w=${w} scanned max=${max} expected=${exp} tol=${tolScan}`).toBeLessThanOrEqual(tolScan);
-      expect(exp - max, `v=${v} w=${w} scanned max=${max} expected=${exp} tol=${tolScan}`).toBeLessThanOrEqual(tolScan);
+      expect(
+        max - exp,
+        `v=${v} w=${w} scanned max=${max} expected=${exp} tol=${tolScan}`,
+      ).toBeLessThanOrEqual(tolScan);
+      expect(
+        exp - max,
+        `v=${v} w=${w} scanned max=${max} expected=${exp} tol=${tolScan}`,
+      ).toBeLessThanOrEqual(tolScan);
     }
   });
 

@@ -9,7 +9,10 @@ describe('logWindProfileRatio', () => {
     const got = logWindProfileRatio(2 - d, 10 - d, 1 / 67.8);
     const exp = 4.87 / Math.log(67.8 * 10 - 5.42);
     const tol = 1e-3; // relative: 4.87 is given to 3 significant digits
-    expect(Math.abs(got - exp) / exp, `z=2 zref=10 got=${got} expected=${exp} tol=${tol}`).toBeLessThanOrEqual(tol);
+    expect(
+      Math.abs(got - exp) / exp,
+      `z=2 zref=10 got=${got} expected=${exp} tol=${tol}`,
+    ).toBeLessThanOrEqual(tol);
   });
 
   it('is 1 at the reference height and chains between heights (exact)', () => {

@@ -57,10 +57,14 @@ describe('weightedHistogram', () => {
     const v = Float64Array.from({ length: n }, (_, i) => ((i + 0.5) / n) * 10);
     const { density, fractionAbove } = weightedHistogram(v, new Float64Array(n).fill(1), 1, 10);
     for (let b = 0; b < 10; b++) {
-      expect(Math.abs(density[b]! - 0.1), `bin ${b} got=${density[b]} expected=0.1`).toBeLessThanOrEqual(1e-12);
+      expect(Math.abs(density[b]! - 0.1), `bin ${b} got=${density[b]} expected=0.1`).toBeLessThanOrEqual(
+        1e-12,
+      );
     }
     expect(fractionAbove).toBe(0);
     const half = weightedHistogram(v, new Float64Array(n).fill(1), 1, 5);
-    expect(Math.abs(half.fractionAbove - 0.5), `fraction above=${half.fractionAbove}`).toBeLessThanOrEqual(1e-12);
+    expect(Math.abs(half.fractionAbove - 0.5), `fraction above=${half.fractionAbove}`).toBeLessThanOrEqual(
+      1e-12,
+    );
   });
 });

@@ -1,0 +1,158 @@
+/**
+ * `npm run bench`: prints JSON lines of speed figures on this machine. Inputs are built before timing;
+ * every result is used (summed into a checksum printed with it) so nothing is optimised away.
+ * Figures are medians of repeated runs where cheap; the machine may be shared and noisy.
+ */
+import { availableParallelism, cpus } from 'node:os';
+import { nodeWorkerSpawner } from '../src/cli/nodeWorker';
+import { runSweep } from '../src/compute/engine/runSweep';
+import { WorkerPool } from '../src/compute/engine/workerPool';
+import { buildDiscLattice } from '../src/model/lattice';
+import { luFactor } from '../src/model/numeric';
+import {
+  DEFAULT_MODEL_OPTIONS,
+  DEFAULT_STEERING,
+  DEMO_WHEEL,
+  type FlowConditions,
+  solveWheel,
+  type WheelInput,
+} from '../src/model/wheel';
+import { buildNodeWorker } from './buildNodeWorker';
+
+const cores = availableParallelism();
+const machine = { cores, cpu: cpus()[0]?.model ?? 'unknown', node: process.version };
+const deg = Math.PI / 180;
+let peakRss = process.memoryUsage().rss;
+const sampleMemory = () => {
+  peakRss = Math.max(peakRss, process.memoryUsage().rss);
+};
+const memoryTimer = setInterval(sampleMemory, 20);
+
+function print(name: string, figures: Record<string, unknown>): void {
+  console.log(JSON.stringify({ bench: name, ...figures, machine }));
+}
+
+function median(values: number[]): number {
+  const s = [...values].sort((a, b) => a - b);
+  return s[Math.floor(s.length / 2)]!;
+}
+
+function timeIt(repeats: number, fn: () => number): { medianMs: number; checksum: number } {
+  let checksum = 0;
+  const times: number[] = [];
+  for (let i = 0; i < repeats; i++) {
+    const t0 = performance.now();
+    checksum += fn();
+    times.push(performance.now() - t0);
+  }
+  return { medianMs: median(times), checksum };
+}
+
+// --- Dense LU factorisation at n = 1000 -------------------------------------------------------
+{
+  const n = 1000;
+  const source = new Float64Array(n * n);
+  let seed = 12345;
+  for (let i = 0; i < source.length; i++) {
+    seed = (seed * 1103515245 + 12345) % 2147483648;
+    source[i] = seed / 2147483648 - 0.5;
+  }
+  for (let i = 0; i < n; i++) source[i * n + i]! += n;
+  const work = new Float64Array(n * n);
+  const pivots = new Int32Array(n);
+  const r = timeIt(3, () => {
+    work.set(source);
+    luFactor(work, n, pivots);
+    return work[n * n - 1]!;
+  });
+  const gflops = ((2 / 3) * n ** 3) / (r.medianMs * 1e-3) / 1e9;
+  print('lu_factor', { n, medianMs: +r.medianMs.toFixed(1), gflops: +gflops.toFixed(2), checksum: r.checksum });
+}
+
+// --- Lattice build and one design's yaw curve ------------------------------------------------------
+const yawCurve = (speed: number): FlowConditions[] =>
+  Array.from({ length: 41 }, (_, k) => ({
+    airspeedMps: speed,
+    yawRad: k * 0.5 * deg,
+    groundSpeedMps: speed,
+    rhoKgPerM3: 1.225,
+    muPaS: 1.7894e-5,
+  }));
+{
+  const options = DEFAULT_MODEL_OPTIONS;
+  const build = timeIt(3, () => {
+    const l = buildDiscLattice({
+      radiusM: DEMO_WHEEL.outerRadiusM + Math.random() * 1e-9, // a new key each time: no cache
+      spanCount: options.latticeSpanCount,
+      chordCount: options.latticeChordCount,
+      ground: options.ground,
+    });
+    return l.influence[0]!;
+  });
+  print('lattice_build', {
+    panels: options.latticeSpanCount * options.latticeChordCount,
+    medianMs: +build.medianMs.toFixed(1),
+    checksum: build.checksum,
+  });
+  // Warm: lattice cached (same wheel size), a new cover each time, so the surface is solved afresh,
+  // as when a user changes the cover and the page recomputes.
+  let k = 0;
+  const input = (gci: boolean): WheelInput => ({
+    wheel: { ...DEMO_WHEEL, coverFraction: ((k++ % 20) + 0.5) / 21 },
+    options: { ...options, gridConvergence: gci },
+    steering: DEFAULT_STEERING,
+    points: yawCurve(13.41),
+  });
+  solveWheel(input(true));
+  const withGci = timeIt(9, () => solveWheel(input(true)).points[40]!.axialN);
+  const withoutGci = timeIt(9, () => solveWheel(input(false)).points[40]!.axialN);
+  print('yaw_curve_41', {
+    panels: options.latticeSpanCount * options.latticeChordCount,
+    warmMsWithConvergence: +withGci.medianMs.toFixed(1),
+    warmMsFinestOnly: +withoutGci.medianMs.toFixed(1),
+    checksum: withGci.checksum + withoutGci.checksum,
+  });
+}
+
+// --- The standard sweep: 21 covers x 6 rim depths x 41 yaw x 4 speeds = 20,664 points -------------
+{
+  const cases: WheelInput[] = [];
+  for (let i = 0; i <= 20; i++) {
+    for (const depthMm of [20, 35, 50, 65, 80, 90]) {
+      cases.push({
+        wheel: { ...DEMO_WHEEL, coverFraction: i * 0.05, rimDepthM: depthMm / 1000 },
+        options: { ...DEFAULT_MODEL_OPTIONS },
+        steering: DEFAULT_STEERING,
+        points: [6, 8, 10, 13.41].flatMap(yawCurve),
+      });
+    }
+  }
+  const points = cases.reduce((n, c) => n + c.points.length, 0);
+  const entry = await buildNodeWorker();
+  for (const workers of [...new Set([1, cores])]) {
+    const pool = new WorkerPool(nodeWorkerSpawner(entry), workers);
+    await pool.warm();
+    // One untimed pass warms each worker's JIT and lattice cache; the timed pass is a fresh sweep
+    // (the surface caches only help where boundary conditions repeat, and here none do across passes).
+    await runSweep(pool, cases.map((c) => ({ ...c, wheel: { ...c.wheel, rimWidthM: c.wheel.rimWidthM + 1e-6 } })));
+    const t0 = performance.now();
+    const out = await runSweep(pool, cases);
+    const ms = performance.now() - t0;
+    pool.close();
+    sampleMemory();
+    const checksum = out.solutions.reduce((s, sol) => s + (sol?.points[0]?.axialN ?? 0), 0);
+    print('standard_sweep', {
+      cases: cases.length,
+      points,
+      workers,
+      wallMs: Math.round(ms),
+      pointsPerSecond: Math.round(points / (ms / 1000)),
+      casesPerSecond: +(cases.length / (ms / 1000)).toFixed(1),
+      failed: out.failedCount,
+      checksum,
+    });
+  }
+}
+clearInterval(memoryTimer);
+sampleMemory();
+print('memory', { peakRssMB: Math.round(peakRss / 2 ** 20) });

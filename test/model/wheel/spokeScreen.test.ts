@@ -1,0 +1,62 @@
+import { describe, expect, it } from 'vitest';
+import { buildDiscLattice } from '../../../src/model/lattice';
+import { DEMO_WHEEL, panelOpenness, screenOpenness, spokeScreenResistance, wheelRadii } from '../../../src/model/wheel';
+
+describe('spokeScreenResistance', () => {
+  it('matches the crossflow-principle rule worked by hand', () => {
+    // K = N (Cd d) / (2 pi r) * <|a + sin|>, a = omega r / V; here N 20, Cd d = 1.2 x 2 mm, r 0.15 m,
+    // a 0.45: solidity 20 * 0.0024 / (2 pi 0.15) = 0.0509296; mean (2/pi)(sqrt(1 - a^2) + a asin a)
+    // = 0.636620 * (0.893029 + 0.210047) = 0.702243; K = 0.0357647 (derivation in spokeScreen.ts).
+    const got = spokeScreenResistance(0.15, 20, 1.2 * 0.002, 0.45, 1);
+    const expected = 0.0357647;
+    const tol = 1e-6;
+    expect(Math.abs(got - expected), `got=${got} expected=${expected} tol=${tol}`).toBeLessThanOrEqual(tol);
+    expect(spokeScreenResistance(0.15, 20, 1.2 * 0.002, 0.45, 2)).toBeCloseTo(2 * got, 14);
+    expect(spokeScreenResistance(0.15, 0, 0.0024, 0.45, 1)).toBe(0);
+  });
+
+  it('openness of a linear screen: o = 2 / (K + 2)', () => {
+    expect(screenOpenness(0)).toBe(1);
+    expect(screenOpenness(2)).toBe(0.5);
+    expect(screenOpenness(1e12)).toBeLessThan(1e-11);
+    expect(() => screenOpenness(-1)).toThrow(RangeError);
+  });
+});
+
+describe('panelOpenness', () => {
+  const lattice = buildDiscLattice({ radiusM: DEMO_WHEEL.outerRadiusM, spanCount: 16, chordCount: 12, ground: false });
+  const openArea = (o: Float64Array) => {
+    let a = 0;
+    let total = 0;
+    for (let p = 0; p < o.length; p++) {
+      a += o[p]! * lattice.areaM2[p]!;
+      total += lattice.areaM2[p]!;
+    }
+    return a / total;
+  };
+
+  it('closes every panel of a full disc', () => {
+    const wheel = { ...DEMO_WHEEL, coverFraction: 1 };
+    const o = panelOpenness(lattice, wheel, wheelRadii(wheel), 1, 1);
+    expect(Math.max(...o)).toBeLessThan(1e-12);
+  });
+
+  it('without spokes opens the spoked annulus: open area = annulus / disc (geometry)', () => {
+    const wheel = { ...DEMO_WHEEL, spokeCount: 0 };
+    const r = wheelRadii(wheel);
+    const got = openArea(panelOpenness(lattice, wheel, r, 1, 1));
+    const expected = (r.rimInnerRadiusM ** 2 - r.hubRadiusM ** 2) / r.outerRadiusM ** 2;
+    // Panels straddling the edges are sampled on a 4 x 4 grid: a percent-level area error.
+    const tol = 0.02;
+    expect(Math.abs(got - expected), `got=${got} expected=${expected} tol=${tol}`).toBeLessThanOrEqual(tol);
+  });
+
+  it('closes the open area in proportion to the cover fraction', () => {
+    const values = [0, 0.5, 1].map((coverFraction) => {
+      const wheel = { ...DEMO_WHEEL, spokeCount: 0, coverFraction };
+      return openArea(panelOpenness(lattice, wheel, wheelRadii(wheel), 1, 1));
+    });
+    expect(Math.abs(values[1]! - values[0]! / 2)).toBeLessThan(0.02);
+    expect(values[2]!).toBeLessThan(1e-12);
+  });
+});
