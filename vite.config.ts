@@ -1,3 +1,4 @@
+/// <reference types="vitest/config" />
 import { defineConfig } from 'vite';
 
 // One config serves the page (build/preview) and the tests (vitest reads the `test` key).

@@ -66,7 +66,12 @@ function timeIt(repeats: number, fn: () => number): { medianMs: number; checksum
     return work[n * n - 1]!;
   });
   const gflops = ((2 / 3) * n ** 3) / (r.medianMs * 1e-3) / 1e9;
-  print('lu_factor', { n, medianMs: +r.medianMs.toFixed(1), gflops: +gflops.toFixed(2), checksum: r.checksum });
+  print('lu_factor', {
+    n,
+    medianMs: +r.medianMs.toFixed(1),
+    gflops: +gflops.toFixed(2),
+    checksum: r.checksum,
+  });
 }
 
 // --- Lattice build and one design's yaw curve ------------------------------------------------------
@@ -134,7 +139,10 @@ const yawCurve = (speed: number): FlowConditions[] =>
     await pool.warm();
     // One untimed pass warms each worker's JIT and lattice cache; the timed pass is a fresh sweep
     // (the surface caches only help where boundary conditions repeat, and here none do across passes).
-    await runSweep(pool, cases.map((c) => ({ ...c, wheel: { ...c.wheel, rimWidthM: c.wheel.rimWidthM + 1e-6 } })));
+    await runSweep(
+      pool,
+      cases.map((c) => ({ ...c, wheel: { ...c.wheel, rimWidthM: c.wheel.rimWidthM + 1e-6 } })),
+    );
     const t0 = performance.now();
     const out = await runSweep(pool, cases);
     const ms = performance.now() - t0;

@@ -36,11 +36,14 @@ try {
   failed = report.numFailedTests ?? 0;
   skipped = (report.numPendingTests ?? 0) + (report.numTodoTests ?? 0);
   // A suite that fails to load has no tests counted: count it as a failure.
-  failed += (report.testResults ?? []).filter((s) => s.status === 'failed' && s.assertionResults.length === 0).length;
+  failed += (report.testResults ?? []).filter(
+    (s) => s.status === 'failed' && s.assertionResults.length === 0,
+  ).length;
 } catch {
   failed += 1;
 }
-if (failedSteps > 0) process.stderr.write(`\n${failedSteps} check step(s) failed (lint/format or type-check)\n`);
+if (failedSteps > 0)
+  process.stderr.write(`\n${failedSteps} check step(s) failed (lint/format or type-check)\n`);
 failed += failedSteps;
 console.log(`${passed} passed, ${failed} failed, ${skipped} skipped`);
 if (passed === 0) {

@@ -24,9 +24,9 @@ import {
   type SweepOptions,
 } from '../compute/planFile';
 import { csvHeader, documentCsvLines, errorCsvLine } from '../compute/resultTable';
+import { runCompare } from './compareCommand';
 import { exampleCase, examplePlan } from './examples';
 import { CliInputError, type CliIo, EXIT_INPUT, EXIT_INTERNAL, EXIT_OK, processIo } from './io';
-import { runCompare } from './compareCommand';
 import { nodeWorkerSpawner } from './nodeWorker';
 import { AtomicFile, checkOutputPath } from './outputFile';
 import { progressReporter } from './progress';

@@ -4,4 +4,10 @@ export { type PlanJobsOptions, planJobs } from './planJobs';
 export type * from './protocol';
 export { type RunSweepOptions, runSweep, type SweepOutcome, type SweepProgress } from './runSweep';
 export { solveJob, solverApi, transferablesOf } from './solverApi';
-export { type PoolRunOptions, type PoolRunSummary, type SpawnWorker, type WorkerHandle, WorkerPool } from './workerPool';
+export {
+  type PoolRunOptions,
+  type PoolRunSummary,
+  type SpawnWorker,
+  type WorkerHandle,
+  WorkerPool,
+} from './workerPool';

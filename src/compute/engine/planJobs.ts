@@ -27,9 +27,12 @@ function caseSurfaceKey(input: WheelInput): string {
  */
 export function planJobs(cases: readonly WheelInput[], options: PlanJobsOptions): SolveJob[] {
   const { workers, jobsPerWorker = 8 } = options;
-  if (!(Number.isInteger(workers) && workers >= 1)) throw new RangeError(`workers must be an integer >= 1, got ${workers}`);
+  if (!(Number.isInteger(workers) && workers >= 1))
+    throw new RangeError(`workers must be an integer >= 1, got ${workers}`);
   const keys = cases.map(caseSurfaceKey);
-  const order = cases.map((_, i) => i).sort((a, b) => (keys[a]! < keys[b]! ? -1 : keys[a]! > keys[b]! ? 1 : a - b));
+  const order = cases
+    .map((_, i) => i)
+    .sort((a, b) => (keys[a]! < keys[b]! ? -1 : keys[a]! > keys[b]! ? 1 : a - b));
   const groups: number[][] = [];
   for (const i of order) {
     const last = groups[groups.length - 1];
@@ -41,7 +44,10 @@ export function planJobs(cases: readonly WheelInput[], options: PlanJobsOptions)
   const jobs: SolveJob[] = [];
   for (let g = 0; g < groups.length; g += groupsPerJob) {
     const members = groups.slice(g, g + groupsPerJob).flat();
-    jobs.push({ jobId: jobs.length, cases: members.map((caseIndex) => ({ caseIndex, input: cases[caseIndex]! })) });
+    jobs.push({
+      jobId: jobs.length,
+      cases: members.map((caseIndex) => ({ caseIndex, input: cases[caseIndex]! })),
+    });
   }
   return jobs;
 }

@@ -55,7 +55,14 @@ export async function runSweep(
   const report = () => {
     const elapsedMs = now() - start;
     const remainingMs = pointsDone > 0 ? (elapsedMs * (pointsTotal - pointsDone)) / pointsDone : Number.NaN;
-    options.onProgress?.({ casesDone, casesTotal: cases.length, pointsDone, pointsTotal, elapsedMs, remainingMs });
+    options.onProgress?.({
+      casesDone,
+      casesTotal: cases.length,
+      pointsDone,
+      pointsTotal,
+      elapsedMs,
+      remainingMs,
+    });
   };
   const summary = await pool.run(jobs, {
     signal: options.signal,
@@ -84,5 +91,11 @@ export async function runSweep(
       report();
     },
   });
-  return { solutions, errors, cancelled: summary.cancelled, failedCount, workersReplaced: summary.workersReplaced };
+  return {
+    solutions,
+    errors,
+    cancelled: summary.cancelled,
+    failedCount,
+    workersReplaced: summary.workersReplaced,
+  };
 }

@@ -40,7 +40,8 @@ export class WorkerPool {
     private readonly spawn: SpawnWorker,
     readonly size: number,
   ) {
-    if (!(Number.isInteger(size) && size >= 1)) throw new RangeError(`pool size must be an integer >= 1, got ${size}`);
+    if (!(Number.isInteger(size) && size >= 1))
+      throw new RangeError(`pool size must be an integer >= 1, got ${size}`);
     this.workers = new Array<WorkerHandle | null>(size).fill(null);
   }
 

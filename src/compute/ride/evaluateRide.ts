@@ -38,8 +38,8 @@ export const RIDE_QUADRATURE = {
   speedNodes: 24,
   directionNodes: 72,
   /** The same for each segment of a course. */
-  courseSpeedNodes: 12,
-  courseDirectionNodes: 36,
+  courseSpeedNodes: 8,
+  courseDirectionNodes: 24,
   /** Finer sets for the yaw distribution (density and 90 % quantile). */
   yawSpeedNodes: 64,
   yawDirectionNodes: 720,
@@ -350,7 +350,7 @@ function legTimeAtPower(
       (speed) => ridePower(setup, curve, speed, u * scale.hub, u * scale.rider, from, scratchPower).pedalW,
       powerW,
       MAX_RIDE_SPEED_MPS,
-      1,
+      2,
     );
     if (!Number.isFinite(v)) {
       v = MAX_RIDE_SPEED_MPS;
@@ -582,7 +582,7 @@ export function evaluateRide(ride: RideFile, curves: RideCurves): RideDocument {
   const yawP90 = weightedQuantile(yawAbs, yawStates.weights, 0.9);
   const yawDensity = Array.from(hist.density, (d, i) => ({
     yaw_deg: (i + 0.5) * RIDE_QUADRATURE.yawBinDeg,
-    density_per_deg: d * binRad,
+    density_per_deg: (d * Math.PI) / 180,
   }));
   if (beyondValidity > 0.005) {
     flags.push(

@@ -1,4 +1,4 @@
-import type { StripLattice } from './types';
+import type { RingLattice } from './types';
 
 /**
  * System matrix of the lattice with porous panels, row-major n x n:
@@ -15,7 +15,7 @@ import type { StripLattice } from './types';
  * Allocation-free when `out` (length >= n*n) is given.
  */
 export function assembleSystem(
-  lattice: StripLattice,
+  lattice: RingLattice,
   openness: Float64Array,
   out?: Float64Array,
 ): Float64Array {

@@ -151,6 +151,9 @@ export function buildStripLattice(spec: StripLatticeSpec): StripLattice {
       centroidX[p] = (ma * (2 * la + lb) + mb * (la + 2 * lb)) / (3 * sum);
     }
   }
+  // Adjacent strips share corners: strip s's lower corners are edge s's, its upper ones edge s + 1's.
+  const nodeLowerX = nodeX.slice(0, spanCount * cols);
+  const nodeUpperX = nodeX.slice(cols);
   const influence = new Float64Array(n * n);
   influenceMatrix(edgeZ, nodeX, chordCount, controlX, controlZOut, spec.groundZM, influence);
   return {
@@ -161,6 +164,8 @@ export function buildStripLattice(spec: StripLatticeSpec): StripLattice {
     groundZM: spec.groundZM,
     edgeZ: Float64Array.from(edgeZ),
     nodeX,
+    nodeLowerX,
+    nodeUpperX,
     controlX,
     controlZ: controlZOut,
     boundX,

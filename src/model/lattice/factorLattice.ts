@@ -1,6 +1,6 @@
 import { luFactor } from '../numeric/luFactor';
 import { assembleSystem } from './assembleSystem';
-import type { LatticeFactor, StripLattice } from './types';
+import type { LatticeFactor, RingLattice } from './types';
 
 /**
  * Assembles the porous lattice system (`assembleSystem`) and LU-factorises it once (`luFactor`).
@@ -8,7 +8,7 @@ import type { LatticeFactor, StripLattice } from './types';
  * yaw angle and speed of a geometry (Katz & Plotkin, Low-Speed Aerodynamics, 2nd ed., sec. 12.3:
  * the influence matrix depends on geometry only).
  */
-export function factorLattice(lattice: StripLattice, openness: Float64Array): LatticeFactor {
+export function factorLattice(lattice: RingLattice, openness: Float64Array): LatticeFactor {
   const n = lattice.panelCount;
   const lu = assembleSystem(lattice, openness);
   const pivots = new Int32Array(n);

@@ -1,26 +1,27 @@
 import { segmentVelocity } from './segmentVelocity';
 import { semiInfiniteSegmentVelocity } from './semiInfiniteSegmentVelocity';
-import type { StripLattice } from './types';
+import type { RingLattice } from './types';
 
 const scratch = new Float64Array(3);
 
 /**
  * Velocity (m/s) induced at any point (x, y, z) by the lattice's rings with circulations `gamma`,
  * their planar wakes and, with ground, their mirror images about z = groundZM (Biot-Savart,
- * Katz & Plotkin, Low-Speed Aerodynamics, 2nd ed., eq. 10.115, summed over the lattice's unique
- * segments with the net circulation of the rings sharing each one; images carry the opposite
+ * Katz & Plotkin, Low-Speed Aerodynamics, 2nd ed., eq. 10.115, summed over each strip's segments:
+ * spanwise ones with the net circulation of the two rings sharing them, the chordwise sides and wake
+ * legs ring by ring, so strips may place their corners independently; images carry the opposite
  * circulation). The general 3-D counterpart of the planar kernels used for the influence matrix.
  * Writes (vx, vy, vz) into `out` and returns it.
  */
 export function latticeVelocity(
-  lattice: StripLattice,
+  lattice: RingLattice,
   gamma: Float64Array,
   x: number,
   y: number,
   z: number,
   out: Float64Array,
 ): Float64Array {
-  const { spanCount, chordCount, edgeZ, nodeX, groundZM } = lattice;
+  const { spanCount, chordCount, edgeZ, nodeLowerX, nodeUpperX, groundZM } = lattice;
   if (gamma.length !== lattice.panelCount) {
     throw new RangeError(
       `latticeVelocity: gamma.length=${gamma.length} must equal panelCount=${lattice.panelCount}`,
@@ -45,33 +46,37 @@ export function latticeVelocity(
       vz += scratch[2]!;
     }
   };
-  for (let s = 0; s < spanCount; s++) {
-    for (let m = 0; m < chordCount; m++) {
-      const p = s * chordCount + m;
-      const g = gamma[p]! - (m > 0 ? gamma[p - 1]! : 0);
-      if (g !== 0) add(nodeX[s * cols + m]!, edgeZ[s]!, nodeX[(s + 1) * cols + m]!, edgeZ[s + 1]!, g);
-    }
-  }
-  for (let k = 0; k <= spanCount; k++) {
-    const ze = edgeZ[k]!;
-    for (let m = 0; m < chordCount; m++) {
-      const g =
-        (k > 0 ? gamma[(k - 1) * chordCount + m]! : 0) - (k < spanCount ? gamma[k * chordCount + m]! : 0);
-      if (g !== 0) add(nodeX[k * cols + m]!, ze, nodeX[k * cols + m + 1]!, ze, g);
-    }
-    const g =
-      (k > 0 ? gamma[k * chordCount - 1]! : 0) - (k < spanCount ? gamma[(k + 1) * chordCount - 1]! : 0);
-    if (g === 0) continue;
-    const xw = nodeX[k * cols + chordCount]!;
-    semiInfiniteSegmentVelocity(xw, 0, ze, -1, 0, 0, x, y, z, g, scratch);
+  const addWake = (ax: number, az: number, g: number): void => {
+    semiInfiniteSegmentVelocity(ax, 0, az, -1, 0, 0, x, y, z, g, scratch);
     vx += scratch[0]!;
     vy += scratch[1]!;
     vz += scratch[2]!;
     if (ground) {
-      semiInfiniteSegmentVelocity(xw, 0, g2 - ze, -1, 0, 0, x, y, z, -g, scratch);
+      semiInfiniteSegmentVelocity(ax, 0, g2 - az, -1, 0, 0, x, y, z, -g, scratch);
       vx += scratch[0]!;
       vy += scratch[1]!;
       vz += scratch[2]!;
+    }
+  };
+  for (let s = 0; s < spanCount; s++) {
+    const z0 = edgeZ[s]!;
+    const z1 = edgeZ[s + 1]!;
+    const row = s * cols;
+    for (let m = 0; m < chordCount; m++) {
+      const p = s * chordCount + m;
+      const g = gamma[p]!;
+      // Spanwise segment m: ring m's bound segment and ring m - 1's trailing one (net circulation).
+      const net = g - (m > 0 ? gamma[p - 1]! : 0);
+      if (net !== 0) add(nodeLowerX[row + m]!, z0, nodeUpperX[row + m]!, z1, net);
+      if (g === 0) continue;
+      // Ring m's sides: lower edge (leading -> trailing) with -g, upper edge with +g.
+      add(nodeLowerX[row + m]!, z0, nodeLowerX[row + m + 1]!, z0, -g);
+      add(nodeUpperX[row + m]!, z1, nodeUpperX[row + m + 1]!, z1, g);
+    }
+    const last = gamma[s * chordCount + chordCount - 1]!;
+    if (last !== 0) {
+      addWake(nodeLowerX[row + chordCount]!, z0, -last);
+      addWake(nodeUpperX[row + chordCount]!, z1, last);
     }
   }
   out[0] = vx;

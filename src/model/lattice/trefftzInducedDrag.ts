@@ -1,4 +1,4 @@
-import type { StripLattice } from './types';
+import type { RingLattice } from './types';
 
 /**
  * Induced-drag coefficient from the Trefftz plane (Katz & Plotkin, Low-Speed Aerodynamics, 2nd ed.,
@@ -11,7 +11,7 @@ import type { StripLattice } from './types';
  * returned as D_i / (q S) for rho = 1, V = 1 m/s: with the unit-forcing circulations this is the
  * induced-drag coefficient per sin^2(beta). `gamma` holds the ring circulations (m^2/s).
  */
-export function trefftzInducedDrag(lattice: StripLattice, gamma: Float64Array): number {
+export function trefftzInducedDrag(lattice: RingLattice, gamma: Float64Array): number {
   const { spanCount, chordCount, edgeZ, groundZM } = lattice;
   if (gamma.length !== lattice.panelCount) {
     throw new RangeError(

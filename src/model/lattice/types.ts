@@ -9,7 +9,7 @@
  * Ring orientation: a positive circulation has its bound (leading) segment pointing along +z, so by
  * Kutta-Joukowski it carries a normal force along +y for air moving along -x.
  */
-export interface StripLattice {
+export interface RingLattice {
   spanCount: number;
   chordCount: number;
   panelCount: number;
@@ -20,11 +20,14 @@ export interface StripLattice {
   /** Strip edges in z (m), spanCount + 1 values, increasing. */
   edgeZ: Float64Array;
   /**
-   * x of the vortex-ring corners (m), row-major (spanCount + 1) x (chordCount + 1): corner (k, m)
-   * lies on strip edge k at chordwise vortex line m (m = 0: the leading panel's quarter chord;
-   * m = chordCount: a quarter panel behind the trailing edge, where the wake legs start).
+   * x of the vortex-ring corners (m) of each strip, row-major spanCount x (chordCount + 1): corner
+   * (s, m) of strip s lies on its lower edge line (z = edgeZ[s]) or upper edge line (edgeZ[s + 1]) at
+   * chordwise vortex line m (m = 0: the leading panel's quarter chord; m = chordCount: a quarter
+   * panel behind the trailing edge, where the wake legs start). Strips may place their corners
+   * independently (a wheel lattice aligns each strip's panels with the region edges it crosses).
    */
-  nodeX: Float64Array;
+  nodeLowerX: Float64Array;
+  nodeUpperX: Float64Array;
   /** Control point of each panel (m). */
   controlX: Float64Array;
   controlZ: Float64Array;
@@ -44,6 +47,16 @@ export interface StripLattice {
    * (trailing-edge rings) and, when `ground`, the mirror image of both. Units 1/m.
    */
   influence: Float64Array;
+}
+
+/** A strip lattice whose adjacent strips share their corners on each edge line. */
+export interface StripLattice extends RingLattice {
+  /**
+   * x of the vortex-ring corners (m), row-major (spanCount + 1) x (chordCount + 1): corner (k, m)
+   * lies on strip edge k at chordwise vortex line m (m = 0: the leading panel's quarter chord;
+   * m = chordCount: a quarter panel behind the trailing edge, where the wake legs start).
+   */
+  nodeX: Float64Array;
 }
 
 /** The wheel's disc of radius R (hub at the origin), optionally standing on the ground z = -R. */
@@ -76,7 +89,7 @@ export interface LatticeSolution {
 
 /** An assembled and LU-factorised lattice system, reusable for any forcing (every yaw and speed). */
 export interface LatticeFactor {
-  lattice: StripLattice;
+  lattice: RingLattice;
   /** Panel openness (0 solid .. 1 fully open), a private copy. */
   openness: Float64Array;
   /** LU factors of the system matrix (row-major, in place) and the row interchanges. */

@@ -68,7 +68,8 @@ export function assemblePoint(
   const components = {} as Record<ComponentName, ComponentLoads>;
   for (const name of COMPONENTS) components[name] = emptyLoads();
   const flags: string[] = [];
-  if (surfaceLoads(coeff, point, options, area, components.surface, components.vortex)) flags.push('suction_negative');
+  if (surfaceLoads(coeff, point, options, area, components.surface, components.vortex))
+    flags.push('suction_negative');
   const spokeReport = spokeLoads(wheel, radii, point, options, components.spokes);
   rimTyreLoads(wheel, radii, point, options, components.rim_tyre);
   frictionLoads(wheel, radii, point, components.friction);

@@ -1,7 +1,7 @@
 export { assemblePoint } from './assemblePoint';
 export { DEFAULT_MODEL_OPTIONS, DEFAULT_STEERING, DEMO_WHEEL } from './defaults';
 export { meanAbsSinusoid } from './meanAbsSinusoid';
-export { panelOpenness } from './panelOpenness';
+export { openAnnuli, panelOpenness } from './panelOpenness';
 export { rimTyreSection } from './rimTyreLoads';
 export { solveWheel, type WheelInput } from './solveWheel';
 export { screenOpenness, spokeScreenResistance } from './spokeScreen';

@@ -1,21 +1,42 @@
-import type { DiscLattice } from '../lattice/types';
+import type { RingLattice } from '../lattice/types';
 import { screenOpenness, spokeNormalForceLengthM, spokeScreenResistance } from './spokeScreen';
 import type { WheelGeometry } from './types';
 import type { WheelRadii } from './wheelRadii';
 
-const SAMPLES_PER_SIDE = 4;
+/**
+ * The open annuli [inner, outer] (m): the centre (hub and spokes) out to the cover and the cover to
+ * the rim, or the centre out to the rim when uncovered. The wheel lattice puts panel edges on their
+ * circles.
+ */
+export function openAnnuli(radii: WheelRadii): Array<[number, number]> {
+  const edges: Array<[number, number]> = [];
+  const open = (a: number, b: number) => {
+    if (b - a > 1e-9 * radii.outerRadiusM) edges.push([a, b]);
+  };
+  if (radii.coverOuterRadiusM > radii.coverInnerRadiusM) {
+    // The hub's disc opens with the spokes next to it (see panelOpenness).
+    if (radii.coverInnerRadiusM - radii.hubRadiusM > 1e-9 * radii.outerRadiusM)
+      open(0, radii.coverInnerRadiusM);
+    open(radii.coverOuterRadiusM, radii.rimInnerRadiusM);
+  } else {
+    open(0, radii.rimInnerRadiusM);
+  }
+  return edges;
+}
 
 /**
- * Openness of every lattice panel (0 solid, 1 fully open). The lattice is a fixed grid over the disc,
- * so a panel may straddle region edges (rim, cover, hub); it takes the mean openness of a 4 x 4 grid of
- * sample points over its span x chord rectangle. This keeps one lattice (one influence matrix) for every
- * cover and rim depth, and makes results vary smoothly with them. Solid: tyre, rim, covers, hub
- * (r <= hub flange radius); open: the spoked annulus, with the screen openness of spokeScreen.
+ * Openness of every lattice panel (0 solid, 1 fully open), read at the panel's centroid: solid for
+ * the tyre, rim and covers; for the open spoked region the linear screen openness of spokeScreen at
+ * that radius. The hub (inside the flange radius) is a narrow shell whose flanges block little of the
+ * through-flow: it takes the spokes' openness at the flange radius unless a cover reaches it, and
+ * carries no lifting load of its own (a stated simplification; it avoids a tiny solid island that
+ * the lattice resolves poorly). The wheel lattice's panels do not straddle the
+ * region edges (openAnnuli), so one sample per panel classifies it.
  *
  * `rotationRatio` = ground speed / airspeed (omega R / V): the spokes' rotation relative to the air.
  */
 export function panelOpenness(
-  lattice: DiscLattice,
+  lattice: RingLattice,
   wheel: WheelGeometry,
   radii: WheelRadii,
   rotationRatio: number,
@@ -28,26 +49,22 @@ export function panelOpenness(
   const forceLength = spokeNormalForceLengthM(wheel);
   const { rimInnerRadiusM: rimIn, hubRadiusM: hub, coverInnerRadiusM: cIn, coverOuterRadiusM: cOut } = radii;
   const hasCover = cOut > cIn;
-  const outerR = radii.outerRadiusM;
-  const n = SAMPLES_PER_SIDE;
   for (let p = 0; p < lattice.panelCount; p++) {
-    const cx = lattice.centroidX[p]!;
-    const cz = lattice.centroidZ[p]!;
-    const dz = lattice.spanWidthM[p]!;
-    const dx = lattice.chordLengthM[p]!;
-    let sum = 0;
-    for (let i = 0; i < n; i++) {
-      const z = cz + ((i + 0.5) / n - 0.5) * dz;
-      for (let j = 0; j < n; j++) {
-        const x = cx + ((j + 0.5) / n - 0.5) * dx;
-        const r = Math.sqrt(x * x + z * z);
-        if (r >= rimIn || r <= hub) continue; // tyre, rim or hub: solid
-        if (hasCover && r >= cIn && r <= cOut) continue; // covered: solid
-        const k = spokeScreenResistance(r, wheel.spokeCount, forceLength, (rotationRatio * r) / outerR, porosityScale);
-        sum += screenOpenness(k);
-      }
+    const x = lattice.centroidX[p]!;
+    const z = lattice.centroidZ[p]!;
+    const r = Math.sqrt(x * x + z * z);
+    if (r >= rimIn || (hasCover && r >= cIn && r <= cOut)) {
+      out[p] = 0;
+      continue;
     }
-    out[p] = sum / (n * n);
+    const k = spokeScreenResistance(
+      Math.max(r, hub),
+      wheel.spokeCount,
+      forceLength,
+      (rotationRatio * r) / radii.outerRadiusM,
+      porosityScale,
+    );
+    out[p] = screenOpenness(k);
   }
   return out;
 }

@@ -15,7 +15,10 @@ for (let k = 0; k < ANGLE_STEPS; k++) {
 
 /** Section of the rim and tyre, radially: chord = tyre height (= width) + rim depth. */
 export function rimTyreSection(wheel: WheelGeometry): { chordM: number; thicknessM: number } {
-  return { chordM: wheel.tyreWidthM + wheel.rimDepthM, thicknessM: Math.max(wheel.tyreWidthM, wheel.rimWidthM) };
+  return {
+    chordM: wheel.tyreWidthM + wheel.rimDepthM,
+    thicknessM: Math.max(wheel.tyreWidthM, wheel.rimWidthM),
+  };
 }
 
 /**

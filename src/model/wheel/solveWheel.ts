@@ -1,5 +1,5 @@
 import { assemblePoint } from './assemblePoint';
-import { surfaceCoefficients, type SurfaceCoefficients } from './surfaceCoefficients';
+import { type SurfaceCoefficients, surfaceCoefficients } from './surfaceCoefficients';
 import { surfaceKey } from './surfaceKey';
 import type { FlowConditions, ModelOptions, SteeringGeometry, WheelGeometry, WheelSolution } from './types';
 import { wheelRadii } from './wheelRadii';
@@ -25,7 +25,8 @@ export function solveWheel(
   const { wheel, options, steering, points } = input;
   const radii = wheelRadii(wheel);
   for (const [i, p] of points.entries()) {
-    if (!(p.airspeedMps > 0)) throw new RangeError(`points[${i}].airspeedMps must be > 0, got ${p.airspeedMps}`);
+    if (!(p.airspeedMps > 0))
+      throw new RangeError(`points[${i}].airspeedMps must be > 0, got ${p.airspeedMps}`);
     if (!(p.groundSpeedMps >= 0)) {
       throw new RangeError(`points[${i}].groundSpeedMps must be >= 0, got ${p.groundSpeedMps}`);
     }
@@ -33,7 +34,9 @@ export function solveWheel(
       throw new RangeError(`points[${i}].yawRad must be within [-pi/2, pi/2], got ${p.yawRad}`);
     }
     if (!(p.rhoKgPerM3 > 0) || !(p.muPaS > 0)) {
-      throw new RangeError(`points[${i}] needs rhoKgPerM3 > 0 and muPaS > 0, got ${p.rhoKgPerM3}, ${p.muPaS}`);
+      throw new RangeError(
+        `points[${i}] needs rhoKgPerM3 > 0 and muPaS > 0, got ${p.rhoKgPerM3}, ${p.muPaS}`,
+      );
     }
   }
   const coefficientsFor = (ratio: number): SurfaceCoefficients => {

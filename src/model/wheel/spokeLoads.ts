@@ -5,8 +5,14 @@ import type { WheelRadii } from './wheelRadii';
 /** Revolution positions averaged (midpoint rule, spectrally accurate for a periodic integrand). */
 const ANGLE_STEPS = 36;
 /** Gauss-Legendre nodes and weights on [-1, 1] (Abramowitz & Stegun, Table 25.4, n = 6). */
-const GL_X = [-0.932469514203152, -0.661209386466265, -0.238619186083197, 0.238619186083197, 0.661209386466265, 0.932469514203152];
-const GL_W = [0.17132449237917, 0.360761573048139, 0.467913934572691, 0.467913934572691, 0.360761573048139, 0.17132449237917];
+const GL_X = [
+  -0.932469514203152, -0.661209386466265, -0.238619186083197, 0.238619186083197, 0.661209386466265,
+  0.932469514203152,
+];
+const GL_W = [
+  0.17132449237917, 0.360761573048139, 0.467913934572691, 0.467913934572691, 0.360761573048139,
+  0.17132449237917,
+];
 
 const sinTheta = new Float64Array(ANGLE_STEPS);
 const cosTheta = new Float64Array(ANGLE_STEPS);

@@ -8,12 +8,7 @@ import type { SteeringGeometry } from './types';
  * rider's left (about +z tilted back). Rigid-body statics; geometry after Cossalter, Motorcycle
  * Dynamics, ch. 1 (from memory).
  */
-export function steeringMoment(
-  steering: SteeringGeometry,
-  mxNm: number,
-  mzNm: number,
-  fyN: number,
-): number {
+export function steeringMoment(steering: SteeringGeometry, mxNm: number, mzNm: number, fyN: number): number {
   const h = steering.headAngleRad;
   const d = steering.forkOffsetM;
   const sinH = Math.sin(h);

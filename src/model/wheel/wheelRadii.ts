@@ -66,7 +66,9 @@ export function wheelRadii(wheel: WheelGeometry): WheelRadii {
       }
       break;
     default:
-      throw new RangeError(`coverPlacement must be rim, hub, centre or explicit, got ${String(wheel.coverPlacement)}`);
+      throw new RangeError(
+        `coverPlacement must be rim, hub, centre or explicit, got ${String(wheel.coverPlacement)}`,
+      );
   }
   return {
     outerRadiusM: outer,

@@ -1,4 +1,9 @@
-import { DEFAULT_MODEL_OPTIONS, DEFAULT_STEERING, DEMO_WHEEL, type WheelInput } from '../../../src/model/wheel';
+import {
+  DEFAULT_MODEL_OPTIONS,
+  DEFAULT_STEERING,
+  DEMO_WHEEL,
+  type WheelInput,
+} from '../../../src/model/wheel';
 
 const deg = Math.PI / 180;
 

@@ -10,9 +10,7 @@ import type { SpawnWorker, WorkerHandle } from '../../../src/compute/engine/work
  * same structured cloning and transfers as a worker, no start-up cost). `sabotage(n, jobId)` says
  * whether the n-th job dealt to this spawn's workers should make its worker die instead of answering.
  */
-export function inProcessSpawner(
-  sabotage: (jobNumber: number, jobId: number) => boolean = () => false,
-): {
+export function inProcessSpawner(sabotage: (jobNumber: number, jobId: number) => boolean = () => false): {
   spawn: SpawnWorker;
   spawned: () => number;
 } {

@@ -6,7 +6,10 @@ import { smallSweep } from './fixtures';
 describe('planJobs', () => {
   const cases = smallSweep([0, 0.25, 0.5, 0.75, 1], [0.03, 0.05, 0.07]);
   // Duplicate boundary conditions: same wheel, other air density (a case-level change).
-  const withTwins = [...cases, ...cases.map((c) => ({ ...c, points: c.points.map((p) => ({ ...p, rhoKgPerM3: 1.1 })) }))];
+  const withTwins = [
+    ...cases,
+    ...cases.map((c) => ({ ...c, points: c.points.map((p) => ({ ...p, rhoKgPerM3: 1.1 })) })),
+  ];
 
   it('puts every case in exactly one job, deterministically', () => {
     const jobs = planJobs(withTwins, { workers: 2 });

@@ -15,7 +15,10 @@ function expectSameAsDirect(cases: ReturnType<typeof smallSweep>, solutions: Arr
       const q = got.points[k]!;
       for (const key of ['axialN', 'sideN', 'steeringMomentNm', 'axleTorqueNm', 'powerW'] as const) {
         const tol = 1e-12 * Math.max(1, Math.abs(p[key]));
-        expect(Math.abs(q[key] - p[key]), `case ${i} point ${k} ${key}: got ${q[key]} expected ${p[key]}`).toBeLessThanOrEqual(tol);
+        expect(
+          Math.abs(q[key] - p[key]),
+          `case ${i} point ${k} ${key}: got ${q[key]} expected ${p[key]}`,
+        ).toBeLessThanOrEqual(tol);
       }
     });
   });
@@ -63,7 +66,9 @@ describe('runSweep on a pool (in-process channel workers)', () => {
     expect(out.failedCount).toBeLessThan(cases.length);
     const failed = out.errors.filter((e) => e !== null);
     expect(failed.every((e) => /worker failed twice/.test(e!))).toBe(true);
-    out.solutions.forEach((s, i) => expect(s === null).toBe(out.errors[i] !== null));
+    out.solutions.forEach((s, i) => {
+      expect(s === null).toBe(out.errors[i] !== null);
+    });
     pool.close();
   });
 

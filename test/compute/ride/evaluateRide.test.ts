@@ -69,7 +69,7 @@ describe('evaluateRide with synthetic curves', () => {
     expect(doc.delta_power_W).toBe(0);
     expect(doc.delta_time_s).toBe(0);
     // The yaw density integrates to 1 over 0..90 deg.
-    const integral = doc.yaw_density.reduce((a, b) => a + b.density_per_deg, 0);
+    const integral = doc.yaw_density.reduce((a, b) => a + b.density_per_deg * 1, 0); // 1-deg bins
     expect(Math.abs(integral - 1), `integral=${integral}`).toBeLessThanOrEqual(1e-9);
   });
 

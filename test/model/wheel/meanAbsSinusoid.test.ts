@@ -25,7 +25,9 @@ describe('meanAbsSinusoid', () => {
     const got = meanAbsSinusoid(a, 1);
     const expected = quadrature(a, 1);
     const tol = 1e-8;
-    expect(Math.abs(got - expected), `a=${a} got=${got} expected=${expected} tol=${tol}`).toBeLessThanOrEqual(tol);
+    expect(Math.abs(got - expected), `a=${a} got=${got} expected=${expected} tol=${tol}`).toBeLessThanOrEqual(
+      tol,
+    );
   });
 
   it('rejects non-finite input with a RangeError', () => {

@@ -15,13 +15,25 @@ describe('rimTyreLoads', () => {
     const wheel = { ...DEMO_WHEEL };
     const radii = wheelRadii(wheel);
     const { chordM, thicknessM } = rimTyreSection(wheel);
-    const cd = streamlineSectionDrag(thicknessM / chordM, turbulentFlatPlateFriction((rho * V * chordM) / mu));
+    const cd = streamlineSectionDrag(
+      thicknessM / chordM,
+      turbulentFlatPlateFriction((rho * V * chordM) / mu),
+    );
     const rMid = radii.outerRadiusM - chordM / 2;
     const expected = -0.5 * rho * V * V * cd * chordM * rMid * (8 / 3);
     const out = emptyLoads();
-    rimTyreLoads(wheel, radii, { airspeedMps: V, yawRad: 0, groundSpeedMps: V, rhoKgPerM3: rho, muPaS: mu }, DEFAULT_MODEL_OPTIONS, out);
+    rimTyreLoads(
+      wheel,
+      radii,
+      { airspeedMps: V, yawRad: 0, groundSpeedMps: V, rhoKgPerM3: rho, muPaS: mu },
+      DEFAULT_MODEL_OPTIONS,
+      out,
+    );
     const tol = 2e-3 * Math.abs(expected);
-    expect(Math.abs(out.fxN - expected), `got=${out.fxN} expected=${expected} tol=${tol}`).toBeLessThanOrEqual(tol);
+    expect(
+      Math.abs(out.fxN - expected),
+      `got=${out.fxN} expected=${expected} tol=${tol}`,
+    ).toBeLessThanOrEqual(tol);
     expect(Math.abs(out.fzN)).toBeLessThan(1e-12);
     expect(out.axleTorqueNm).toBe(0);
   });
@@ -31,7 +43,13 @@ describe('rimTyreLoads', () => {
     const radii = wheelRadii(wheel);
     const at = (yawRad: number) => {
       const out = emptyLoads();
-      rimTyreLoads(wheel, radii, { airspeedMps: 12, yawRad, groundSpeedMps: 12, rhoKgPerM3: 1.2, muPaS: 1.8e-5 }, DEFAULT_MODEL_OPTIONS, out);
+      rimTyreLoads(
+        wheel,
+        radii,
+        { airspeedMps: 12, yawRad, groundSpeedMps: 12, rhoKgPerM3: 1.2, muPaS: 1.8e-5 },
+        DEFAULT_MODEL_OPTIONS,
+        out,
+      );
       return out.fxN;
     };
     const ratio = at(0.3) / at(0);

@@ -10,7 +10,12 @@ import {
 } from '../../../src/model/wheel';
 
 const deg = Math.PI / 180;
-const coarse: ModelOptions = { ...DEFAULT_MODEL_OPTIONS, latticeSpanCount: 12, latticeChordCount: 8, gridConvergence: false };
+const coarse: ModelOptions = {
+  ...DEFAULT_MODEL_OPTIONS,
+  latticeSpanCount: 12,
+  latticeChordCount: 8,
+  gridConvergence: false,
+};
 const point = (yawDeg: number, v = 13.41, rho = 1.225): FlowConditions => ({
   airspeedMps: v,
   yawRad: yawDeg * deg,
@@ -27,11 +32,23 @@ describe('solveWheel', () => {
     const wheel = { ...DEMO_WHEEL, coverFraction: 0.6 };
     const [a, b] = solve(wheel, [point(12), point(-12)]).points;
     const tol = 1e-12;
-    for (const key of ['axialN', 'axleTorqueNm', 'powerW', 'verticalN', 'windDragN', 'cpXM', 'cpZM'] as const) {
-      expect(Math.abs(a![key] - b![key]), `${key}: ${a![key]} vs ${b![key]}`).toBeLessThanOrEqual(tol * Math.max(1, Math.abs(a![key])));
+    for (const key of [
+      'axialN',
+      'axleTorqueNm',
+      'powerW',
+      'verticalN',
+      'windDragN',
+      'cpXM',
+      'cpZM',
+    ] as const) {
+      expect(Math.abs(a![key] - b![key]), `${key}: ${a![key]} vs ${b![key]}`).toBeLessThanOrEqual(
+        tol * Math.max(1, Math.abs(a![key])),
+      );
     }
     for (const key of ['sideN', 'yawMomentNm', 'rollMomentNm', 'steeringMomentNm', 'windLiftN'] as const) {
-      expect(Math.abs(a![key] + b![key]), `${key}: ${a![key]} vs ${b![key]}`).toBeLessThanOrEqual(tol * Math.max(1, Math.abs(a![key])));
+      expect(Math.abs(a![key] + b![key]), `${key}: ${a![key]} vs ${b![key]}`).toBeLessThanOrEqual(
+        tol * Math.max(1, Math.abs(a![key])),
+      );
     }
   });
 
@@ -67,8 +84,14 @@ describe('solveWheel', () => {
     const parts = Object.values(p!.components);
     const sum = (f: (c: (typeof parts)[number]) => number) => parts.reduce((s, c) => s + f(c), 0);
     expect(p!.axialN).toBeCloseTo(-sum((c) => c.fxN), 12);
-    expect(p!.sideN).toBeCloseTo(sum((c) => c.fyN), 12);
-    expect(p!.axleTorqueNm).toBeCloseTo(sum((c) => c.axleTorqueNm), 12);
+    expect(p!.sideN).toBeCloseTo(
+      sum((c) => c.fyN),
+      12,
+    );
+    expect(p!.axleTorqueNm).toBeCloseTo(
+      sum((c) => c.axleTorqueNm),
+      12,
+    );
     const omega = p!.groundSpeedMps / DEMO_WHEEL.outerRadiusM;
     expect(p!.powerW).toBeCloseTo(p!.axialN * p!.groundSpeedMps + p!.axleTorqueNm * omega, 10);
     expect(p!.cdaAxialM2).toBeCloseTo(p!.axialN / (0.5 * 1.225 * 13.41 ** 2), 12);
@@ -88,8 +111,12 @@ describe('solveWheel', () => {
     // Expected trend of covered wheels (common practice, no source): a solid disc carries more
     // lifting load; removing exposed spokes removes their crossflow drag.
     const fractions = [0, 0.25, 0.5, 0.75, 1];
-    const side = fractions.map((f) => solve({ ...DEMO_WHEEL, coverFraction: f }, [point(10)]).points[0]!.sideN);
-    const axial0 = fractions.map((f) => solve({ ...DEMO_WHEEL, coverFraction: f }, [point(0)]).points[0]!.axialN);
+    const side = fractions.map(
+      (f) => solve({ ...DEMO_WHEEL, coverFraction: f }, [point(10)]).points[0]!.sideN,
+    );
+    const axial0 = fractions.map(
+      (f) => solve({ ...DEMO_WHEEL, coverFraction: f }, [point(0)]).points[0]!.axialN,
+    );
     for (let i = 1; i < fractions.length; i++) {
       expect(side[i]!, `side ${side}`).toBeGreaterThan(side[i - 1]!);
       expect(axial0[i]!, `axial ${axial0}`).toBeLessThan(axial0[i - 1]!);
@@ -100,7 +127,10 @@ describe('solveWheel', () => {
     const options = { ...DEFAULT_MODEL_OPTIONS, ground: false, gridConvergence: false };
     const s = solve({ ...DEMO_WHEEL, coverFraction: 1 }, [point(1)], options).surface;
     const tol = 0.01 * 1.79;
-    expect(Math.abs(s.sideSlopePerRad - 1.79), `got=${s.sideSlopePerRad} expected=1.790 tol=${tol}`).toBeLessThanOrEqual(tol);
+    expect(
+      Math.abs(s.sideSlopePerRad - 1.79),
+      `got=${s.sideSlopePerRad} expected=1.790 tol=${tol}`,
+    ).toBeLessThanOrEqual(tol);
     // The ground image raises the slope (a wing on a reflecting wall; Katz & Plotkin ground effect).
     const g = solve({ ...DEMO_WHEEL, coverFraction: 1 }, [point(1)], { ...options, ground: true }).surface;
     expect(g.sideSlopePerRad).toBeGreaterThan(s.sideSlopePerRad * 1.2);
@@ -110,7 +140,10 @@ describe('solveWheel', () => {
     const edgeWheels: WheelGeometry[] = [
       { ...DEMO_WHEEL, spokeCount: 0 },
       { ...DEMO_WHEEL, coverFraction: 1, coverPlacement: 'hub' },
-      { ...DEMO_WHEEL, rimDepthM: DEMO_WHEEL.outerRadiusM - DEMO_WHEEL.tyreWidthM - DEMO_WHEEL.hubFlangeRadiusM - 1e-3 },
+      {
+        ...DEMO_WHEEL,
+        rimDepthM: DEMO_WHEEL.outerRadiusM - DEMO_WHEEL.tyreWidthM - DEMO_WHEEL.hubFlangeRadiusM - 1e-3,
+      },
     ];
     for (const wheel of edgeWheels) {
       const { points } = solve(wheel, [point(0), point(90), point(-90), point(10, 0.5), point(10, 60, 0.5)]);

@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
+import { cylinderDrag } from '../../../src/model/sections';
 import { DEFAULT_MODEL_OPTIONS, DEMO_WHEEL, wheelRadii } from '../../../src/model/wheel';
 import { emptyLoads } from '../../../src/model/wheel/componentLoads';
 import { spokeLoads } from '../../../src/model/wheel/spokeLoads';
-import { cylinderDrag } from '../../../src/model/sections';
 
 const rho = 1.225;
 const mu = 1.79e-5;
@@ -28,7 +28,13 @@ describe('spokeLoads', () => {
     // component, force per length 0.5 rho Cd(Re_n) d V_n^2 with V_n = V |sin theta| for a radial spoke.
     const V = 10;
     const out = emptyLoads();
-    spokeLoads(wheel, radii, { airspeedMps: V, yawRad: 0, groundSpeedMps: 0, rhoKgPerM3: rho, muPaS: mu }, DEFAULT_MODEL_OPTIONS, out);
+    spokeLoads(
+      wheel,
+      radii,
+      { airspeedMps: V, yawRad: 0, groundSpeedMps: 0, rhoKgPerM3: rho, muPaS: mu },
+      DEFAULT_MODEL_OPTIONS,
+      out,
+    );
     const expected =
       -wheel.spokeCount *
       reference((_r, s) => {
@@ -36,7 +42,10 @@ describe('spokeLoads', () => {
         return vn === 0 ? 0 : 0.5 * rho * cylinderDrag((rho * vn * d) / mu) * d * vn * vn * Math.abs(s);
       });
     const tol = 2e-3 * Math.abs(expected);
-    expect(Math.abs(out.fxN - expected), `got=${out.fxN} expected=${expected} tol=${tol}`).toBeLessThanOrEqual(tol);
+    expect(
+      Math.abs(out.fxN - expected),
+      `got=${out.fxN} expected=${expected} tol=${tol}`,
+    ).toBeLessThanOrEqual(tol);
     expect(out.axleTorqueNm).toBeCloseTo(0, 12);
   });
 
@@ -45,7 +54,13 @@ describe('spokeLoads', () => {
     const omega = 40;
     const out = emptyLoads();
     const groundSpeed = omega * radii.outerRadiusM;
-    spokeLoads(wheel, radii, { airspeedMps: 1e-9, yawRad: 0, groundSpeedMps: groundSpeed, rhoKgPerM3: rho, muPaS: mu }, DEFAULT_MODEL_OPTIONS, out);
+    spokeLoads(
+      wheel,
+      radii,
+      { airspeedMps: 1e-9, yawRad: 0, groundSpeedMps: groundSpeed, rhoKgPerM3: rho, muPaS: mu },
+      DEFAULT_MODEL_OPTIONS,
+      out,
+    );
     const expected =
       wheel.spokeCount *
       reference((r) => {
@@ -53,7 +68,10 @@ describe('spokeLoads', () => {
         return 0.5 * rho * cylinderDrag((rho * u * d) / mu) * d * u * u * r;
       }, 400);
     const tol = 1e-4 * expected;
-    expect(Math.abs(out.axleTorqueNm - expected), `got=${out.axleTorqueNm} expected=${expected} tol=${tol}`).toBeLessThanOrEqual(tol);
+    expect(
+      Math.abs(out.axleTorqueNm - expected),
+      `got=${out.axleTorqueNm} expected=${expected} tol=${tol}`,
+    ).toBeLessThanOrEqual(tol);
     expect(Math.abs(out.fxN)).toBeLessThan(1e-9);
   });
 

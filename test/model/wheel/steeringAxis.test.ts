@@ -14,7 +14,10 @@ describe('groundTrailM', () => {
   });
 
   it('is zero offset -> R cot h, and vertical steering axis -> -offset', () => {
-    expect(groundTrailM(0.3, { headAngleRad: 70 * deg, forkOffsetM: 0 })).toBeCloseTo(0.3 / Math.tan(70 * deg), 14);
+    expect(groundTrailM(0.3, { headAngleRad: 70 * deg, forkOffsetM: 0 })).toBeCloseTo(
+      0.3 / Math.tan(70 * deg),
+      14,
+    );
     expect(groundTrailM(0.3, { headAngleRad: 90 * deg, forkOffsetM: 0.04 })).toBeCloseTo(-0.04, 14);
   });
 });

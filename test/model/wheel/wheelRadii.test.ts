@@ -13,15 +13,21 @@ describe('wheelRadii', () => {
     expect(r.coverOuterRadiusM - r.coverInnerRadiusM).toBe(0);
   });
 
-  it.each(['rim', 'hub', 'centre'] as const)('a %s cover holds the asked fraction of the annulus area', (placement) => {
-    for (const fraction of [0, 0.25, 0.5, 1]) {
-      const r = wheelRadii({ ...DEMO_WHEEL, coverFraction: fraction, coverPlacement: placement });
-      const got = coveredAreaFraction(r);
-      expect(Math.abs(got - fraction), `${placement} f=${fraction} got=${got} tol=${tol}`).toBeLessThanOrEqual(tol);
-      expect(r.coverInnerRadiusM).toBeGreaterThanOrEqual(r.hubRadiusM - tol);
-      expect(r.coverOuterRadiusM).toBeLessThanOrEqual(r.rimInnerRadiusM + tol);
-    }
-  });
+  it.each(['rim', 'hub', 'centre'] as const)(
+    'a %s cover holds the asked fraction of the annulus area',
+    (placement) => {
+      for (const fraction of [0, 0.25, 0.5, 1]) {
+        const r = wheelRadii({ ...DEMO_WHEEL, coverFraction: fraction, coverPlacement: placement });
+        const got = coveredAreaFraction(r);
+        expect(
+          Math.abs(got - fraction),
+          `${placement} f=${fraction} got=${got} tol=${tol}`,
+        ).toBeLessThanOrEqual(tol);
+        expect(r.coverInnerRadiusM).toBeGreaterThanOrEqual(r.hubRadiusM - tol);
+        expect(r.coverOuterRadiusM).toBeLessThanOrEqual(r.rimInnerRadiusM + tol);
+      }
+    },
+  );
 
   it('a rim cover touches the rim, a hub cover the hub', () => {
     const rim = wheelRadii({ ...DEMO_WHEEL, coverFraction: 0.3, coverPlacement: 'rim' });
@@ -38,7 +44,12 @@ describe('wheelRadii', () => {
 
   it('rejects explicit radii outside the spoked annulus', () => {
     expect(() =>
-      wheelRadii({ ...DEMO_WHEEL, coverPlacement: 'explicit', coverInnerRadiusM: 0.01, coverOuterRadiusM: 0.2 }),
+      wheelRadii({
+        ...DEMO_WHEEL,
+        coverPlacement: 'explicit',
+        coverInnerRadiusM: 0.01,
+        coverOuterRadiusM: 0.2,
+      }),
     ).toThrow(/explicit cover radii/);
   });
 });
