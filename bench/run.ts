@@ -3,11 +3,9 @@
  * every result is used (summed into a checksum printed with it) so nothing is optimised away.
  * Figures are medians of repeated runs where cheap; the machine may be shared and noisy.
  */
+import { spawnSync } from 'node:child_process';
 import { availableParallelism, cpus } from 'node:os';
-import { nodeWorkerSpawner } from '../src/cli/nodeWorker';
-import { runSweep } from '../src/compute/engine/runSweep';
-import { WorkerPool } from '../src/compute/engine/workerPool';
-import { buildDiscLattice } from '../src/model/lattice';
+import { buildWheelLattice } from '../src/model/lattice';
 import { luFactor } from '../src/model/numeric';
 import {
   DEFAULT_MODEL_OPTIONS,
@@ -22,11 +20,6 @@ import { buildNodeWorker } from './buildNodeWorker';
 const cores = availableParallelism();
 const machine = { cores, cpu: cpus()[0]?.model ?? 'unknown', node: process.version };
 const deg = Math.PI / 180;
-let peakRss = process.memoryUsage().rss;
-const sampleMemory = () => {
-  peakRss = Math.max(peakRss, process.memoryUsage().rss);
-};
-const memoryTimer = setInterval(sampleMemory, 20);
 
 function print(name: string, figures: Record<string, unknown>): void {
   console.log(JSON.stringify({ bench: name, ...figures, machine }));
@@ -86,11 +79,12 @@ const yawCurve = (speed: number): FlowConditions[] =>
 {
   const options = DEFAULT_MODEL_OPTIONS;
   const build = timeIt(3, () => {
-    const l = buildDiscLattice({
-      radiusM: DEMO_WHEEL.outerRadiusM + Math.random() * 1e-9, // a new key each time: no cache
+    const l = buildWheelLattice({
+      radiusM: DEMO_WHEEL.outerRadiusM,
       spanCount: options.latticeSpanCount,
       chordCount: options.latticeChordCount,
       ground: options.ground,
+      openAnnuliM: [[0, 0.2]],
     });
     return l.influence[0]!;
   });
@@ -119,48 +113,15 @@ const yawCurve = (speed: number): FlowConditions[] =>
   });
 }
 
-// --- The standard sweep: 21 covers x 6 rim depths x 41 yaw x 4 speeds = 20,664 points -------------
+// --- The standard sweep, each worker count in a fresh process so its peak memory is its own -------
 {
-  const cases: WheelInput[] = [];
-  for (let i = 0; i <= 20; i++) {
-    for (const depthMm of [20, 35, 50, 65, 80, 90]) {
-      cases.push({
-        wheel: { ...DEMO_WHEEL, coverFraction: i * 0.05, rimDepthM: depthMm / 1000 },
-        options: { ...DEFAULT_MODEL_OPTIONS },
-        steering: DEFAULT_STEERING,
-        points: [6, 8, 10, 13.41].flatMap(yawCurve),
-      });
-    }
-  }
-  const points = cases.reduce((n, c) => n + c.points.length, 0);
-  const entry = await buildNodeWorker();
+  const entry = buildNodeWorker();
   for (const workers of [...new Set([1, cores])]) {
-    const pool = new WorkerPool(nodeWorkerSpawner(entry), workers);
-    await pool.warm();
-    // One untimed pass warms each worker's JIT and lattice cache; the timed pass is a fresh sweep
-    // (the surface caches only help where boundary conditions repeat, and here none do across passes).
-    await runSweep(
-      pool,
-      cases.map((c) => ({ ...c, wheel: { ...c.wheel, rimWidthM: c.wheel.rimWidthM + 1e-6 } })),
-    );
-    const t0 = performance.now();
-    const out = await runSweep(pool, cases);
-    const ms = performance.now() - t0;
-    pool.close();
-    sampleMemory();
-    const checksum = out.solutions.reduce((s, sol) => s + (sol?.points[0]?.axialN ?? 0), 0);
-    print('standard_sweep', {
-      cases: cases.length,
-      points,
-      workers,
-      wallMs: Math.round(ms),
-      pointsPerSecond: Math.round(points / (ms / 1000)),
-      casesPerSecond: +(cases.length / (ms / 1000)).toFixed(1),
-      failed: out.failedCount,
-      checksum,
+    const child = spawnSync('npx', ['tsx', '--expose-gc', 'bench/standardSweep.ts', String(workers), entry], {
+      encoding: 'utf8',
+      stdio: ['ignore', 'pipe', 'inherit'],
     });
+    if (child.status !== 0) throw new Error(`standard sweep with ${workers} worker(s) failed`);
+    process.stdout.write(child.stdout);
   }
 }
-clearInterval(memoryTimer);
-sampleMemory();
-print('memory', { peakRssMB: Math.round(peakRss / 2 ** 20) });

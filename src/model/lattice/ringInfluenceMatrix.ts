@@ -1,6 +1,3 @@
-import { planarSegmentNormalVelocity } from './planarSegmentNormalVelocity';
-import { planarWakeNormalVelocity } from './planarWakeNormalVelocity';
-
 /**
  * Influence matrix of a planar vortex-ring lattice whose strips place their corners independently
  * (Katz & Plotkin, Low-Speed Aerodynamics, 2nd ed., sec. 12.3): out[i * n + j] = normal (+y)
@@ -9,12 +6,123 @@ import { planarWakeNormalVelocity } from './planarWakeNormalVelocity';
  * of images). Within a strip the spanwise segment m is ring m's bound segment (+) and ring m - 1's
  * trailing one (-), evaluated once; each ring's two chordwise sides (lower edge: -, upper edge: +)
  * and the trailing ring's two semi-infinite legs along -x are evaluated per strip, as strips on the
- * two sides of an edge line need not share corners. `influenceMatrix` is the faster special case for
+ * two sides of an edge line need not share corners. `influenceMatrix` is the special case for
  * lattices whose strips share corners.
+ *
+ * Kernels: the y component of the Biot-Savart segment law for coplanar points (as in
+ * planarSegmentNormalVelocity), v = r0 . (r1/|r1| - r2/|r2|) / (4 pi (r1z r2x - r1x r2z)), and the
+ * semi-infinite leg along -x (planarWakeNormalVelocity), v = (1 - r1x/|r1|) / (4 pi r1z). Every corner
+ * is an end of up to three segments, so the unit vectors r/|r| from each corner to the control point
+ * are computed once per strip and shared (a third of the square roots). Same cut-off as those kernels.
  *
  * nodeLowerX / nodeUpperX: spanCount x (chordCount + 1) corner x positions on each strip's lower and
  * upper edge lines (see RingLattice).
  */
+const CORE_RELATIVE = 1e-10;
+const CORE_SQ = CORE_RELATIVE * CORE_RELATIVE;
+const FOUR_PI = 4 * Math.PI;
+
+// Module-private scratch: per-corner offsets and unit vectors to the current control point.
+let scratchSize = 0;
+let lowDx = new Float64Array(0);
+let lowUx = new Float64Array(0);
+let lowUz = new Float64Array(0);
+let upDx = new Float64Array(0);
+let upUx = new Float64Array(0);
+let upUz = new Float64Array(0);
+
+function ensureScratch(cols: number): void {
+  if (cols <= scratchSize) return;
+  scratchSize = cols;
+  lowDx = new Float64Array(cols);
+  lowUx = new Float64Array(cols);
+  lowUz = new Float64Array(cols);
+  upDx = new Float64Array(cols);
+  upUx = new Float64Array(cols);
+  upUz = new Float64Array(cols);
+}
+
+/** Segment A -> B (corner offsets r = P - corner, with unit vectors) normal velocity at P. */
+function segment(
+  r1x: number,
+  r1z: number,
+  u1x: number,
+  u1z: number,
+  r2x: number,
+  r2z: number,
+  u2x: number,
+  u2z: number,
+): number {
+  const c = r1z * r2x - r1x * r2z;
+  // r0 = B - A = r1 - r2
+  const r0x = r1x - r2x;
+  const r0z = r1z - r2z;
+  const l2 = r0x * r0x + r0z * r0z;
+  if (!(c * c > CORE_SQ * l2 * l2)) return 0;
+  return (r0x * (u1x - u2x) + r0z * (u1z - u2z)) / (FOUR_PI * c);
+}
+
+/** Sum of this strip's contributions at P into row `row` (sign +1 real, -1 image). */
+function stripContributions(
+  out: Float64Array,
+  row: number,
+  base: number,
+  nodes: number,
+  chordCount: number,
+  nodeLowerX: Float64Array,
+  nodeUpperX: Float64Array,
+  px: number,
+  dz0: number,
+  dz1: number,
+  sign: number,
+): void {
+  const cols = chordCount + 1;
+  for (let m = 0; m < cols; m++) {
+    const dl = px - nodeLowerX[nodes + m]!;
+    const il = 1 / Math.sqrt(dl * dl + dz0 * dz0);
+    lowDx[m] = dl;
+    lowUx[m] = dl * il;
+    lowUz[m] = dz0 * il;
+    const du = px - nodeUpperX[nodes + m]!;
+    const iu = 1 / Math.sqrt(du * du + dz1 * dz1);
+    upDx[m] = du;
+    upUx[m] = du * iu;
+    upUz[m] = dz1 * iu;
+  }
+  for (let m = 0; m < chordCount; m++) {
+    const span = segment(lowDx[m]!, dz0, lowUx[m]!, lowUz[m]!, upDx[m]!, dz1, upUx[m]!, upUz[m]!);
+    const upperSide = segment(
+      upDx[m]!,
+      dz1,
+      upUx[m]!,
+      upUz[m]!,
+      upDx[m + 1]!,
+      dz1,
+      upUx[m + 1]!,
+      upUz[m + 1]!,
+    );
+    const lowerSide = segment(
+      lowDx[m]!,
+      dz0,
+      lowUx[m]!,
+      lowUz[m]!,
+      lowDx[m + 1]!,
+      dz0,
+      lowUx[m + 1]!,
+      lowUz[m + 1]!,
+    );
+    out[row + base + m]! += sign * (span + upperSide - lowerSide);
+    if (m > 0) out[row + base + m - 1]! -= sign * span;
+  }
+  // Wake legs from the trailing corners along -x.
+  let wake = 0;
+  if (dz1 * dz1 > CORE_SQ * (upDx[chordCount]! ** 2 + dz1 * dz1))
+    wake += (1 - upUx[chordCount]!) / (FOUR_PI * dz1);
+  if (dz0 * dz0 > CORE_SQ * (lowDx[chordCount]! ** 2 + dz0 * dz0))
+    wake -= (1 - lowUx[chordCount]!) / (FOUR_PI * dz0);
+  out[row + base + chordCount - 1]! += sign * wake;
+}
+
 export function ringInfluenceMatrix(
   edgeZ: Float64Array,
   nodeLowerX: Float64Array,
@@ -36,8 +144,10 @@ export function ringInfluenceMatrix(
   if (controlX.length !== n || controlZ.length !== n) {
     throw new RangeError(`ringInfluenceMatrix: control arrays must have spanCount*chordCount=${n} values`);
   }
-  if (out.length < n * n)
+  if (out.length < n * n) {
     throw new RangeError(`ringInfluenceMatrix: out.length=${out.length} must be at least ${n * n}`);
+  }
+  ensureScratch(cols);
   const ground = Number.isFinite(groundZM);
   const g2 = 2 * groundZM;
   out.fill(0, 0, n * n);
@@ -48,34 +158,25 @@ export function ringInfluenceMatrix(
     for (let s = 0; s < spanCount; s++) {
       const z0 = edgeZ[s]!;
       const z1 = edgeZ[s + 1]!;
-      const zi0 = g2 - z0;
-      const zi1 = g2 - z1;
       const base = s * chordCount;
       const nodes = s * cols;
-      let lowerA = nodeLowerX[nodes]!;
-      let upperA = nodeUpperX[nodes]!;
-      for (let m = 0; m < chordCount; m++) {
-        const lowerB = nodeLowerX[nodes + m + 1]!;
-        const upperB = nodeUpperX[nodes + m + 1]!;
-        let span = planarSegmentNormalVelocity(lowerA, z0, upperA, z1, px, pz);
-        let sides =
-          planarSegmentNormalVelocity(upperA, z1, upperB, z1, px, pz) -
-          planarSegmentNormalVelocity(lowerA, z0, lowerB, z0, px, pz);
-        if (ground) {
-          span -= planarSegmentNormalVelocity(lowerA, zi0, upperA, zi1, px, pz);
-          sides -=
-            planarSegmentNormalVelocity(upperA, zi1, upperB, zi1, px, pz) -
-            planarSegmentNormalVelocity(lowerA, zi0, lowerB, zi0, px, pz);
-        }
-        out[row + base + m]! += span + sides;
-        if (m > 0) out[row + base + m - 1]! -= span;
-        lowerA = lowerB;
-        upperA = upperB;
+      stripContributions(out, row, base, nodes, chordCount, nodeLowerX, nodeUpperX, px, pz - z0, pz - z1, 1);
+      // The image strip: corners mirrored to z' = 2 g - z (its lower edge line is the image of z0).
+      if (ground) {
+        stripContributions(
+          out,
+          row,
+          base,
+          nodes,
+          chordCount,
+          nodeLowerX,
+          nodeUpperX,
+          px,
+          pz - (g2 - z0),
+          pz - (g2 - z1),
+          -1,
+        );
       }
-      let wake = planarWakeNormalVelocity(upperA, z1, px, pz) - planarWakeNormalVelocity(lowerA, z0, px, pz);
-      if (ground)
-        wake -= planarWakeNormalVelocity(upperA, zi1, px, pz) - planarWakeNormalVelocity(lowerA, zi0, px, pz);
-      out[row + base + chordCount - 1]! += wake;
     }
   }
   return out;

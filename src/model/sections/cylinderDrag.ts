@@ -13,7 +13,9 @@
 export const CYLINDER_RE_RANGE: Readonly<{ min: number; max: number }> = Object.freeze({ min: 1, max: 2e5 });
 
 function whiteFit(re: number): number {
-  return 1 + 10 * re ** (-2 / 3);
+  // Re^(-2/3) as 1 / cbrt(Re)^2: the same value, several times faster than a general power (hot loop).
+  const c = Math.cbrt(re);
+  return 1 + 10 / (c * c);
 }
 
 const LAMB_AT_ONE = (8 * Math.PI) / 2.002;

@@ -6,7 +6,7 @@ export { rimTyreSection } from './rimTyreLoads';
 export { solveWheel, type WheelInput } from './solveWheel';
 export { screenOpenness, spokeScreenResistance } from './spokeScreen';
 export { groundTrailM, steeringMoment } from './steeringAxis';
-export { type SurfaceCoefficients, surfaceCoefficients } from './surfaceCoefficients';
+export { type SurfaceCoefficients, surfaceCoefficients, surfaceSolution } from './surfaceCoefficients';
 export { surfaceKey } from './surfaceKey';
 export type * from './types';
 export { FLAG_MESSAGES, VALIDITY } from './validity';

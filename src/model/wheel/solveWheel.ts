@@ -1,4 +1,5 @@
 import { assemblePoint } from './assemblePoint';
+import { checkWheelInput } from './checkWheelInput';
 import { type SurfaceCoefficients, surfaceCoefficients } from './surfaceCoefficients';
 import { surfaceKey } from './surfaceKey';
 import type { FlowConditions, ModelOptions, SteeringGeometry, WheelGeometry, WheelSolution } from './types';
@@ -23,22 +24,8 @@ export function solveWheel(
   cache: Map<string, SurfaceCoefficients> = new Map(),
 ): WheelSolution {
   const { wheel, options, steering, points } = input;
+  checkWheelInput(input);
   const radii = wheelRadii(wheel);
-  for (const [i, p] of points.entries()) {
-    if (!(p.airspeedMps > 0))
-      throw new RangeError(`points[${i}].airspeedMps must be > 0, got ${p.airspeedMps}`);
-    if (!(p.groundSpeedMps >= 0)) {
-      throw new RangeError(`points[${i}].groundSpeedMps must be >= 0, got ${p.groundSpeedMps}`);
-    }
-    if (!(Math.abs(p.yawRad) <= Math.PI / 2)) {
-      throw new RangeError(`points[${i}].yawRad must be within [-pi/2, pi/2], got ${p.yawRad}`);
-    }
-    if (!(p.rhoKgPerM3 > 0) || !(p.muPaS > 0)) {
-      throw new RangeError(
-        `points[${i}] needs rhoKgPerM3 > 0 and muPaS > 0, got ${p.rhoKgPerM3}, ${p.muPaS}`,
-      );
-    }
-  }
   const coefficientsFor = (ratio: number): SurfaceCoefficients => {
     const key = surfaceKey(wheel, radii, options, ratio);
     let c = cache.get(key);

@@ -1,5 +1,5 @@
 import { gridConvergenceIndex } from '../convergence';
-import { solveLattice } from '../lattice';
+import { type LatticeSolution, solveLattice, type WheelLattice } from '../lattice';
 import { cachedWheelLattice } from './latticeCache';
 import { openAnnuli, panelOpenness } from './panelOpenness';
 import type { ConvergenceEstimate, ModelOptions, WheelGeometry } from './types';
@@ -23,14 +23,15 @@ export interface SurfaceCoefficients {
   suctionSlopeConvergence: ConvergenceEstimate | null;
 }
 
-function coefficientsOn(
+/** The wheel's lattice, its panels' openness and the lattice solved for unit forcing (V sin beta = 1). */
+export function surfaceSolution(
   wheel: WheelGeometry,
   radii: WheelRadii,
   options: ModelOptions,
   rotationRatio: number,
-  spanCount: number,
-  chordCount: number,
-) {
+  spanCount = options.latticeSpanCount,
+  chordCount = options.latticeChordCount,
+): { lattice: WheelLattice; openness: Float64Array; solution: LatticeSolution } {
   const lattice = cachedWheelLattice(
     radii.outerRadiusM,
     spanCount,
@@ -39,7 +40,25 @@ function coefficientsOn(
     openAnnuli(radii),
   );
   const openness = panelOpenness(lattice, wheel, radii, rotationRatio, options.porosityScale);
-  const s = solveLattice(lattice, openness);
+  return { lattice, openness, solution: solveLattice(lattice, openness) };
+}
+
+function coefficientsOn(
+  wheel: WheelGeometry,
+  radii: WheelRadii,
+  options: ModelOptions,
+  rotationRatio: number,
+  spanCount: number,
+  chordCount: number,
+) {
+  const { lattice, solution: s } = surfaceSolution(
+    wheel,
+    radii,
+    options,
+    rotationRatio,
+    spanCount,
+    chordCount,
+  );
   return {
     kp: s.normalSlope,
     ki: s.inducedDragFactor,
@@ -63,6 +82,11 @@ const ORDER_CAP = 1;
  * of Roache (1994) for uncertain orders: 3 x the largest relative change between refinements.
  */
 function estimate(h: number[], phi: number[]): ConvergenceEstimate {
+  // On a lattice too coarse to coarsen twice (e.g. 4 x 2) the refinements have equal panel counts: no
+  // error estimate exists. Report it as not computed (NaN), which assemblePoint flags as not converged.
+  if (!(h[0]! < h[1]! && h[1]! < h[2]!)) {
+    return { fine: phi[0]!, extrapolated: Number.NaN, observedOrder: Number.NaN, gciRelative: Number.NaN };
+  }
   const g = gridConvergenceIndex({
     h1: h[0]!,
     h2: h[1]!,
