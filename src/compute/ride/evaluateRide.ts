@@ -7,7 +7,7 @@
 import { gustImpulse } from '../../model/handling/gustImpulse';
 import { leanAngleRad } from '../../model/handling/leanAngleRad';
 import { steeringFeatures } from '../../model/handling/steeringFeatures';
-import { ridePower } from '../../model/ride/ridePower';
+import { emptyRidePower, ridePower } from '../../model/ride/ridePower';
 import { speedForPower } from '../../model/ride/speedForPower';
 import type { RidePower, RideSetup, WheelLoads } from '../../model/ride/types';
 import { wheelYawCurveLoads } from '../../model/ride/wheelYawCurveLoads';
@@ -287,19 +287,7 @@ function zeroBreakdown(): Breakdown {
   };
 }
 
-const scratchPower: RidePower = {
-  riderAeroW: 0,
-  wheelAxialW: 0,
-  wheelRotationW: 0,
-  rollingW: 0,
-  bearingW: 0,
-  gravityW: 0,
-  netW: 0,
-  pedalW: 0,
-  hubAirspeedMps: 0,
-  hubYawRad: 0,
-  mirrored: false,
-};
+const scratchPower: RidePower = emptyRidePower();
 
 interface WindScale {
   hub: number;

@@ -5,7 +5,7 @@ export { martinGravityPowerW } from './martinGravityPowerW';
 export { martinKineticPowerW } from './martinKineticPowerW';
 export { type MartinInput, type MartinPower, martinPower } from './martinPower';
 export { martinRollingPowerW } from './martinRollingPowerW';
-export { ridePower } from './ridePower';
+export { emptyRidePower, ridePower } from './ridePower';
 export { speedForPower } from './speedForPower';
 export type * from './types';
 export { validateWheelYawCurve } from './validateWheelYawCurve';

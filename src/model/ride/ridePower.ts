@@ -17,6 +17,23 @@ const loads: WheelLoads = {
   mirrored: false,
 };
 
+/** A zeroed RidePower record (for callers that reuse one as scratch). */
+export function emptyRidePower(): RidePower {
+  return {
+    riderAeroW: 0,
+    wheelAxialW: 0,
+    wheelRotationW: 0,
+    rollingW: 0,
+    bearingW: 0,
+    gravityW: 0,
+    netW: 0,
+    pedalW: 0,
+    hubAirspeedMps: 0,
+    hubYawRad: 0,
+    mirrored: false,
+  };
+}
+
 /**
  * Steady-state power of a rider with one modelled wheel in a wind: the Martin et al. 1998 model
  * (J. Appl. Biomech. 14, 276-291; rolling, bearing and gravity terms as published, no kinetic term at
@@ -39,19 +56,7 @@ export function ridePower(
   hubWindMps: number,
   riderWindMps: number,
   windFromRad: number,
-  out: RidePower = {
-    riderAeroW: 0,
-    wheelAxialW: 0,
-    wheelRotationW: 0,
-    rollingW: 0,
-    bearingW: 0,
-    gravityW: 0,
-    netW: 0,
-    pedalW: 0,
-    hubAirspeedMps: 0,
-    hubYawRad: 0,
-    mirrored: false,
-  },
+  out: RidePower = emptyRidePower(),
 ): RidePower {
   checkRideSetup(setup);
   const v = groundSpeedMps;
