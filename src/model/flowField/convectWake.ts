@@ -45,7 +45,9 @@ export function convectWake(
     );
   }
   if (outOffsets.length < count + 1) {
-    throw new RangeError(`convectWake: outOffsets.length=${outOffsets.length} must be >= spanCount + 2 = ${count + 1}`);
+    throw new RangeError(
+      `convectWake: outOffsets.length=${outOffsets.length} must be >= spanCount + 2 = ${count + 1}`,
+    );
   }
   if (startX.length < count) {
     startX = new Float64Array(count);

@@ -1,16 +1,25 @@
-import { latticeVelocity } from '../lattice/latticeVelocity';
 import type { RingLattice } from '../lattice/types';
+import { packLatticeVortices } from './packLatticeVortices';
+import { planarVortexVelocity } from './planarVortexVelocity';
+import type { PlanarVortexSet } from './types';
 
+/** Undershoots of the ground smaller than this fraction of a step are rounding, not crossings. */
+const GROUND_ROUNDING = 1e-9;
 const u0 = new Float64Array(3);
 const u1 = new Float64Array(3);
+const vortices: PlanarVortexSet = {
+  segments: new Float64Array(0),
+  segmentCount: 0,
+  legs: new Float64Array(0),
+  legCount: 0,
+  groundZM: Number.NaN,
+};
 
 /**
  * Unit tangent of the flow at (x, y, z): freestream plus the lattice's induced velocity
- * (latticeVelocity, with its ground image). Writes into `out`; returns |u| (m/s).
+ * (the packed lattice, with its ground image). Writes into `out`; returns |u| (m/s).
  */
 function tangent(
-  lattice: RingLattice,
-  gamma: Float64Array,
   fx: number,
   fy: number,
   fz: number,
@@ -19,7 +28,7 @@ function tangent(
   z: number,
   out: Float64Array,
 ): number {
-  latticeVelocity(lattice, gamma, x, y, z, out);
+  planarVortexVelocity(vortices, x, y, z, out);
   const vx = out[0]! + fx;
   const vy = out[1]! + fy;
   const vz = out[2]! + fz;
@@ -32,13 +41,15 @@ function tangent(
 
 /**
  * Streamline of the linearised flow past the lattice (freestream plus the velocity induced by the
- * rings with circulations `gamma`, their planar wakes and their ground images): the integral curve of
+ * rings with circulations `gamma`, their planar wakes and their ground images, as latticeVelocity
+ * sums them; evaluated by packLatticeVortices + planarVortexVelocity): the integral curve of
  * the unit tangent u / |u| in arc length s, advanced by the midpoint (second-order Runge-Kutta) method
  * (Press et al., Numerical Recipes, 3rd ed., sec. 17.1) with a fixed step `stepM` from `seedM`, so a
  * step never jumps further than stepM however fast the air is near a vortex line.
  *
  * Stops early, after writing the point where it happens, when the line would cross the ground
- * (z < lattice.groundZM: the last point is moved back along the step onto the plane), when it leaves
+ * (z < lattice.groundZM by more than 1e-9 of a step: the last point is moved back along the step onto
+ * the plane; smaller undershoots, rounding on the plane where the image makes w = 0, are set on it), when it leaves
  * the sphere of radius `maxDistanceM` about the hub, or at a stagnation point (|u| below 1e-9 of the
  * freestream's speed, or not finite).
  * Writes (x, y, z) of up to steps + 1 points into `out` (seed first) and returns the number written.
@@ -64,7 +75,9 @@ export function traceStreamline(
     throw new RangeError(`traceStreamline: steps=${steps} must be an integer >= 0`);
   }
   if (out.length < 3 * (steps + 1)) {
-    throw new RangeError(`traceStreamline: out.length=${out.length} must be >= 3 * (steps + 1) = ${3 * (steps + 1)}`);
+    throw new RangeError(
+      `traceStreamline: out.length=${out.length} must be >= 3 * (steps + 1) = ${3 * (steps + 1)}`,
+    );
   }
   if (!(maxDistanceM > 0)) throw new RangeError(`traceStreamline: maxDistanceM=${maxDistanceM} must be > 0`);
   const fx = freestreamMps[0]!;
@@ -86,24 +99,30 @@ export function traceStreamline(
   out[0] = x;
   out[1] = y;
   out[2] = z;
+  packLatticeVortices(lattice, gamma, vortices);
   const h = 0.5 * stepM;
   const r2max = maxDistanceM * maxDistanceM;
   for (let k = 1; k <= steps; k++) {
-    const s0 = tangent(lattice, gamma, fx, fy, fz, x, y, z, u0);
+    const s0 = tangent(fx, fy, fz, x, y, z, u0);
     if (!(s0 > slow)) return k;
-    const s1 = tangent(lattice, gamma, fx, fy, fz, x + h * u0[0]!, y + h * u0[1]!, z + h * u0[2]!, u1);
+    const s1 = tangent(fx, fy, fz, x + h * u0[0]!, y + h * u0[1]!, z + h * u0[2]!, u1);
     if (!(s1 > slow)) return k;
     let nx = x + stepM * u1[0]!;
     let ny = y + stepM * u1[1]!;
     let nz = z + stepM * u1[2]!;
     let stop = false;
     if (ground && nz < groundZ) {
-      // Back along the step onto the ground plane (z strictly decreased over it).
-      const t = (z - groundZ) / (z - nz);
-      nx = x + t * (nx - x);
-      ny = y + t * (ny - y);
-      nz = groundZ;
-      stop = true;
+      if (groundZ - nz <= GROUND_ROUNDING * stepM) {
+        // Rounding on the plane itself, where the image makes w = 0: stay on it and go on.
+        nz = groundZ;
+      } else {
+        // A real crossing: back along the step onto the ground plane (z strictly decreased over it).
+        const t = (z - groundZ) / (z - nz);
+        nx = x + t * (nx - x);
+        ny = y + t * (ny - y);
+        nz = groundZ;
+        stop = true;
+      }
     }
     const o = 3 * k;
     out[o] = nx;

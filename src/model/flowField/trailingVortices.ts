@@ -32,7 +32,9 @@ export function trailingVortices(
     ['outStrength', outStrength],
   ] as const) {
     if (a.length < count) {
-      throw new RangeError(`trailingVortices: ${name}.length=${a.length} must be >= spanCount + 1 = ${count}`);
+      throw new RangeError(
+        `trailingVortices: ${name}.length=${a.length} must be >= spanCount + 1 = ${count}`,
+      );
     }
   }
   const cols = chordCount + 1;
