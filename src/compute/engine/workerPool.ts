@@ -56,8 +56,14 @@ export class WorkerPool {
     return w;
   }
 
-  private replace(slot: number): void {
-    this.workers[slot]?.terminate();
+  /** Retire a slot's worker, but only if it is still `handle`: a later run may already have put a
+   * fresh worker there (a cancelled run's lanes end after the next run started). */
+  private replace(slot: number, handle: WorkerHandle | null = this.workers[slot] ?? null): void {
+    if (handle === null || this.workers[slot] !== handle) {
+      handle?.terminate();
+      return;
+    }
+    handle.terminate();
     this.workers[slot] = null;
   }
 
@@ -66,7 +72,23 @@ export class WorkerPool {
     await Promise.all(this.workers.map((_, slot) => this.worker(slot).api.ping()));
   }
 
-  async run(jobs: readonly SolveJob[], options: PoolRunOptions = {}): Promise<PoolRunSummary> {
+  /** The run in progress, if any: a new run waits for it to end (a cancelled one ends at once). */
+  private current: Promise<unknown> = Promise.resolve();
+
+  /**
+   * Deal `jobs` to the workers. Runs are serialised: a run started while another is still ending
+   * waits for it, so the two never share or retire each other's workers.
+   */
+  run(jobs: readonly SolveJob[], options: PoolRunOptions = {}): Promise<PoolRunSummary> {
+    const next = this.current.then(
+      () => this.runNow(jobs, options),
+      () => this.runNow(jobs, options),
+    );
+    this.current = next.catch(() => undefined);
+    return next;
+  }
+
+  private async runNow(jobs: readonly SolveJob[], options: PoolRunOptions): Promise<PoolRunSummary> {
     const { signal } = options;
     const queue: Array<{ job: SolveJob; attempt: number }> = jobs.map((job) => ({ job, attempt: 0 }));
     let replaced = 0;
@@ -93,11 +115,11 @@ export class WorkerPool {
           outcome = err instanceof Error ? err : new Error(String(err));
         }
         if (outcome === 'cancelled') {
-          this.replace(slot);
+          this.replace(slot, w);
           return;
         }
         if (outcome instanceof Error) {
-          this.replace(slot);
+          this.replace(slot, w);
           replaced++;
           if (next.attempt === 0) queue.push({ job: next.job, attempt: 1 });
           else options.onJobFailed?.(next.job, outcome.message || 'worker failed');

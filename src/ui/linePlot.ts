@@ -1,0 +1,201 @@
+/**
+ * A line plot (uPlot) in a figure with a title, sized to its container, with an accessible label that
+ * points at the table holding the same numbers, and a PNG export that includes the title and legend.
+ */
+import uPlot from 'uplot';
+
+export interface PlotSeries {
+  label: string;
+  stroke: string;
+  width?: number;
+  dash?: number[];
+  /** Which y axis: 'y' (left, default) or 'y2' (right). */
+  scale?: 'y' | 'y2';
+  values: Array<number | null>;
+}
+
+export interface PlotSpec {
+  title: string;
+  xLabel: string;
+  /** Used when the plot is narrow. */
+  xLabelShort?: string;
+  yLabel: string;
+  y2Label?: string;
+  xs: number[];
+  series: PlotSeries[];
+  /** A vertical marker line at this x (e.g. the current covering fraction). */
+  markerX?: number | null;
+}
+
+const AXIS_FONT = '11px system-ui, -apple-system, "Segoe UI", sans-serif';
+const LABEL_FONT = '12px system-ui, -apple-system, "Segoe UI", sans-serif';
+
+export class LinePlot {
+  private plot: uPlot | null = null;
+  private spec: PlotSpec | null = null;
+  private readonly holder: HTMLDivElement;
+  private readonly observer: ResizeObserver;
+  private lastWidth = 0;
+
+  constructor(
+    private readonly container: HTMLElement,
+    private readonly height = 215,
+  ) {
+    this.holder = document.createElement('div');
+    this.holder.className = 'plot-holder';
+    container.append(this.holder);
+    this.observer = new ResizeObserver(() => {
+      const w = this.width();
+      if (this.plot && w !== this.lastWidth && w > 0) {
+        const crossed = w < 560 !== this.lastWidth < 560;
+        this.lastWidth = w;
+        if (crossed) this.build();
+        else this.plot.setSize({ width: w, height: this.height });
+      } else if (!this.plot && this.spec && w > 0) {
+        this.build();
+      }
+    });
+    this.observer.observe(container);
+  }
+
+  private width(): number {
+    return Math.floor(this.container.clientWidth);
+  }
+
+  /** What the plot currently shows (a copy). */
+  currentSpec(): PlotSpec | null {
+    return this.spec ? structuredClone(this.spec) : null;
+  }
+
+  render(spec: PlotSpec): void {
+    this.spec = spec;
+    this.container.setAttribute(
+      'aria-label',
+      `${spec.title}: ${spec.series.map((s) => s.label).join(', ')} against ${spec.xLabel}. The numbers are in the matching table.`,
+    );
+    this.build();
+  }
+
+  private build(): void {
+    const spec = this.spec;
+    if (!spec) return;
+    const w = this.width();
+    if (w <= 0) return;
+    this.plot?.destroy();
+    this.lastWidth = w;
+    const hasY2 = spec.series.some((s) => s.scale === 'y2');
+    const axisCommon = {
+      font: AXIS_FONT,
+      labelFont: LABEL_FONT,
+      stroke: '#1b2430',
+      grid: { stroke: 'rgba(27, 36, 48, 0.09)', width: 1 },
+      ticks: { stroke: 'rgba(27, 36, 48, 0.3)', width: 1 },
+    };
+    const axes: uPlot.Axis[] = [
+      { ...axisCommon, label: w < 560 && spec.xLabelShort ? spec.xLabelShort : spec.xLabel, labelSize: 22 },
+      { ...axisCommon, label: spec.yLabel, scale: 'y', labelSize: 22, size: 52 },
+    ];
+    if (hasY2) {
+      axes.push({
+        ...axisCommon,
+        label: spec.y2Label ?? '',
+        scale: 'y2',
+        side: 1,
+        grid: { show: false },
+        labelSize: 22,
+        size: 58,
+      });
+    }
+    const markerX = spec.markerX;
+    const opts: uPlot.Options = {
+      width: w,
+      height: this.height,
+      pxAlign: false,
+      cursor: { drag: { x: false, y: false }, points: { size: 6 } },
+      legend: { live: true },
+      scales: { x: { time: false }, y: { auto: true }, ...(hasY2 ? { y2: { auto: true } } : {}) },
+      axes,
+      series: [
+        { label: spec.xLabel.split(' —')[0] ?? 'x' },
+        ...spec.series.map((s) => ({
+          label: s.label,
+          stroke: s.stroke,
+          width: s.width ?? 1.5,
+          scale: s.scale ?? 'y',
+          spanGaps: false,
+          points: { show: spec.xs.length <= 16, size: 4 },
+          ...(s.dash ? { dash: s.dash } : {}),
+        })),
+      ],
+      hooks:
+        markerX !== undefined && markerX !== null
+          ? {
+              draw: [
+                (u: uPlot) => {
+                  const x = u.valToPos(markerX, 'x', true);
+                  const ctx = u.ctx;
+                  ctx.save();
+                  ctx.strokeStyle = 'rgba(20, 20, 20, 0.55)';
+                  ctx.setLineDash([4, 4]);
+                  ctx.lineWidth = 1;
+                  ctx.beginPath();
+                  ctx.moveTo(x, u.bbox.top);
+                  ctx.lineTo(x, u.bbox.top + u.bbox.height);
+                  ctx.stroke();
+                  ctx.restore();
+                },
+              ],
+            }
+          : {},
+    };
+    const data: uPlot.AlignedData = [spec.xs, ...spec.series.map((s) => s.values)];
+    this.plot = new uPlot(opts, data, this.holder);
+  }
+
+  /** The plot as PNG: title, the chart (axes included) and the legend. */
+  toPngBlob(): Promise<Blob> {
+    const plot = this.plot;
+    const spec = this.spec;
+    if (!plot || !spec) return Promise.reject(new Error('the plot has not been drawn yet'));
+    const src = plot.ctx.canvas;
+    const dpr = src.width / plot.width || 1;
+    const titleH = 28 * dpr;
+    const rowH = 18 * dpr;
+    const perRow = 3;
+    const legendH = Math.ceil(spec.series.length / perRow) * rowH + 8 * dpr;
+    const out = document.createElement('canvas');
+    out.width = src.width;
+    out.height = src.height + titleH + legendH;
+    const ctx = out.getContext('2d');
+    if (!ctx) return Promise.reject(new Error('no 2D canvas'));
+    ctx.fillStyle = '#fff';
+    ctx.fillRect(0, 0, out.width, out.height);
+    ctx.fillStyle = '#1b2430';
+    ctx.font = `${13 * dpr}px system-ui, sans-serif`;
+    ctx.fillText(spec.title, 8 * dpr, 19 * dpr);
+    ctx.drawImage(src, 0, titleH);
+    ctx.font = `${11 * dpr}px system-ui, sans-serif`;
+    const colW = out.width / perRow;
+    spec.series.forEach((s, k) => {
+      const x = (k % perRow) * colW + 8 * dpr;
+      const y = titleH + src.height + Math.floor(k / perRow) * rowH + 12 * dpr;
+      ctx.strokeStyle = s.stroke;
+      ctx.lineWidth = (s.width ?? 1.5) * dpr;
+      ctx.setLineDash((s.dash ?? []).map((d) => d * dpr));
+      ctx.beginPath();
+      ctx.moveTo(x, y - 4 * dpr);
+      ctx.lineTo(x + 18 * dpr, y - 4 * dpr);
+      ctx.stroke();
+      ctx.setLineDash([]);
+      ctx.fillText(s.label, x + 24 * dpr, y);
+    });
+    return new Promise((resolve, reject) =>
+      out.toBlob((b) => (b ? resolve(b) : reject(new Error('PNG export failed'))), 'image/png'),
+    );
+  }
+
+  dispose(): void {
+    this.observer.disconnect();
+    this.plot?.destroy();
+  }
+}
