@@ -232,24 +232,26 @@ export function createWheelView(container: HTMLElement, initialLayers: Partial<V
 
   // ---- overlay: legend (top left), toggles (top right), labels (follow the scene) ----
   const font = '12px system-ui, sans-serif';
+  // Legend bottom-left and layer switches folded top-right, so the wheel itself stays in view.
   const legend = el('div', {
     position: 'absolute',
-    left: '8px',
-    top: '8px',
-    padding: '6px 8px',
+    left: '6px',
+    bottom: '6px',
+    padding: '4px 6px',
     background: 'rgba(255,255,255,0.86)',
     border: '1px solid #d5d2c8',
     borderRadius: '4px',
     font,
     color: '#222',
     pointerEvents: 'none',
-    maxWidth: '240px',
+    maxWidth: '200px',
+    fontSize: '11px',
   });
   const legendTitle = el('div', { fontWeight: '600', marginBottom: '3px' }, 'Pressure jump ΔCp');
   const legendSub = el('div', { fontSize: '11px', color: '#555' }, 'windward − leeward face, over q');
   const bar = el('div', {
-    height: '10px',
-    width: '200px',
+    height: '8px',
+    width: '150px',
     margin: '4px 0 1px',
     background: loadingGradientCss(),
     border: '1px solid #999',
@@ -257,7 +259,7 @@ export function createWheelView(container: HTMLElement, initialLayers: Partial<V
   const ticks = el('div', {
     display: 'flex',
     justifyContent: 'space-between',
-    width: '202px',
+    width: '152px',
     fontSize: '11px',
   });
   const tickLo = el('span');
@@ -268,19 +270,24 @@ export function createWheelView(container: HTMLElement, initialLayers: Partial<V
   const legendNote = el('div', { marginTop: '4px', fontSize: '11px', color: '#555' });
   legend.append(legendTitle, legendSub, bar, ticks, legendForces, legendNote);
 
-  const toggles = el('fieldset', {
+  const togglesBox = el('details', {
     position: 'absolute',
-    right: '8px',
-    top: '8px',
-    margin: '0',
-    padding: '4px 8px 6px',
-    background: 'rgba(255,255,255,0.86)',
+    right: '6px',
+    top: '6px',
+    background: 'rgba(255,255,255,0.9)',
     border: '1px solid #d5d2c8',
     borderRadius: '4px',
     font,
     color: '#222',
   });
-  const legendEl = el('legend', { padding: '0 2px', fontWeight: '600' }, 'Layers');
+  const togglesSummary = el('summary', { padding: '3px 8px', cursor: 'pointer' }, 'Layers');
+  const toggles = el('fieldset', { margin: '0', padding: '2px 8px 6px', border: 'none' });
+  togglesBox.append(togglesSummary, toggles);
+  const legendEl = el(
+    'legend',
+    { position: 'absolute', width: '1px', height: '1px', overflow: 'hidden' },
+    'Layers',
+  );
   toggles.appendChild(legendEl);
   const boxes = {} as Record<keyof ViewLayers, HTMLInputElement>;
   for (const key of Object.keys(LAYER_LABELS) as (keyof ViewLayers)[]) {
@@ -306,7 +313,7 @@ export function createWheelView(container: HTMLElement, initialLayers: Partial<V
     font,
     color: '#222',
   });
-  container.append(labelLayer, legend, toggles);
+  container.append(labelLayer, legend, togglesBox);
   let labels: Label[] = [];
   const addLabel = (
     text: string,
@@ -384,7 +391,7 @@ export function createWheelView(container: HTMLElement, initialLayers: Partial<V
     const R = radius;
     // Frame the wheel with its upstream seeds and its wake: a box about 5 R wide around x = -0.35 R.
     toThree(-0.3 * R, 0, -0.05 * R, controls.target);
-    toThree(4.2 * R, -4.0 * R, 2.5 * R, camera.position);
+    toThree(4.6 * R, -4.4 * R, 2.7 * R, camera.position);
     camera.near = 0.01 * R;
     camera.far = 100 * R;
     camera.updateProjectionMatrix();
@@ -808,7 +815,7 @@ export function createWheelView(container: HTMLElement, initialLayers: Partial<V
     canvas.remove();
     labelLayer.remove();
     legend.remove();
-    toggles.remove();
+    togglesBox.remove();
   }
 
   resize();
