@@ -16,6 +16,7 @@ import {
 } from '../compute/caseFile';
 import { runSweep as runPooledSweep } from '../compute/engine/runSweep';
 import { WorkerPool } from '../compute/engine/workerPool';
+import { checkJsonFileSize } from '../compute/fileVersion';
 import {
   type ExpandedCase,
   type ExpandedPlan,
@@ -118,8 +119,9 @@ const OUT_OPTIONS = { out: { type: 'string' }, force: { type: 'boolean' }, ...HE
 
 function readInputFile(path: string, cwd: string, what: string): string {
   try {
-    return readFileSync(resolve(cwd, path), 'utf8');
+    return readJsonFile(resolve(cwd, path), what);
   } catch (error) {
+    if (error instanceof CliInputError) throw error;
     const code = (error as NodeJS.ErrnoException).code;
     const reason =
       code === 'ENOENT'
@@ -133,6 +135,13 @@ function readInputFile(path: string, cwd: string, what: string): string {
               : String(error);
     throw new CliInputError(`cannot read the ${what} ${path}: ${reason}`);
   }
+}
+
+/** Read one of our JSON files, refusing one above the size limit before reading it. */
+function readJsonFile(path: string, what: string): string {
+  const tooBig = checkJsonFileSize(statSync(path).size, what);
+  if (tooBig) throw new CliInputError(tooBig);
+  return readFileSync(path, 'utf8');
 }
 
 function onePositional(command: string, positionals: string[], what: string): string {
@@ -172,7 +181,15 @@ function commandSolve(args: string[], io: CliIo): number {
   if (outPath !== undefined) checkOutputPath(outPath, values.force === true);
   const parsed = parseCaseFile(readInputFile(path, io.cwd, 'case file'));
   if (!parsed.ok) throw new CliInputError(`invalid case file ${path}:`, parsed.errors);
-  const text = `${JSON.stringify(solveCase(parsed.value), null, 2)}\n`;
+  let document: ResultDocument;
+  try {
+    document = solveCase(parsed.value);
+  } catch (error) {
+    // The model refuses a case the file rules let through: an input problem, not a crash.
+    if (!(error instanceof RangeError)) throw error;
+    throw new CliInputError(`the model cannot solve the case in ${path}:`, [error.message]);
+  }
+  const text = `${JSON.stringify(document, null, 2)}\n`;
   if (outPath === undefined) {
     io.stdout(text);
   } else {
@@ -227,6 +244,10 @@ export async function writeSweep(
     await runSweep(plan.cases, {
       ...(onProgress ? { onProgress } : {}),
       onResult: (expanded: ExpandedCase, document: ResultDocument) => emit(expanded, document, null),
+      onError: (expanded: ExpandedCase, message: string) => {
+        failed++;
+        emit(expanded, null, message);
+      },
     });
   } else {
     const waiting = new Map<number, () => void>();
@@ -305,9 +326,19 @@ async function commandSweep(args: string[], io: CliIo): Promise<number> {
     }
   }
   const file = new AtomicFile(outPath, force);
+  // Finished rows are never lost: an interrupted or failed sweep leaves them beside the output, in
+  // OUT.partial (never under the output's own name, never over an existing file).
+  const keepPartial = (): string => {
+    try {
+      const kept = file.keepPartial();
+      return kept === null ? 'no rows had finished' : `the finished rows are in ${kept}`;
+    } catch (error) {
+      file.abort();
+      return `the finished rows could not be kept: ${error instanceof Error ? error.message : String(error)}`;
+    }
+  };
   const onSignal = () => {
-    file.abort();
-    io.stderr('\nsweep: interrupted; no file written\n');
+    io.stderr(`\nsweep: interrupted; ${values.out} not written; ${keepPartial()}\n`);
     process.exit(130);
   };
   process.once('SIGINT', onSignal);
@@ -317,7 +348,7 @@ async function commandSweep(args: string[], io: CliIo): Promise<number> {
     failed = await writeSweep(plan, format, (text) => file.write(text), progress, pool);
     file.commit();
   } catch (error) {
-    file.abort();
+    io.stderr(`sweep: failed; ${values.out} not written; ${keepPartial()}\n`);
     throw error;
   } finally {
     pool?.close();
@@ -359,7 +390,12 @@ export async function main(argv: readonly string[], ioOverrides: Partial<CliIo> 
         return runRide([...rest], {
           stdout: io.stdout,
           stderr: io.stderr,
-          readFile: (path) => readFileSync(resolve(io.cwd, path), 'utf8'),
+          readFile: (path) => {
+            const full = resolve(io.cwd, path);
+            const tooBig = checkJsonFileSize(statSync(full).size, 'ride file');
+            if (tooBig) throw new Error(tooBig);
+            return readFileSync(full, 'utf8');
+          },
         });
       case 'compare':
         return runCompare([...rest], {

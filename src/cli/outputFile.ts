@@ -6,6 +6,7 @@
 import {
   closeSync,
   existsSync,
+  fstatSync,
   fsyncSync,
   linkSync,
   openSync,
@@ -79,6 +80,41 @@ export class AtomicFile {
       return;
     }
     unlinkSync(this.tempPath);
+  }
+
+  /**
+   * Keep what was written so far beside the target, as `<target>.partial` (or `.partial.1`, ... when
+   * that exists: nothing is overwritten), and drop the temporary file. Returns the path kept, or null
+   * when nothing had been written (or the file was already closed). For a sweep interrupted or failed
+   * half-way: its finished rows are not lost, and the target's name never holds an unfinished file.
+   */
+  keepPartial(): string | null {
+    if (this.fd === null) return null;
+    const fd = this.fd;
+    this.fd = null;
+    const size = fstatSync(fd).size;
+    fsyncSync(fd);
+    closeSync(fd);
+    if (size === 0) {
+      this.abort();
+      return null;
+    }
+    for (let k = 0; k < 100; k++) {
+      const candidate = `${this.path}.partial${k === 0 ? '' : `.${k}`}`;
+      try {
+        linkSync(this.tempPath, candidate);
+      } catch (error) {
+        if ((error as NodeJS.ErrnoException).code === 'EEXIST') continue;
+        // No hard links here: a rename, after checking the name is free.
+        if (existsSync(candidate)) continue;
+        renameSync(this.tempPath, candidate);
+        return candidate;
+      }
+      unlinkSync(this.tempPath);
+      return candidate;
+    }
+    this.abort();
+    throw new Error(`${this.path}.partial ... .partial.99 all exist`);
   }
 
   /** Throw the temporary file away (safe to call more than once). */

@@ -28,6 +28,7 @@ import type {
   WheelGeometry,
   WheelSolution,
 } from '../model/wheel/types';
+import { migrateCase } from './fileVersion';
 import {
   celsiusToKelvin,
   degToRad,
@@ -46,6 +47,8 @@ export const RESULT_VERSION = 1;
 /** Limits of the edge rules (documented in the README's "Command line" section). */
 export const LIMITS = {
   maxSpeedMps: 60,
+  /** Smallest airspeed a case may ask for (m/s); the model flags anything below 2 m/s anyway. */
+  minSpeedMps: 0.001,
   maxYawDeg: 90,
   minDensityKgPerM3: 0.3,
   maxDensityKgPerM3: 1.6,
@@ -197,7 +200,8 @@ export function describeValue(value: unknown): string {
   try {
     text = JSON.stringify(value) ?? String(value);
   } catch {
-    text = String(value);
+    // Cyclic or too deeply nested to print (String() would recurse as deeply).
+    text = Array.isArray(value) ? '[...]' : '{...}';
   }
   if (Array.isArray(value)) text = `a list ${text}`;
   else if (value !== null && typeof value === 'object') text = `an object ${text}`;
@@ -450,17 +454,16 @@ function errorText(error: unknown): string {
   return error instanceof Error ? error.message : String(error);
 }
 
-function validateCaseUnsafe(raw: unknown): Parsed<CaseFile> {
+function validateCaseUnsafe(given: unknown): Parsed<CaseFile> {
   const errors: string[] = [];
+  // Older versions (and files without a version: version 1) are brought up to date first.
+  const migrated = migrateCase(given);
+  if (!migrated.ok) return migrated;
+  const raw = migrated.value;
   if (raw !== null && typeof raw === 'object' && !Array.isArray(raw)) {
     const top = raw as Record<string, unknown>;
     if (top.format !== undefined && top.format !== CASE_FORMAT) {
       errors.push(`format: must be "${CASE_FORMAT}", got ${describeValue(top.format)}`);
-    }
-    if (top.version !== undefined && top.version !== CASE_VERSION) {
-      errors.push(
-        `version: unsupported case-file version ${describeValue(top.version)}; this program reads version ${CASE_VERSION}`,
-      );
     }
   }
   const result = caseSchema.safeParse(raw, { reportInput: true });
@@ -514,6 +517,11 @@ function validateCaseUnsafe(raw: unknown): Parsed<CaseFile> {
   const hub = wheel.hub_flange_radius_m;
   const rimMessage = rimDeeperMessage(R, wheel.tyre_width_m, wheel.rim_depth_m, hub);
   if (rimMessage) errors.push(rimMessage);
+  if (wheel.spokes.section === 'bladed' && wheel.spokes.thickness_m > wheel.spokes.width_m) {
+    errors.push(
+      `wheel.spokes.thickness_m: must be at most wheel.spokes.width_m ${wheel.spokes.width_m} m (a bladed spoke is wider than thick), got ${wheel.spokes.thickness_m}`,
+    );
+  }
   if (wheel.cover.placement === 'explicit') {
     const ci = cover.inner_radius_m;
     const co = cover.outer_radius_m;
@@ -553,6 +561,16 @@ function validateCaseUnsafe(raw: unknown): Parsed<CaseFile> {
   }
 
   const c = input.conditions;
+  for (const [i, v] of c.airspeed_mps.entries()) {
+    if (v < LIMITS.minSpeedMps) {
+      const at = Array.isArray((raw as { conditions?: { airspeed_mps?: unknown } }).conditions?.airspeed_mps)
+        ? `[${i}]`
+        : '';
+      errors.push(
+        `conditions.airspeed_mps${at}: must be at least ${LIMITS.minSpeedMps} m/s (slower air is below what the model resolves), got ${v}`,
+      );
+    }
+  }
   const conditions: CaseConditions = {
     airspeed_mps: c.airspeed_mps,
     yaw_deg: c.yaw_deg,
@@ -577,6 +595,17 @@ function validateCaseUnsafe(raw: unknown): Parsed<CaseFile> {
     }
     conditions.temperature_c =
       c.temperature_c ?? round12(standardAtmosphere(c.altitude_m).temperatureK - KELVIN_AT_0C);
+    if (
+      c.temperature_c === undefined &&
+      !(
+        conditions.temperature_c >= LIMITS.minTemperatureC &&
+        conditions.temperature_c <= LIMITS.maxTemperatureC
+      )
+    ) {
+      errors.push(
+        `conditions.altitude_m: the standard atmosphere's temperature at ${c.altitude_m} m is ${conditions.temperature_c} C, outside the ${LIMITS.minTemperatureC}..${LIMITS.maxTemperatureC} C the air laws cover; give conditions.temperature_c for the day, got ${c.altitude_m}`,
+      );
+    }
     conditions.altitude_m = c.altitude_m;
     conditions.relative_humidity = c.relative_humidity ?? DEFAULT_AIR.relative_humidity;
   } else {
@@ -950,7 +979,18 @@ export function parseJsonText(text: string, label = 'input'): JsonParseResult {
   if (typeof text !== 'string') return { ok: false, errors: [`${label}: expected JSON text`] };
   const body = text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
   try {
-    return { ok: true, value: JSON.parse(body) };
+    const value: unknown = JSON.parse(body);
+    // Valid but absurdly deep JSON would overflow the stack of every recursive step after parsing
+    // (validation, copying, messages): refuse it here, where the position is known.
+    const deep = nestingBeyond(body, MAX_DEPTH);
+    if (deep >= 0) {
+      const { line, column } = lineColumn(body, deep);
+      return {
+        ok: false,
+        errors: [`${label}: nesting deeper than ${MAX_DEPTH} levels at line ${line}, column ${column}`],
+      };
+    }
+    return { ok: true, value };
   } catch (error) {
     let located: { pos: number; message: string } | null = null;
     try {
@@ -968,6 +1008,26 @@ export function parseJsonText(text: string, label = 'input'): JsonParseResult {
       errors: [`${label}: invalid JSON at line ${line}, column ${column}: ${located.message}`],
     };
   }
+}
+
+/** Offset of the first bracket opening a level deeper than `max` in valid JSON text, or -1. */
+function nestingBeyond(text: string, max: number): number {
+  let depth = 0;
+  let inString = false;
+  for (let i = 0; i < text.length; i++) {
+    const c = text.charCodeAt(i);
+    if (inString) {
+      if (c === 92) i++;
+      else if (c === 34) inString = false;
+    } else if (c === 34) {
+      inString = true;
+    } else if (c === 91 || c === 123) {
+      if (++depth > max) return i;
+    } else if (c === 93 || c === 125) {
+      depth--;
+    }
+  }
+  return -1;
 }
 
 /** 1-based line and column of a character offset. */

@@ -15,6 +15,7 @@ import {
   solveCase,
   validateCase,
 } from './caseFile';
+import { migratePlan } from './fileVersion';
 
 export const PLAN_FORMAT = 'coversweep-plan';
 export const PLAN_VERSION = 1;
@@ -128,7 +129,10 @@ export function expandPlan(raw: unknown): Parsed<ExpandedPlan> {
   }
 }
 
-function expandPlanUnsafe(raw: unknown): Parsed<ExpandedPlan> {
+function expandPlanUnsafe(given: unknown): Parsed<ExpandedPlan> {
+  const migrated = migratePlan(given);
+  if (!migrated.ok) return migrated;
+  const raw = migrated.value;
   if (!isPlainObject(raw)) {
     return {
       ok: false,
@@ -203,6 +207,9 @@ function expandPlanUnsafe(raw: unknown): Parsed<ExpandedPlan> {
     };
   }
 
+  // Blank the varied leaves in the template, so each case copies a small template and not every list
+  // (copying a 10^5-value list for each of its 10^5 cases would take minutes).
+  for (const leaf of varied) setAt(clone, leaf.path, null);
   const cases: ExpandedCase[] = [];
   const failures = new Map<string, number[]>();
   const digits = new Array<number>(varied.length).fill(0);
@@ -333,6 +340,11 @@ export interface SweepOptions {
   solve?: (caseFile: CaseFile) => ResultDocument | Promise<ResultDocument>;
   /** Give the event loop a turn at least this often (ms) so signals and output get through. */
   yieldEveryMs?: number;
+  /**
+   * Called, in case order, for a case whose solve threw; the sweep then goes on. Without it the
+   * first failure ends the sweep (the error is thrown).
+   */
+  onError?: (expanded: ExpandedCase, message: string) => void | Promise<void>;
 }
 
 function casePoints(c: CaseFile): number {
@@ -349,7 +361,17 @@ export async function runSweep(cases: readonly ExpandedCase[], options: SweepOpt
   options.onProgress?.({ ...progress });
   let lastYield = Date.now();
   for (const expanded of cases) {
-    const document = await solve(expanded.caseFile);
+    let document: ResultDocument;
+    try {
+      document = await solve(expanded.caseFile);
+    } catch (error) {
+      if (!options.onError) throw error;
+      await options.onError(expanded, error instanceof Error ? error.message : String(error));
+      progress.casesDone++;
+      progress.pointsDone += casePoints(expanded.caseFile);
+      options.onProgress?.({ ...progress });
+      continue;
+    }
     await options.onResult?.(expanded, document);
     progress.casesDone++;
     progress.pointsDone += casePoints(expanded.caseFile);

@@ -12,6 +12,10 @@
 export const MAX_DATA_BYTES = 32 * 1024 * 1024;
 /** Most data rows accepted. */
 export const MAX_DATA_ROWS = 100_000;
+/** The header line must start within this many characters (after comments and blank lines). */
+export const MAX_PREAMBLE_CHARS = 1024 * 1024;
+/** Most columns accepted in one row. */
+export const MAX_DATA_COLUMNS = 1000;
 /** Most error messages reported for one file. */
 export const MAX_CSV_ERRORS = 20;
 
@@ -64,6 +68,10 @@ function detectDelimiter(line: string): Delimiter {
 export class CsvReader {
   private delimiter: Delimiter | null = null;
   private pending = '';
+  /** Start of the first line of `pending` not yet known to be blank or a comment. */
+  private scanStart = 0;
+  /** `pending` holds no line break from scanStart up to here. */
+  private scanned = 0;
   private field = '';
   private record: string[] = [];
   private quoted = false;
@@ -88,8 +96,18 @@ export class CsvReader {
     this.bytes += text.length;
     if (this.delimiter === null) {
       this.pending += text;
-      const first = this.firstContentLine(this.pending);
-      if (first === null) return true;
+      const first = this.firstContentLine();
+      if (first === null) {
+        if (this.pending.length > MAX_PREAMBLE_CHARS) {
+          this.error(
+            `no header line within the first ${MAX_PREAMBLE_CHARS / (1024 * 1024)} MB (no line break, or only comments and blank lines): not a results table`,
+          );
+          this.stopped = true;
+          this.pending = '';
+          return false;
+        }
+        return true;
+      }
       this.delimiter = detectDelimiter(first);
       text = this.pending;
       this.pending = '';
@@ -98,16 +116,24 @@ export class CsvReader {
     return !this.stopped;
   }
 
-  /** First non-comment, non-blank complete line of the text so far (null if none yet). */
-  private firstContentLine(text: string): string | null {
-    let start = 0;
+  /**
+   * First non-comment, non-blank complete line of the text so far (null if none yet). Resumes where
+   * the previous call stopped, so a long first line or many comment lines arriving in many chunks
+   * cost linear, not quadratic, time.
+   */
+  private firstContentLine(): string | null {
+    const text = this.pending;
     while (true) {
-      const nl = text.indexOf('\n', start);
-      if (nl < 0) return null;
-      const line = text.slice(start, nl).replace(/\r$/, '');
+      const nl = text.indexOf('\n', this.scanned);
+      if (nl < 0) {
+        this.scanned = text.length;
+        return null;
+      }
+      const line = text.slice(this.scanStart, nl).replace(/\r$/, '');
       const t = line.trim();
       if (t !== '' && !t.startsWith('#')) return line;
-      start = nl + 1;
+      this.scanStart = nl + 1;
+      this.scanned = nl + 1;
     }
   }
 
@@ -180,6 +206,12 @@ export class CsvReader {
     this.record.push(this.fieldWasQuoted ? this.field : this.field.trim());
     this.field = '';
     this.fieldWasQuoted = false;
+    if (this.record.length > MAX_DATA_COLUMNS) {
+      this.error(
+        `line ${this.recordLine}: more than ${MAX_DATA_COLUMNS} fields in one row: not a results table (check the delimiter)`,
+      );
+      this.stopped = true;
+    }
   }
 
   private endRecord(): void {
@@ -220,6 +252,8 @@ export class CsvReader {
 
   /** Finish reading and return the table or the errors. */
   end(): CsvResult {
+    if (this.stopped && this.headers === null && this.errors.length > 0)
+      return { ok: false, errors: this.errors };
     if (this.delimiter === null) {
       const t = this.pending;
       this.pending = '';

@@ -20,6 +20,7 @@
  */
 import { z } from 'zod';
 import { describeValue, keyPathText, parseJsonText } from '../caseFile';
+import { migrateMap } from '../fileVersion';
 import {
   COEFFICIENT_QUANTITIES,
   OUTPUT_LABEL,
@@ -112,6 +113,19 @@ const ALLOWED_TOP = [
 
 /** Validate an already-parsed JSON value as a map file. Never throws. */
 export function validateMap(raw: unknown): MapParsed {
+  try {
+    return validateMapUnsafe(raw);
+  } catch (error) {
+    const reason = error instanceof Error ? error.message : String(error);
+    return { ok: false, errors: [`internal error while validating the map file: ${reason}`] };
+  }
+}
+
+function validateMapUnsafe(given: unknown): MapParsed {
+  // Older versions (and files without a version: version 1) are brought up to date first.
+  const migrated = migrateMap(given);
+  if (!migrated.ok) return migrated;
+  const raw = migrated.value;
   const parsed = mapSchema.safeParse(raw, { reportInput: true });
   if (!parsed.success) {
     const errors: string[] = [];

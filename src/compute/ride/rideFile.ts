@@ -19,6 +19,7 @@ import {
   parseJsonText,
   validateCase,
 } from '../caseFile';
+import { migrateRide } from '../fileVersion';
 
 export const RIDE_FORMAT = 'coversweep-ride';
 export const RIDE_VERSION = 1;
@@ -389,17 +390,16 @@ function relabel(message: string, from: string, to: string): string {
   return head.replaceAll(`${from}.`, `${to}.`);
 }
 
-function validateRideUnsafe(raw: unknown): Parsed<RideFile> {
+function validateRideUnsafe(given: unknown): Parsed<RideFile> {
   const errors: string[] = [];
+  // Older versions (and files without a version: version 1) are brought up to date first.
+  const migrated = migrateRide(given);
+  if (!migrated.ok) return migrated;
+  const raw = migrated.value;
   if (raw !== null && typeof raw === 'object' && !Array.isArray(raw)) {
     const top = raw as Record<string, unknown>;
     if (top.format !== undefined && top.format !== RIDE_FORMAT) {
       errors.push(`format: must be "${RIDE_FORMAT}", got ${describeValue(top.format)}`);
-    }
-    if (top.version !== undefined && top.version !== RIDE_VERSION) {
-      errors.push(
-        `version: unsupported ride-file version ${describeValue(top.version)}; this program reads version ${RIDE_VERSION}`,
-      );
     }
   }
   const result = rideSchema.safeParse(raw, { reportInput: true });

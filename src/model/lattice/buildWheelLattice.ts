@@ -3,7 +3,8 @@ import type { RingLattice } from './types';
 
 export interface WheelLatticeOptions {
   radiusM: number;
-  /** Strips across the disc before region edges are added, >= 2. */
+  /** Strips across the disc, >= 2 (raised if the region edges need more: one zone per pair of
+   * neighbouring edges, two for the zone across the innermost circle). */
   spanCount: number;
   /** Panels along each strip, >= 1 (raised if a strip crosses more regions than that). */
   chordCount: number;
@@ -78,18 +79,28 @@ export function buildWheelLattice(options: WheelLatticeOptions): WheelLattice {
   const required = [...new Set(circles.flatMap((r) => [uOf(-r), uOf(r)]))]
     .filter((u) => u > 1e-12 && u < 1 - 1e-12)
     .sort((a, b) => a - b);
-  if (required.length > spanCount - 1) {
-    throw new RangeError(
-      `buildWheelLattice: spanCount=${spanCount} is too small for ${required.length} region edges (need >= ${required.length + 1})`,
-    );
-  }
   // Strips per zone between consecutive required parameters: in proportion to the zone's length in
   // the parameter, at least one each (largest remainder), so the spacing stays close to the regular one.
+  // The zone between the bottom and top of the innermost circle needs two: a single strip there would
+  // have the circle's top and bottom as its edge lines, where its crossings are both at x = 0, leaving
+  // a panel of zero chord with its control point on its own bound vortex (a singular system). Like
+  // the chord count, the strip count is raised when the regions need more strips than asked.
   const anchorU = [0, ...required, 1];
+  const innermost = circles.length > 0 ? circles[circles.length - 1]! : Number.NaN;
+  const middle = anchorU.findIndex((u, j) => u === uOf(-innermost) && anchorU[j + 1] === uOf(innermost));
+  const strips = Math.max(spanCount, anchorU.length - 1 + (middle >= 0 ? 1 : 0));
   const zoneStrips = allocate(
     anchorU.slice(1).map((u, j) => u - anchorU[j]!),
-    spanCount,
+    strips,
   );
+  if (middle >= 0 && zoneStrips[middle]! < 2) {
+    let widest = middle === 0 ? 1 : 0;
+    for (let j = 0; j < zoneStrips.length; j++) {
+      if (j !== middle && zoneStrips[j]! > zoneStrips[widest]!) widest = j;
+    }
+    zoneStrips[widest]!--;
+    zoneStrips[middle]!++;
+  }
   const anchorK: number[] = [0];
   for (const count of zoneStrips) anchorK.push(anchorK[anchorK.length - 1]! + count);
   const warp = (t: number): number => {
@@ -100,7 +111,6 @@ export function buildWheelLattice(options: WheelLatticeOptions): WheelLattice {
     const k1 = anchorK[a + 1]!;
     return anchorU[a]! + ((t - k0) / (k1 - k0)) * (anchorU[a + 1]! - anchorU[a]!);
   };
-  const strips = spanCount;
   const uniqueU = Array.from({ length: strips + 1 }, (_, k) => warp(k));
   const controlU = Array.from({ length: strips }, (_, k) => warp(k + 0.5));
   const edgeZ = new Float64Array(strips + 1);

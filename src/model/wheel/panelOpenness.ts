@@ -13,7 +13,9 @@ export function openAnnuli(radii: WheelRadii): Array<[number, number]> {
   const open = (a: number, b: number) => {
     if (b - a > 1e-9 * radii.outerRadiusM) edges.push([a, b]);
   };
-  if (radii.coverOuterRadiusM > radii.coverInnerRadiusM) {
+  // A cover narrower than 1e-9 R (a cover fraction of ~1e-9 or less) is no cover for the lattice:
+  // its two circles would bound a strip of almost zero width and make the system singular.
+  if (radii.coverOuterRadiusM - radii.coverInnerRadiusM > 1e-9 * radii.outerRadiusM) {
     // The hub's disc opens with the spokes next to it (see panelOpenness).
     if (radii.coverInnerRadiusM - radii.hubRadiusM > 1e-9 * radii.outerRadiusM)
       open(0, radii.coverInnerRadiusM);

@@ -45,7 +45,12 @@ export function rimTyreLoads(
   const reynolds = (rho * Math.abs(vInPlane) * chordM) / mu;
   if (reynolds === 0) return { reynolds };
   const tOverC = thicknessM / chordM;
-  const cdStreamline = streamlineSectionDrag(tOverC, turbulentFlatPlateFriction(reynolds));
+  // A section thicker than long (a shallow rim wider than its tyre: t/c > 1) is outside Hoerner's
+  // streamline formula; it is a bluff body, and takes the cylinder's drag alone.
+  const cdStreamline =
+    tOverC <= 1
+      ? streamlineSectionDrag(tOverC, turbulentFlatPlateFriction(reynolds))
+      : Number.POSITIVE_INFINITY;
   const cdBluff = cylinderDrag((rho * Math.abs(vInPlane) * thicknessM) / mu) * tOverC;
   const cd = Math.min(cdStreamline, cdBluff) * options.profileDragFactor;
   const rMid = radii.outerRadiusM - 0.5 * chordM;

@@ -142,7 +142,7 @@ export function surfaceCoefficients(
       radii,
       options,
       rotationRatio,
-      Math.max(3, Math.round(span / 2.25)),
+      Math.max(4, Math.round(span / 2.25)),
       Math.max(2, Math.round(chord / 2.25)),
     );
     const area = Math.PI * radii.outerRadiusM * radii.outerRadiusM;
