@@ -256,6 +256,7 @@ export async function writeSweep(
       pool,
       plan.cases.map((c) => caseToModelInput(c.caseFile)),
       {
+        keepSolutions: false,
         ...(onProgress ? { onProgress } : {}),
         onCase: (i, solution, error) => {
           const expanded = plan.cases[i]!;

@@ -21,6 +21,9 @@ export const PLAN_FORMAT = 'coversweep-plan';
 export const PLAN_VERSION = 1;
 /** Most operating points (cases x airspeeds x yaw angles) one plan may ask for. */
 export const MAX_PLAN_POINTS = 1_000_000;
+/** Most cases one plan may expand into: every case is held in memory (about 1 kB each), so this bounds
+ * a sweep's memory (measured in bench/hardening.bench.ts; README "Hardening"). */
+export const MAX_PLAN_CASES = 100_000;
 /** Most validation messages reported for one plan. */
 export const MAX_PLAN_ERRORS = 40;
 
@@ -197,6 +200,15 @@ function expandPlanUnsafe(given: unknown): Parsed<ExpandedPlan> {
   for (const leaf of varied) caseCount *= leaf.values.length;
   const pointsPerCase = countPoints(clone);
   const pointCount = caseCount * pointsPerCase;
+  if (caseCount > MAX_PLAN_CASES) {
+    const shape = varied.map((l) => `${l.key}: ${l.values.length}`).join(', ');
+    return {
+      ok: false,
+      errors: [
+        `the plan expands into ${caseCount} cases, more than the limit of ${MAX_PLAN_CASES} (values per varied key: ${shape}); put yaw angles and airspeeds in lists inside the case (they do not multiply cases), or split the plan`,
+      ],
+    };
+  }
   if (pointCount > MAX_PLAN_POINTS) {
     const shape = varied.map((l) => `${l.key}: ${l.values.length}`).join(', ');
     return {

@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import type { ResultDocument } from '../../src/compute/caseFile';
 import {
   expandPlan,
+  MAX_PLAN_CASES,
   MAX_PLAN_POINTS,
   parsePlanFile,
   rangeValues,
@@ -99,16 +100,32 @@ describe('expandPlan', () => {
   it('refuses plans above the point limit before expanding them', () => {
     const big = {
       wheel: {
-        cover: { fraction: { from: 0, to: 1, step: 0.001 } },
-        rim_depth_m: { from: 0.02, to: 0.1, step: 0.0001 },
+        cover: { fraction: { from: 0, to: 1, step: 0.01 } },
+        rim_depth_m: { from: 0.02, to: 0.1, step: 0.001 },
       },
-      conditions: { airspeed_mps: 10, yaw_deg: [0, 5] },
+      conditions: { airspeed_mps: 10, yaw_deg: { from: 0, to: 12.9, step: 0.1 } },
     };
     const r = expandPlan(big);
     expect(r.ok).toBe(false);
     if (!r.ok) {
       expect(r.errors[0]).toContain(`more than the limit of ${MAX_PLAN_POINTS}`);
-      expect(r.errors[0]).toContain('1001 cases'.replace('1001', String(1001 * 801)));
+      expect(r.errors[0]).toContain(`${101 * 81} cases x 130 points`);
+    }
+  });
+
+  it('refuses plans above the case limit (memory bound) with advice', () => {
+    const many = {
+      wheel: {
+        cover: { fraction: { from: 0, to: 1, step: 0.001 } },
+        rim_depth_m: { from: 0.02, to: 0.1, step: 0.0001 },
+      },
+      conditions: { airspeed_mps: 10, yaw_deg: 0 },
+    };
+    const r = expandPlan(many);
+    expect(r.ok).toBe(false);
+    if (!r.ok) {
+      expect(r.errors[0]).toContain(`${1001 * 801} cases, more than the limit of ${MAX_PLAN_CASES}`);
+      expect(r.errors[0]).toContain('yaw angles and airspeeds in lists');
     }
   });
 

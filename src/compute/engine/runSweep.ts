@@ -14,7 +14,8 @@ export interface SweepProgress {
 }
 
 export interface SweepOutcome {
-  /** One entry per case, in the order given: the solution, or null where the case failed or was not run. */
+  /** One entry per case, in the order given: the solution, or null where the case failed, was not run,
+   * or was not kept (keepSolutions: false). */
   solutions: Array<WheelSolution | null>;
   /** One entry per case: the failure message, or null. */
   errors: Array<string | null>;
@@ -30,6 +31,9 @@ export interface RunSweepOptions {
   onCase?: (caseIndex: number, solution: WheelSolution | null, error: string | null) => void;
   jobsPerWorker?: number;
   now?: () => number;
+  /** Keep every solution in the outcome (default true). A caller that streams cases through onCase
+   * passes false, so memory stays bounded by the jobs in flight, not by the sweep's size. */
+  keepSolutions?: boolean;
 }
 
 /**
@@ -44,6 +48,7 @@ export async function runSweep(
   options: RunSweepOptions = {},
 ): Promise<SweepOutcome> {
   const now = options.now ?? (() => performance.now());
+  const keep = options.keepSolutions ?? true;
   const start = now();
   const jobs = planJobs(cases, { workers: pool.size, jobsPerWorker: options.jobsPerWorker });
   const solutions: Array<WheelSolution | null> = new Array(cases.length).fill(null);
@@ -68,15 +73,15 @@ export async function runSweep(
     signal: options.signal,
     onJobDone: (_job, result) => {
       for (const o of result.outcomes) {
-        if (o.ok) {
-          solutions[o.caseIndex] = { surface: o.surface, points: unpackPoints(o.packed, o.pointCount) };
-        } else {
+        const solution = o.ok ? { surface: o.surface, points: unpackPoints(o.packed, o.pointCount) } : null;
+        if (solution && keep) solutions[o.caseIndex] = solution;
+        if (!o.ok) {
           errors[o.caseIndex] = o.error;
           failedCount++;
         }
         casesDone++;
         pointsDone += cases[o.caseIndex]!.points.length;
-        options.onCase?.(o.caseIndex, solutions[o.caseIndex]!, errors[o.caseIndex]!);
+        options.onCase?.(o.caseIndex, solution, errors[o.caseIndex]!);
       }
       report();
     },

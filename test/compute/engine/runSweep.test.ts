@@ -39,6 +39,20 @@ describe('runSweep on a pool (in-process channel workers)', () => {
     three.close();
   });
 
+  it('can stream cases without keeping them (bounded memory), delivering the same numbers', async () => {
+    const pool = new WorkerPool(inProcessSpawner().spawn, 2);
+    const streamed: Array<unknown> = new Array(cases.length).fill(null);
+    const out = await runSweep(pool, cases, {
+      keepSolutions: false,
+      onCase: (i, solution) => {
+        streamed[i] = solution;
+      },
+    });
+    expect(out.solutions.every((s) => s === null)).toBe(true);
+    expectSameAsDirect(cases, streamed);
+    pool.close();
+  });
+
   it('reports progress up to the total', async () => {
     const pool = new WorkerPool(inProcessSpawner().spawn, 2);
     const seen: number[] = [];
