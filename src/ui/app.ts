@@ -1,18 +1,29 @@
 /**
- * The page: state (a validated case file + view settings + optional baseline), the controls, the
- * compute plan run on the worker pool (cancellable, streamed stage by stage), and the views of the
- * results (headline figures, plots, design map, 3D view, tables), with link, autosave and files.
+ * The page: state (a validated case file + view settings + optional baseline + road inputs), the
+ * controls, the compute plan run on the worker pool (cancellable, streamed stage by stage: the current
+ * design first without its grid-convergence lattices, so its numbers show at once), the views of the
+ * results (headline figures, plots, design map, 3D view, tables), the "On the road" and "Your data"
+ * panels (their jobs on their own workers), with link, autosave and files.
  */
-import { caseAirDensity, caseToModelInput, parseCaseFile, validateCase } from '../compute/caseFile';
+import {
+  type CaseFile,
+  type CaseWheel,
+  caseAirDensity,
+  caseToModelInput,
+  parseCaseFile,
+  validateCase,
+} from '../compute/caseFile';
+import type { CalibrationResult, CompareResult } from '../compute/compare/index';
 import type { ViewField } from '../compute/engine/protocol';
 import { runSweep, type SweepProgress } from '../compute/engine/runSweep';
-import { WorkerPool } from '../compute/engine/workerPool';
+import type { WorkerPool } from '../compute/engine/workerPool';
 import { degToRad, kmhToMps } from '../compute/units';
 import type { WheelInput } from '../model/wheel/solveWheel';
 import type { PointResult, WheelSolution } from '../model/wheel/types';
 import { FLAG_MESSAGES } from '../model/wheel/validity';
 import {
   type AppState,
+  type CalibrationMark,
   hashToState,
   loadAutosave,
   projectTextToState,
@@ -20,9 +31,10 @@ import {
   stateToHash,
   stateToProjectText,
 } from './appState';
-import { spawnBrowserWorker } from './browserWorker';
+import type { BrowserWorkerHandle } from './browserWorker';
 import { type ComputePlan, computePlan } from './computePlan';
 import { Controls } from './controls';
+import type { DataContext, DataPanel, DataPlotName, DataRunRequest } from './dataPanel';
 import { type Cell, DataTable, type TableColumn } from './dataTable';
 import { defaultCase } from './defaultCase';
 import { DesignMap } from './designMap';
@@ -37,10 +49,14 @@ import {
   unitText,
 } from './displayUnits';
 import { downloadBlob, downloadText, safeFileStem } from './download';
+import { crashPoolWorker, scriptStartMs, spawnTracked, workersReadyMs } from './earlyPool';
 import type { Field, FieldValue } from './fields';
+import { JobWorker } from './jobWorker';
 import { LinePlot, type PlotSeries } from './linePlot';
 import { Messages } from './messages';
 import { OUTPUTS, type OutputKey, type OutputSpec } from './outputs';
+import type { RoadContext, RoadPanel, RoadPlotName } from './roadPanel';
+import { defaultRoad, type RoadState, roadToRideRaw, validateRoadFor } from './roadState';
 import { view3dLoader, type WheelView } from './view3dSlot';
 import {
   type DifferenceMode,
@@ -62,7 +78,8 @@ interface Results {
 }
 
 type Phase = 'computing' | 'done' | 'error';
-export type PlotName = 'dragYaw' | 'sideYaw' | 'dragCover' | 'handling';
+type MainPlotName = 'dragYaw' | 'sideYaw' | 'dragCover' | 'handling';
+export type PlotName = MainPlotName | RoadPlotName | DataPlotName;
 
 const CURRENT_COLOUR = '#c2412d';
 const BASELINE_COLOUR = '#111111';
@@ -109,20 +126,30 @@ export class App {
   private timer: ReturnType<typeof setTimeout> | null = null;
   private lastComputeKey = '';
   private firstResultMs: number | null = null;
-  private readonly plots: Record<PlotName, LinePlot>;
+  private readonly plots: Record<MainPlotName, LinePlot>;
   private readonly designMap: DesignMap;
   private readonly tables = new Map<string, DataTable>();
   private view3d: WheelView | null = null;
-  private view3dWorker: ReturnType<typeof spawnBrowserWorker> | null = null;
+  private view3dWorker: BrowserWorkerHandle | null = null;
   private view3dRequest = 0;
   private view3dStarted = false;
   private poolIdle: Promise<void> = Promise.resolve();
+  /** The two panels are built (and their code loaded) when first opened. */
+  private road: RoadPanel | null = null;
+  private data: DataPanel | null = null;
+  private roadLoading: Promise<RoadPanel> | null = null;
+  private dataLoading: Promise<DataPanel> | null = null;
+  private readonly rideWorker = new JobWorker();
+  private readonly dataWorker = new JobWorker();
+  private rideTimer: ReturnType<typeof setTimeout> | null = null;
+  private lastRideKey = '';
+  private lastCaseKey = '';
+  private roadShown: { road: string; unit: string } = { road: '', unit: '' };
 
-  constructor() {
+  constructor(pool: WorkerPool) {
     this.messages = new Messages(byId('messages'));
     this.state = this.initialState();
-    const size = Math.max(1, Math.min(4, navigator.hardwareConcurrency || 2));
-    this.pool = new WorkerPool(spawnBrowserWorker, size);
+    this.pool = pool;
     this.plots = {
       dragYaw: new LinePlot(plotDiv('fig-drag-yaw')),
       sideYaw: new LinePlot(plotDiv('fig-side-yaw')),
@@ -132,20 +159,72 @@ export class App {
     this.designMap = new DesignMap(byId('fig-map').querySelector<HTMLElement>('.map')!);
   }
 
-  start(): void {
+  private plotSpec(name: PlotName) {
+    if (name === 'roadYaw' || name === 'roadSteering' || name === 'roadSegments')
+      return this.road?.plotSpec(name) ?? null;
+    if (name === 'dataForce' || name === 'dataSide') return this.data?.plotSpec(name) ?? null;
+    return this.plots[name].currentSpec();
+  }
+
+  private roadPanel(): Promise<RoadPanel> {
+    this.roadLoading ??= import('./roadPanel').then(({ RoadPanel }) => {
+      const panel = new RoadPanel(byId('panel-road'), {
+        onChange: (road) => this.onRoadChange(road),
+        onPin: () => this.pinBaseline(),
+        onSaveRide: () => this.saveRideFile(),
+      });
+      this.road = panel;
+      this.roadShown = { road: '', unit: '' };
+      this.showRoadInputs(this.state);
+      return panel;
+    });
+    return this.roadLoading;
+  }
+
+  private dataPanel(): Promise<DataPanel> {
+    this.dataLoading ??= import('./dataPanel').then(({ DataPanel }) => {
+      const panel: DataPanel = new DataPanel(byId('panel-data'), {
+        context: () => this.dataContext(),
+        onLoadDemo: () => void this.loadDemoData(panel),
+        onRun: (request) => void this.runComparison(panel, request),
+        onCancel: () => {
+          this.dataWorker.cancel();
+          panel.setStatus('done', 'Cancelled; the results shown are from the last finished run.');
+        },
+        onUseCalibrated: (use, calibration, points) => this.useCalibrated(use, calibration, points),
+      });
+      this.data = panel;
+      panel.setCalibratedInUse(Boolean(this.state.calibration));
+      return panel;
+    });
+    return this.dataLoading;
+  }
+
+  /**
+   * Start the first computation, then build the page: the first solve's message is posted to a worker
+   * (which has been loading since the script started) before the controls and tables are built, and
+   * its answer cannot arrive before they are.
+   */
+  async start(): Promise<void> {
+    this.lastComputeKey = computeKey(this.state);
+    this.setPhase('computing');
+    void this.compute();
+    await new Promise((resolve) => setTimeout(resolve, 0));
     this.controls = new Controls(byId('controls'), this.state, (field, value) => this.onEdit(field, value));
     this.buildTables();
     this.wireFigureActions();
     this.wireActions();
     this.wireTabs();
     this.apply(this.state, { replaceUrl: true });
-    this.scheduleCompute(0);
-    void this.pool.warm().catch(() => undefined);
     window.addEventListener('hashchange', () => this.onHashChange());
-    // Read-only inspection for the browser tests and the curious: what each plot shows, and the state.
+    // Inspection for the browser tests and the curious: what each plot shows, the state, the last ride
+    // and comparison; and one test hook, which crashes a sweep worker as a real crash would.
     (window as unknown as { coversweep: unknown }).coversweep = {
-      plot: (name: PlotName) => this.plots[name].currentSpec(),
+      plot: (name: PlotName) => this.plotSpec(name),
       state: () => structuredClone(this.state),
+      ride: () => structuredClone(this.road?.lastResult()?.document ?? null),
+      comparison: () => structuredClone(this.data?.lastReport() ?? null),
+      crashWorker: () => crashPoolWorker(),
     };
   }
 
@@ -212,9 +291,17 @@ export class App {
         this.view3d.setLayers(next.view.layers3d);
       }
     }
+    this.showRoadInputs(next);
+    this.showCalibrationBadge(next.calibration ?? null);
+    const caseKey = JSON.stringify(next.case);
+    if (caseKey !== this.lastCaseKey) {
+      if (this.lastCaseKey !== '') this.data?.designChanged();
+      this.lastCaseKey = caseKey;
+    }
     const key = computeKey(next);
     if (key !== this.lastComputeKey) this.scheduleCompute(150);
     else this.renderAll();
+    if (next.view.tab === 'road') this.scheduleRide(200);
   }
 
   private onEdit(field: Field, value: FieldValue): void {
@@ -340,10 +427,17 @@ export class App {
     const superseded = () => this.abort !== ac;
     byId('cancel').hidden = false;
     this.status('Solving the current design…');
+    this.stage('current');
     const started = performance.now();
 
-    // 1. The current design, exactly as its case file says.
-    const s1 = await this.sweep([plan.current], { signal: ac.signal });
+    // 1. The current design, exactly as its case file says, but first without the grid-convergence
+    //    lattices (the same values, about half the cost): its numbers show at once; the uncertainty
+    //    estimate follows with the next stage.
+    const gci = plan.current.options.gridConvergence;
+    const quick = gci
+      ? { ...plan.current, options: { ...plan.current.options, gridConvergence: false } }
+      : plan.current;
+    const s1 = await this.sweep([quick], { signal: ac.signal });
     if (superseded()) return;
     if (s1.cancelled) return this.cancelled(r);
     const currentSolution = s1.solutions[0] ?? null;
@@ -355,11 +449,13 @@ export class App {
     this.results = r;
     const t1 = performance.now();
     this.messages.clear('model');
+    // The first numbers: the headline and the plots now; the tables and the map with the next stage.
+    this.renderAll({ light: true });
     if (this.firstResultMs === null) {
+      // On screen: the figures and plots are drawn (the browser paints them at the next frame).
       this.firstResultMs = performance.now();
       document.body.dataset.firstResultMs = this.firstResultMs.toFixed(0);
     }
-    this.renderAll();
     // The 3D view (a large module and a WebGL context) starts once the first numbers are on screen.
     if (!this.view3dStarted) {
       this.view3dStarted = true;
@@ -368,19 +464,31 @@ export class App {
       void this.update3d();
     }
 
-    // 2. The family, drag vs cover and the baseline.
+    // 2. The current design with its grid-convergence estimate, the family, drag vs cover and the
+    //    baseline.
+    this.stage('sweeps');
     const extra: WheelInput[] = [...plan.family.inputs, ...plan.cover.inputs];
     if (plan.baseline) extra.push(plan.baseline.curve, plan.baseline.cover, plan.baseline.map);
+    if (gci) extra.push(plan.current);
     const nf = plan.family.inputs.length;
     const nc = plan.cover.inputs.length;
+    const gciIndex = gci ? extra.length - 1 : -1;
     const s2 = await this.sweep(extra, {
       signal: ac.signal,
       onProgress: (p) => this.status(`Cover-fraction sweeps: ${p.casesDone}/${p.casesTotal} cases`, p),
+      onCase: (i, sol) => {
+        if (i === gciIndex && sol && !superseded()) {
+          r.current = sol;
+          this.renderAll();
+        }
+      },
     });
     if (superseded()) return;
     const t2 = performance.now();
     s2.solutions.forEach((sol, i) => {
-      if (i < nf) r.family[i] = sol;
+      if (i === gciIndex) {
+        if (sol) r.current = sol;
+      } else if (i < nf) r.family[i] = sol;
       else if (i < nf + nc) r.cover[i - nf] = sol;
       else if (r.baseline) {
         const k = i - nf - nc;
@@ -393,6 +501,7 @@ export class App {
     if (s2.cancelled) return this.cancelled(r);
 
     // 3. The design map (the longer sweep).
+    this.stage('map');
     const s3 = await this.sweep(plan.map.inputs, {
       signal: ac.signal,
       onProgress: (p) => {
@@ -425,6 +534,10 @@ export class App {
     }
     const t3 = performance.now();
     document.body.dataset.timings = JSON.stringify({
+      scriptStartMs: Math.round(scriptStartMs),
+      workersReadyMs: Math.round(workersReadyMs),
+      computeStartMs: Math.round(started),
+      firstResultMs: Math.round(this.firstResultMs ?? Number.NaN),
       currentMs: Math.round(t1 - started),
       sweepsMs: Math.round(t2 - t1),
       mapMs: Math.round(t3 - t2),
@@ -433,7 +546,12 @@ export class App {
     this.status(`Done in ${seconds} s on ${this.pool.size} worker${this.pool.size > 1 ? 's' : ''}.`);
     byId('cancel').hidden = true;
     this.abort = null;
+    this.stage('done');
     this.setPhase('done');
+  }
+
+  private stage(name: 'current' | 'sweeps' | 'map' | 'done'): void {
+    document.body.dataset.stage = name;
   }
 
   private cancelled(r: Results): void {
@@ -512,15 +630,17 @@ export class App {
   // -------------------------------------------------------------------------------------------
   // Rendering
 
-  private renderAll(): void {
+  private renderAll(opts: { light?: boolean } = {}): void {
     const r = this.results;
     if (!r?.current) return;
     this.renderFlags(r);
     this.renderHeadline(r);
     this.renderYawPlots(r);
     this.renderCoverPlot(r);
-    this.renderMap(r);
-    this.renderTables(r);
+    if (!opts.light) {
+      this.renderMap(r);
+      this.renderTables(r);
+    }
     const notes = [...r.plan.notes];
     if (this.state.case.conditions.airspeed_mps.length > 1) {
       notes.push(
@@ -1124,7 +1244,7 @@ export class App {
     };
     const ticket = ++this.view3dRequest;
     try {
-      this.view3dWorker ??= spawnBrowserWorker();
+      this.view3dWorker ??= spawnTracked();
       const field = (await Promise.race([
         this.view3dWorker.api.viewField(request),
         this.view3dWorker.failed,
@@ -1203,15 +1323,7 @@ export class App {
         // compute() sees the abort as a cancel (it is still the current run).
       }
     });
-    byId('pin-baseline').addEventListener('click', () => {
-      this.apply({ ...this.state, baseline: structuredClone(this.state.case) });
-      this.messages.show(
-        'info',
-        'Baseline pinned: the current wheel. Change the design to compare against it.',
-        [],
-        'baseline',
-      );
-    });
+    byId('pin-baseline').addEventListener('click', () => this.pinBaseline());
     byId('clear-baseline').addEventListener('click', () => {
       this.apply({ ...this.state, baseline: null, view: { ...this.state.view, difference: 'none' } });
       this.messages.clear('baseline');
@@ -1269,7 +1381,13 @@ export class App {
       });
     });
     byId('reset').addEventListener('click', () => {
-      this.apply({ case: defaultCase(), view: defaultView(), baseline: null });
+      this.apply({
+        case: defaultCase(),
+        view: defaultView(),
+        baseline: null,
+        road: defaultRoad(),
+        calibration: null,
+      });
       this.messages.show(
         'info',
         'Back to the demo wheel and the default view (the baseline is cleared).',
@@ -1342,6 +1460,243 @@ export class App {
       byId(`panel-${id}`).hidden = !selected;
       if (selected && focus) button.focus();
     }
+    if (tab === 'data') void this.dataPanel().then((panel) => panel.shown());
+    if (tab === 'road') void this.roadPanel();
+  }
+
+  private pinBaseline(): void {
+    this.apply({ ...this.state, baseline: structuredClone(this.state.case) });
+    this.messages.show(
+      'info',
+      'Baseline pinned: the current wheel. Change the design to compare against it.',
+      [],
+      'baseline',
+    );
+  }
+
+  // -------------------------------------------------------------------------------------------
+  // On the road
+
+  /** The ride's baseline wheel: the pinned baseline's, or this wheel without covers. */
+  private rideBaseline(s: AppState): { wheel: CaseWheel; label: string; pinned: boolean } {
+    if (s.baseline) {
+      return {
+        wheel: s.baseline.wheel,
+        label: `the pinned baseline (${s.baseline.name ?? 'unnamed'})`,
+        pinned: true,
+      };
+    }
+    const w = s.case.wheel;
+    const uncovered = w.cover.fraction === 0 && w.cover.placement !== 'explicit';
+    return {
+      wheel: { ...w, cover: { fraction: 0, placement: 'rim', sides: w.cover.sides } },
+      label: uncovered
+        ? 'no baseline is pinned, so this same wheel without covers (identical to the design: pin a baseline, then change the design)'
+        : 'no baseline is pinned, so this same wheel without covers (fully spoked)',
+      pinned: false,
+    };
+  }
+
+  private roadContext(s: AppState): RoadContext {
+    const b = this.rideBaseline(s);
+    return {
+      speedUnit: s.view.speedUnit,
+      referenceSpeedMps: kmhToMps(s.case.conditions.reference_speed_kmh),
+      designLabel: `${s.case.name ?? 'this design'}${s.calibration ? ' (CALIBRATED model)' : ''}`,
+      baselineLabel: b.label,
+      baselinePinned: b.pinned,
+    };
+  }
+
+  private showRoadInputs(s: AppState): void {
+    const road = s.road ?? defaultRoad();
+    const key = JSON.stringify(road);
+    const ctx = this.roadContext(s);
+    const refresh = key !== this.roadShown.road || s.view.speedUnit !== this.roadShown.unit;
+    if (!this.road) return;
+    this.road.setRoad(road, ctx, refresh);
+    if (refresh) this.road.clearErrors();
+    this.roadShown = { road: key, unit: s.view.speedUnit };
+  }
+
+  /** The ride as a ride file (what `coversweep ride` reads), as far as it is valid. */
+  private saveRideFile(): void {
+    const s = this.state;
+    const b = this.rideBaseline(s);
+    const raw = roadToRideRaw(
+      s.road ?? defaultRoad(),
+      s.case,
+      b.wheel,
+      `${s.case.name ?? 'design'} against ${b.pinned ? (s.baseline?.name ?? 'the baseline') : 'the same wheel without covers'}`,
+    );
+    downloadText(
+      `${safeFileStem(s.case.name, 'coversweep')}.ride.json`,
+      `${JSON.stringify(raw, null, 2)}\n`,
+      'application/json',
+    );
+  }
+
+  private onRoadChange(candidate: RoadState): void {
+    const b = this.rideBaseline(this.state);
+    const r = validateRoadFor(candidate, this.state.case, b.wheel);
+    if (!r.ok) {
+      this.road?.showErrors(r.errors, candidate);
+      return;
+    }
+    this.road?.clearErrors();
+    this.apply({ ...this.state, road: candidate });
+  }
+
+  private scheduleRide(delayMs: number): void {
+    if (this.rideTimer) clearTimeout(this.rideTimer);
+    this.rideTimer = setTimeout(() => {
+      this.rideTimer = null;
+      void this.computeRide();
+    }, delayMs);
+  }
+
+  private async computeRide(): Promise<void> {
+    const panel = await this.roadPanel();
+    const s = this.state;
+    const road = s.road ?? defaultRoad();
+    const b = this.rideBaseline(s);
+    const r = validateRoadFor(road, s.case, b.wheel);
+    if (!r.ok) {
+      panel.showErrors(r.errors, road);
+      panel.setStatus('invalid', 'This ride cannot be computed: see the messages above the inputs.');
+      this.lastRideKey = '';
+      return;
+    }
+    const key = JSON.stringify(r.value);
+    if (key === this.lastRideKey) return;
+    this.lastRideKey = key;
+    panel.setStatus(
+      'computing',
+      "Solving both wheels' yaw curves (0–90°) and the ride's wind states in the background…",
+    );
+    const started = performance.now();
+    const out = await this.rideWorker.run((api) => api.ride({ ride: r.value }));
+    if (out.status === 'superseded' || out.status === 'cancelled') return;
+    if (key !== this.lastRideKey) return;
+    if (out.status === 'failed') {
+      this.lastRideKey = '';
+      panel.setStatus('error', `The ride could not be computed: ${out.error}`);
+      return;
+    }
+    const ctx = this.roadContext(this.state);
+    panel.showResult(out.value, ctx);
+    const seconds = fmt((performance.now() - started) / 1000, 2);
+    panel.setStatus(
+      'done',
+      `Computed in ${seconds} s${out.value.curvesReused ? ' (the yaw curves were reused)' : ''}: ${ctx.designLabel} against ${b.pinned ? 'the pinned baseline' : 'this wheel without covers'}.`,
+    );
+  }
+
+  // -------------------------------------------------------------------------------------------
+  // Your data
+
+  private dataContext(): DataContext {
+    const c = this.state.case;
+    const R = c.wheel.outer_radius_m;
+    return {
+      referenceAreaM2: Math.PI * R * R,
+      airspeedMps: c.conditions.airspeed_mps[0]!,
+      rhoKgPerM3: caseAirDensity(c),
+      speedUnit: this.state.view.speedUnit,
+      designName: c.name ?? 'the current design',
+    };
+  }
+
+  private async loadDemoData(panel: DataPanel): Promise<void> {
+    panel.setStatus('computing', 'Loading the demo data…');
+    try {
+      const get = async (path: string) => {
+        const res = await fetch(new URL(path, document.baseURI));
+        if (!res.ok) throw new Error(`${path}: HTTP ${res.status}`);
+        return res.text();
+      };
+      const [caseText, csvText] = await Promise.all([
+        get('demo/demo-case.json'),
+        get('demo/demo-tunnel.csv'),
+      ]);
+      const c = parseCaseFile(caseText);
+      if (!c.ok) throw new Error(`demo-case.json: ${c.errors.join('; ')}`);
+      this.apply({ ...this.state, case: c.value, calibration: null });
+      this.messages.show(
+        'info',
+        'Demo data loaded: invented measurements of the invented wheel “Demo 50 mm half-cover”, now the design. Reset goes back to the demo wheel.',
+        [],
+        'demo',
+      );
+      panel.setDefaultRanges(caseAirDensity(c.value));
+      panel.readText(csvText, 'demo-tunnel.csv');
+    } catch (error) {
+      panel.setStatus('error', `The demo data could not be loaded: ${(error as Error).message}`);
+    }
+  }
+
+  private async runComparison(panel: DataPanel, req: DataRunRequest): Promise<void> {
+    const caseFile: CaseFile = this.state.case;
+    panel.setDefaultRanges(caseAirDensity(caseFile));
+    const out = await this.dataWorker.run<CompareResult>((api) =>
+      api.compare({
+        caseFile,
+        table: req.table,
+        map: req.map,
+        dataLabel: req.label,
+        calibrate: req.calibrate ? {} : false,
+        convergence: req.convergence ? {} : false,
+        uncertainty: req.uncertainty ? { ranges: req.uncertainty } : false,
+      }),
+    );
+    if (out.status === 'superseded' || out.status === 'cancelled') return;
+    if (out.status === 'failed') {
+      panel.showErrors('The comparison could not be made:', [out.error]);
+      return;
+    }
+    if (!out.value.ok) {
+      panel.showErrors('The data could not be compared with the model:', out.value.errors);
+      return;
+    }
+    panel.showReport(out.value.value, req);
+  }
+
+  private useCalibrated(use: boolean, calibration: CalibrationResult | null, points: number): void {
+    const s = this.state;
+    if (use && calibration) {
+      const original = s.calibration?.original ?? {};
+      const values: CalibrationMark['values'] = {};
+      const before: CalibrationMark['original'] = { ...original };
+      for (const p of calibration.parameters) {
+        values[p.name] = p.value;
+        if (before[p.name] === undefined) before[p.name] = s.case.model[p.name];
+      }
+      const r = validateCase({ ...s.case, model: { ...s.case.model, ...values } });
+      if (!r.ok) {
+        this.messages.show('error', 'The calibrated values could not be used:', r.errors, 'calibration');
+        this.data?.setCalibratedInUse(false);
+        return;
+      }
+      this.apply({
+        ...s,
+        case: r.value,
+        calibration: { data: calibration.fitted_to.data, points, values, original: before },
+      });
+    } else if (s.calibration) {
+      const r = validateCase({ ...s.case, model: { ...s.case.model, ...s.calibration.original } });
+      if (r.ok) this.apply({ ...s, case: r.value, calibration: null });
+    }
+  }
+
+  private showCalibrationBadge(mark: CalibrationMark | null): void {
+    const badge = byId('calibrated-badge');
+    badge.hidden = mark === null;
+    badge.textContent = mark
+      ? `CALIBRATED model: fitted to ${mark.data} (${mark.points} points): ${Object.entries(mark.values)
+          .map(([k, v]) => `${k} ${fmt(v, 4)}`)
+          .join(', ')}`
+      : '';
+    this.data?.setCalibratedInUse(mark !== null);
   }
 }
 

@@ -1,17 +1,59 @@
 /**
- * The page's whole state: the design (a CoverSweep case file), the view settings and an optional pinned
- * baseline design. One validated shape travels three ways: the URL fragment (shareable link), the
- * local autosave and the project file. Every reader validates (validateCase for designs, validateView for
- * the view) and returns messages naming the field; nothing is applied unless everything is valid.
+ * The page's whole state: the design (a CoverSweep case file), the view settings, an optional pinned
+ * baseline design, and two optional sections added later (version-compatible: a state without them is
+ * read as before, with defaults): the "On the road" inputs and the mark of a calibrated model. One
+ * validated shape travels three ways: the URL fragment (shareable link), the local autosave and the
+ * project file. Every reader validates (validateCase for designs, validateView for the view, the ride
+ * file's rules for the road inputs) and returns messages naming the field; nothing is applied unless
+ * everything is valid.
  */
+import { z } from 'zod';
 import { type CaseFile, describeValue, type Parsed, parseJsonText, validateCase } from '../compute/caseFile';
+import { CALIBRATABLE, type Calibratable } from '../compute/compare/index';
 import { base64UrlToText, textToBase64Url } from './base64url';
+import { type RoadState, validateRoadFor, validateRoadShape } from './roadState';
 import { type ViewState, validateView } from './viewState';
+
+/** The design's model options were replaced by values fitted to a data file ("Use calibrated model"). */
+export interface CalibrationMark {
+  /** The data file's name and its number of data points. */
+  data: string;
+  points: number;
+  /** Fitted values now in the design's model options, and the values they replaced. */
+  values: Partial<Record<Calibratable, number>>;
+  original: Partial<Record<Calibratable, number>>;
+}
 
 export interface AppState {
   case: CaseFile;
   view: ViewState;
   baseline: CaseFile | null;
+  /** The "On the road" inputs (absent: the defaults). */
+  road?: RoadState;
+  /** Present while a calibrated model is in use. */
+  calibration?: CalibrationMark | null;
+}
+
+const paramRecord = z.partialRecord(
+  z.enum(CALIBRATABLE),
+  z.number().refine(Number.isFinite, { error: 'must be a finite number' }),
+);
+const calibrationSchema = z.strictObject({
+  data: z.string().max(300),
+  points: z.number().int().min(0),
+  values: paramRecord,
+  original: paramRecord,
+});
+
+function validateCalibration(raw: unknown, label: string): Parsed<CalibrationMark> {
+  const r = calibrationSchema.safeParse(raw);
+  if (r.success) return { ok: true, value: r.data as CalibrationMark };
+  return {
+    ok: false,
+    errors: r.error.issues.map(
+      (i) => `${label}: calibration${i.path.map((k) => `.${String(k)}`).join('')}: ${i.message}`,
+    ),
+  };
 }
 
 export const PROJECT_FORMAT = 'coversweep-project';
@@ -21,7 +63,7 @@ export const AUTOSAVE_KEY = 'coversweep.autosave.v1';
 
 /** Validate the parts of a state object; `label` prefixes every message. */
 export function validateStateParts(
-  parts: { case: unknown; view: unknown; baseline: unknown },
+  parts: { case: unknown; view: unknown; baseline: unknown; road?: unknown; calibration?: unknown },
   label: string,
 ): Parsed<AppState> {
   const errors: string[] = [];
@@ -35,8 +77,39 @@ export function validateStateParts(
     if (!b.ok) errors.push(...b.errors.map((e) => `${label}: baseline.${e}`));
     else baseline = b.value;
   }
+  let road: RoadState | undefined;
+  if (parts.road !== undefined) {
+    const r = validateRoadShape(parts.road);
+    if (!r.ok) errors.push(...r.errors.map((e) => `${label}: ${e}`));
+    else if (c.ok) {
+      // The values by the ride file's rules (as a ride of the design against itself).
+      const ride = validateRoadFor(r.value, c.value, c.value.wheel);
+      const own = ride.ok ? [] : ride.errors.filter((e) => !/^(design|baseline|steering|model)\b/.test(e));
+      if (own.length > 0) errors.push(...own.map((e) => `${label}: road: ${e}`));
+      else road = r.value;
+    }
+  }
+  let calibration: CalibrationMark | null | undefined;
+  if (parts.calibration !== undefined && parts.calibration !== null) {
+    const m = validateCalibration(parts.calibration, label);
+    if (!m.ok) errors.push(...m.errors);
+    else calibration = m.value;
+  } else if (parts.calibration === null) {
+    calibration = null;
+  }
   if (errors.length > 0 || !c.ok || !v.ok) return { ok: false, errors };
-  return { ok: true, value: { case: c.value, view: v.value, baseline } };
+  const value: AppState = { case: c.value, view: v.value, baseline };
+  if (road !== undefined) value.road = road;
+  if (calibration !== undefined) value.calibration = calibration;
+  return { ok: true, value };
+}
+
+/** The optional sections of a state, for writing (absent ones are left out). */
+function optionalParts(state: AppState): Record<string, unknown> {
+  const out: Record<string, unknown> = {};
+  if (state.road !== undefined) out.road = state.road;
+  if (state.calibration) out.calibration = state.calibration;
+  return out;
 }
 
 function isObject(x: unknown): x is Record<string, unknown> {
@@ -52,6 +125,7 @@ export function stateToHash(state: AppState): string {
     case: state.case,
     view: state.view,
     baseline: state.baseline,
+    ...optionalParts(state),
   });
   return `#s=${textToBase64Url(json)}`;
 }
@@ -81,7 +155,16 @@ export function hashToState(hash: string): Parsed<AppState> | null {
       ],
     };
   }
-  return validateStateParts({ case: raw.case, view: raw.view, baseline: raw.baseline }, 'link');
+  return validateStateParts(
+    {
+      case: raw.case,
+      view: raw.view,
+      baseline: raw.baseline,
+      road: raw.road,
+      calibration: raw.calibration,
+    },
+    'link',
+  );
 }
 
 // ---------------------------------------------------------------------------------------------
@@ -95,6 +178,7 @@ export function stateToProjectText(state: AppState): string {
       case: state.case,
       view: state.view,
       baseline: state.baseline,
+      ...optionalParts(state),
     },
     null,
     2,
@@ -120,14 +204,25 @@ export function projectTextToState(text: string, label = 'project file'): Parsed
     );
   }
   for (const key of Object.keys(raw)) {
-    if (!['format', 'version', 'case', 'view', 'baseline'].includes(key)) {
-      errors.push(`${label}: ${key}: unknown key (allowed: format, version, case, view, baseline)`);
+    if (!PROJECT_KEYS.includes(key)) {
+      errors.push(`${label}: ${key}: unknown key (allowed: ${PROJECT_KEYS.join(', ')})`);
     }
   }
   if (!('case' in raw)) errors.push(`${label}: case: is required (the design, a CoverSweep case)`);
   if (errors.length > 0) return { ok: false, errors };
-  return validateStateParts({ case: raw.case, view: raw.view, baseline: raw.baseline }, label);
+  return validateStateParts(
+    {
+      case: raw.case,
+      view: raw.view,
+      baseline: raw.baseline,
+      road: raw.road,
+      calibration: raw.calibration,
+    },
+    label,
+  );
 }
+
+const PROJECT_KEYS = ['format', 'version', 'case', 'view', 'baseline', 'road', 'calibration'];
 
 // ---------------------------------------------------------------------------------------------
 // Autosave (same document as the project file)

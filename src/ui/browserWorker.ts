@@ -1,27 +1,56 @@
 /**
- * The page's spawn function for the worker pool: a module Web Worker running workers/solver.worker.ts,
- * wrapped by comlink. `failed` rejects when the worker reports an uncaught error or cannot load.
+ * The page's Web Workers, wrapped by comlink: the sweep pool's solver worker (workers/solver.worker.ts)
+ * and the worker of the ride and comparison jobs (src/ui/pageJobs.worker.ts). `failed` rejects when a
+ * worker reports an uncaught error or cannot load, or when `crash()` stops it (the page's test hook for
+ * a worker dying mid-sweep: terminate() alone would leave a call waiting forever, as a real crash does
+ * not).
  */
-import { wrap } from 'comlink';
+import { type Remote, wrap } from 'comlink';
+import type { PageJobsApi } from '../compute/engine/pageJobs';
 import type { SolverApi } from '../compute/engine/protocol';
 import type { WorkerHandle } from '../compute/engine/workerPool';
 
-export function spawnBrowserWorker(): WorkerHandle {
-  const worker = new Worker(new URL('../../workers/solver.worker.ts', import.meta.url), { type: 'module' });
-  const api = wrap<SolverApi>(worker);
-  const failed = new Promise<never>((_, reject) => {
+export interface BrowserWorkerHandle extends WorkerHandle {
+  /** Stop the worker as if it had crashed: terminate it and reject `failed`. */
+  crash(): void;
+}
+
+export interface PageJobsHandle {
+  api: Remote<PageJobsApi>;
+  failed: Promise<never>;
+  terminate(): void;
+}
+
+function watch(worker: Worker, what: string): { failed: Promise<never>; reject: (error: Error) => void } {
+  let reject: (error: Error) => void = () => undefined;
+  const failed = new Promise<never>((_, fail) => {
+    reject = fail;
     worker.addEventListener('error', (event) => {
       event.preventDefault();
-      reject(new Error(`solver worker failed: ${event.message || 'could not load or crashed'}`));
+      fail(new Error(`${what} failed: ${event.message || 'could not load or crashed'}`));
     });
-    worker.addEventListener('messageerror', () =>
-      reject(new Error('solver worker sent an unreadable message')),
-    );
+    worker.addEventListener('messageerror', () => fail(new Error(`${what} sent an unreadable message`)));
   });
   failed.catch(() => undefined);
+  return { failed, reject };
+}
+
+export function spawnBrowserWorker(): BrowserWorkerHandle {
+  const worker = new Worker(new URL('../../workers/solver.worker.ts', import.meta.url), { type: 'module' });
+  const { failed, reject } = watch(worker, 'solver worker');
   return {
-    api,
+    api: wrap<SolverApi>(worker),
     failed,
     terminate: () => worker.terminate(),
+    crash: () => {
+      worker.terminate();
+      reject(new Error('solver worker stopped (crashed)'));
+    },
   };
+}
+
+export function spawnPageJobsWorker(): PageJobsHandle {
+  const worker = new Worker(new URL('./pageJobs.worker.ts', import.meta.url), { type: 'module' });
+  const { failed } = watch(worker, 'ride and comparison worker');
+  return { api: wrap<PageJobsApi>(worker), failed, terminate: () => worker.terminate() };
 }

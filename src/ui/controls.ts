@@ -17,7 +17,9 @@ export class Controls {
   private refreshing = false;
 
   constructor(container: HTMLElement, ctx: FieldContext, onEdit: EditHandler) {
-    this.gui = new GUI({ container, title: 'Design controls', width: 300 });
+    // Styles come from lil-gui's stylesheet (imported by styles.css): an injected <style> would break the
+    // page's Content-Security-Policy (style-src 'self').
+    this.gui = new GUI({ container, title: 'Design controls', width: 300, injectStyles: false });
     this.gui.domElement.style.width = '100%';
     const folders = new Map<GroupId, GUI>();
     for (const field of FIELDS) {

@@ -12,6 +12,21 @@ export interface PlotSeries {
   /** Which y axis: 'y' (left, default) or 'y2' (right). */
   scale?: 'y' | 'y2';
   values: Array<number | null>;
+  /** Draw markers only (measured data), no line. */
+  pointsOnly?: boolean;
+  /** Join the points across missing values (a series given on a coarser grid than the x values). */
+  spanGaps?: boolean;
+  /** Hide the series' markers (a dense curve). */
+  noPoints?: boolean;
+  /** Leave the series out of the legend (e.g. the edges of a band). */
+  noLegend?: boolean;
+}
+
+/** A filled band between two series (indices into `series`), e.g. model +- uncertainty. */
+export interface PlotBand {
+  upper: number;
+  lower: number;
+  fill: string;
 }
 
 export interface PlotSpec {
@@ -25,6 +40,11 @@ export interface PlotSpec {
   series: PlotSeries[];
   /** A vertical marker line at this x (e.g. the current covering fraction). */
   markerX?: number | null;
+  /** More vertical marker lines (e.g. where a curve changes sign), drawn dotted in this colour. */
+  markersX?: { xs: number[]; colour: string };
+  bands?: PlotBand[];
+  /** Ticks of the x axis at whole multiples of this (e.g. 1 for segment numbers). */
+  xTickStep?: number;
 }
 
 const AXIS_FONT = '11px system-ui, -apple-system, "Segoe UI", sans-serif';
@@ -92,7 +112,12 @@ export class LinePlot {
       ticks: { stroke: 'rgba(27, 36, 48, 0.3)', width: 1 },
     };
     const axes: uPlot.Axis[] = [
-      { ...axisCommon, label: w < 560 && spec.xLabelShort ? spec.xLabelShort : spec.xLabel, labelSize: 22 },
+      {
+        ...axisCommon,
+        label: w < 560 && spec.xLabelShort ? spec.xLabelShort : spec.xLabel,
+        labelSize: 22,
+        ...(spec.xTickStep ? { incrs: [1, 2, 5, 10, 20, 50, 100].map((k) => k * spec.xTickStep!) } : {}),
+      },
       { ...axisCommon, label: spec.yLabel, scale: 'y', labelSize: 22, size: 52 },
     ];
     if (hasY2) {
@@ -122,34 +147,54 @@ export class LinePlot {
           stroke: s.stroke,
           width: s.width ?? 1.5,
           scale: s.scale ?? 'y',
-          spanGaps: false,
-          points: { show: spec.xs.length <= 16, size: 4 },
+          spanGaps: s.spanGaps ?? false,
+          points: s.pointsOnly
+            ? { show: true, size: 6, fill: s.stroke, width: 1 }
+            : { show: !s.noPoints && spec.xs.length <= 16, size: 4 },
+          ...(s.pointsOnly ? { paths: () => null } : {}),
           ...(s.dash ? { dash: s.dash } : {}),
         })),
       ],
-      hooks:
-        markerX !== undefined && markerX !== null
-          ? {
-              draw: [
-                (u: uPlot) => {
-                  const x = u.valToPos(markerX, 'x', true);
-                  const ctx = u.ctx;
-                  ctx.save();
-                  ctx.strokeStyle = 'rgba(20, 20, 20, 0.55)';
-                  ctx.setLineDash([4, 4]);
-                  ctx.lineWidth = 1;
-                  ctx.beginPath();
-                  ctx.moveTo(x, u.bbox.top);
-                  ctx.lineTo(x, u.bbox.top + u.bbox.height);
-                  ctx.stroke();
-                  ctx.restore();
-                },
-              ],
+      ...(spec.bands && spec.bands.length > 0
+        ? {
+            bands: spec.bands.map((b) => ({
+              series: [b.upper + 1, b.lower + 1] as [number, number],
+              fill: b.fill,
+            })),
+          }
+        : {}),
+      hooks: {
+        draw: [
+          (u: uPlot) => {
+            const lines: Array<[number, string, number[]]> = [];
+            if (markerX !== undefined && markerX !== null)
+              lines.push([markerX, 'rgba(20, 20, 20, 0.55)', [4, 4]]);
+            for (const x of spec.markersX?.xs ?? []) lines.push([x, spec.markersX!.colour, [2, 3]]);
+            if (lines.length === 0) return;
+            const ctx = u.ctx;
+            ctx.save();
+            ctx.lineWidth = 1;
+            for (const [value, colour, dash] of lines) {
+              const x = u.valToPos(value, 'x', true);
+              ctx.strokeStyle = colour;
+              ctx.setLineDash(dash);
+              ctx.beginPath();
+              ctx.moveTo(x, u.bbox.top);
+              ctx.lineTo(x, u.bbox.top + u.bbox.height);
+              ctx.stroke();
             }
-          : {},
+            ctx.restore();
+          },
+        ],
+      },
     };
     const data: uPlot.AlignedData = [spec.xs, ...spec.series.map((s) => s.values)];
     this.plot = new uPlot(opts, data, this.holder);
+    const rows = this.plot.root.querySelectorAll<HTMLElement>('.u-legend .u-series');
+    spec.series.forEach((s, i) => {
+      const row = rows[i + 1];
+      if (s.noLegend && row) row.style.display = 'none';
+    });
   }
 
   /** The plot as PNG: title, the chart (axes included) and the legend. */
@@ -162,7 +207,7 @@ export class LinePlot {
     const titleH = 28 * dpr;
     const rowH = 18 * dpr;
     const perRow = 3;
-    const legendH = Math.ceil(spec.series.length / perRow) * rowH + 8 * dpr;
+    const legendH = Math.ceil(spec.series.filter((s) => !s.noLegend).length / perRow) * rowH + 8 * dpr;
     const out = document.createElement('canvas');
     out.width = src.width;
     out.height = src.height + titleH + legendH;
@@ -176,19 +221,21 @@ export class LinePlot {
     ctx.drawImage(src, 0, titleH);
     ctx.font = `${11 * dpr}px system-ui, sans-serif`;
     const colW = out.width / perRow;
-    spec.series.forEach((s, k) => {
-      const x = (k % perRow) * colW + 8 * dpr;
-      const y = titleH + src.height + Math.floor(k / perRow) * rowH + 12 * dpr;
-      ctx.strokeStyle = s.stroke;
-      ctx.lineWidth = (s.width ?? 1.5) * dpr;
-      ctx.setLineDash((s.dash ?? []).map((d) => d * dpr));
-      ctx.beginPath();
-      ctx.moveTo(x, y - 4 * dpr);
-      ctx.lineTo(x + 18 * dpr, y - 4 * dpr);
-      ctx.stroke();
-      ctx.setLineDash([]);
-      ctx.fillText(s.label, x + 24 * dpr, y);
-    });
+    spec.series
+      .filter((s) => !s.noLegend)
+      .forEach((s, k) => {
+        const x = (k % perRow) * colW + 8 * dpr;
+        const y = titleH + src.height + Math.floor(k / perRow) * rowH + 12 * dpr;
+        ctx.strokeStyle = s.stroke;
+        ctx.lineWidth = (s.width ?? 1.5) * dpr;
+        ctx.setLineDash((s.dash ?? []).map((d) => d * dpr));
+        ctx.beginPath();
+        ctx.moveTo(x, y - 4 * dpr);
+        ctx.lineTo(x + 18 * dpr, y - 4 * dpr);
+        ctx.stroke();
+        ctx.setLineDash([]);
+        ctx.fillText(s.label, x + 24 * dpr, y);
+      });
     return new Promise((resolve, reject) =>
       out.toBlob((b) => (b ? resolve(b) : reject(new Error('PNG export failed'))), 'image/png'),
     );

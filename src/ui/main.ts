@@ -1,11 +1,9 @@
-// The web page's entry point (index.html loads it).
-import 'uplot/dist/uPlot.min.css';
-import './styles.css';
+// The web page's entry point (index.html loads it after public/csp-setup.js; the styles are linked
+// from index.html). Importing earlyPool starts the solver workers before the page is built.
 import { App } from './app';
+import { pool } from './earlyPool';
 
-try {
-  new App().start();
-} catch (error) {
+function showStartError(error: unknown): void {
   document.body.dataset.state = 'error';
   const box = document.getElementById('messages');
   if (box) {
@@ -15,5 +13,14 @@ try {
     div.textContent = `The page could not start: ${error instanceof Error ? error.message : String(error)}`;
     box.append(div);
   }
+}
+
+try {
+  new App(pool).start().catch((error: unknown) => {
+    showStartError(error);
+    throw error;
+  });
+} catch (error) {
+  showStartError(error);
   throw error;
 }

@@ -5,19 +5,29 @@
  * Tests wait for document.body.dataset.state === 'done', never for timers.
  * Screenshots go to test-results/ui-*.png.
  */
-import { type ChildProcess, execFileSync, spawn } from 'node:child_process';
-import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { type ChildProcess, execFile, execFileSync, spawn } from 'node:child_process';
+import { existsSync, mkdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { createServer } from 'node:net';
 import { join, resolve } from 'node:path';
 import { type Browser, type BrowserContext, chromium, type Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { CompareReport } from '../../src/compute/compare/index';
+import type { RideDocument } from '../../src/compute/ride/index';
 import type { PlotName } from '../../src/ui/app';
 import type { AppState } from '../../src/ui/appState';
 import type { PlotSeries, PlotSpec } from '../../src/ui/linePlot';
 
-/** The page's read-only inspection object (src/ui/app.ts). */
+/** The page's inspection object (src/ui/app.ts). */
 interface Inspect {
-  coversweep: { plot(name: PlotName): PlotSpec | null; state(): AppState };
+  coversweep: {
+    plot(name: PlotName): PlotSpec | null;
+    state(): AppState;
+    ride(): RideDocument | null;
+    comparison(): CompareReport | null;
+    crashWorker(): boolean;
+  };
+  __csp?: string[];
+  __xss?: number;
 }
 
 const ROOT = resolve(__dirname, '../..');
@@ -91,6 +101,41 @@ async function setNumberControl(page: Page, field: string, value: string): Promi
   await input.press('Enter');
 }
 
+/** Wait until a panel (#panel-road, #panel-data) has one of the given states. */
+async function panelState(page: Page, id: string, states: string[], timeout = 60_000): Promise<string> {
+  await page.waitForFunction(
+    ({ id, states }) => states.includes(document.getElementById(id)?.dataset.state ?? ''),
+    { id, states },
+    { timeout },
+  );
+  return page.evaluate((id) => document.getElementById(id)?.dataset.state ?? '', id);
+}
+
+/** Type into a panel input and leave it (the panels apply on "change"). */
+async function typeAndLeave(page: Page, selector: string, value: string): Promise<void> {
+  const input = page.locator(selector);
+  await input.fill(value);
+  await input.blur();
+}
+
+/** Screenshots of a panel at 1280 x 800 and 400 x 800 (the panel as a whole, and the 400 px screen). */
+async function panelShots(page: Page, panelId: string, name: string): Promise<number> {
+  await page.locator(`#${panelId}`).screenshot({ path: join(OUT, `ui-${name}-1280.png`) });
+  await page.setViewportSize({ width: 400, height: 800 });
+  await page.evaluate(() => new Promise((ok) => requestAnimationFrame(() => requestAnimationFrame(ok))));
+  const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
+  await page.locator(`#${panelId}`).evaluate((el) => el.scrollIntoView({ block: 'start' }));
+  await page.screenshot({ path: join(OUT, `ui-${name}-400x800.png`) });
+  await page.locator(`#${panelId}`).screenshot({ path: join(OUT, `ui-${name}-400-full.png`) });
+  await page.setViewportSize({ width: 1280, height: 800 });
+  return overflow;
+}
+
+/** Relative difference |a - b| / max(1, |b|) (for numbers computed twice by the same code). */
+function relDiff(a: number, b: number): number {
+  return Math.abs(a - b) / Math.max(1, Math.abs(b));
+}
+
 describe.skipIf(!haveBrowser && !requireBrowser)('web page in headless Chromium', () => {
   let server: ChildProcess | null = null;
   let serverLog = '';
@@ -142,6 +187,14 @@ describe.skipIf(!haveBrowser && !requireBrowser)('web page in headless Chromium'
 
   async function open(context: BrowserContext, url = base): Promise<Page> {
     const page = await context.newPage();
+    // Every Content-Security-Policy violation (even one the page catches) is recorded.
+    await page.addInitScript(() => {
+      const w = window as unknown as Inspect;
+      w.__csp = [];
+      document.addEventListener('securitypolicyviolation', (e) =>
+        w.__csp!.push(`${e.violatedDirective} ${e.blockedURI} ${e.sourceFile}:${e.lineNumber}`),
+      );
+    });
     page.on('console', (m) => {
       // Chromium's software WebGL reports GPU stalls on readPixels as warnings; only errors count.
       if (m.type() === 'error') consoleErrors.push(`${url}: ${m.text()}`);
@@ -154,6 +207,8 @@ describe.skipIf(!haveBrowser && !requireBrowser)('web page in headless Chromium'
   // The first three tests share one page (each page load computes every sweep).
   let shared: BrowserContext;
   let page: Page;
+  /** The default design's map column as computed without disturbance (first test). */
+  let undisturbedMap: string[] = [];
 
   it('loads without console errors and shows the default wheel and its results', async () => {
     shared = await browser.newContext({ viewport: { width: 1280, height: 800 }, acceptDownloads: true });
@@ -168,6 +223,14 @@ describe.skipIf(!haveBrowser && !requireBrowser)('web page in headless Chromium'
     expect(headline[0]).toMatch(/^\d+\.\d{3} N$/);
     const axial = await column(page, 'table-current', 'Axial drag, N');
     expect(axial.length).toBe(41); // yaw 0..20 deg in 0.5 deg steps
+    undisturbedMap = await column(page, 'table-map', 'Axial drag');
+    expect(undisturbedMap.length).toBe(66);
+    // The built page carries the strict policy, and nothing broke it.
+    const html = await (await fetch(base)).text();
+    expect(html).toContain(
+      "default-src 'self'; script-src 'self'; worker-src 'self' blob:; style-src 'self';",
+    );
+    expect(await page.evaluate(() => (window as unknown as Inspect).__csp)).toEqual([]);
     const spec = await page.evaluate(() => (window as unknown as Inspect).coversweep.plot('dragYaw'));
     expect(spec!.yLabel).toContain('Axial drag (along travel), N');
     expect(spec!.xLabel).toMatch(/at 50 km\/h .*ρ 1\.225 kg\/m³/);
@@ -431,6 +494,340 @@ describe.skipIf(!haveBrowser && !requireBrowser)('web page in headless Chromium'
     );
     expect(await page.evaluate(() => (window as unknown as Inspect).coversweep.state())).toEqual(deep);
     await context.close();
+    expect(consoleErrors).toEqual([]);
+  });
+
+  it('finishes the design map with the same numbers when a worker crashes mid-sweep; Cancel keeps finished results', async () => {
+    expect(undisturbedMap.length).toBe(66);
+    const context = await browser.newContext({ viewport: { width: 1280, height: 800 } });
+    const page = await open(context);
+    // A sweep worker dies while the design map runs (the page's test hook, as a real crash would).
+    await page.waitForFunction(
+      () => document.body.dataset.stage === 'map' || document.body.dataset.state !== 'computing',
+      null,
+      { timeout: 45_000 },
+    );
+    const crashed = await page.evaluate(
+      () =>
+        document.body.dataset.stage === 'map' &&
+        document.body.dataset.state === 'computing' &&
+        (window as unknown as Inspect).coversweep.crashWorker(),
+    );
+    expect(crashed, 'the map sweep ended before a worker could be crashed').toBe(true);
+    expect(await settled(page)).toBe('done');
+    expect(await page.locator('#status-text').textContent()).toMatch(/^Done in/);
+    expect(await column(page, 'table-map', 'Axial drag')).toEqual(undisturbedMap);
+
+    // Cancel during the next design map: what finished stays, the page stays usable.
+    await setNumberControl(page, 'coverFraction', '0.3');
+    await page.waitForFunction(
+      () =>
+        (window as unknown as Inspect).coversweep.state().case.wheel.cover.fraction === 0.3 &&
+        document.body.dataset.stage === 'map' &&
+        document.body.dataset.state === 'computing',
+      null,
+      { timeout: 45_000 },
+    );
+    await page.click('#cancel');
+    expect(await settled(page)).toBe('done');
+    expect(await page.locator('#status-text').textContent()).toContain('Cancelled');
+    expect(await page.locator('#headline .value').count()).toBe(6);
+    expect((await column(page, 'table-current', 'Axial drag, N')).length).toBe(41);
+    const spec = await page.evaluate(() => (window as unknown as Inspect).coversweep.plot('dragYaw'));
+    expect(spec!.series.find((x) => x.label.startsWith('this design'))!.label).toContain('cover 0.3');
+    expect((await column(page, 'table-map', 'Axial drag')).length).toBeLessThan(66);
+    await setNumberControl(page, 'coverFraction', '0.4');
+    await page.waitForFunction(
+      () => (window as unknown as Inspect).coversweep.state().case.wheel.cover.fraction === 0.4,
+    );
+    expect(await settled(page)).toBe('done');
+    expect(await page.locator('#status-text').textContent()).toMatch(/^Done in/);
+    expect((await column(page, 'table-map', 'Axial drag')).length).toBe(66);
+    expect(await page.evaluate(() => (window as unknown as Inspect).__csp)).toEqual([]);
+    await context.close();
+    expect(consoleErrors).toEqual([]);
+  });
+
+  it('computes a ride on the "On the road" panel exactly as the command line does', async () => {
+    const context = await browser.newContext({
+      viewport: { width: 1280, height: 800 },
+      acceptDownloads: true,
+    });
+    const page = await open(context);
+    expect(await settled(page)).toBe('done');
+    // Baseline: the demo wheel pinned; design: the same wheel fully covered.
+    await page.click('#pin-baseline');
+    await setNumberControl(page, 'coverFraction', '1');
+    await page.waitForFunction(
+      () => (window as unknown as Inspect).coversweep.state().case.wheel.cover.fraction === 1,
+    );
+    await page.click('#tab-road');
+    expect(await panelState(page, 'panel-road', ['done', 'error', 'invalid'])).toBe('done');
+    const doc = (await page.evaluate(() => (window as unknown as Inspect).coversweep.ride()))!;
+    expect(doc.ride.design.cover.fraction).toBe(1);
+    expect(doc.ride.baseline.cover.fraction).toBe(0);
+    // The trade's units on the cards; the cautions beside them.
+    expect(await page.locator('[data-card="power"] .value').textContent()).toMatch(/^[+-]?\d+\.\d W$/);
+    expect(await page.locator('[data-card="time"] .value').textContent()).toMatch(/^[+-]?\d+\.\d s$/);
+    expect(await page.locator('[data-card="grams"] .value').textContent()).toMatch(/^[+-]?\d+ g$/);
+    expect(await page.locator('[data-card="aero"] .value').textContent()).toMatch(/^\d+\.\d %$/);
+    expect(await page.locator('#road-cautions li').count()).toBe(3);
+    const yawSpec = await page.evaluate(() => (window as unknown as Inspect).coversweep.plot('roadYaw'));
+    expect(yawSpec!.series.map((x) => x.label)).toEqual([
+      'design axial drag, N',
+      'baseline axial drag, N',
+      'time at this yaw, % per deg',
+    ]);
+    const steer = await page.evaluate(() => (window as unknown as Inspect).coversweep.plot('roadSteering'));
+    expect(steer!.series.length).toBe(2);
+
+    // The page's ride file, solved by the command line: the same figures.
+    const [download] = await Promise.all([page.waitForEvent('download'), page.click('#road-save')]);
+    const ridePath = join(OUT, 'ui-page.ride.json');
+    await download.saveAs(ridePath);
+    const cli = JSON.parse(
+      execFileSync(process.execPath, [join(ROOT, 'bin/coversweep.mjs'), 'ride', ridePath], {
+        cwd: ROOT,
+        encoding: 'utf8',
+      }),
+    ) as RideDocument;
+    const pairs: Array<[string, number | null, number | null]> = [
+      ['delta_power_W', doc.delta_power_W, cli.delta_power_W],
+      ['delta_time_s', doc.delta_time_s, cli.delta_time_s],
+      ['wind_averaged_axial_N.design', doc.wind_averaged_axial_N.design, cli.wind_averaged_axial_N.design],
+      ['yaw_p90_deg', doc.yaw_p90_deg, cli.yaw_p90_deg],
+      ['lean_deg.design', doc.lean_deg.design, cli.lean_deg.design],
+      ['aero_share.design', doc.aero_share.design, cli.aero_share.design],
+    ];
+    for (const [name, got, expected] of pairs) {
+      // Same code on the same inputs: equal to rounding (1e-12 relative).
+      const tol = 1e-12;
+      expect(relDiff(got!, expected!), `${name}: page=${got} cli=${expected} tol=${tol}`).toBeLessThanOrEqual(
+        tol,
+      );
+    }
+    expect(doc.delta_power_W).not.toBe(0);
+
+    // An out-of-range input: the rule beside the input, the state unchanged.
+    await typeAndLeave(page, '#road-rider-mass_kg', '5');
+    await expect
+      .poll(() => page.locator('#road-rider-mass_kg-error').textContent())
+      .toContain('must be a number at least 20 and at most 300 kg');
+    expect(await page.locator('#road-rider-mass_kg').getAttribute('aria-invalid')).toBe('true');
+    const road = await page.evaluate(() => (window as unknown as Inspect).coversweep.state().road);
+    expect(road?.rider.mass_kg ?? 80).toBe(80);
+    await typeAndLeave(page, '#road-rider-mass_kg', '70');
+    await page.waitForFunction(
+      () => (window as unknown as Inspect).coversweep.ride()?.ride.rider.mass_kg === 70,
+      null,
+      { timeout: 60_000 },
+    );
+    expect(await page.locator('#road-rider-mass_kg-error').textContent()).toBe('');
+
+    // A course: per-segment figures.
+    await page.locator('#road-use_course').selectOption('yes');
+    await page.waitForFunction(
+      () => ((window as unknown as Inspect).coversweep.ride()?.segments?.length ?? 0) === 4,
+      null,
+      { timeout: 60_000 },
+    );
+    expect(await panelState(page, 'panel-road', ['done'])).toBe('done');
+    const segSpec = await page.evaluate(() => (window as unknown as Inspect).coversweep.plot('roadSegments'));
+    expect(segSpec!.xs).toEqual([1, 2, 3, 4]);
+    expect(await page.locator('#table-road-segments tbody tr').count()).toBe(4);
+    const state = await page.evaluate(() => (window as unknown as Inspect).coversweep.state());
+    expect(state.road!.use_course).toBe(true);
+    expect(state.road!.rider.mass_kg).toBe(70);
+    // The road inputs travel with the link.
+    expect(page.url()).toContain('#s=');
+    const overflow = await panelShots(page, 'panel-road', 'road');
+    expect(overflow, `page wider than a 400 px screen by ${overflow} px`).toBeLessThanOrEqual(0);
+    expect(await page.evaluate(() => (window as unknown as Inspect).__csp)).toEqual([]);
+    await context.close();
+    expect(consoleErrors).toEqual([]);
+  });
+
+  let dataContext: BrowserContext;
+  let dataPage: Page;
+
+  it('compares the demo data with the model, fits it and uses the calibrated model, as the command line does', async () => {
+    // The command line's comparison of the same files, meanwhile.
+    const cliRun = new Promise<CompareReport>((ok, fail) => {
+      execFile(
+        process.execPath,
+        [
+          join(ROOT, 'bin/coversweep.mjs'),
+          'compare',
+          join(ROOT, 'public/demo/demo-case.json'),
+          join(ROOT, 'public/demo/demo-tunnel.csv'),
+          '--map',
+          join(ROOT, 'public/demo/demo-map.json'),
+          '--calibrate',
+        ],
+        { cwd: ROOT, encoding: 'utf8', maxBuffer: 64 * 1024 * 1024 },
+        (error, stdout) => (error ? fail(error) : ok(JSON.parse(stdout) as CompareReport)),
+      );
+    });
+    dataContext = await browser.newContext({ viewport: { width: 1280, height: 800 } });
+    dataPage = await open(dataContext);
+    const page = dataPage;
+    expect(await settled(page)).toBe('done');
+    await page.click('#tab-data');
+    await page.click('#data-demo');
+    expect(await panelState(page, 'panel-data', ['mapping', 'error'])).toBe('mapping');
+    expect((await page.evaluate(() => (window as unknown as Inspect).coversweep.state())).case.name).toBe(
+      'Demo 50 mm half-cover',
+    );
+    const headers = await page.locator('#data-map-table tbody th').allTextContents();
+    expect(headers).toEqual([
+      'Yaw [deg]',
+      'Speed [km/h]',
+      'Drag [g]',
+      'Side force [lbf]',
+      'Yaw moment [N m]',
+    ]);
+    await page.click('#data-apply');
+    expect(await panelState(page, 'panel-data', ['done', 'error'])).toBe('done');
+    const report = (await page.evaluate(() => (window as unknown as Inspect).coversweep.comparison()))!;
+    expect(report.converted.length).toBe(30);
+    const force = await page.evaluate(() => (window as unknown as Inspect).coversweep.plot('dataForce'));
+    expect(force!.series.filter((x) => x.pointsOnly).map((x) => x.label)).toEqual([
+      'data 30 km/h',
+      'data 40 km/h',
+      'data 50 km/h',
+    ]);
+    expect(await page.locator('#table-data-residuals tbody tr').count()).toBe(report.residuals.length);
+    await page.screenshot({ path: join(OUT, 'ui-data-compare-1280x800.png') });
+
+    // Fit, and use the calibrated model.
+    await page.click('#data-fit-run');
+    await page.waitForFunction(
+      () => Boolean((window as unknown as Inspect).coversweep.comparison()?.calibration),
+      null,
+      { timeout: 90_000 },
+    );
+    expect(await panelState(page, 'panel-data', ['done', 'error'])).toBe('done');
+    const fitted = (await page.evaluate(() => (window as unknown as Inspect).coversweep.comparison()))!;
+    const cli = await cliRun;
+    // The page's guessed map equals demo-map.json here, so every number equals the command line's.
+    expect(fitted.residuals.length).toBe(cli.residuals.length);
+    fitted.residuals.forEach((r, i) => {
+      const c = cli.residuals[i]!;
+      const tol = 1e-12;
+      expect(
+        relDiff(r.model, c.model),
+        `line=${r.line} ${r.output} page=${r.model} cli=${c.model} tol=${tol}`,
+      ).toBeLessThanOrEqual(tol);
+      expect(r.data, `line=${r.line} ${r.output}`).toBe(c.data);
+    });
+    fitted.calibration!.parameters.forEach((p, i) => {
+      const c = cli.calibration!.parameters[i]!;
+      // The fit stops once a step is below 1e-7 relative (calibrate.ts); browser and Node may differ in
+      // the last bits of Math functions, so the two fits agree to about that, not to rounding.
+      const tol = 1e-6;
+      expect(
+        relDiff(p.value, c.value),
+        `${p.name} page=${p.value} cli=${c.value} tol=${tol}`,
+      ).toBeLessThanOrEqual(tol);
+    });
+    expect(await page.locator('#table-data-fit tbody tr').count()).toBe(3);
+    const badge = page.locator('#calibrated-badge');
+    expect(await badge.isVisible()).toBe(false);
+    await page.click('#data-use-calibrated');
+    await badge.waitFor({ state: 'visible' });
+    expect(await badge.textContent()).toMatch(/^CALIBRATED model: fitted to demo-tunnel\.csv \(30 points\)/);
+    const calibrated = await page.evaluate(() => (window as unknown as Inspect).coversweep.state());
+    const porosity = fitted.calibration!.parameters.find((p) => p.name === 'porosity_scale')!.value;
+    expect(calibrated.case.model.porosity_scale).toBe(porosity);
+    expect(calibrated.calibration!.data).toBe('demo-tunnel.csv');
+    expect(await settled(page)).toBe('done');
+    await page.evaluate(() => window.scrollTo(0, 0));
+    await page.screenshot({ path: join(OUT, 'ui-data-calibrated-1280x800.png') });
+    await page.click('#data-use-calibrated');
+    await badge.waitFor({ state: 'hidden' });
+    const restored = await page.evaluate(() => (window as unknown as Inspect).coversweep.state());
+    expect(restored.case.model.porosity_scale).toBe(1);
+    expect(restored.calibration ?? null).toBeNull();
+
+    // Convergence study and input-uncertainty band on demand.
+    await page.click('#data-convergence-run');
+    await page.waitForFunction(
+      () => Boolean((window as unknown as Inspect).coversweep.comparison()?.convergence),
+      null,
+      { timeout: 90_000 },
+    );
+    expect(await page.locator('#table-data-convergence tbody tr').count()).toBeGreaterThan(0);
+    await page.locator('#data-results details summary').filter({ hasText: 'Ranges' }).click();
+    await page.click('#data-uncertainty-run');
+    await page.waitForFunction(
+      () => Boolean((window as unknown as Inspect).coversweep.comparison()?.uncertainty),
+      null,
+      { timeout: 90_000 },
+    );
+    expect(await page.locator('#table-data-uncertainty tbody tr').count()).toBeGreaterThan(0);
+    const withBand = await page.evaluate(() => (window as unknown as Inspect).coversweep.plot('dataForce'));
+    expect(withBand!.series.some((x) => x.label.startsWith('inputs 2.5–97.5 %'))).toBe(true);
+    const overflow = await panelShots(page, 'panel-data', 'data');
+    expect(overflow, `page wider than a 400 px screen by ${overflow} px`).toBeLessThanOrEqual(0);
+    expect(await page.evaluate(() => (window as unknown as Inspect).__csp)).toEqual([]);
+    expect(consoleErrors).toEqual([]);
+  });
+
+  it('shows HTML in a data file name, header and cells as text and runs none of it; refuses a too large file', async () => {
+    const page = dataPage;
+    const csv = [
+      'Yaw [deg],<img src=x onerror="window.__xss=1">,Drag <script>window.__xss=2</script> [N]',
+      '0,"<img src=y onerror=""window.__xss=3"">",0.5',
+      '5,"<script>window.__xss=4</script>",0.4',
+      '10,x,0.2',
+    ].join('\n');
+    const hostile = join(OUT, '<img src=z onerror="window.__xss=5">.csv');
+    writeFileSync(hostile, csv);
+    await page.setInputFiles('#data-file', hostile);
+    await page.waitForFunction(() =>
+      /Read <img src=z/.test(document.getElementById('data-status')?.textContent ?? ''),
+    );
+    const heads = await page.locator('#data-map-table tbody th').allTextContents();
+    expect(heads).toEqual([
+      'Yaw [deg]',
+      '<img src=x onerror="window.__xss=1">',
+      'Drag <script>window.__xss=2</script> [N]',
+    ]);
+    await page.locator('#data-preview-details summary').click();
+    expect(await page.locator('#data-preview tbody td').nth(1).textContent()).toBe(
+      '<img src=y onerror="window.__xss=3">',
+    );
+    await page.click('#data-apply');
+    expect(await panelState(page, 'panel-data', ['done', 'error'])).toBe('done');
+    expect(await page.locator('#data-summary').textContent()).toContain(
+      '<img src=z onerror="window.__xss=5">.csv',
+    );
+    // Pasted, the same.
+    await page.fill('#data-paste', csv);
+    await page.click('#data-paste-read');
+    await page.waitForFunction(() =>
+      /Read pasted table/.test(document.getElementById('data-status')?.textContent ?? ''),
+    );
+    const found = await page.evaluate(() => ({
+      xss: (window as unknown as Inspect).__xss ?? null,
+      images: document.querySelectorAll('#panel-data img, #messages img').length,
+      scripts: document.querySelectorAll('#panel-data script, #messages script').length,
+    }));
+    expect(found).toEqual({ xss: null, images: 0, scripts: 0 });
+
+    // Too large: refused before reading, with the limit named; the table read before stays.
+    const big = join(OUT, 'ui-too-large.csv');
+    writeFileSync(big, Buffer.alloc(33 * 1024 * 1024, 0x30));
+    await page.setInputFiles('#data-file', big);
+    await page
+      .locator('#data-read-errors')
+      .filter({ hasText: 'ui-too-large.csv could not be read' })
+      .waitFor();
+    expect(await page.locator('#data-read-errors').textContent()).toContain('more than the 32.0 MB limit');
+    rmSync(big, { force: true });
+    expect(await page.locator('#data-map-table tbody th').count()).toBe(3);
+    expect(await page.evaluate(() => (window as unknown as Inspect).__csp)).toEqual([]);
+    await dataContext.close();
     expect(consoleErrors).toEqual([]);
   });
 });
