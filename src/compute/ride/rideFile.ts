@@ -233,7 +233,8 @@ const windShape = {
     .max(RIDE_LIMITS.maxSectors, { error: () => `must list at most ${RIDE_LIMITS.maxSectors} sectors` }),
   reference_height_m: num({ min: 0.5, max: 200, unit: 'm' }),
   roughness_length_m: num({ min: 0.0001, max: 2, unit: 'm' }),
-  hub_height_m: num({ min: 0.05, max: 2, unit: 'm' }),
+  // null (as a normalised ride file writes it): the design's outer radius.
+  hub_height_m: num({ min: 0.05, max: 2, unit: 'm' }).nullable(),
   rider_height_m: num({ min: 0.2, max: 3, unit: 'm' }),
 };
 

@@ -38,6 +38,15 @@ describe('parseRideFile', () => {
     expect(r.ride.gradient).toBe(0);
   });
 
+  it('reads back the normalised ride file it returns (defaults filled, nulls included)', () => {
+    const first = parseRideFile(JSON.stringify(example));
+    expect(first.ok).toBe(true);
+    if (!first.ok) return;
+    const again = parseRideFile(JSON.stringify(first.value));
+    expect(again.ok, again.ok ? '' : again.errors.join('\n')).toBe(true);
+    if (again.ok) expect(again.value).toEqual(first.value);
+  });
+
   it('names the key path, the value and the rule', () => {
     expect(errorsOf(withChange((r) => (r.rider.mass_kg = 5)))).toEqual([
       'rider.mass_kg: must be a number at least 20 and at most 300 kg (rider and bike), got 5',
