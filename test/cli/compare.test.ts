@@ -29,6 +29,12 @@ function io(files: Record<string, string>, sizes: Record<string, number> = {}) {
   };
 }
 
+/** The first data row's drag cell (grams-force), read from the demo file itself. */
+const firstDragCell = (csv: string): string => {
+  const rows = csv.split('\n').filter((l) => l !== '' && !l.startsWith('#'));
+  return rows[1]!.split(',')[2]!;
+};
+
 const demo = {
   'case.json': readFileSync('public/demo/demo-case.json', 'utf8').replace(
     '"grid_convergence": true',
@@ -51,8 +57,9 @@ describe('coversweep compare', () => {
     expect(doc.residuals.length).toBe(90);
     expect(doc.residuals[0]).toHaveProperty('residual');
     expect(doc.calibration).toBeUndefined();
-    // 100 gf-ish drag in the file became newtons: the first row's drag (21.9 g) is 0.2148 N.
-    expect(Math.abs(doc.converted[0].axial_N - 0.0219 * 9.80665)).toBeLessThan(1e-12);
+    // The file's grams-force became newtons: the first row's drag x g0 / 1000 (NIST SP 811).
+    const grams = Number(firstDragCell(demo['data.csv']));
+    expect(Math.abs(doc.converted[0].axial_N - (grams / 1000) * 9.80665)).toBeLessThan(1e-12);
   });
 
   it('--calibrate adds fitted parameters with intervals', () => {
@@ -112,7 +119,7 @@ describe('coversweep compare', () => {
         /line 2: 3 fields, but the header has 2/,
       ],
       [
-        { ...demo, 'data.csv': demo['data.csv'].replace('21.9', 'n/a') },
+        { ...demo, 'data.csv': demo['data.csv'].replace(`,${firstDragCell(demo['data.csv'])},`, ',n/a,') },
         ['case.json', 'data.csv', '--map', 'map.json'],
         /column "Drag \[g\]": "n\/a" is not a number/,
       ],
