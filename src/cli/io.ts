@@ -34,3 +34,12 @@ export class CliInputError extends Error {
     this.messages = messages;
   }
 }
+
+/** Plain words for why a file could not be read (a missing file, a folder, no permission, ...). */
+export function readErrorReason(error: unknown): string {
+  const code = (error as NodeJS.ErrnoException | undefined)?.code;
+  if (code === 'ENOENT') return 'no such file';
+  if (code === 'EISDIR') return 'is a folder, not a file';
+  if (code === 'EACCES') return 'permission denied';
+  return error instanceof Error ? error.message : String(error);
+}

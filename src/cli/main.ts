@@ -27,7 +27,15 @@ import {
 import { csvHeader, documentCsvLines, errorCsvLine } from '../compute/resultTable';
 import { runCompare } from './compareCommand';
 import { exampleCase, examplePlan } from './examples';
-import { CliInputError, type CliIo, EXIT_INPUT, EXIT_INTERNAL, EXIT_OK, processIo } from './io';
+import {
+  CliInputError,
+  type CliIo,
+  EXIT_INPUT,
+  EXIT_INTERNAL,
+  EXIT_OK,
+  processIo,
+  readErrorReason,
+} from './io';
 import { nodeWorkerSpawner } from './nodeWorker';
 import { AtomicFile, checkOutputPath } from './outputFile';
 import { progressReporter } from './progress';
@@ -122,18 +130,7 @@ function readInputFile(path: string, cwd: string, what: string): string {
     return readJsonFile(resolve(cwd, path), what);
   } catch (error) {
     if (error instanceof CliInputError) throw error;
-    const code = (error as NodeJS.ErrnoException).code;
-    const reason =
-      code === 'ENOENT'
-        ? 'no such file'
-        : code === 'EISDIR'
-          ? 'is a folder, not a file'
-          : code === 'EACCES'
-            ? 'permission denied'
-            : error instanceof Error
-              ? error.message
-              : String(error);
-    throw new CliInputError(`cannot read the ${what} ${path}: ${reason}`);
+    throw new CliInputError(`cannot read the ${what} ${path}: ${readErrorReason(error)}`);
   }
 }
 

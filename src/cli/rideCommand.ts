@@ -5,6 +5,7 @@
  */
 import { parseArgs } from 'node:util';
 import { parseRideFile, solveRide } from '../compute/ride/index';
+import { readErrorReason } from './io';
 
 export const RIDE_HELP = `Usage: coversweep ride RIDE.json
 
@@ -60,18 +61,7 @@ export function runRide(argv: string[], io: RideIo): number {
   try {
     text = io.readFile(path);
   } catch (error) {
-    const code = (error as NodeJS.ErrnoException).code;
-    const reason =
-      code === 'ENOENT'
-        ? 'no such file'
-        : code === 'EISDIR'
-          ? 'is a folder, not a file'
-          : code === 'EACCES'
-            ? 'permission denied'
-            : error instanceof Error
-              ? error.message
-              : String(error);
-    return fail(io, `cannot read the ride file ${path}: ${reason}`);
+    return fail(io, `cannot read the ride file ${path}: ${readErrorReason(error)}`);
   }
   const parsed = parseRideFile(text);
   if (!parsed.ok) return fail(io, `invalid ride file ${path}:`, parsed.errors);
