@@ -10,6 +10,7 @@ export { influenceMatrix } from './influenceMatrix';
 export { latticeVelocity } from './latticeVelocity';
 export { planarSegmentNormalVelocity } from './planarSegmentNormalVelocity';
 export { planarWakeNormalVelocity } from './planarWakeNormalVelocity';
+export { rectangularLattice } from './rectangularLattice';
 export { ringInfluenceMatrix } from './ringInfluenceMatrix';
 export { segmentVelocity } from './segmentVelocity';
 export { semiInfiniteSegmentVelocity } from './semiInfiniteSegmentVelocity';
