@@ -181,6 +181,16 @@ export class App {
     return this.roadLoading;
   }
 
+  private validationLoading: Promise<{ shown(): void }> | null = null;
+
+  /** The Help tab's reference table, loaded and computed only when Help is opened. */
+  private validationPanel(): Promise<{ shown(): void }> {
+    this.validationLoading ??= import('./validationPanel').then(
+      ({ ValidationPanel }) => new ValidationPanel(byId('validation')),
+    );
+    return this.validationLoading;
+  }
+
   private dataPanel(): Promise<DataPanel> {
     this.dataLoading ??= import('./dataPanel').then(({ DataPanel }) => {
       const panel: DataPanel = new DataPanel(byId('panel-data'), {
@@ -1462,6 +1472,7 @@ export class App {
     }
     if (tab === 'data') void this.dataPanel().then((panel) => panel.shown());
     if (tab === 'road') void this.roadPanel();
+    if (tab === 'help') void this.validationPanel().then((panel) => panel.shown());
   }
 
   private pinBaseline(): void {

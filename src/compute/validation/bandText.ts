@@ -30,3 +30,8 @@ export function bandText(band: ReferenceBand): string {
   if (high !== null) return `${band.highOpen ? '<' : '<='} ${formatNumber(high)}`;
   return 'any';
 }
+
+/** A value's text with its unit ("-" for a pure number prints none). */
+export function withUnit(text: string, unit: string): string {
+  return unit === '-' || unit === '' ? text : `${text} ${unit}`;
+}

@@ -1,9 +1,9 @@
-import { formatNumber } from './bandText';
+import { formatNumber, withUnit } from './bandText';
 import type { ValidationReport, ValidationRow } from './types';
 
 function modelText(row: ValidationRow): string {
   if (row.model === null) return `error: ${row.error ?? 'no value'}`;
-  return `${formatNumber(row.model, 8)}${row.note ? ` (${row.note})` : ''}`;
+  return `${withUnit(formatNumber(row.model, 8), row.unit)}${row.note ? ` (${row.note})` : ''}`;
 }
 
 /**
@@ -24,7 +24,7 @@ export function formatValidationTable(report: ValidationReport): string {
       `      case:      ${row.description}`,
       `      source:    ${row.source}`,
       `      strength:  ${row.strength}`,
-      `      reference: ${reference}band ${row.band_text} ${row.unit}`,
+      `      reference: ${withUnit(`${reference}band ${row.band_text}`, row.unit)}`,
       `      model:     ${modelText(row)}`,
     );
   }
