@@ -5,24 +5,18 @@ import type { ReferenceCase, SolveRaw, ValidationRow } from './types';
 /** Evaluate one reference case: the model's value, the band check; an exception becomes a failed row
  * with its message (never thrown). */
 export function evaluateCase(c: ReferenceCase, solve: SolveRaw): ValidationRow {
+  const { compute, ...described } = c;
   const row: ValidationRow = {
-    id: c.id,
-    group: c.group,
-    quantity: c.quantity,
-    description: c.description,
-    source: c.source,
-    strength: c.strength,
-    reference: c.reference,
+    ...described,
     band: { ...c.band },
     band_text: bandText(c.band),
-    unit: c.unit,
     model: null,
     note: null,
     pass: false,
     error: null,
   };
   try {
-    const { value, note } = c.compute(solve);
+    const { value, note } = compute(solve);
     row.model = Number.isFinite(value) ? value : null;
     row.note = note ?? null;
     row.pass = Number.isFinite(value) && inBand(value, c.band);

@@ -33,6 +33,7 @@ import {
   STANDARD_ATMOSPHERE_TOL_REL,
   TURBULENT_FRICTION,
 } from './referenceValues';
+import { richardsonLimit } from './richardsonLimit';
 import type { ReferenceBand, ReferenceCase } from './types';
 
 /** A band of +-tol around a value. */
@@ -72,18 +73,8 @@ export const MODEL_PART_CASES: readonly ReferenceCase[] = [
     unit: '1/rad',
     compute: () => {
       const f = [freeDisc(12, 6), freeDisc(24, 12), freeDisc(48, 24)].map((s) => s.normalSlope);
-      const gci = gridConvergenceIndex({
-        h1: 1 / 48,
-        h2: 1 / 24,
-        h3: 1 / 12,
-        phi1: f[2]!,
-        phi2: f[1]!,
-        phi3: f[0]!,
-      });
-      return {
-        value: gci.extrapolated,
-        note: `observed order ${gci.observedOrder.toFixed(2)}; 48x24 gives ${f[2]!.toFixed(5)}`,
-      };
+      const { limit, order } = richardsonLimit(f[0]!, f[1]!, f[2]!, 48);
+      return { value: limit, note: `observed order ${order.toFixed(2)}; 48x24 gives ${f[2]!.toFixed(5)}` };
     },
   },
   {
@@ -167,36 +158,30 @@ export const MODEL_PART_CASES: readonly ReferenceCase[] = [
     unit: '-',
     compute: () => ({ value: prandtlSchlichtingFriction(PRANDTL_SCHLICHTING_FRICTION.reynolds) }),
   },
-  {
-    id: 'rotating-disc-laminar',
-    group: 'model part',
-    quantity: 'rotating-disc moment coefficient C_M (both sides), laminar',
-    description: `free disc spinning in still air, Re = omega R^2 / nu = ${ROTATING_DISC_MOMENT.laminar.reynolds.toExponential(0)}`,
-    source: 'von Karman (1921), C_M = 3.87 / sqrt(Re); H. Schlichting, Boundary-Layer Theory, ch. 5',
-    strength: 'theory (exact)',
-    reference: ROTATING_DISC_MOMENT.laminar.cm,
-    band: around(
-      ROTATING_DISC_MOMENT.laminar.cm,
-      ROTATING_DISC_MOMENT.tolRel * ROTATING_DISC_MOMENT.laminar.cm,
-    ),
-    unit: '-',
-    compute: () => ({ value: rotatingDiscMomentCoefficient(ROTATING_DISC_MOMENT.laminar.reynolds) }),
-  },
-  {
-    id: 'rotating-disc-turbulent',
-    group: 'model part',
-    quantity: 'rotating-disc moment coefficient C_M (both sides), turbulent',
-    description: `free disc spinning in still air, Re = ${ROTATING_DISC_MOMENT.turbulent.reynolds.toExponential(0)}`,
-    source: 'C_M = 0.146 Re^-0.2; H. Schlichting, Boundary-Layer Theory, ch. 21',
-    strength: 'handbook data',
-    reference: ROTATING_DISC_MOMENT.turbulent.cm,
-    band: around(
-      ROTATING_DISC_MOMENT.turbulent.cm,
-      ROTATING_DISC_MOMENT.tolRel * ROTATING_DISC_MOMENT.turbulent.cm,
-    ),
-    unit: '-',
-    compute: () => ({ value: rotatingDiscMomentCoefficient(ROTATING_DISC_MOMENT.turbulent.reynolds) }),
-  },
+  ...(
+    [
+      [
+        'laminar',
+        'von Karman (1921), C_M = 3.87 / sqrt(Re); H. Schlichting, Boundary-Layer Theory, ch. 5',
+        'theory (exact)',
+      ],
+      ['turbulent', 'C_M = 0.146 Re^-0.2; H. Schlichting, Boundary-Layer Theory, ch. 21', 'handbook data'],
+    ] as const
+  ).map(([regime, source, strength]): ReferenceCase => {
+    const { reynolds, cm } = ROTATING_DISC_MOMENT[regime];
+    return {
+      id: `rotating-disc-${regime}`,
+      group: 'model part',
+      quantity: `rotating-disc moment coefficient C_M (both sides), ${regime}`,
+      description: `free disc spinning in still air, Re = omega R^2 / nu = ${reynolds.toExponential(0)}`,
+      source,
+      strength,
+      reference: cm,
+      band: around(cm, ROTATING_DISC_MOMENT.tolRel * cm),
+      unit: '-',
+      compute: () => ({ value: rotatingDiscMomentCoefficient(reynolds) }),
+    };
+  }),
   {
     id: 'cylinder-drag-re100',
     group: 'model part',

@@ -59,19 +59,11 @@ export interface ReferenceCase {
   compute: (solve: SolveRaw) => ModelValue;
 }
 
-/** One evaluated case: plain data (crosses a worker boundary, prints as JSON). */
-export interface ValidationRow {
-  id: string;
-  group: ReferenceGroup;
-  quantity: string;
-  description: string;
-  source: string;
-  strength: ReferenceStrength;
-  reference: number | null;
-  band: ReferenceBand;
+/** One evaluated case: the case without its computation, plus the result; plain data (crosses a worker
+ * boundary, prints as JSON). */
+export interface ValidationRow extends Omit<ReferenceCase, 'compute'> {
   /** The band in words, e.g. "130 .. 250". */
   band_text: string;
-  unit: string;
   /** The model's value (null when it could not be computed: see error). */
   model: number | null;
   note: string | null;

@@ -5,9 +5,10 @@
  * throughout. The lattice's grid-convergence refinements are off where a row needs no uncertainty
  * (they change no value, only add the GCI); the refinement rows run their own lattices.
  */
-import { gridConvergenceIndex } from '../../model/convergence/gridConvergenceIndex';
+import type { ResultDocument } from '../caseFile';
 import { kmhToMps } from '../units';
 import { KINNER_SLOPE_PER_RAD, MARTIN_WHEEL_ROTATION_AREA } from './referenceValues';
+import { richardsonLimit } from './richardsonLimit';
 import type { ReferenceCase, SolveRaw } from './types';
 import { need, pointAt } from './wheelCaseHelpers';
 
@@ -91,6 +92,13 @@ function discSlope(solve: SolveRaw, ground: boolean, span: number, chord: number
     discCase(0.06, [5], { ground, lattice_span: span, lattice_chord: chord, grid_convergence: false }),
   );
   return need(document.surface.side_slope_per_rad, 'side-force slope');
+}
+
+/** Axial force at a yaw angle over its value at 0 deg, from one solved document. */
+function axialYawRatio(document: ResultDocument, yawDeg: number) {
+  const a0 = need(pointAt(document, 0).axial_N, 'axial force');
+  const a = need(pointAt(document, yawDeg).axial_N, 'axial force');
+  return { value: a / a0, note: `${a.toFixed(3)} N at ${yawDeg} deg, ${a0.toFixed(3)} N at 0 deg` };
 }
 
 export const WHOLE_WHEEL_CASES: readonly ReferenceCase[] = [
@@ -202,12 +210,7 @@ export const WHOLE_WHEEL_CASES: readonly ReferenceCase[] = [
     reference: null,
     band: { low: 0, high: 1, lowOpen: true, highOpen: true },
     unit: '-',
-    compute: (solve) => {
-      const document = solve(discCase(0.06, DISC_YAWS));
-      const a0 = need(pointAt(document, 0).axial_N, 'axial force');
-      const a15 = need(pointAt(document, 15).axial_N, 'axial force');
-      return { value: a15 / a0, note: `${a15.toFixed(3)} N at 15 deg, ${a0.toFixed(3)} N at 0 deg` };
-    },
+    compute: (solve) => axialYawRatio(solve(discCase(0.06, DISC_YAWS)), 15),
   },
   {
     id: 'spoked32-yaw15-ratio',
@@ -219,12 +222,7 @@ export const WHOLE_WHEEL_CASES: readonly ReferenceCase[] = [
     reference: null,
     band: { low: 0.95, high: null },
     unit: '-',
-    compute: (solve) => {
-      const document = solve(spoked32Case(GREENWELL_SPEED_MPS, [0, 15]));
-      const a0 = need(pointAt(document, 0).axial_N, 'axial force');
-      const a15 = need(pointAt(document, 15).axial_N, 'axial force');
-      return { value: a15 / a0, note: `${a15.toFixed(3)} N at 15 deg, ${a0.toFixed(3)} N at 0 deg` };
-    },
+    compute: (solve) => axialYawRatio(solve(spoked32Case(GREENWELL_SPEED_MPS, [0, 15])), 15),
   },
   {
     id: 'design-space-yaw20',
@@ -267,17 +265,10 @@ export const WHOLE_WHEEL_CASES: readonly ReferenceCase[] = [
     unit: '%',
     compute: (solve) => {
       const f = [12, 24, 48].map((n) => discSlope(solve, true, n, n / 2));
-      const gci = gridConvergenceIndex({
-        h1: 1 / 48,
-        h2: 1 / 24,
-        h3: 1 / 12,
-        phi1: f[2]!,
-        phi2: f[1]!,
-        phi3: f[0]!,
-      });
+      const { limit, order } = richardsonLimit(f[0]!, f[1]!, f[2]!, 48);
       return {
-        value: 100 * (f[1]! / gci.extrapolated - 1),
-        note: `24x12 ${f[1]!.toFixed(4)}, limit ${gci.extrapolated.toFixed(4)} (order ${gci.observedOrder.toFixed(2)})`,
+        value: 100 * (f[1]! / limit - 1),
+        note: `24x12 ${f[1]!.toFixed(4)}, limit ${limit.toFixed(4)} (order ${order.toFixed(2)})`,
       };
     },
   },
