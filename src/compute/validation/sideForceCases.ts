@@ -74,7 +74,7 @@ export const SIDE_FORCE_CASES: readonly ReferenceCase[] = [
     quantity:
       'change of side force with tyre width (21.4 -> 26.15 mm) over its change with rim depth (55 -> 90 mm)',
     description:
-      'the wheel above with a 55 mm rim and a 21.4 or 26.15 mm tyre, against the 55 -> 90 mm rim change with a 23 mm tyre; 12.6 deg, 13.4 m/s',
+      'the wheel above with a 55 mm rim and a 21.4 or 26.15 mm tyre, against the 55 -> 90 mm rim change with a 23 mm tyre; 12.6 deg, 13.4 m/s, ISA sea level, ground on, grid convergence off',
     source: CRANE_MORTON,
     strength: 'measured (trend)',
     reference: null,
