@@ -8,6 +8,7 @@
 import {
   type CaseFile,
   type CaseWheel,
+  COMPONENT_NAMES,
   caseAirDensity,
   caseToModelInput,
   parseCaseFile,
@@ -1054,7 +1055,7 @@ export class App {
     ]);
     this.tables.get('table-current')!.setData(curColumns, curRows);
     // Components.
-    const names = ['surface', 'vortex', 'spokes', 'rim_tyre', 'friction'] as const;
+    const names = COMPONENT_NAMES;
     const compColumns: TableColumn[] = [
       { header: 'Yaw, deg', decimals: 2 },
       ...names.map((n) => ({ header: `${n.replace('_', ' & ')} axial, ${fu}`, decimals: fd })),

@@ -5,6 +5,7 @@ export type { StripLatticeSpec } from './buildStripLattice';
 export { buildStripLattice } from './buildStripLattice';
 export { buildWheelLattice, type WheelLattice, type WheelLatticeOptions } from './buildWheelLattice';
 export { DEFAULT_CHORD_COUNT, DEFAULT_SPAN_COUNT } from './defaults';
+export { type EdgeSuctionShares, edgeSuctionShares } from './edgeSuctionShares';
 export { factorLattice } from './factorLattice';
 export { influenceMatrix } from './influenceMatrix';
 export { latticeVelocity } from './latticeVelocity';
