@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { buildWheelLattice } from '../../../src/model/lattice/buildWheelLattice';
 import { edgeSuctionShares } from '../../../src/model/lattice/edgeSuctionShares';
+import { rectangularLattice } from '../../../src/model/lattice/rectangularLattice';
 import { solveLattice } from '../../../src/model/lattice/solveLattice';
-import { rectangularLattice } from './rectangularLattice';
 
 describe('edgeSuctionShares', () => {
   it('converges to the 2-D flat-plate leading-edge suction pi rho V^2 alpha^2 c on a long wing', () => {
