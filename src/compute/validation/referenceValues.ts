@@ -101,7 +101,7 @@ export const MARTIN_EXAMPLE = {
 } as const;
 
 /** Incremental drag area of wheel rotation, F_W, for a pair of 32-spoke wheels (Martin et al. 1998; from
- * memory): 0.0044 m^2, with the tool's acceptance band. */
+ * memory): 0.0044 m^2, with the acceptance band of this tool. */
 export const MARTIN_WHEEL_ROTATION_AREA = { valueM2: 0.0044, lowM2: 0.0029, highM2: 0.0059 } as const;
 
 /** Smooth circular cylinder C_d at Re 100 (Wieselsberger 1921 and Tritton 1959 as plotted in Hoerner,

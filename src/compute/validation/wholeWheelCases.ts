@@ -1,5 +1,5 @@
 /**
- * Whole-wheel rows of the reference set (the tool's acceptance list for whole-wheel figures): every value comes from the public
+ * Whole-wheel rows of the reference set (the acceptance list of this tool for whole-wheel figures): every value comes from the public
  * solve path (a case file, validateCase, solveCase: exactly what `coversweep solve` computes). Sea-level
  * ISA air (15 C, 101325 Pa, dry, 1.225 kg/m^3) and the tunnel convention (ground speed = airspeed)
  * throughout. The lattice's grid-convergence refinements are off where a row needs no uncertainty
@@ -127,7 +127,7 @@ export const WHOLE_WHEEL_CASES: readonly ReferenceCase[] = [
     quantity: "change of a disc's axial drag at 0 deg from a 60 mm to a 20 mm rim under the cover (%)",
     description: `${DISC_TEXT(60)}; the same with a 20 mm rim`,
     source:
-      "a rim hidden under a full cover does not change the wheel's outer shape, so it cannot change the drag much (the tool's acceptance band: less than 10 %)",
+      "a rim hidden under a full cover does not change the wheel's outer shape, so it cannot change the drag much (the acceptance band of this tool: less than 10 %)",
     strength: 'physical reasoning',
     reference: 0,
     band: { low: -10, high: 10, lowOpen: true, highOpen: true },
@@ -164,7 +164,7 @@ export const WHOLE_WHEEL_CASES: readonly ReferenceCase[] = [
     group: 'wheel',
     quantity: "the spokes' share of that wheel's axial drag at 0 deg",
     description: SPOKED32_TEXT('10.76 m/s'),
-    source: `${GREENWELL}: the tyre and rim carry a large share of a spoked wheel's drag (the tool's acceptance band: spokes at most 60 %)`,
+    source: `${GREENWELL}: the tyre and rim carry a large share of a spoked wheel's drag (the acceptance band of this tool: spokes at most 60 %)`,
     strength: 'measured (trend)',
     reference: null,
     band: { low: 0, high: 0.6 },
@@ -182,7 +182,7 @@ export const WHOLE_WHEEL_CASES: readonly ReferenceCase[] = [
     group: 'wheel',
     quantity: 'rotational drag area of a pair of 32-spoke wheels, 2 T omega / (0.5 rho V^3) (m^2)',
     description: SPOKED32_TEXT('40 km/h (11.11 m/s), 0 deg'),
-    source: `${MARTIN}: incremental drag area of wheel rotation F_W = 0.0044 m^2 (from memory); the tool's acceptance band 0.0029-0.0059`,
+    source: `${MARTIN}: incremental drag area of wheel rotation F_W = 0.0044 m^2 (from memory); the acceptance band of this tool 0.0029-0.0059`,
     strength: 'measured',
     reference: MARTIN_WHEEL_ROTATION_AREA.valueM2,
     band: { low: MARTIN_WHEEL_ROTATION_AREA.lowM2, high: MARTIN_WHEEL_ROTATION_AREA.highM2 },
@@ -217,7 +217,7 @@ export const WHOLE_WHEEL_CASES: readonly ReferenceCase[] = [
     group: 'wheel',
     quantity: "a shallow 32-spoke wheel's axial drag at 15 deg over its value at 0 deg",
     description: SPOKED32_TEXT('10.76 m/s'),
-    source: `${GREENWELL}; ${TEW_SAYERS}: a shallow spoked wheel's axial drag does not fall with yaw (trend, from memory; the tool's acceptance band: at least 0.95)`,
+    source: `${GREENWELL}; ${TEW_SAYERS}: a shallow spoked wheel's axial drag does not fall with yaw (trend, from memory; the acceptance band of this tool: at least 0.95)`,
     strength: 'measured (trend)',
     reference: null,
     band: { low: 0.95, high: null },
@@ -230,7 +230,7 @@ export const WHOLE_WHEEL_CASES: readonly ReferenceCase[] = [
     quantity: "lowest axial force at 20 deg over the page's default design space (N)",
     description:
       "the page's default wheel (R 0.334 m, 25 mm tyre, 20 round spokes) at 50 km/h, 20 deg, cover fraction 0..1 in tenths (at the rim) x rim depth 10..100 mm (66 wheels), ISA sea level, ground on, grid convergence off",
-    source: `${GREENWELL}; ${TEW_SAYERS} (axial drag stays positive at 15 deg, from memory); no published source found that shows these wheels' axial drag below zero at 20 deg (the tool's acceptance rule)`,
+    source: `${GREENWELL}; ${TEW_SAYERS} (axial drag stays positive at 15 deg, from memory); no published source found that shows these wheels' axial drag below zero at 20 deg (the acceptance rule of this tool)`,
     strength: 'measured (trend)',
     reference: null,
     band: { low: 0, high: null },
@@ -258,7 +258,7 @@ export const WHOLE_WHEEL_CASES: readonly ReferenceCase[] = [
     description:
       'disc over a 60 mm rim, R 0.335 m, ground on; wheel lattices 12x6, 24x12, 48x24 through the solve path; limit by Richardson extrapolation (Celik et al. 2008 procedure); band +-1 %',
     source:
-      'refinement study of the model itself (P. J. Roache 1994, J. Fluids Eng. 116; Celik et al. 2008, J. Fluids Eng. 130, 078001); the tool's acceptance band: within 1 %',
+      'refinement study of the model itself (P. J. Roache 1994, J. Fluids Eng. 116; Celik et al. 2008, J. Fluids Eng. 130, 078001); the acceptance band of this tool: within 1 %',
     strength: 'numerical (refinement study)',
     reference: 0,
     band: { low: -1, high: 1 },
