@@ -49,7 +49,7 @@ import {
   unitText,
 } from './displayUnits';
 import { downloadBlob, downloadText, safeFileStem } from './download';
-import { crashPoolWorker, scriptStartMs, spawnTracked, workersReadyMs } from './earlyPool';
+import { crashPoolWorker, hangPoolWorkers, scriptStartMs, spawnTracked, workersReadyMs } from './earlyPool';
 import type { Field, FieldValue } from './fields';
 import { JobWorker } from './jobWorker';
 import { LinePlot, type PlotSeries } from './linePlot';
@@ -66,6 +66,7 @@ import {
   type ViewState,
   validateView,
 } from './viewState';
+import { type HangReport, onWorkerHang } from './watchdog';
 
 interface Results {
   plan: ComputePlan;
@@ -157,6 +158,22 @@ export class App {
       handling: new LinePlot(plotDiv('fig-handling')),
     };
     this.designMap = new DesignMap(byId('fig-map').querySelector<HTMLElement>('.map')!);
+    onWorkerHang((r) => this.workerHung(r));
+  }
+
+  /** The watchdog stopped a hung solver worker: say so (the pool replaces it and retries the job once). */
+  private workerHung(r: HangReport): void {
+    const hangs = Number(document.body.dataset.workerHangs ?? '0') + 1;
+    document.body.dataset.workerHangs = String(hangs);
+    const what = `a job of ${r.cases} design${r.cases === 1 ? '' : 's'}`;
+    this.messages.show(
+      'warning',
+      `A solver worker stopped answering (no answer in ${Math.round(r.deadlineMs / 1000)} s for ${what}). It was stopped and replaced; its job is retried once on a fresh worker, and reported here if it fails again.`,
+      [],
+      'hang',
+    );
+    byId('status-text').textContent =
+      'A solver worker stopped answering: retrying its job on a fresh worker…';
   }
 
   private plotSpec(name: PlotName) {
@@ -218,14 +235,19 @@ export class App {
     this.apply(this.state, { replaceUrl: true });
     window.addEventListener('hashchange', () => this.onHashChange());
     // Inspection for the browser tests and the curious: what each plot shows, the state, the last ride
-    // and comparison; and one test hook, which crashes a sweep worker as a real crash would.
-    (window as unknown as { coversweep: unknown }).coversweep = {
+    // and comparison. The browser tests' build (vite build --mode e2e) adds hooks that crash or hang a
+    // sweep worker as a real fault would; the production build leaves them out.
+    const inspect: Record<string, unknown> = {
       plot: (name: PlotName) => this.plotSpec(name),
       state: () => structuredClone(this.state),
       ride: () => structuredClone(this.road?.lastResult()?.document ?? null),
       comparison: () => structuredClone(this.data?.lastReport() ?? null),
-      crashWorker: () => crashPoolWorker(),
     };
+    if (import.meta.env.MODE === 'e2e') {
+      inspect.crashWorker = () => crashPoolWorker();
+      inspect.hangWorkers = (deadlineMs: number) => hangPoolWorkers(deadlineMs);
+    }
+    (window as unknown as { coversweep: unknown }).coversweep = inspect;
   }
 
   // -------------------------------------------------------------------------------------------

@@ -1,6 +1,7 @@
 /**
  * End-to-end tests of the web page in headless Chromium (playwright-core, the system's
- * /usr/bin/chromium; no browser is downloaded). The page is built once (vite build into
+ * /usr/bin/chromium; no browser is downloaded). The page is built once (vite build --mode e2e, which keeps
+ * the test hooks, into
  * test-results/ui-dist) and served by `vite preview` on a free port for the whole file.
  * Tests wait for document.body.dataset.state === 'done', never for timers.
  * Screenshots go to test-results/ui-*.png.
@@ -146,10 +147,14 @@ describe.skipIf(!haveBrowser && !requireBrowser)('web page in headless Chromium'
   beforeAll(async () => {
     if (!haveBrowser) throw new Error(`${CHROMIUM} is missing and COVERSWEEP_REQUIRE_BROWSER=1`);
     mkdirSync(OUT, { recursive: true });
-    execFileSync(process.execPath, [VITE, 'build', '--outDir', DIST, '--emptyOutDir', '--logLevel', 'warn'], {
-      cwd: ROOT,
-      stdio: 'pipe',
-    });
+    execFileSync(
+      process.execPath,
+      [VITE, 'build', '--mode', 'e2e', '--outDir', DIST, '--emptyOutDir', '--logLevel', 'warn'],
+      {
+        cwd: ROOT,
+        stdio: 'pipe',
+      },
+    );
     const port = await freePort();
     server = spawn(
       process.execPath,
