@@ -13,7 +13,7 @@ import {
   parseCaseFile,
   validateCase,
 } from '../compute/caseFile';
-import type { CalibrationResult, CompareResult } from '../compute/compare/index';
+import type { CalibrationResult } from '../compute/compare/index';
 import type { ViewField } from '../compute/engine/protocol';
 import { runSweep, type SweepProgress } from '../compute/engine/runSweep';
 import type { WorkerPool } from '../compute/engine/workerPool';
@@ -34,6 +34,7 @@ import {
 import type { BrowserWorkerHandle } from './browserWorker';
 import { type ComputePlan, computePlan } from './computePlan';
 import { Controls } from './controls';
+import type { PackedResult, ReadOutcome } from './dataJobs';
 import type { DataContext, DataPanel, DataPlotName, DataRunRequest } from './dataPanel';
 import { type Cell, DataTable, type TableColumn } from './dataTable';
 import { defaultCase } from './defaultCase';
@@ -202,6 +203,15 @@ export class App {
     this.dataLoading ??= import('./dataPanel').then(({ DataPanel }) => {
       const panel: DataPanel = new DataPanel(byId('panel-data'), {
         context: () => this.dataContext(),
+        read: async (ref, context) => {
+          const out = await this.dataWorker.run<ReadOutcome>(
+            (api) => api.readTable(ref, context),
+            readDeadlineMs(ref.source.kind === 'file' ? ref.source.file.size : ref.source.text.length),
+          );
+          if (out.status === 'superseded' || out.status === 'cancelled') return null;
+          if (out.status === 'failed') return { ok: false, errors: [out.error] };
+          return out.value;
+        },
         onLoadDemo: () => void this.loadDemoData(panel),
         onRun: (request) => void this.runComparison(panel, request),
         onCancel: () => {
@@ -1651,7 +1661,7 @@ export class App {
         'demo',
       );
       panel.setDefaultRanges(caseAirDensity(c.value));
-      panel.readText(csvText, 'demo-tunnel.csv');
+      await panel.readText(csvText, 'demo-tunnel.csv');
     } catch (error) {
       panel.setStatus('error', `The demo data could not be loaded: ${(error as Error).message}`);
     }
@@ -1660,16 +1670,19 @@ export class App {
   private async runComparison(panel: DataPanel, req: DataRunRequest): Promise<void> {
     const caseFile: CaseFile = this.state.case;
     panel.setDefaultRanges(caseAirDensity(caseFile));
-    const out = await this.dataWorker.run<CompareResult>((api) =>
-      api.compare({
-        caseFile,
-        table: req.table,
-        map: req.map,
-        dataLabel: req.label,
-        calibrate: req.calibrate ? {} : false,
-        convergence: req.convergence ? {} : false,
-        uncertainty: req.uncertainty ? { ranges: req.uncertainty } : false,
-      }),
+    const heavy = req.calibrate || req.convergence || req.uncertainty !== null;
+    const out = await this.dataWorker.run<PackedResult>(
+      (api) =>
+        api.compareTable({
+          caseFile,
+          ref: req.ref,
+          map: req.map,
+          dataLabel: req.label,
+          calibrate: req.calibrate ? {} : false,
+          convergence: req.convergence ? {} : false,
+          uncertainty: req.uncertainty ? { ranges: req.uncertainty } : false,
+        }),
+      compareDeadlineMs(req.rowCount, heavy),
     );
     if (out.status === 'superseded' || out.status === 'cancelled') return;
     if (out.status === 'failed') {
@@ -1720,6 +1733,20 @@ export class App {
       : '';
     this.data?.setCalibratedInUse(mark !== null);
   }
+}
+
+/**
+ * Deadlines of the data panel's background jobs (a worker silent for longer is taken as hung, replaced
+ * and the job retried once): generous on purpose, scaled by the job's size. Reading: 60 s plus 10 s per
+ * MB (reading runs at tens of MB/s). Comparing: 60 s plus 2 ms per data row, 50 times that for a fit,
+ * a convergence study or an uncertainty band (each evaluates the model many times per row).
+ */
+function readDeadlineMs(bytes: number): number {
+  return 60_000 + (10_000 * bytes) / 1_048_576;
+}
+
+function compareDeadlineMs(rows: number, heavy: boolean): number {
+  return 60_000 + 2 * rows * (heavy ? 50 : 1);
 }
 
 function byId<T extends HTMLElement = HTMLElement>(id: string): T {

@@ -9,6 +9,7 @@ import { type Remote, wrap } from 'comlink';
 import type { PageJobsApi } from '../compute/engine/pageJobs';
 import type { SolverApi } from '../compute/engine/protocol';
 import type { WorkerHandle } from '../compute/engine/workerPool';
+import type { DataJobsApi } from './dataJobs';
 
 export interface BrowserWorkerHandle extends WorkerHandle {
   /** The worker's own interface (`api` may be wrapped, e.g. by the watchdog). */
@@ -17,8 +18,11 @@ export interface BrowserWorkerHandle extends WorkerHandle {
   crash(reason?: string): void;
 }
 
+/** The page-jobs worker's interface: rides and comparisons, and the data panel's tables. */
+export type PageWorkerApi = PageJobsApi & DataJobsApi;
+
 export interface PageJobsHandle {
-  api: Remote<PageJobsApi>;
+  api: Remote<PageWorkerApi>;
   failed: Promise<never>;
   terminate(): void;
 }
@@ -56,5 +60,5 @@ export function spawnBrowserWorker(): BrowserWorkerHandle {
 export function spawnPageJobsWorker(): PageJobsHandle {
   const worker = new Worker(new URL('./pageJobs.worker.ts', import.meta.url), { type: 'module' });
   const { failed } = watch(worker, 'ride and comparison worker');
-  return { api: wrap<PageJobsApi>(worker), failed, terminate: () => worker.terminate() };
+  return { api: wrap<PageWorkerApi>(worker), failed, terminate: () => worker.terminate() };
 }
