@@ -25,12 +25,14 @@ import {
   type AppState,
   type CalibrationMark,
   hashToState,
-  loadAutosave,
+  MAX_LINK_CHARS,
+  MAX_PROJECT_BYTES,
+  nameErrors,
   projectTextToState,
-  saveAutosave,
-  stateToHash,
+  stateToHashOrNull,
   stateToProjectText,
 } from './appState';
+import { AutosaveStore, type KeptCopy } from './autosave';
 import type { BrowserWorkerHandle } from './browserWorker';
 import { type ComputePlan, computePlan } from './computePlan';
 import { Controls } from './controls';
@@ -148,6 +150,11 @@ export class App {
   private lastCaseKey = '';
   private roadShown: { road: string; unit: string } = { road: '', unit: '' };
 
+  private readonly autosave = new AutosaveStore(localStorage);
+  /** Set aside at start-up (an unreadable autosave, or the autosave replaced by a link's design). */
+  private startupKept: { copy: KeptCopy | string; what: 'unreadable' | 'link'; errors: string[] } | null =
+    null;
+
   constructor(pool: WorkerPool) {
     this.messages = new Messages(byId('messages'));
     this.state = this.initialState();
@@ -244,6 +251,10 @@ export class App {
     this.wireTabs();
     this.apply(this.state, { replaceUrl: true });
     window.addEventListener('hashchange', () => this.onHashChange());
+    window.addEventListener('storage', (event) => {
+      if (this.autosave.isOtherTabSave(event)) this.otherTabSaved();
+    });
+    this.reportStartupKept();
     // Inspection for the browser tests and the curious: what each plot shows, the state, the last ride
     // and comparison. The browser tests' build (vite build --mode e2e) adds hooks that crash or hang a
     // sweep worker as a real fault would; the production build leaves them out.
@@ -265,16 +276,25 @@ export class App {
 
   private initialState(): AppState {
     const fromHash = hashToState(location.hash);
-    if (fromHash?.ok) return fromHash.value;
-    let fallback: AppState | null = null;
-    const saved = loadAutosave(localStorage);
-    if (saved?.ok) fallback = saved.value;
-    else if (saved && !saved.ok) {
-      this.messages.show(
-        'warning',
-        'The autosaved design could not be read; starting from the demo wheel.',
-        saved.errors,
+    const saved = this.autosave.load();
+    if (saved.kind === 'unreadable') {
+      // Never replaced unseen: keep it, byte for byte, before anything else is saved.
+      const copy = this.autosave.keepAside(
+        saved.text,
+        `the autosave could not be read: ${saved.errors[0] ?? 'unknown fault'}`,
       );
+      this.startupKept = { copy, what: 'unreadable', errors: saved.errors };
+    }
+    const fallback = saved.kind === 'ok' ? saved.state : null;
+    if (fromHash?.ok) {
+      if (saved.kind === 'ok' && saved.text !== stateToProjectText(fromHash.value)) {
+        const copy = this.autosave.keepAside(
+          saved.text,
+          'your autosaved design, set aside when a link was opened',
+        );
+        this.startupKept = { copy, what: 'link', errors: [] };
+      }
+      return fromHash.value;
     }
     if (fromHash && !fromHash.ok) {
       this.messages.show(
@@ -287,8 +307,91 @@ export class App {
     return fallback ?? { case: defaultCase(), view: defaultView(), baseline: null };
   }
 
+  /** Say what was set aside at start-up, with buttons to restore or download it. */
+  private reportStartupKept(): void {
+    const k = this.startupKept;
+    if (!k) return;
+    if (typeof k.copy === 'string') {
+      this.messages.show(
+        'error',
+        'The autosaved design could not be read, and no copy could be kept; this tab does not autosave until you reload.',
+        [k.copy, ...k.errors],
+        'autosave',
+      );
+      return;
+    }
+    const copy = k.copy;
+    if (k.what === 'unreadable') {
+      this.messages.show(
+        'warning',
+        'The autosaved design could not be read; starting from the demo wheel. The unreadable autosave was kept aside unchanged: download it to repair or report it.',
+        k.errors,
+        'autosave',
+        [this.downloadKeptAction(copy)],
+      );
+    } else {
+      this.messages.show(
+        'info',
+        'Opened the design from the link. Your own autosaved design was kept aside, not overwritten.',
+        [],
+        'autosave',
+        [this.restoreKeptAction(copy), this.downloadKeptAction(copy)],
+      );
+    }
+  }
+
+  private downloadKeptAction(copy: KeptCopy) {
+    return {
+      label: 'Download it',
+      name: 'download-kept',
+      onClick: () =>
+        downloadText(
+          `coversweep-kept-${copy.keptAt.replace(/[:.]/g, '-')}.json`,
+          copy.text,
+          'application/json',
+        ),
+    };
+  }
+
+  private restoreKeptAction(copy: KeptCopy) {
+    return {
+      label: 'Restore it',
+      name: 'restore-kept',
+      onClick: () => {
+        const r = projectTextToState(copy.text, 'kept design');
+        if (!r.ok) {
+          this.messages.show('error', 'The kept design could not be read.', r.errors, 'autosave');
+          return;
+        }
+        // The design shown now is kept aside in its turn, so restoring loses nothing.
+        this.autosave.keepAside(
+          stateToProjectText(this.state),
+          'the design shown before a kept one was restored',
+        );
+        this.messages.clear('autosave');
+        this.apply(r.value);
+        this.messages.show(
+          'info',
+          'Restored the kept design; the one shown before it was kept aside.',
+          [],
+          'autosave',
+        );
+      },
+    };
+  }
+
+  /** Another tab saved its design to the shared autosave. */
+  private otherTabSaved(): void {
+    this.messages.show(
+      'info',
+      'Another tab saved a different design to this browser’s autosave. This tab keeps showing its own; if you change it here, the other tab’s design is kept aside first (not lost), and you can restore it from the notice.',
+      [],
+      'tabs',
+    );
+  }
+
   private onHashChange(): void {
-    if (location.hash === stateToHash(this.state)) return;
+    if (location.hash === (stateToHashOrNull(this.state) ?? '')) return;
     const parsed = hashToState(location.hash);
     if (parsed === null) return;
     if (!parsed.ok) {
@@ -298,20 +401,37 @@ export class App {
         parsed.errors,
         'link',
       );
-      history.replaceState(null, '', stateToHash(this.state));
+      this.showHash(this.state, true);
       return;
     }
     this.messages.clear('link');
+    const before = stateToProjectText(this.state);
+    const keptCopy =
+      before !== stateToProjectText(parsed.value)
+        ? this.autosave.keepAside(before, 'the design shown when a link was opened in its tab')
+        : null;
     this.apply(parsed.value, { replaceUrl: false });
+    if (keptCopy !== null) {
+      this.startupKept = { copy: keptCopy, what: 'link', errors: [] };
+      this.reportStartupKept();
+    }
   }
 
   /** Make `next` the state: autosave, URL, controls, then recompute or redraw. */
   private apply(next: AppState, opts: { replaceUrl: boolean } = { replaceUrl: true }): void {
     this.state = next;
-    const err = saveAutosave(localStorage, next);
-    if (err) this.messages.show('warning', 'Autosave failed', [err], 'autosave');
-    const hash = stateToHash(next);
-    if (opts.replaceUrl || location.hash !== hash) history.replaceState(null, '', hash);
+    const saved = this.autosave.save(next);
+    if (saved.error) this.messages.show('warning', 'Autosave failed', [saved.error], 'autosave');
+    if (saved.kept) {
+      this.messages.show(
+        'warning',
+        'Another tab had autosaved a different design since this tab last saved: it was kept aside before this tab’s change was saved.',
+        [],
+        'tabs',
+        [this.restoreKeptAction(saved.kept), this.downloadKeptAction(saved.kept)],
+      );
+    }
+    this.showHash(next, opts.replaceUrl);
     this.controls.refresh(next);
     byId('clear-baseline').hidden = next.baseline === null;
     this.showTab(next.view.tab, false);
@@ -336,6 +456,23 @@ export class App {
     if (next.view.tab === 'road') this.scheduleRide(200);
   }
 
+  /** Put the state in the address bar, or clear it there (and say so) when too long for a link. */
+  private showHash(state: AppState, always: boolean): void {
+    const hash = stateToHashOrNull(state);
+    if (hash === null) {
+      history.replaceState(null, '', `${location.pathname}${location.search}`);
+      this.messages.show(
+        'warning',
+        `This design is too large for a link (more than ${MAX_LINK_CHARS / 1024} kB), so the address no longer holds it; it is still autosaved here. Save a project file to share it.`,
+        [],
+        'link-size',
+      );
+      return;
+    }
+    this.messages.clear('link-size');
+    if (always || location.hash !== hash) history.replaceState(null, '', hash);
+  }
+
   private onEdit(field: Field, value: FieldValue): void {
     const ctx = { case: this.state.case, view: this.state.view };
     const raw = structuredClone(
@@ -349,6 +486,12 @@ export class App {
     }
     if (field.target === 'case') {
       const r = validateCase(raw);
+      const long = r.ok ? nameErrors({ case: r.value }, 'design') : [];
+      if (long.length > 0) {
+        this.messages.show('error', `Not applied: ${field.label(ctx)}`, long, 'edit');
+        this.controls.revert(field.key, { case: this.state.case, view: this.state.view });
+        return;
+      }
       if (!r.ok) {
         this.messages.show(
           'error',
@@ -1408,6 +1551,8 @@ export class App {
       void this.openFile(input, (text, name) => {
         const r = parseCaseFile(text);
         if (!r.ok) return r.errors.map((e) => `${name}: ${e}`);
+        const long = nameErrors({ case: r.value }, name);
+        if (long.length > 0) return long;
         this.apply({ ...this.state, case: r.value });
         return null;
       });
@@ -1438,7 +1583,10 @@ export class App {
     if (!file) return;
     let text: string;
     try {
-      if (file.size > 2_000_000) throw new Error(`the file is ${file.size} bytes; a design file is a few kB`);
+      if (file.size > MAX_PROJECT_BYTES)
+        throw new Error(
+          `the file is ${Math.round(file.size / 1024)} kB, more than the ${MAX_PROJECT_BYTES / 1024} kB limit; a design file is a few kB`,
+        );
       text = await file.text();
     } catch (error) {
       this.messages.show(
