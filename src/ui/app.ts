@@ -52,6 +52,7 @@ import {
   unitText,
 } from './displayUnits';
 import { downloadBlob, downloadText, safeFileStem } from './download';
+import { type DurableCopy, writeDurable } from './durableAutosave';
 import { crashPoolWorker, hangPoolWorkers, scriptStartMs, spawnTracked, workersReadyMs } from './earlyPool';
 import type { Field, FieldValue } from './fields';
 import { JobWorker } from './jobWorker';
@@ -150,12 +151,14 @@ export class App {
   private lastCaseKey = '';
   private roadShown: { road: string; unit: string } = { road: '', unit: '' };
 
-  private readonly autosave = new AutosaveStore(localStorage);
+  private readonly autosave: AutosaveStore;
   /** Set aside at start-up (an unreadable autosave, or the autosave replaced by a link's design). */
   private startupKept: { copy: KeptCopy | string; what: 'unreadable' | 'link'; errors: string[] } | null =
     null;
 
-  constructor(pool: WorkerPool) {
+  /** `durable`: the autosave's durable copy, read before the page starts (main.ts). */
+  constructor(pool: WorkerPool, durable: DurableCopy | null = null) {
+    this.autosave = new AutosaveStore(localStorage, durable, writeDurable);
     this.messages = new Messages(byId('messages'));
     this.state = this.initialState();
     this.pool = pool;
@@ -1841,7 +1844,7 @@ export class App {
       panel.showErrors('The data could not be compared with the model:', out.value.errors);
       return;
     }
-    panel.showReport(out.value.value, req);
+    await panel.showReport(out.value.value, req);
   }
 
   private useCalibrated(use: boolean, calibration: CalibrationResult | null, points: number): void {

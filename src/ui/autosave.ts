@@ -9,10 +9,14 @@
  *   aside first (and says so); a tab is also told at once (the 'storage' event) when another tab saves.
  * - Opening a link keeps the autosaved design aside (when it differs) before the link's design is saved.
  *
+ * Each save is also mirrored to a durable copy (IndexedDB, durableAutosave.ts); at start-up the newer
+ * of the two is read, so an edit survives a browser killed right after it.
+ *
  * Kept copies live under their own key (newest first, at most MAX_KEPT; the oldest beyond that is
  * dropped, and the page says how many are kept) and can be restored or downloaded from the page.
  */
 import { type AppState, AUTOSAVE_KEY, projectTextToState, stateToProjectText } from './appState';
+import type { DurableCopy } from './durableAutosave';
 
 export const AUTOSAVE_META_KEY = 'coversweep.autosave.meta.v1';
 export const KEPT_KEY = 'coversweep.autosave.kept.v1';
@@ -94,7 +98,13 @@ export class AutosaveStore {
   private rev = 0;
   private serial = 0;
 
-  constructor(private readonly storage: StorageLike) {}
+  constructor(
+    private readonly storage: StorageLike,
+    /** The durable copy read at start-up, if any. */
+    private readonly durable: DurableCopy | null = null,
+    /** Writes the durable copy after each save. */
+    private readonly mirror: (copy: DurableCopy) => void = () => undefined,
+  ) {}
 
   /** Read the autosave (and note its revision as seen by this tab). */
   load(): LoadedAutosave {
@@ -104,7 +114,20 @@ export class AutosaveStore {
     } catch {
       return { kind: 'none' };
     }
-    this.rev = readMeta(this.storage)?.rev ?? 0;
+    const meta = readMeta(this.storage);
+    this.rev = meta?.rev ?? 0;
+    const d = this.durable;
+    if (d && d.rev > this.rev && d.text !== text) {
+      // localStorage lost the latest save (the browser was killed before writing it to disk).
+      text = d.text;
+      this.rev = d.rev;
+      try {
+        this.storage.setItem(AUTOSAVE_KEY, text);
+        this.storage.setItem(AUTOSAVE_META_KEY, JSON.stringify({ rev: d.rev, tab: d.tab }));
+      } catch {
+        // read-only storage: the durable copy is still used
+      }
+    }
     if (text === null) return { kind: 'none' };
     const r = projectTextToState(text, 'autosave');
     return r.ok ? { kind: 'ok', state: r.value, text } : { kind: 'unreadable', errors: r.errors, text };
@@ -155,6 +178,7 @@ export class AutosaveStore {
       this.storage.setItem(AUTOSAVE_KEY, text);
       this.storage.setItem(AUTOSAVE_META_KEY, JSON.stringify({ rev, tab: this.tab }));
       this.rev = rev;
+      this.mirror({ rev, tab: this.tab, text });
       return { kept, error: null };
     } catch (error) {
       return { kept, error: `autosave failed: ${(error as Error).message}` };

@@ -760,7 +760,15 @@ export class DataPanel {
     );
   }
 
-  showReport(packed: PackedComparison, request: DataRunRequest): void {
+  /** Counts showReport calls: a newer report stops an older one still drawing. */
+  private reportsShown = 0;
+
+  /**
+   * Show a comparison. Drawn in steps, the page getting control back between them (each plot forces a
+   * layout; a large table's page is built on its own), so no single task blocks the page for long.
+   */
+  async showReport(packed: PackedComparison, request: DataRunRequest): Promise<void> {
+    const token = ++this.reportsShown;
     const ctx = this.handlers.context();
     this.ctx = ctx;
     const fresh = packed.report;
@@ -790,8 +798,16 @@ export class DataPanel {
           ]),
     );
     if (request.calibrate && report.calibration) this.calibration = report.calibration;
-    this.renderOverlay(report);
-    this.renderResiduals(report);
+    const steps = [
+      () => this.renderOverlay(report, 'dataForce'),
+      () => this.renderOverlay(report, 'dataSide'),
+      () => this.renderResiduals(report),
+    ];
+    for (const step of steps) {
+      await new Promise((resolve) => setTimeout(resolve, 0));
+      if (token !== this.reportsShown) return;
+      step();
+    }
     this.renderFit();
     this.convergenceBlock.hidden = !report.convergence;
     if (report.convergence) this.renderConvergence(report);
@@ -809,7 +825,7 @@ export class DataPanel {
     );
   }
 
-  private renderOverlay(report: CompareReport): void {
+  private renderOverlay(report: CompareReport, which: DataPlotName): void {
     const outs = new Set(report.band.map((b) => b.output));
     const conv = this.packed!.converted;
     this.plotStride = Math.max(1, Math.ceil(conv.count / MAX_PLOTTED_POINTS));
@@ -823,8 +839,8 @@ export class DataPanel {
       : outs.has('yaw_moment_Nm')
         ? 'yaw_moment_Nm'
         : first;
-    this.renderOne('dataForce', first, report);
-    this.renderOne('dataSide', second, report);
+    if (which === 'dataForce') this.renderOne('dataForce', first, report);
+    else this.renderOne('dataSide', second, report);
   }
 
   /** Every how many data points one is drawn (1 up to MAX_PLOTTED_POINTS points). */

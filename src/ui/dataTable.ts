@@ -25,7 +25,7 @@ export interface RowSource {
 }
 
 /** Most rows in the document at once. */
-export const PAGE_ROWS = 500;
+export const PAGE_ROWS = 100;
 
 export function rowsSource(rows: readonly Cell[][]): RowSource {
   return { count: rows.length, cell: (i, k) => rows[i]![k] ?? null };
