@@ -804,8 +804,15 @@ export class DataPanel {
       () => this.renderResiduals(report),
     ];
     for (const step of steps) {
-      // After the next frame: the browser lays out and paints what the last step changed on its own.
-      await new Promise((resolve) => requestAnimationFrame(() => setTimeout(resolve, 0)));
+      // After the next frame (the browser lays out and paints what the last step changed on its own),
+      // or after 100 ms in a hidden tab, which has no frames.
+      await new Promise((resolve) => {
+        const late = setTimeout(resolve, 100);
+        requestAnimationFrame(() => {
+          clearTimeout(late);
+          setTimeout(resolve, 0);
+        });
+      });
       if (token !== this.reportsShown) return;
       step();
     }
