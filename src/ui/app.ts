@@ -1507,6 +1507,15 @@ export class App {
       this.messages.clear('baseline');
     });
     byId('copy-link').addEventListener('click', () => {
+      if (stateToHashOrNull(this.state) === null) {
+        this.messages.show(
+          'error',
+          `No link made: this design is too large for a link (more than ${MAX_LINK_CHARS / 1024} kB). Save a project file to share it.`,
+          [],
+          'link-copy',
+        );
+        return;
+      }
       const link = location.href;
       navigator.clipboard?.writeText(link).then(
         () =>
