@@ -725,7 +725,10 @@ export class DataPanel {
     return this.plots[name].currentSpec();
   }
 
-  /** The last comparison in full (its per-point rows rebuilt from the columns: for inspection). */
+  /**
+   * The last comparison in full, once all of it is on screen (its per-point rows rebuilt from the
+   * columns: for inspection).
+   */
   lastReport(): CompareReport | null {
     if (!this.report || !this.packed) return null;
     return { ...unpackComparison({ ...this.packed, report: this.report }) };
@@ -777,7 +780,7 @@ export class DataPanel {
     const report: CompareReport = { ...fresh };
     if (this.convergence) report.convergence = this.convergence;
     if (this.uncertainty) report.uncertainty = this.uncertainty;
-    this.report = report;
+    this.report = null; // until it is all on screen
     this.packed = packed;
     this.results.hidden = false;
     const n = packed.converted.count;
@@ -798,14 +801,20 @@ export class DataPanel {
           ]),
     );
     if (request.calibrate && report.calibration) this.calibration = report.calibration;
+    // The small tables at once...
+    this.renderFit();
+    this.convergenceBlock.hidden = !report.convergence;
+    if (report.convergence) this.renderConvergence(report);
+    this.uncertaintyBlock.hidden = !report.uncertainty;
+    if (report.uncertainty) this.renderUncertainty(report);
+    // ...then the plots and the residuals, each after the next frame (or after 100 ms in a hidden tab,
+    // which has no frames), so the browser lays out and paints each on its own.
     const steps = [
       () => this.renderOverlay(report, 'dataForce'),
       () => this.renderOverlay(report, 'dataSide'),
       () => this.renderResiduals(report),
     ];
     for (const step of steps) {
-      // After the next frame (the browser lays out and paints what the last step changed on its own),
-      // or after 100 ms in a hidden tab, which has no frames.
       await new Promise((resolve) => {
         const late = setTimeout(resolve, 100);
         requestAnimationFrame(() => {
@@ -816,11 +825,7 @@ export class DataPanel {
       if (token !== this.reportsShown) return;
       step();
     }
-    this.renderFit();
-    this.convergenceBlock.hidden = !report.convergence;
-    if (report.convergence) this.renderConvergence(report);
-    this.uncertaintyBlock.hidden = !report.uncertainty;
-    if (report.uncertainty) this.renderUncertainty(report);
+    this.report = report;
     this.setStatus(
       'done',
       request.calibrate

@@ -53,6 +53,14 @@ export function overrideDeadline(h: BrowserWorkerHandle, ms: number): void {
 /** Put a deadline on every solver job sent to `h` (its `api.solveJob` is wrapped; the rest unchanged). */
 export function watchSolver(h: BrowserWorkerHandle): void {
   const raw = h.api;
+  // A worker stopped on purpose (a cancelled run, a replaced worker) is not hung: its timers go too.
+  const timers = new Set<ReturnType<typeof setTimeout>>();
+  const terminate = h.terminate;
+  h.terminate = () => {
+    for (const t of timers) clearTimeout(t);
+    timers.clear();
+    terminate();
+  };
   const watched = {
     ping: () => raw.ping(),
     viewField: (request: Parameters<SolverApi['viewField']>[0]) => raw.viewField(request),
@@ -60,18 +68,24 @@ export function watchSolver(h: BrowserWorkerHandle): void {
       new Promise((resolve, reject) => {
         const deadlineMs = overrides.get(h) ?? jobDeadlineMs(job);
         const timer = setTimeout(() => {
+          timers.delete(timer);
           listener({ cases: job.cases.length, deadlineMs });
           h.crash(
             `solver worker stopped answering (no answer in ${Math.round(deadlineMs / 1000)} s for a job of ${job.cases.length} design${job.cases.length === 1 ? '' : 's'})`,
           );
         }, deadlineMs);
+        timers.add(timer);
+        const done = () => {
+          clearTimeout(timer);
+          timers.delete(timer);
+        };
         raw.solveJob(job).then(
           (value) => {
-            clearTimeout(timer);
+            done();
             resolve(value);
           },
           (error: unknown) => {
-            clearTimeout(timer);
+            done();
             reject(error);
           },
         );
