@@ -256,6 +256,7 @@ export class App {
     window.addEventListener('hashchange', () => this.onHashChange());
     window.addEventListener('storage', (event) => {
       if (this.autosave.isOtherTabSave(event)) this.otherTabSaved();
+      this.refreshKeptButton();
     });
     this.reportStartupKept();
     // Inspection for the browser tests and the curious: what each plot shows, the state, the last ride
@@ -383,6 +384,28 @@ export class App {
     };
   }
 
+  /** Show or hide the "Kept designs" button (shown while copies are kept). */
+  private refreshKeptButton(): void {
+    const n = this.autosave.kept().length;
+    const b = byId('kept-designs');
+    b.hidden = n === 0;
+    b.textContent = `Kept designs (${n})`;
+  }
+
+  /** One notice per kept copy, newest first, each with Restore and Download. */
+  private showKept(): void {
+    const kept = this.autosave.kept();
+    kept.forEach((copy, i) => {
+      this.messages.show(
+        'info',
+        `Kept ${copy.keptAt.replace('T', ' ').slice(0, 19)} UTC: ${copy.reason}.`,
+        [],
+        `kept-${i}`,
+        [this.restoreKeptAction(copy), this.downloadKeptAction(copy)],
+      );
+    });
+  }
+
   /** Another tab saved its design to the shared autosave. */
   private otherTabSaved(): void {
     this.messages.show(
@@ -424,6 +447,7 @@ export class App {
   private apply(next: AppState, opts: { replaceUrl: boolean } = { replaceUrl: true }): void {
     this.state = next;
     const saved = this.autosave.save(next);
+    this.refreshKeptButton();
     if (saved.error) this.messages.show('warning', 'Autosave failed', [saved.error], 'autosave');
     if (saved.kept) {
       this.messages.show(
@@ -1569,6 +1593,7 @@ export class App {
         return null;
       });
     });
+    byId('kept-designs').addEventListener('click', () => this.showKept());
     byId('reset').addEventListener('click', () => {
       this.apply({
         case: defaultCase(),

@@ -456,6 +456,11 @@ describe.skipIf(!haveBrowser && !requireBrowser)('adversarial page families', ()
     await a.waitForSelector('.message[data-id="tabs"]', { timeout: 10_000 }).catch(() => null);
     const aTold = (await a.locator('.message[data-id="tabs"]').count()) === 1;
     if (!aWasKept || !bTold || !aTold) lost++;
+    // Kept copies stay reachable after their notice is dismissed: "Kept designs" lists them.
+    await b.locator('.message[data-id="tabs"] button', { hasText: 'Dismiss' }).click();
+    await b.click('#kept-designs');
+    const listed = await b.locator('.message[data-id^="kept-"] [data-action="restore-kept"]').count();
+    if (listed !== keptTabs.length) lost++;
     // A link opened over the autosaved design (0.65): kept aside, restorable.
     inputs++;
     const linkPage = await open(await browser.newContext());
