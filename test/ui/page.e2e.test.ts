@@ -508,7 +508,10 @@ describe.skipIf(!haveBrowser && !requireBrowser)('web page in headless Chromium'
     const page = await open(context);
     // A sweep worker dies while the design map runs (the page's test hook, as a real crash would).
     await page.waitForFunction(
-      () => document.body.dataset.stage === 'map' || document.body.dataset.state !== 'computing',
+      // ('loading' until the page has read its autosave and started computing.)
+      () =>
+        document.body.dataset.stage === 'map' ||
+        (document.body.dataset.state !== 'computing' && document.body.dataset.state !== 'loading'),
       null,
       { timeout: 45_000 },
     );
