@@ -7,7 +7,7 @@
  * each family counts what it tried and writes one row to test-results/adversarial-page.json.
  */
 import { type ChildProcess, spawn } from 'node:child_process';
-import { readFileSync, rmSync, statSync, writeFileSync } from 'node:fs';
+import { readdirSync, readFileSync, rmSync, statSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { type Browser, type BrowserContext, chromium, type Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -45,6 +45,27 @@ if (!haveBrowser && !requireBrowser) {
   process.stderr.write(
     `\n!!! test/adversarial/page-families.test.ts SKIPPED: ${CHROMIUM} is missing (apt-get install -y chromium).\n\n`,
   );
+}
+
+/**
+ * SIGKILL every process of the browser using `profile` (its own user-data folder, so only the processes
+ * this test started): the process group first, then any helper that left it (found by the folder).
+ */
+function killBrowser(groupPid: number, profile: string): void {
+  try {
+    process.kill(-groupPid, 'SIGKILL');
+  } catch {
+    // already gone
+  }
+  for (const pid of readdirSync('/proc')) {
+    if (!/^\d+$/.test(pid)) continue;
+    try {
+      if (readFileSync(`/proc/${pid}/cmdline`, 'utf8').includes(`--user-data-dir=${profile}\0`))
+        process.kill(Number(pid), 'SIGKILL');
+    } catch {
+      // gone meanwhile, or not ours to read
+    }
+  }
 }
 
 /** The demo data's header with `rows` seeded rows (3 speeds, yaw on a 0.5-degree grid). */
@@ -539,7 +560,7 @@ describe.skipIf(!haveBrowser && !requireBrowser)('adversarial page families', ()
       await input.fill(t.value);
       await input.press('Enter');
       await new Promise((ok) => setTimeout(ok, t.delayMs));
-      process.kill(-child.pid!, 'SIGKILL');
+      killBrowser(child.pid!, profile);
       await new Promise((ok) => setTimeout(ok, 300));
       child = launch();
       b = await connect();
@@ -550,7 +571,7 @@ describe.skipIf(!haveBrowser && !requireBrowser)('adversarial page families', ()
         () => (window as unknown as Hooks).coversweep.state().case.wheel.cover.fraction,
       );
       if (got !== Number(t.value)) lost++;
-      process.kill(-child.pid!, 'SIGKILL');
+      killBrowser(child.pid!, profile);
       await new Promise((ok) => setTimeout(ok, 300));
     }
     rmSync(profile, { recursive: true, force: true });
