@@ -14,7 +14,9 @@ describe('calibrate', () => {
     // (sd 0.01 N drag, 0.03 N side) must give the parameters back inside their confidence intervals.
     const caseFile = testCase({ grid_convergence: false });
     const points = gridPoints([8.33, 11.1, 13.9]);
-    const known = { porosity_scale: 1.4, suction_recovered: 0.3, profile_drag_factor: 1.2 };
+    // porosity_scale multiplies the derived screen resistance, which includes the wake shielding of the
+    // spoke ahead (about half the bare crossflow value): 2 gives a screen as closed as 1.4 did without it.
+    const known = { porosity_scale: 2, suction_recovered: 0.3, profile_drag_factor: 1.2 };
     const truth = truthAt(caseFile, points, known);
     const noise = gaussian(5);
     let csv = 'yaw,speed,drag,side\n';
