@@ -1,9 +1,7 @@
 import { PLANE_WAKE_DEFICIT_CONSTANT, PLANE_WAKE_WIDTH_CONSTANT } from './planeWakeDeficit';
 
-/** Gauss-Legendre nodes and weights on [-1, 1], n = 3 (Abramowitz & Stegun, Table 25.4). */
-const GL3_X = Math.sqrt(0.6);
-const GL3_W_OUTER = 5 / 9;
-const GL3_W_CENTRE = 8 / 9;
+/** Gauss-Legendre nodes on [-1, 1], n = 2, weights 1 (Abramowitz & Stegun, Table 25.4). */
+const GL2_X = 1 / Math.sqrt(3);
 
 function dragShare(deficitAtCentre: number, halfWidthM: number, yM: number): number {
   const a = Math.abs(yM) / halfWidthM;
@@ -18,7 +16,7 @@ function dragShare(deficitAtCentre: number, halfWidthM: number, yM: number): num
  * undisturbed stream at the same drag coefficient: the mean of (1 - u1(y) / U)^2 over the follower's
  * frontal width, with the plane far-wake deficit u1 of Schlichting's law (planeWakeDeficit,
  * planeWakeHalfWidthM, planeWakeProfile) at the distance behind the leader and the follower's lateral
- * offset from the wake's centreline (3-point Gauss-Legendre across the width). Where the wake law
+ * offset from the wake's centreline (2-point Gauss-Legendre across the width). Where the wake law
  * predicts a deficit above the stream speed (very close spacing) the local speed is taken as zero.
  *
  * Tandem circular cylinders (M. M. Zdravkovich 1977, "Review of flow interference between two circular
@@ -55,10 +53,5 @@ export function tandemDragRatio(
   const y = Math.abs(offsetM);
   const h = 0.5 * followerWidthM;
   if (y - h >= b) return 1; // wholly outside the wake
-  return (
-    0.5 *
-    (GL3_W_OUTER * dragShare(deficit, b, y - h * GL3_X) +
-      GL3_W_CENTRE * dragShare(deficit, b, y) +
-      GL3_W_OUTER * dragShare(deficit, b, y + h * GL3_X))
-  );
+  return 0.5 * (dragShare(deficit, b, y - h * GL2_X) + dragShare(deficit, b, y + h * GL2_X));
 }
