@@ -97,7 +97,8 @@ export function spokeLoads(
         if (speed === 0) continue;
         spokeRowDrag(round, thicknessRatio, refLength, spacing, ut, vNormal, nu, row);
         const re = row[2]!;
-        if (re < report.reynoldsMin) report.reynoldsMin = re;
+        // A spoke wholly stalled in the wake ahead (drag ratio 0) carries no load and uses no section law.
+        if (row[1]! > 0 && re < report.reynoldsMin) report.reynoldsMin = re;
         if (re > report.reynoldsMax) report.reynoldsMax = re;
         const ft = 0.5 * rho * row[0]! * row[1]! * refLength * speed * ut * dr;
         fx -= sinTheta[k]! * ft;
