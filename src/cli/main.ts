@@ -40,6 +40,7 @@ import { nodeWorkerSpawner } from './nodeWorker';
 import { AtomicFile, checkOutputPath } from './outputFile';
 import { progressReporter } from './progress';
 import { runRide } from './rideCommand';
+import { runValidate } from './validateCommand';
 
 /** Below this many cases a sweep runs in-process by default: worker start-up (~1 s) would dominate. */
 const MIN_CASES_FOR_POOL = 8;
@@ -55,13 +56,16 @@ Usage:
                                            wind-averaged drag, crosswind handling (JSON on stdout)
   coversweep compare CASE.json DATA.csv    hold measured or simulated data against the model:
                                            unit and axis slips, residuals, --calibrate
+  coversweep validate [--json]             the model against the built-in reference cases (published
+                                           and exact values, with sources and bands): PASS or FAIL
   coversweep <command> --help              help on one command
 
 Options:
   --help, -h      show help
   --version       print the version
 
-Exit codes: 0 success, 1 internal error, 2 invalid input or usage (nothing on stdout, no file written).
+Exit codes: 0 success, 1 internal error (validate: a reference case failed), 2 invalid input or usage
+(nothing on stdout, no file written).
 Results are estimates from a reduced-order model: allow margin for gusts and lighter riders, and rely on
 qualified testing and the competition's rules before riding a design.
 `,
@@ -402,9 +406,11 @@ export async function main(argv: readonly string[], ioOverrides: Partial<CliIo> 
           readFile: (path) => readFileSync(resolve(io.cwd, path), 'utf8'),
           fileSize: (path) => statSync(resolve(io.cwd, path)).size,
         });
+      case 'validate':
+        return runValidate([...rest], io);
       default:
         throw new CliInputError(`unknown command "${command}"`, [
-          'commands: example, solve, sweep, ride, compare (see coversweep --help)',
+          'commands: example, solve, sweep, ride, compare, validate (see coversweep --help)',
         ]);
     }
   } catch (error) {

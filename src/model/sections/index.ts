@@ -1,12 +1,13 @@
 export { bladedSpokeDrag } from './bladedSpokeDrag';
 export { CYLINDER_RE_RANGE, cylinderDrag } from './cylinderDrag';
+export { finiteCylinderDrag } from './finiteCylinderDrag';
+export { planeWakeDeficit } from './planeWakeDeficit';
 export {
-  PLANE_WAKE_DEFICIT_CONSTANT,
-  PLANE_WAKE_WIDTH_CONSTANT,
-  planeWakeDeficit,
-} from './planeWakeDeficit';
-export { planeWakeHalfWidthM } from './planeWakeHalfWidthM';
-export { planeWakeProfile } from './planeWakeProfile';
+  plateReattachment,
+  REATTACHMENT_FULL_RATIO,
+  REATTACHMENT_ONSET_RATIO,
+} from './plateReattachment';
+export { SPLITTER_PLATE_MAX_RATIO, splitterPlateCylinderDrag } from './splitterPlateCylinderDrag';
 export { spokeRowDrag } from './spokeRowDrag';
 export { spokeSectionDrag } from './spokeSectionDrag';
 export { streamlineSectionDrag } from './streamlineSectionDrag';

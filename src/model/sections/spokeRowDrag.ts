@@ -94,7 +94,7 @@ export function spokeRowDrag(
     const re = Math.max((shielded * refLengthM) / kinematicViscosityM2PerS, 1e-6);
     cd = spokeSectionDrag(round, re, thicknessToWidth);
     ratio = tandemDragRatio(distance, offset, cd * refLengthM, refLengthM);
-    if (ratio === 1) break; // outside the wake: the free speed is the fixed point
+    if (ratio >= 1 - 1e-12) break; // outside the wake: the free speed is the fixed point
     shielded = speed * Math.sqrt(ratio);
   }
   out[0] = cd;

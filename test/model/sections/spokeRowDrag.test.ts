@@ -47,7 +47,7 @@ describe('spokeRowDrag', () => {
     expect(out[1]).toBe(1);
     expect(out[0]).toBe(cylinderDrag((5 * d) / nu));
     spokeRowDrag(true, 1, d, 0.06, 10, 10, nu, out);
-    expect(out[1]).toBe(1);
+    expect(1 - out[1]!, `ratio=${out[1]}`).toBeLessThan(1e-9);
     // The sign of the crossflow does not matter (symmetry).
     spokeRowDrag(true, 1, d, 0.06, -10, 0, nu, out);
     const a = out[1];
