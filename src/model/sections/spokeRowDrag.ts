@@ -10,6 +10,29 @@ import { tandemDragRatio } from './tandemDragRatio';
  */
 const FIXED_POINT_STEPS = 2;
 
+function rowInputError(
+  refLengthM: number,
+  spacingM: number,
+  tangentialMps: number,
+  normalMps: number,
+  nu: number,
+  out: Float64Array,
+): RangeError {
+  if (!(refLengthM > 0) || !Number.isFinite(refLengthM)) {
+    return new RangeError(`refLengthM=${refLengthM}: must be finite and > 0`);
+  }
+  if (!(spacingM > 0) || !Number.isFinite(spacingM)) {
+    return new RangeError(`spacingM=${spacingM}: must be finite and > 0`);
+  }
+  if (!Number.isFinite(tangentialMps) || !Number.isFinite(normalMps)) {
+    return new RangeError(`crossflow must be finite, got u_t=${tangentialMps}, u_n=${normalMps}`);
+  }
+  if (!(nu > 0) || !Number.isFinite(nu)) {
+    return new RangeError(`kinematicViscosityM2PerS=${nu}: must be finite and > 0`);
+  }
+  return new RangeError(`out must have at least 3 entries, got ${out.length}`);
+}
+
 /**
  * Drag of one spoke element in a row of equal spokes that cross the same air one after another (the
  * spokes of a wheel at one radius), at spacing s along their path: the element meets the crossflow
@@ -54,19 +77,17 @@ export function spokeRowDrag(
   kinematicViscosityM2PerS: number,
   out: Float64Array,
 ): void {
-  if (!(refLengthM > 0) || !Number.isFinite(refLengthM)) {
-    throw new RangeError(`refLengthM=${refLengthM}: must be finite and > 0`);
+  // One combined test keeps the hot path small (it runs for every spoke element); the message is built
+  // only on failure.
+  if (
+    !(refLengthM > 0 && refLengthM < Number.POSITIVE_INFINITY) ||
+    !(spacingM > 0 && spacingM < Number.POSITIVE_INFINITY) ||
+    !(Math.abs(tangentialMps) < Number.POSITIVE_INFINITY && Math.abs(normalMps) < Number.POSITIVE_INFINITY) ||
+    !(kinematicViscosityM2PerS > 0 && kinematicViscosityM2PerS < Number.POSITIVE_INFINITY) ||
+    out.length < 3
+  ) {
+    throw rowInputError(refLengthM, spacingM, tangentialMps, normalMps, kinematicViscosityM2PerS, out);
   }
-  if (!(spacingM > 0) || !Number.isFinite(spacingM)) {
-    throw new RangeError(`spacingM=${spacingM}: must be finite and > 0`);
-  }
-  if (!Number.isFinite(tangentialMps) || !Number.isFinite(normalMps)) {
-    throw new RangeError(`crossflow must be finite, got u_t=${tangentialMps}, u_n=${normalMps}`);
-  }
-  if (!(kinematicViscosityM2PerS > 0) || !Number.isFinite(kinematicViscosityM2PerS)) {
-    throw new RangeError(`kinematicViscosityM2PerS=${kinematicViscosityM2PerS}: must be finite and > 0`);
-  }
-  if (out.length < 3) throw new RangeError(`out must have at least 3 entries, got ${out.length}`);
   const ut = Math.abs(tangentialMps);
   const un = Math.abs(normalMps);
   const speed = Math.sqrt(ut * ut + un * un);
@@ -94,7 +115,8 @@ export function spokeRowDrag(
     const re = Math.max((shielded * refLengthM) / kinematicViscosityM2PerS, 1e-6);
     cd = spokeSectionDrag(round, re, thicknessToWidth);
     ratio = tandemDragRatio(distance, offset, cd * refLengthM, refLengthM);
-    if (ratio >= 1 - 1e-12) break; // outside the wake: the free speed is the fixed point
+    // Off the wake the shielded speed is the free one to 1e-6: Cd would not move.
+    if (ratio >= 1 - 1e-6) break;
     shielded = speed * Math.sqrt(ratio);
   }
   out[0] = cd;
