@@ -44,6 +44,9 @@ import { refuseRepeatedOptions } from './refuseRepeatedOptions';
 import { runRide } from './rideCommand';
 import { SweepSpool } from './sweepSpool';
 
+/** Points per pooled job to aim for at most (memory per job in flight; see writeSweep). */
+const MAX_JOB_POINTS = 20_000;
+
 /** Below this many cases a sweep runs in-process by default: worker start-up (~1 s) would dominate. */
 const MIN_CASES_FOR_POOL = 8;
 
@@ -256,6 +259,9 @@ export async function writeSweep(
       plan.cases.map((c) => caseToModelInput(c.caseFile)),
       {
         keepSolutions: false,
+        // Jobs of at most ~MAX_JOB_POINTS points: a job's results are held whole in its worker and
+        // in the main thread until written, so big plans are cut finer than 8 jobs per worker.
+        jobsPerWorker: Math.max(8, Math.ceil(plan.pointCount / (pool.size * MAX_JOB_POINTS))),
         ...(onProgress ? { onProgress } : {}),
         onCase: (i, solution, error) => {
           const expanded = plan.cases[i]!;
