@@ -73,7 +73,7 @@ afterAll(() => {
 
 /** A case whose result document is ~40 kB (8 airspeeds x 5 yaws); a plan of 6 such cases. */
 const bigCase = {
-  ...exampleCase(),
+  ...(exampleCase() as { wheel: Record<string, unknown> }),
   conditions: { airspeed_mps: [5, 8, 11, 14, 17, 20, 23, 26], yaw_deg: [0, 5, 10, 15, 20] },
   model: { lattice_span: 10, lattice_chord: 6, grid_convergence: false },
 };
