@@ -143,5 +143,5 @@ describe('interrupted pooled sweeps keep every finished case', () => {
       `removed ${join(dir, stale[0]!)}, a temporary file left by an earlier run that was killed`,
     );
     expect(readdirSync(dir).filter((f) => f.endsWith('.tmp'))).toEqual([]);
-  }, 60_000);
+  }, 120_000);
 });

