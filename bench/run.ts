@@ -4,7 +4,9 @@
  * Figures are medians of repeated runs where cheap; the machine may be shared and noisy.
  */
 import { spawnSync } from 'node:child_process';
-import { availableParallelism, cpus } from 'node:os';
+import { mkdtempSync, symlinkSync } from 'node:fs';
+import { availableParallelism, cpus, tmpdir } from 'node:os';
+import { join, resolve } from 'node:path';
 import { buildWheelLattice } from '../src/model/lattice';
 import { luFactor } from '../src/model/numeric';
 import {
@@ -114,14 +116,39 @@ const yawCurve = (speed: number): FlowConditions[] =>
 }
 
 // --- The standard sweep, each worker count in a fresh process so its peak memory is its own -------
+// With COVERSWEEP_BENCH_BASELINE=<git ref> the same sweep of that commit runs in the same bench run,
+// interleaved with this tree's (A, B, A, B), from a temporary git worktree sharing node_modules: the
+// way to measure what a change costs on a shared, noisy machine.
+function sweepIn(dir: string, workers: number, entry: string, label: string): void {
+  const child = spawnSync('npx', ['tsx', '--expose-gc', 'bench/standardSweep.ts', String(workers), entry], {
+    cwd: dir,
+    encoding: 'utf8',
+    stdio: ['ignore', 'pipe', 'inherit'],
+  });
+  if (child.status !== 0) throw new Error(`standard sweep (${label}) with ${workers} worker(s) failed`);
+  for (const line of child.stdout.split('\n')) {
+    if (line.trim() === '') continue;
+    const figures = JSON.parse(line) as Record<string, unknown>;
+    console.log(JSON.stringify({ ...figures, tree: label }));
+  }
+}
 {
   const entry = buildNodeWorker();
-  for (const workers of [...new Set([1, cores])]) {
-    const child = spawnSync('npx', ['tsx', '--expose-gc', 'bench/standardSweep.ts', String(workers), entry], {
-      encoding: 'utf8',
-      stdio: ['ignore', 'pipe', 'inherit'],
-    });
-    if (child.status !== 0) throw new Error(`standard sweep with ${workers} worker(s) failed`);
-    process.stdout.write(child.stdout);
+  const baselineRef = process.env.COVERSWEEP_BENCH_BASELINE;
+  let baseline: { dir: string; entry: string } | null = null;
+  if (baselineRef) {
+    const dir = mkdtempSync(join(tmpdir(), 'coversweep-baseline-'));
+    const add = spawnSync('git', ['worktree', 'add', '--detach', dir, baselineRef], { stdio: 'ignore' });
+    if (add.status !== 0) throw new Error(`git worktree add ${baselineRef} failed`);
+    symlinkSync(resolve('node_modules'), join(dir, 'node_modules'));
+    baseline = { dir, entry: buildNodeWorker(dir) };
+  }
+  try {
+    for (const workers of [...new Set([1, cores])]) {
+      sweepIn('.', workers, entry, 'current');
+      if (baseline) sweepIn(baseline.dir, workers, baseline.entry, `baseline ${baselineRef}`);
+    }
+  } finally {
+    if (baseline) spawnSync('git', ['worktree', 'remove', '--force', baseline.dir], { stdio: 'ignore' });
   }
 }

@@ -26,7 +26,7 @@ export function exampleCase(): Record<string, unknown> {
       reference_speed_kmh: 50,
     },
     steering: { head_angle_deg: 73, fork_offset_m: 0.045 },
-    model: { ground: true, suction_recovered: 0.5, grid_convergence: true },
+    model: { ground: true, suction_recovered: 1, grid_convergence: true },
   };
 }
 

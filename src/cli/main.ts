@@ -43,6 +43,7 @@ import { InputFileError, readInputFile } from './readInputFile';
 import { refuseRepeatedOptions } from './refuseRepeatedOptions';
 import { runRide } from './rideCommand';
 import { SweepSpool } from './sweepSpool';
+import { runValidate } from './validateCommand';
 
 /** Points per pooled job to aim for at most (memory per job in flight; see writeSweep). */
 const MAX_JOB_POINTS = 20_000;
@@ -61,13 +62,16 @@ Usage:
                                            wind-averaged drag, crosswind handling (JSON on stdout)
   coversweep compare CASE.json DATA.csv    hold measured or simulated data against the model:
                                            unit and axis slips, residuals, --calibrate
+  coversweep validate [--json]             the model against the built-in reference cases (published
+                                           and exact values, with sources and bands): PASS or FAIL
   coversweep <command> --help              help on one command
 
 Options:
   --help, -h      show help
   --version       print the version
 
-Exit codes: 0 success, 1 internal error, 2 invalid input or usage (nothing on stdout, no file written).
+Exit codes: 0 success, 1 internal error (validate: a reference case failed), 2 invalid input or usage
+(nothing on stdout, no file written).
 Results are estimates from a reduced-order model: allow margin for gusts and lighter riders, and rely on
 qualified testing and the competition's rules before riding a design.
 `,
@@ -442,9 +446,11 @@ export async function main(argv: readonly string[], ioOverrides: Partial<CliIo> 
           readFile: (path, maxBytes) => readInputFile(resolve(io.cwd, path), maxBytes),
           fileSize: () => 0, // readFile checks the size of what it reads, whatever stat says
         });
+      case 'validate':
+        return runValidate([...rest], io);
       default:
         throw new CliInputError(`unknown command "${command}"`, [
-          'commands: example, solve, sweep, ride, compare (see coversweep --help)',
+          'commands: example, solve, sweep, ride, compare, validate (see coversweep --help)',
         ]);
     }
   } catch (error) {

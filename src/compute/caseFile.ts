@@ -29,6 +29,7 @@ import type {
   WheelGeometry,
   WheelSolution,
 } from '../model/wheel/types';
+import { COMPONENT_NAMES as MODEL_COMPONENT_NAMES } from '../model/wheel/types';
 import { migrateCase } from './fileVersion';
 import { findDuplicateKey } from './findDuplicateKey';
 import {
@@ -65,14 +66,8 @@ export const LIMITS = {
   maxReferenceSpeedKmh: 216,
 } as const;
 
-/** Component names in the order the output lists them. */
-export const COMPONENT_NAMES: readonly ComponentName[] = [
-  'surface',
-  'vortex',
-  'spokes',
-  'rim_tyre',
-  'friction',
-];
+/** Component names in the order the output lists them (the model's own list). */
+export const COMPONENT_NAMES: readonly ComponentName[] = MODEL_COMPONENT_NAMES;
 
 // ---------------------------------------------------------------------------------------------
 // The normalised case (every default filled)
@@ -100,6 +95,8 @@ export interface CaseWheel {
   rim_depth_m: number;
   rim_width_m: number;
   hub_flange_radius_m: number;
+  hub_shell_diameter_m: number;
+  hub_shell_width_m: number;
   spokes: CaseSpokes;
   cover: CaseCover;
 }
@@ -153,6 +150,8 @@ export const DEFAULT_WHEEL: CaseWheel = {
   rim_depth_m: DEMO_WHEEL.rimDepthM,
   rim_width_m: DEMO_WHEEL.rimWidthM,
   hub_flange_radius_m: DEMO_WHEEL.hubFlangeRadiusM,
+  hub_shell_diameter_m: DEMO_WHEEL.hubShellDiameterM,
+  hub_shell_width_m: DEMO_WHEEL.hubShellWidthM,
   spokes: {
     count: DEMO_WHEEL.spokeCount,
     section: DEMO_WHEEL.spokeSection,
@@ -312,6 +311,8 @@ const wheelShape = {
   rim_depth_m: num({ min: 0, max: 1, unit: 'm' }),
   rim_width_m: positiveLength(0.15),
   hub_flange_radius_m: positiveLength(0.2),
+  hub_shell_diameter_m: positiveLength(0.2),
+  hub_shell_width_m: positiveLength(0.3),
 };
 
 const speed = { min: 0, max: LIMITS.maxSpeedMps, minOpen: true, unit: 'm/s' } as const;
@@ -513,6 +514,8 @@ function validateCaseUnsafe(given: unknown): Parsed<CaseFile> {
     rim_depth_m: w.rim_depth_m ?? dw.rim_depth_m,
     rim_width_m: w.rim_width_m ?? dw.rim_width_m,
     hub_flange_radius_m: w.hub_flange_radius_m ?? dw.hub_flange_radius_m,
+    hub_shell_diameter_m: w.hub_shell_diameter_m ?? dw.hub_shell_diameter_m,
+    hub_shell_width_m: w.hub_shell_width_m ?? dw.hub_shell_width_m,
     spokes: {
       count: spokes.count ?? dw.spokes.count,
       section: spokes.section ?? dw.spokes.section,
@@ -531,6 +534,11 @@ function validateCaseUnsafe(given: unknown): Parsed<CaseFile> {
   const hub = wheel.hub_flange_radius_m;
   const rimMessage = rimDeeperMessage(R, wheel.tyre_width_m, wheel.rim_depth_m, hub);
   if (rimMessage) errors.push(rimMessage);
+  if (wheel.hub_shell_diameter_m > 2 * hub) {
+    errors.push(
+      `wheel.hub_shell_diameter_m: must be at most twice wheel.hub_flange_radius_m (${round6(2 * hub)} m: the shell lies inside the flanges), got ${wheel.hub_shell_diameter_m}`,
+    );
+  }
   if (wheel.spokes.section === 'bladed' && wheel.spokes.thickness_m > wheel.spokes.width_m) {
     errors.push(
       `wheel.spokes.thickness_m: must be at most wheel.spokes.width_m ${wheel.spokes.width_m} m (a bladed spoke is wider than thick), got ${wheel.spokes.thickness_m}`,
@@ -743,6 +751,8 @@ export function caseToModelInput(caseFile: CaseFile): ModelInput {
     rimDepthM: w.rim_depth_m,
     rimWidthM: w.rim_width_m,
     hubFlangeRadiusM: w.hub_flange_radius_m,
+    hubShellDiameterM: w.hub_shell_diameter_m,
+    hubShellWidthM: w.hub_shell_width_m,
     spokeCount: w.spokes.count,
     spokeSection: w.spokes.section,
     spokeDiameterM: w.spokes.diameter_m,

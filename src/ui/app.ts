@@ -8,6 +8,7 @@
 import {
   type CaseFile,
   type CaseWheel,
+  COMPONENT_NAMES,
   caseAirDensity,
   caseToModelInput,
   parseCaseFile,
@@ -179,6 +180,16 @@ export class App {
       return panel;
     });
     return this.roadLoading;
+  }
+
+  private validationLoading: Promise<{ shown(): void }> | null = null;
+
+  /** The Help tab's reference table, loaded and computed only when Help is opened. */
+  private validationPanel(): Promise<{ shown(): void }> {
+    this.validationLoading ??= import('./validationPanel').then(
+      ({ ValidationPanel }) => new ValidationPanel(byId('validation')),
+    );
+    return this.validationLoading;
   }
 
   private dataPanel(): Promise<DataPanel> {
@@ -1044,7 +1055,7 @@ export class App {
     ]);
     this.tables.get('table-current')!.setData(curColumns, curRows);
     // Components.
-    const names = ['surface', 'vortex', 'spokes', 'rim_tyre', 'friction'] as const;
+    const names = COMPONENT_NAMES;
     const compColumns: TableColumn[] = [
       { header: 'Yaw, deg', decimals: 2 },
       ...names.map((n) => ({ header: `${n.replace('_', ' & ')} axial, ${fu}`, decimals: fd })),
@@ -1462,6 +1473,7 @@ export class App {
     }
     if (tab === 'data') void this.dataPanel().then((panel) => panel.shown());
     if (tab === 'road') void this.roadPanel();
+    if (tab === 'help') void this.validationPanel().then((panel) => panel.shown());
   }
 
   private pinBaseline(): void {

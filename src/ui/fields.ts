@@ -209,6 +209,34 @@ export const FIELDS: readonly Field[] = [
       raw.wheel.hub_flange_radius_m = m(num(v));
     },
   },
+  {
+    key: 'hubShellDiameterMm',
+    group: 'wheel',
+    label: () => 'Hub shell diameter, mm',
+    target: 'case',
+    control: 'number',
+    min: 10,
+    max: 160,
+    step: 0.5,
+    get: (c) => mm(c.case.wheel.hub_shell_diameter_m),
+    set: (raw, v) => {
+      raw.wheel.hub_shell_diameter_m = m(num(v));
+    },
+  },
+  {
+    key: 'hubShellWidthMm',
+    group: 'wheel',
+    label: () => 'Hub shell width (exposed), mm',
+    target: 'case',
+    control: 'number',
+    min: 10,
+    max: 200,
+    step: 1,
+    get: (c) => mm(c.case.wheel.hub_shell_width_m),
+    set: (raw, v) => {
+      raw.wheel.hub_shell_width_m = m(num(v));
+    },
+  },
   // Spokes
   {
     key: 'spokeCount',
@@ -645,7 +673,7 @@ export const FIELDS: readonly Field[] = [
   {
     key: 'suctionRecovered',
     group: 'model',
-    label: () => 'Leading-edge suction recovered',
+    label: () => 'Tyre edge thrust, share of attainable',
     target: 'case',
     control: 'number',
     min: 0,

@@ -72,7 +72,7 @@ describe('coversweep compare', () => {
         'map.json',
         '--calibrate',
         '--parameters',
-        'suction_recovered,profile_drag_factor',
+        'suction_recovered,porosity_scale,profile_drag_factor',
       ],
       t.io,
     );
@@ -80,6 +80,7 @@ describe('coversweep compare', () => {
     const doc = JSON.parse(t.out());
     expect(doc.calibration.parameters.map((p: { name: string }) => p.name)).toEqual([
       'suction_recovered',
+      'porosity_scale',
       'profile_drag_factor',
     ]);
     for (const p of doc.calibration.parameters) expect(p.interval.length).toBe(2);

@@ -262,6 +262,7 @@ describe('solutionToDocument', () => {
       'spokes',
       'rim_tyre',
       'friction',
+      'hub',
     ]);
   });
 

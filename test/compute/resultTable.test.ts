@@ -49,16 +49,16 @@ describe('result table columns (the documented order)', () => {
       'surface_axle_torque_Nm',
     ]);
     expect(r.slice(-8)).toEqual([
-      'friction_axial_N',
-      'friction_side_N',
-      'friction_vertical_N',
-      'friction_axle_torque_Nm',
+      'hub_axial_N',
+      'hub_side_N',
+      'hub_vertical_N',
+      'hub_axle_torque_Nm',
       'gci_axial_N',
       'gci_side_N',
       'flags',
       'error',
     ]);
-    expect(r).toHaveLength(20 + 5 * 4 + 4);
+    expect(r).toHaveLength(20 + 6 * 4 + 4);
   });
 });
 

@@ -13,6 +13,8 @@ import { type Browser, type BrowserContext, chromium, type Page } from 'playwrig
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { CompareReport } from '../../src/compute/compare/index';
 import type { RideDocument } from '../../src/compute/ride/index';
+import { formatNumber } from '../../src/compute/validation/bandText';
+import { runValidation } from '../../src/compute/validation/runValidation';
 import type { PlotName } from '../../src/ui/app';
 import type { AppState } from '../../src/ui/appState';
 import type { PlotSeries, PlotSpec } from '../../src/ui/linePlot';
@@ -828,6 +830,46 @@ describe.skipIf(!haveBrowser && !requireBrowser)('web page in headless Chromium'
     expect(await page.locator('#data-map-table tbody th').count()).toBe(3);
     expect(await page.evaluate(() => (window as unknown as Inspect).__csp)).toEqual([]);
     await dataContext.close();
+    expect(consoleErrors).toEqual([]);
+  });
+
+  it('computes the reference table on Help only when Help opens, with every case, its source and strength, as `validate` does', async () => {
+    const context = await browser.newContext({ viewport: { width: 1280, height: 800 } });
+    const page = await open(context);
+    expect(await settled(page)).toBe('done');
+    // Nothing is computed before Help opens.
+    expect(await page.locator('#validation-table').count()).toBe(0);
+    await page.click('#tab-help');
+    expect(await panelState(page, 'validation', ['done', 'failed'])).toBe('done');
+    const headers = await page.locator('#validation-table thead th').allTextContents();
+    expect(headers).toEqual(['Case', 'Source', 'Strength', 'Reference and band', 'Model', 'Result']);
+    const shown = await page.evaluate(() =>
+      [...document.querySelectorAll<HTMLTableRowElement>('#validation-table tbody tr')].map((tr) => ({
+        id: tr.dataset.id ?? '',
+        pass: tr.dataset.pass === 'true',
+        cells: [...tr.cells].map((c) => c.textContent ?? ''),
+      })),
+    );
+    // The same rows, verdicts and values as the command line's reference set computed here in Node.
+    const report = runValidation();
+    expect(shown.map((r) => r.id)).toEqual(report.rows.map((r) => r.id));
+    for (const [i, row] of report.rows.entries()) {
+      const got = shown[i]!;
+      expect(got.pass, row.id).toBe(row.pass);
+      expect(got.cells[1], row.id).toBe(row.source);
+      expect(got.cells[2], row.id).toBe(row.strength);
+      expect(got.cells[3], row.id).toContain(`band ${row.band_text}`);
+      if (row.model !== null)
+        expect(got.cells[4], row.id).toMatch(
+          new RegExp(`^${formatNumber(row.model, 6).replace(/[.+]/g, '\\$&')}( |$)`),
+        );
+      expect(got.cells[5], row.id).toBe(row.pass ? 'pass' : 'FAIL');
+    }
+    expect(await page.locator('#validation-table caption').textContent()).toBe(
+      `${report.passed} of ${report.rows.length} reference cases pass; ${report.failed} fail`,
+    );
+    await page.locator('#validation').screenshot({ path: join(OUT, 'ui-validation.png') });
+    await context.close();
     expect(consoleErrors).toEqual([]);
   });
 });

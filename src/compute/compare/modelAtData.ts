@@ -32,7 +32,8 @@ export const PARAMETER_BOUNDS: Readonly<Record<Calibratable, [number, number]>> 
 
 export const PARAMETER_MEANING: Readonly<Record<Calibratable, string>> = {
   porosity_scale: "multiplies the spoked region's screen resistance derived from spoke solidity",
-  suction_recovered: 'fraction of the leading-edge suction recovered as forward thrust at the tyre (0..1)',
+  suction_recovered:
+    'scale on the leading-edge thrust the tyre edge can attain (0..1; 1 = the derived bound)',
   profile_drag_factor: 'multiplies the profile (section) drag of spokes, rim and tyre',
 };
 

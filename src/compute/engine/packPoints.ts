@@ -1,4 +1,10 @@
-import { type ComponentLoads, type ComponentName, FLAG_MESSAGES, type PointResult } from '../../model/wheel';
+import {
+  COMPONENT_NAMES,
+  type ComponentLoads,
+  type ComponentName,
+  FLAG_MESSAGES,
+  type PointResult,
+} from '../../model/wheel';
 
 const SCALAR_COLUMNS = [
   'yawRad',
@@ -22,7 +28,6 @@ const SCALAR_COLUMNS = [
   'uncertaintySideN',
 ] as const satisfies ReadonlyArray<keyof PointResult>;
 
-const COMPONENT_NAMES: readonly ComponentName[] = ['surface', 'vortex', 'spokes', 'rim_tyre', 'friction'];
 const COMPONENT_FIELDS = [
   'fxN',
   'fyN',

@@ -5,7 +5,9 @@
  *    rider, wind or course change) and then the ride's evaluation;
  *  - a comparison with data: conversion, slips, residuals, the model band and, on request, the
  *    calibration, the convergence study and the input-uncertainty band (src/compute/compare).
- * Nothing here is new physics: both call the same functions as the command line's `ride` and `compare`.
+ *  - the reference set of the Help tab (src/compute/validation), as `coversweep validate` runs it.
+ * Nothing here is new physics: each calls the same functions as the command line's `ride`, `compare`
+ * and `validate`.
  */
 import { type CompareRequest, type CompareResult, runComparison } from '../compare/index';
 import {
@@ -17,6 +19,8 @@ import {
   rideCurves,
   rideReferenceSpeed,
 } from '../ride/index';
+import { runValidation } from '../validation/runValidation';
+import type { ValidationReport } from '../validation/types';
 import { BoundedCache } from './boundedCache';
 
 export interface RideRequest {
@@ -65,11 +69,13 @@ export function compareJob(request: CompareRequest): CompareResult {
 export interface PageJobsApi {
   ride(request: RideRequest): RideResponse;
   compare(request: CompareRequest): CompareResult;
+  validate(): ValidationReport;
   ping(): string;
 }
 
 export const pageJobsApi: PageJobsApi = {
   ride: (request) => solveRideJob(request),
   compare: (request) => compareJob(request),
+  validate: () => runValidation(),
   ping: () => 'ready',
 };

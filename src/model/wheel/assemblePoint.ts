@@ -1,38 +1,51 @@
-import { CYLINDER_RE_RANGE } from '../sections';
+import { CYLINDER_RE_RANGE, plateReattachment } from '../sections';
+import { attainableEdgeThrust, roundEdgeSuctionLimit } from './attainableEdgeThrust';
 import { addForceAt, emptyLoads } from './componentLoads';
 import { frictionLoads } from './frictionLoads';
-import { rimTyreLoads } from './rimTyreLoads';
+import { hubLoads } from './hubLoads';
+import { RIM_SECTION_RE_RANGE, rimTyreLoads, rimTyreSection } from './rimTyreLoads';
 import { spokeLoads } from './spokeLoads';
 import { steeringMoment } from './steeringAxis';
 import type { SurfaceCoefficients } from './surfaceCoefficients';
-import type {
-  ComponentLoads,
-  ComponentName,
-  FlowConditions,
-  ModelOptions,
-  PointResult,
-  SteeringGeometry,
-  WheelGeometry,
+import {
+  COMPONENT_NAMES,
+  type ComponentLoads,
+  type ComponentName,
+  type FlowConditions,
+  type ModelOptions,
+  type PointResult,
+  type SteeringGeometry,
+  type WheelGeometry,
 } from './types';
 import { VALIDITY } from './validity';
 import type { WheelRadii } from './wheelRadii';
 
-const COMPONENTS: ComponentName[] = ['surface', 'vortex', 'spokes', 'rim_tyre', 'friction'];
-
 /**
  * Lifting-surface loads at one yaw angle, from the lattice's coefficients by Polhamus' formulation
- * (E. C. Polhamus 1966, NASA TN D-3767):
- *   potential normal force  C_N,p = Kp sin(beta) cos(beta),
+ * (E. C. Polhamus 1966, NASA TN D-3767; 1971, J. Aircraft 8(4):193):
+ *   potential normal force  C_N,p = Kp sin(beta) cos(beta), at the lattice's centre of pressure;
  *   potential suction       C_S   = (Kp - Kp^2 Ki - Kd) sin^2(beta)  (Kd: porous dissipation),
- * of which the fraction k = suctionRecovered acts as forward thrust at the leading edge (the rounded
- * tyre) and the rest reappears as vortex normal force (the leading-edge suction analogy), both with
- * the sign of beta for the normal part. Loads act at the lattice's centre of pressure.
+ * split among the edges where it sits (edgeSuctionShares):
+ * - at the tyre's edge (each lattice strip's leading edge), the thrust the round edge can attain,
+ *   bounded strip by strip by attainableEdgeThrust, acts forward, scaled by `suctionRecovered` and by
+ *   the share of the section whose flow reattaches behind the tyre (plateReattachment of the solid
+ *   length behind the tyre: a shallow rim is a bluff section and realises none, a deep rim or a cover
+ *   realises it); the
+ *   suction the edge cannot hold reappears as vortex normal force at the edge, with the sign of beta
+ *   (the leading-edge suction analogy; Polhamus 1971);
+ * - at inner edges (a solid rim bed or cover edge behind the porous spoked region) the lattice's
+ *   suction is an artefact of the linear porous condition next to the edge: a porous edge carries no
+ *   suction singularity (Hajian & Jaworski 2017, Proc. R. Soc. A 473:20170266), so it makes neither
+ *   thrust nor vortex force there.
  */
 function surfaceLoads(
   coeff: SurfaceCoefficients,
   point: FlowConditions,
   options: ModelOptions,
   areaM2: number,
+  edgeRadiusM: number,
+  discRadiusM: number,
+  attachedFraction: number,
   potential: ComponentLoads,
   vortex: ComponentLoads,
 ): boolean {
@@ -40,13 +53,32 @@ function surfaceLoads(
   const s = Math.sin(point.yawRad);
   const c = Math.cos(point.yawRad);
   const negative = coeff.suctionSlope < 0;
-  const suction = Math.max(0, coeff.suctionSlope) * s * s;
-  const k = options.suctionRecovered;
+  const suction = Math.max(0, coeff.suctionSlope) * s * s * q * areaM2;
   const normalP = coeff.normalSlope * s * c * q * areaM2;
-  const thrust = k * suction * q * areaM2;
-  const normalV = (1 - k) * suction * Math.sign(s) * q * areaM2;
-  addForceAt(potential, thrust, normalP, 0, coeff.centreXM, 0, coeff.centreZM);
-  addForceAt(vortex, 0, normalV, 0, coeff.centreXM, 0, coeff.centreZM);
+  addForceAt(potential, 0, normalP, 0, coeff.centreXM, 0, coeff.centreZM);
+  if (suction === 0) return negative;
+  const reynolds = (point.rhoKgPerM3 * point.airspeedMps * 2 * edgeRadiusM) / point.muPaS;
+  const limit = roundEdgeSuctionLimit(reynolds) * options.suctionRecovered * attachedFraction;
+  const sign = Math.sign(s);
+  const zEdges = coeff.stripEdgeZM;
+  for (let strip = 0; strip < coeff.tyreEdgeShare.length; strip++) {
+    const theory = coeff.tyreEdgeShare[strip]! * suction;
+    if (theory === 0) continue;
+    const bound = attainableEdgeThrust(
+      q,
+      point.yawRad,
+      edgeRadiusM,
+      discRadiusM,
+      zEdges[strip]!,
+      zEdges[strip + 1]!,
+      limit,
+    );
+    const thrust = Math.min(theory, bound);
+    const x = coeff.edgeXM[strip]!;
+    const z = coeff.edgeZM[strip]!;
+    addForceAt(potential, thrust, 0, 0, x, 0, z);
+    addForceAt(vortex, 0, (theory - thrust) * sign, 0, x, 0, z);
+  }
   return negative;
 }
 
@@ -66,13 +98,19 @@ export function assemblePoint(
   const R = radii.outerRadiusM;
   const area = Math.PI * R * R;
   const components = {} as Record<ComponentName, ComponentLoads>;
-  for (const name of COMPONENTS) components[name] = emptyLoads();
+  for (const name of COMPONENT_NAMES) components[name] = emptyLoads();
   const flags: string[] = [];
-  if (surfaceLoads(coeff, point, options, area, components.surface, components.vortex))
+  const tyreRadius = 0.5 * wheel.tyreWidthM;
+  const section = rimTyreSection(wheel, radii);
+  const attached = plateReattachment(section.plateLengthM / section.thicknessM);
+  if (
+    surfaceLoads(coeff, point, options, area, tyreRadius, R, attached, components.surface, components.vortex)
+  )
     flags.push('suction_negative');
   const spokeReport = spokeLoads(wheel, radii, point, options, components.spokes);
-  rimTyreLoads(wheel, radii, point, options, components.rim_tyre);
+  const rim = rimTyreLoads(wheel, radii, point, options, components.rim_tyre);
   frictionLoads(wheel, radii, point, components.friction);
+  hubLoads(wheel, radii, point, options, components.hub);
 
   let fx = 0;
   let fy = 0;
@@ -80,7 +118,7 @@ export function assemblePoint(
   let mx = 0;
   let mz = 0;
   let torque = 0;
-  for (const name of COMPONENTS) {
+  for (const name of COMPONENT_NAMES) {
     const l = components[name];
     fx += l.fxN;
     fy += l.fyN;
@@ -117,6 +155,12 @@ export function assemblePoint(
     (spokeReport.reynoldsMin < CYLINDER_RE_RANGE.min || spokeReport.reynoldsMax > CYLINDER_RE_RANGE.max)
   ) {
     flags.push('spoke_reynolds_beyond_range');
+  }
+  if (
+    rim.reynolds > 0 &&
+    (rim.reynolds < RIM_SECTION_RE_RANGE.min || rim.reynolds > RIM_SECTION_RE_RANGE.max)
+  ) {
+    flags.push('rim_reynolds_beyond_range');
   }
   const conv = [coeff.normalSlopeConvergence, coeff.suctionSlopeConvergence];
   if (conv.some((e) => e && (!Number.isFinite(e.gciRelative) || e.gciRelative > VALIDITY.maxGciRelative))) {

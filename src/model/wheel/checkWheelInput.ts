@@ -37,6 +37,8 @@ export function checkWheelInput(input: WheelInput): void {
   finiteWithin('wheel.rimDepthM', w.rimDepthM, 0, MAX_LENGTH_M);
   positiveUpTo('wheel.rimWidthM', w.rimWidthM, MAX_LENGTH_M);
   positiveUpTo('wheel.hubFlangeRadiusM', w.hubFlangeRadiusM, MAX_LENGTH_M);
+  positiveUpTo('wheel.hubShellDiameterM', w.hubShellDiameterM, MAX_LENGTH_M);
+  positiveUpTo('wheel.hubShellWidthM', w.hubShellWidthM, MAX_LENGTH_M);
   if (!(Number.isInteger(w.spokeCount) && w.spokeCount >= 0)) {
     fail('wheel.spokeCount', w.spokeCount, 'an integer >= 0');
   }

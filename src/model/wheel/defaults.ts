@@ -2,15 +2,17 @@ import { DEFAULT_CHORD_COUNT, DEFAULT_SPAN_COUNT } from '../lattice/defaults';
 import type { ModelOptions, SteeringGeometry, WheelGeometry } from './types';
 
 /**
- * Default model parameters. suctionRecovered = 0.5 is an uninformed midpoint between a sharp edge
- * (0: all suction lost to vortex force) and a fully attached rounded tyre (1); calibrate it to data
- * (common practice, no source). porosityScale and profileDragFactor are 1: the rules as derived.
+ * Default model parameters: every scale is 1, the rules as derived (suctionRecovered scales the
+ * derived attainable thrust of the tyre's edge, attainableEdgeThrust; porosityScale the screen
+ * resistance from solidity; profileDragFactor the section drags). Each is calibratable to data.
+ * oneSidedCoverSpokeShare = 0.5: half of the in-plane drag of spokes behind a single cover still
+ * counts (common practice, no source).
  */
 export const DEFAULT_MODEL_OPTIONS: Readonly<ModelOptions> = Object.freeze({
   ground: true,
   latticeSpanCount: DEFAULT_SPAN_COUNT,
   latticeChordCount: DEFAULT_CHORD_COUNT,
-  suctionRecovered: 0.5,
+  suctionRecovered: 1,
   porosityScale: 1,
   profileDragFactor: 1,
   oneSidedCoverSpokeShare: 0.5,
@@ -23,6 +25,10 @@ export const DEFAULT_STEERING: Readonly<SteeringGeometry> = Object.freeze({
   forkOffsetM: 0.045,
 });
 
+/** A road hub shell: 35 mm across, 70 mm exposed between the fork or frame ends (common practice,
+ * no source). */
+export const DEFAULT_HUB_SHELL = Object.freeze({ diameterM: 0.035, widthM: 0.07 });
+
 /** An invented demo wheel (700c-sized, 50 mm rim, 20 round spokes, no cover). */
 export const DEMO_WHEEL: Readonly<WheelGeometry> = Object.freeze({
   outerRadiusM: 0.334,
@@ -30,6 +36,8 @@ export const DEMO_WHEEL: Readonly<WheelGeometry> = Object.freeze({
   rimDepthM: 0.05,
   rimWidthM: 0.028,
   hubFlangeRadiusM: 0.028,
+  hubShellDiameterM: DEFAULT_HUB_SHELL.diameterM,
+  hubShellWidthM: DEFAULT_HUB_SHELL.widthM,
   spokeCount: 20,
   spokeSection: 'round',
   spokeDiameterM: 0.002,

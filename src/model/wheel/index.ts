@@ -1,13 +1,16 @@
 export { assemblePoint } from './assemblePoint';
-export { DEFAULT_MODEL_OPTIONS, DEFAULT_STEERING, DEMO_WHEEL } from './defaults';
+export { attainableEdgeThrust, roundEdgeSuctionLimit } from './attainableEdgeThrust';
+export { DEFAULT_HUB_SHELL, DEFAULT_MODEL_OPTIONS, DEFAULT_STEERING, DEMO_WHEEL } from './defaults';
+export { hubEnclosed, hubLoads } from './hubLoads';
 export { meanAbsSinusoid } from './meanAbsSinusoid';
 export { openAnnuli, panelOpenness } from './panelOpenness';
-export { rimTyreSection } from './rimTyreLoads';
+export { RIM_SECTION_RE_RANGE, rimTyreSection } from './rimTyreLoads';
 export { solveWheel, type WheelInput } from './solveWheel';
 export { screenOpenness, spokeScreenResistance } from './spokeScreen';
 export { groundTrailM, steeringMoment } from './steeringAxis';
 export { type SurfaceCoefficients, surfaceCoefficients, surfaceSolution } from './surfaceCoefficients';
 export { surfaceKey } from './surfaceKey';
 export type * from './types';
+export { COMPONENT_NAMES } from './types';
 export { FLAG_MESSAGES, VALIDITY } from './validity';
 export { coveredAreaFraction, type WheelRadii, wheelRadii } from './wheelRadii';

@@ -1,5 +1,4 @@
-import { turbulentFlatPlateFriction } from '../friction';
-import { cylinderDrag, streamlineSectionDrag } from '../sections';
+import { planeWakeDeficit, splitterPlateCylinderDrag } from '../sections';
 import { addForceAt } from './componentLoads';
 import type { ComponentLoads, FlowConditions, ModelOptions, WheelGeometry } from './types';
 import type { WheelRadii } from './wheelRadii';
@@ -13,23 +12,60 @@ for (let k = 0; k < ANGLE_STEPS; k++) {
   cosTheta[k] = Math.cos(theta);
 }
 
-/** Section of the rim and tyre, radially: chord = tyre height (= width) + rim depth. */
-export function rimTyreSection(wheel: WheelGeometry): { chordM: number; thicknessM: number } {
+/** Section Reynolds numbers (on the section's thickness) where the subcritical section data hold:
+ * the cylinder-with-plate data were taken at 1e4..5e4 and a round section's subcritical drag is nearly
+ * independent of Re up to ~2e5 (Hoerner, Fluid-Dynamic Drag ch. 3; from memory). */
+export const RIM_SECTION_RE_RANGE: Readonly<{ min: number; max: number }> = Object.freeze({
+  min: 1e4,
+  max: 2e5,
+});
+
+/** The rim-and-tyre ring's section, seen in the wheel's plane. */
+export interface RimTyreSection {
+  /** Frontal size across the wheel's plane (m): the larger of the tyre and rim widths. */
+  thicknessM: number;
+  /** Solid length radially inward of the tyre (m): the rim, and a cover joined to it. */
+  plateLengthM: number;
+  /** Radius at which the ring's forces act (m): middle of the tyre and rim. */
+  forceRadiusM: number;
+}
+
+/**
+ * The section of the ring: a round tyre whose solid "plate" runs inward over the rim's depth and on
+ * over a cover that meets the rim, to the cover's inner edge (so a rim hidden under a full cover does
+ * not change the section: the plate is the whole cover). Geometry only.
+ */
+export function rimTyreSection(wheel: WheelGeometry, radii: WheelRadii): RimTyreSection {
+  const thickness = Math.max(wheel.tyreWidthM, wheel.rimWidthM);
+  const tol = 1e-9 * radii.outerRadiusM;
+  const hasCover = radii.coverOuterRadiusM - radii.coverInnerRadiusM > tol;
+  const coverAtRim = hasCover && radii.coverOuterRadiusM >= radii.rimInnerRadiusM - tol;
+  const innerSolid = coverAtRim ? radii.coverInnerRadiusM : radii.rimInnerRadiusM;
   return {
-    chordM: wheel.tyreWidthM + wheel.rimDepthM,
-    thicknessM: Math.max(wheel.tyreWidthM, wheel.rimWidthM),
+    thicknessM: thickness,
+    plateLengthM: radii.tyreInnerRadiusM - innerSolid,
+    forceRadiusM: 0.5 * (radii.outerRadiusM + radii.rimInnerRadiusM),
   };
 }
 
 /**
- * Profile drag of the rim and tyre by strip theory around the circumference. Each element's section
- * (chord radial, thickness across the wheel) meets the radial component of the in-plane airflow,
- * u_r = -V cos(beta) cos(theta) (rotation is tangential and adds none), and makes a drag
- * 0.5 rho Cd c |u_r| u_r along it. Cd is Hoerner's streamline-section formula
- * 2 Cf (1 + 2 t/c + 60 (t/c)^4) (Fluid-Dynamic Drag ch. 6) with the turbulent flat-plate Cf at the
- * chord Reynolds number (the tyre trips the boundary layer: common practice, no source), capped by the
- * circular cylinder's drag on the thickness for stubby sections. The side (y) load on the rim is the
- * lattice's. Forces act at the section's mid-radius; by symmetry the vertical parts cancel.
+ * Pressure drag of the rim and tyre as a bluff ring, by the crossflow principle (independence
+ * principle; Hoerner, Fluid-Dynamic Drag ch. 3) around the circumference. The element at position
+ * angle theta meets the radial component of the in-plane airflow, u_r = -V cos(beta) cos(theta)
+ * (rotation is tangential and adds none), and makes a force 0.5 rho Cd t |u_r| u_r along it, with
+ * t the section's thickness across the wheel:
+ * - front arc (cos theta > 0): the tyre leads its rim: Cd of a circular cylinder with a wake splitter
+ *   plate of the section's solid length L (rim, and a cover joined to it), Apelt, West & Szewczyk 1973
+ *   and Apelt & West 1975 (splitterPlateCylinderDrag, L/D with D = t);
+ * - rear arc: the rim leads and the tyre trails. The same section seen from its other end; the model
+ *   takes the same Cd(L/D) (a rounded rim bed, a fore-and-aft symmetric section: a stated
+ *   simplification), and the element sits in the wake of the front arc at the same height, 2 x_f
+ *   downstream: its dynamic pressure is cut by (1 - deficit)^2 from Schlichting's plane far-wake law
+ *   (planeWakeDeficit, drag length Cd t of the front arc) at the wake's sideways drift 2 x_f tan(beta)
+ *   at yaw, so the rear arc leaves the wake as the yaw grows.
+ * Skin friction of the flanks is not counted here (frictionLoads counts it once). The through-plane
+ * (side) load on the ring is the lattice's. Forces act at the section's mid radius; by symmetry the
+ * vertical parts cancel. `options.profileDragFactor` scales Cd.
  */
 export function rimTyreLoads(
   wheel: WheelGeometry,
@@ -39,26 +75,30 @@ export function rimTyreLoads(
   out: ComponentLoads,
 ): { reynolds: number } {
   out.fxN = out.fyN = out.fzN = out.mxNm = out.myNm = out.mzNm = out.axleTorqueNm = 0;
-  const { chordM, thicknessM } = rimTyreSection(wheel);
+  const section = rimTyreSection(wheel, radii);
+  const t = section.thicknessM;
   const { rhoKgPerM3: rho, muPaS: mu } = point;
   const vInPlane = point.airspeedMps * Math.cos(point.yawRad);
-  const reynolds = (rho * Math.abs(vInPlane) * chordM) / mu;
+  const reynolds = (rho * Math.abs(vInPlane) * t) / mu;
   if (reynolds === 0) return { reynolds };
-  const tOverC = thicknessM / chordM;
-  // A section thicker than long (a shallow rim wider than its tyre: t/c > 1) is outside Hoerner's
-  // streamline formula; it is a bluff body, and takes the cylinder's drag alone.
-  const cdStreamline =
-    tOverC <= 1
-      ? streamlineSectionDrag(tOverC, turbulentFlatPlateFriction(reynolds))
-      : Number.POSITIVE_INFINITY;
-  const cdBluff = cylinderDrag((rho * Math.abs(vInPlane) * thicknessM) / mu) * tOverC;
-  const cd = Math.min(cdStreamline, cdBluff) * options.profileDragFactor;
-  const rMid = radii.outerRadiusM - 0.5 * chordM;
+  const cdSection = splitterPlateCylinderDrag(section.plateLengthM / t) * options.profileDragFactor;
+  const drift = Math.abs(Math.tan(point.yawRad));
+  const dragLength = cdSection * t;
+  const rMid = section.forceRadiusM;
   const arc = (rMid * 2 * Math.PI) / ANGLE_STEPS;
   for (let k = 0; k < ANGLE_STEPS; k++) {
-    const ur = -vInPlane * cosTheta[k]!;
-    const f = 0.5 * rho * cd * chordM * Math.abs(ur) * ur * arc;
-    addForceAt(out, f * cosTheta[k]!, 0, f * sinTheta[k]!, rMid * cosTheta[k]!, 0, rMid * sinTheta[k]!);
+    const c = cosTheta[k]!;
+    const ur = -vInPlane * c;
+    let cd = cdSection;
+    // The flow runs from the front arc to the rear one (for vInPlane > 0; mirrored otherwise).
+    const downstream = c * Math.sign(vInPlane) < 0;
+    if (downstream) {
+      const distance = 2 * rMid * Math.abs(c);
+      const deficit = planeWakeDeficit(distance, distance * drift, dragLength);
+      cd *= (1 - deficit) * (1 - deficit);
+    }
+    const f = 0.5 * rho * cd * t * Math.abs(ur) * ur * arc;
+    addForceAt(out, f * c, 0, f * sinTheta[k]!, rMid * c, 0, rMid * sinTheta[k]!);
   }
   return { reynolds };
 }

@@ -1,5 +1,5 @@
 import { gridConvergenceIndex } from '../convergence';
-import { type LatticeSolution, solveLattice, type WheelLattice } from '../lattice';
+import { edgeSuctionShares, type LatticeSolution, solveLattice, type WheelLattice } from '../lattice';
 import { cachedWheelLattice } from './latticeCache';
 import { openAnnuli, panelOpenness } from './panelOpenness';
 import type { ConvergenceEstimate, ModelOptions, WheelGeometry } from './types';
@@ -18,6 +18,13 @@ export interface SurfaceCoefficients {
   centreXM: number;
   centreZM: number;
   panels: number;
+  /** Where the suction sits (edgeSuctionShares): share at the tyre's edge in each strip of the lattice,
+   * the strips' edges in z (spanCount + 1 values, m) and the leading panels' bound points (m). */
+  tyreEdgeShare: Float64Array;
+  innerEdgeShare: number;
+  stripEdgeZM: Float64Array;
+  edgeXM: Float64Array;
+  edgeZM: Float64Array;
   /** Convergence of Kp and of the suction slope over three lattices (null when not asked). */
   normalSlopeConvergence: ConvergenceEstimate | null;
   suctionSlopeConvergence: ConvergenceEstimate | null;
@@ -51,15 +58,23 @@ function coefficientsOn(
   spanCount: number,
   chordCount: number,
 ) {
-  const { lattice, solution: s } = surfaceSolution(
-    wheel,
-    radii,
-    options,
-    rotationRatio,
-    spanCount,
-    chordCount,
-  );
+  const {
+    lattice,
+    openness,
+    solution: s,
+  } = surfaceSolution(wheel, radii, options, rotationRatio, spanCount, chordCount);
+  const shares = edgeSuctionShares(lattice, s.gamma, openness);
+  const edgeX = new Float64Array(lattice.spanCount);
+  const edgeZ = new Float64Array(lattice.spanCount);
+  for (let strip = 0; strip < lattice.spanCount; strip++) {
+    edgeX[strip] = lattice.boundX[strip * lattice.chordCount]!;
+    edgeZ[strip] = lattice.boundZ[strip * lattice.chordCount]!;
+  }
   return {
+    shares,
+    stripEdgeZ: lattice.edgeZ,
+    edgeX,
+    edgeZ,
     kp: s.normalSlope,
     ki: s.inducedDragFactor,
     kd: s.porousDragSlope,
@@ -158,6 +173,11 @@ export function surfaceCoefficients(
     centreXM: fine.cx,
     centreZM: fine.cz,
     panels: fine.n,
+    tyreEdgeShare: fine.shares.outerEdgeShare,
+    innerEdgeShare: fine.shares.innerEdgeShare,
+    stripEdgeZM: fine.stripEdgeZ,
+    edgeXM: fine.edgeX,
+    edgeZM: fine.edgeZ,
     normalSlopeConvergence: normalConv,
     suctionSlopeConvergence: suctionConv,
   };

@@ -24,6 +24,10 @@ export interface WheelGeometry {
   rimWidthM: number;
   /** Radius of the hub flanges where the spokes start (m). The region inside it is treated as solid. */
   hubFlangeRadiusM: number;
+  /** Hub shell: the body between the flanges, a short cylinder across the wheel (diameter, m). */
+  hubShellDiameterM: number;
+  /** Hub shell length across the wheel exposed to the air (m). */
+  hubShellWidthM: number;
   spokeCount: number;
   spokeSection: SpokeSection;
   /** Round spoke diameter (m); used when spokeSection is 'round'. */
@@ -49,7 +53,8 @@ export interface ModelOptions {
   /** Lattice strips across the wheel (vertical, z) and panels along each strip (x). */
   latticeSpanCount: number;
   latticeChordCount: number;
-  /** Fraction of the potential leading-edge suction recovered as forward thrust (0..1). The rest
+  /** Scale (0..1) on the leading-edge thrust the tyre's round edge can attain (attainableEdgeThrust):
+   * 1 takes the derived bound as it is; 0 lets no suction act as thrust. Suction the edge cannot carry
    * reappears as vortex (normal) force by the Polhamus analogy. */
   suctionRecovered: number;
   /** Multiplies the spoked region's screen resistance coefficient derived from solidity. */
@@ -95,7 +100,10 @@ export interface ComponentLoads {
   axleTorqueNm: number;
 }
 
-export type ComponentName = 'surface' | 'vortex' | 'spokes' | 'rim_tyre' | 'friction';
+/** The model's parts, in the order every output lists them (appended to, never reordered: the
+ * packed worker rows, CSV columns and result documents follow this list). */
+export const COMPONENT_NAMES = ['surface', 'vortex', 'spokes', 'rim_tyre', 'friction', 'hub'] as const;
+export type ComponentName = (typeof COMPONENT_NAMES)[number];
 
 /** Grid-convergence estimate of one output (Celik et al. 2008 procedure). */
 export interface ConvergenceEstimate {

@@ -23,4 +23,6 @@ export const FLAG_MESSAGES: Record<string, string> = {
   spoke_reynolds_beyond_range: 'spoke Reynolds number outside the section-drag fit',
   suction_negative: 'potential leading-edge suction came out negative (heavily porous surface): set to zero',
   lattice_not_converged: 'lattice grid-convergence index above 5% or non-monotone convergence',
+  rim_reynolds_beyond_range:
+    'rim and tyre section Reynolds number outside 1e4..2e5: subcritical section drag data extrapolated',
 };

@@ -1,13 +1,14 @@
 import { describe, expect, it } from 'vitest';
+import { ISA_VISCOSITY } from '../../../src/compute/validation/referenceValues';
 import { sutherlandViscosity } from '../../../src/model/air/sutherlandViscosity';
 
 describe('sutherlandViscosity', () => {
   it('gives the ISA sea-level viscosity 1.7894e-5 Pa s at 288.15 K', () => {
     // Reference: ICAO 1993 ISA, mu(288.15 K) = 1.7894e-5 Pa s. Tolerance 2e-4 relative (the ISA uses
     // beta_s = 1.458e-6, S = 110.4 K, an equivalent Sutherland form).
-    const got = sutherlandViscosity(288.15);
-    const exp = 1.7894e-5;
-    const tol = 2e-4;
+    const got = sutherlandViscosity(ISA_VISCOSITY.temperatureK);
+    const exp = ISA_VISCOSITY.muPaS;
+    const tol = ISA_VISCOSITY.tolRel;
     expect(Math.abs(got / exp - 1), `got=${got} expected=${exp} tol(rel)=${tol}`).toBeLessThanOrEqual(tol);
   });
 

@@ -1,5 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
+import { CELIK_TABLE_1 } from '../../../src/compute/validation/referenceValues';
 import { gridConvergenceIndex } from '../../../src/model/convergence/gridConvergenceIndex';
 
 describe('gridConvergenceIndex', () => {
@@ -9,28 +10,39 @@ describe('gridConvergenceIndex', () => {
     // phi = 6.063, 5.972, 5.863 -> p = 1.53, phi_ext21 = 6.1685, e_a21 = 1.5 %, e_ext21 = 1.7 %, GCI21 = 2.2 %.
     // Tolerances: half a unit in the last printed digit.
     const h = (n: number) => Math.sqrt(1 / n);
+    const t = CELIK_TABLE_1;
     const got = gridConvergenceIndex({
-      h1: h(18000),
-      h2: h(8000),
-      h3: h(4500),
-      phi1: 6.063,
-      phi2: 5.972,
-      phi3: 5.863,
+      h1: h(t.cells[0]),
+      h2: h(t.cells[1]),
+      h3: h(t.cells[2]),
+      phi1: t.phi[0],
+      phi2: t.phi[1],
+      phi3: t.phi[2],
     });
     const checks: [string, number, number, number][] = [
       ['r21', got.refinementRatio21, 1.5, 5e-13],
       ['r32', got.refinementRatio32, 1.333, 5e-4],
-      ['p', got.observedOrder, 1.53, 5e-3],
-      ['phi_ext21', got.extrapolated, 6.1685, 5e-5],
-      ['e_a21', got.approximateRelativeError21, 0.015, 5e-4],
-      ['e_ext21', got.extrapolatedRelativeError21, 0.017, 5e-4],
-      ['GCI21', got.gciRelative, 0.022, 5e-4],
+      ['p', got.observedOrder, t.observedOrder.value, t.observedOrder.tolAbs],
+      ['phi_ext21', got.extrapolated, t.extrapolated21.value, t.extrapolated21.tolAbs],
+      [
+        'e_a21',
+        got.approximateRelativeError21,
+        t.approximateRelativeError21.value,
+        t.approximateRelativeError21.tolAbs,
+      ],
+      [
+        'e_ext21',
+        got.extrapolatedRelativeError21,
+        t.extrapolatedRelativeError21.value,
+        t.extrapolatedRelativeError21.tolAbs,
+      ],
+      ['GCI21', got.gciRelative, t.gci21.value, t.gci21.tolAbs],
     ];
     for (const [name, g, e, tol] of checks) {
       expect(Math.abs(g - e), `${name}: got=${g} expected=${e} tol=${tol}`).toBeLessThanOrEqual(tol);
     }
     expect(got.status).toBe('monotonic');
-    expect(got.fine).toBe(6.063);
+    expect(got.fine).toBe(t.phi[0]);
   });
 
   it('recovers the order of manufactured monotone data phi = E + C h^p (1e-6 absolute on p)', () => {

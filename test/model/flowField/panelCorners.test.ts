@@ -2,8 +2,8 @@ import { describe, expect, it } from 'vitest';
 import { panelCorners } from '../../../src/model/flowField/panelCorners';
 import { buildDiscLattice } from '../../../src/model/lattice/buildDiscLattice';
 import { buildWheelLattice } from '../../../src/model/lattice/buildWheelLattice';
+import { rectangularLattice } from '../../../src/model/lattice/rectangularLattice';
 import type { RingLattice } from '../../../src/model/lattice/types';
-import { rectangularLattice } from '../lattice/rectangularLattice';
 
 const EPS = Number.EPSILON;
 

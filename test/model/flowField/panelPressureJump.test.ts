@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { panelPressureJump } from '../../../src/model/flowField/panelPressureJump';
 import { buildDiscLattice } from '../../../src/model/lattice/buildDiscLattice';
+import { rectangularLattice } from '../../../src/model/lattice/rectangularLattice';
 import { solveLattice } from '../../../src/model/lattice/solveLattice';
-import { rectangularLattice } from '../lattice/rectangularLattice';
 
 describe('panelPressureJump', () => {
   it('integrates to the potential normal force Kp sin(b) cos(b) (Polhamus 1966 scaling), tol 1e-12 relative', () => {

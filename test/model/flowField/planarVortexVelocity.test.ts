@@ -3,8 +3,8 @@ import { packLatticeVortices } from '../../../src/model/flowField/packLatticeVor
 import { planarVortexVelocity } from '../../../src/model/flowField/planarVortexVelocity';
 import { buildWheelLattice } from '../../../src/model/lattice/buildWheelLattice';
 import { latticeVelocity } from '../../../src/model/lattice/latticeVelocity';
+import { rectangularLattice } from '../../../src/model/lattice/rectangularLattice';
 import { solveLattice } from '../../../src/model/lattice/solveLattice';
-import { rectangularLattice } from '../lattice/rectangularLattice';
 
 describe('packLatticeVortices + planarVortexVelocity', () => {
   it('reproduce latticeVelocity (Katz & Plotkin eq. 10.115 summed over the lattice) to 1e-12 of the local speed', () => {

@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { traceStreamline } from '../../../src/model/flowField/traceStreamline';
 import { buildWheelLattice } from '../../../src/model/lattice/buildWheelLattice';
+import { rectangularLattice } from '../../../src/model/lattice/rectangularLattice';
 import { solveLattice } from '../../../src/model/lattice/solveLattice';
-import { rectangularLattice } from '../lattice/rectangularLattice';
 
 const EPS = Number.EPSILON;
 const R = 0.334;

@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { trailingVortices } from '../../../src/model/flowField/trailingVortices';
 import { buildWheelLattice } from '../../../src/model/lattice/buildWheelLattice';
+import { rectangularLattice } from '../../../src/model/lattice/rectangularLattice';
 import { solveLattice } from '../../../src/model/lattice/solveLattice';
-import { rectangularLattice } from '../lattice/rectangularLattice';
 
 const EPS = Number.EPSILON;
 

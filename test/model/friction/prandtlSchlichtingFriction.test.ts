@@ -1,13 +1,14 @@
 import { describe, expect, it } from 'vitest';
+import { PRANDTL_SCHLICHTING_FRICTION } from '../../../src/compute/validation/referenceValues';
 import { prandtlSchlichtingFriction } from '../../../src/model/friction/prandtlSchlichtingFriction';
 
 describe('prandtlSchlichtingFriction', () => {
   it('gives 0.455/7^2.58 = 0.0030037 at Re 1e7', () => {
     // Reference: Schlichting, Boundary-Layer Theory ch. 21, C_f = 0.455 / (log10 Re)^2.58, evaluated by hand
     // (log10 1e7 = 7 -> 7^2.58 = 151.48); tolerance 1e-7 absolute.
-    const got = prandtlSchlichtingFriction(1e7);
-    const exp = 0.0030037;
-    const tol = 1e-7;
+    const got = prandtlSchlichtingFriction(PRANDTL_SCHLICHTING_FRICTION.reynolds);
+    const exp = PRANDTL_SCHLICHTING_FRICTION.cf;
+    const tol = PRANDTL_SCHLICHTING_FRICTION.tolAbs;
     expect(Math.abs(got - exp), `Re=1e7 got=${got} expected=${exp} tol=${tol}`).toBeLessThanOrEqual(tol);
   });
 

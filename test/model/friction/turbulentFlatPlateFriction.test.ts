@@ -1,13 +1,14 @@
 import { describe, expect, it } from 'vitest';
+import { TURBULENT_FRICTION } from '../../../src/compute/validation/referenceValues';
 import { turbulentFlatPlateFriction } from '../../../src/model/friction/turbulentFlatPlateFriction';
 
 describe('turbulentFlatPlateFriction', () => {
   it("is Prandtl's one-fifth law 0.074 Re^-0.2: 0.0029460 at Re 1e7", () => {
     // Reference: Schlichting, Boundary-Layer Theory ch. 21, C_f = 0.074 Re^(-1/5); 0.074 / 10^1.4 = 0.00294601.
     // Tolerance 1e-8 absolute (rounding of the quoted value).
-    const got = turbulentFlatPlateFriction(1e7);
-    const exp = 0.002946;
-    const tol = 1e-8;
+    const got = turbulentFlatPlateFriction(TURBULENT_FRICTION.reynolds);
+    const exp = TURBULENT_FRICTION.cf;
+    const tol = TURBULENT_FRICTION.tolAbs;
     expect(Math.abs(got - exp), `Re=1e7 got=${got} expected=${exp} tol=${tol}`).toBeLessThanOrEqual(tol);
   });
 

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { buildStripLattice } from '../../../src/model/lattice/buildStripLattice';
+import { rectangularLattice } from '../../../src/model/lattice/rectangularLattice';
 import { solveLattice } from '../../../src/model/lattice/solveLattice';
-import { rectangularLattice } from './rectangularLattice';
 
 describe('buildStripLattice', () => {
   it('2-D flat plate: a very long rectangular wing has lift slope 2 pi (thin-aerofoil theory, Anderson, Fundamentals of Aerodynamics sec. 4.7; exact for the 1/4-3/4 rule at any chordwise count, James 1972 - from memory)', () => {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { influenceMatrix } from '../../../src/model/lattice/influenceMatrix';
-import { rectangularLattice } from './rectangularLattice';
+import { rectangularLattice } from '../../../src/model/lattice/rectangularLattice';
 
 describe('influenceMatrix', () => {
   it('gives a single horseshoe the closed-form normal velocity (Katz & Plotkin sec. 2.13 segment + semi-infinite legs)', () => {

@@ -1,9 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { buildDiscLattice } from '../../../src/model/lattice/buildDiscLattice';
 import { latticeVelocity } from '../../../src/model/lattice/latticeVelocity';
+import { rectangularLattice } from '../../../src/model/lattice/rectangularLattice';
 import { segmentVelocity } from '../../../src/model/lattice/segmentVelocity';
 import { solveLattice } from '../../../src/model/lattice/solveLattice';
-import { rectangularLattice } from './rectangularLattice';
 
 const out = new Float64Array(3);
 const img = new Float64Array(3);

@@ -1,4 +1,11 @@
 import { describe, expect, it } from 'vitest';
+import {
+  CIRCULAR_WING_ASPECT_RATIO,
+  CIRCULAR_WING_INDUCED_DRAG_FACTOR,
+  helmboldSlopePerRad,
+  jonesSlopePerRad,
+  KINNER_SLOPE_PER_RAD,
+} from '../../../src/compute/validation/referenceValues';
 import { buildDiscLattice } from '../../../src/model/lattice/buildDiscLattice';
 import { DEFAULT_CHORD_COUNT, DEFAULT_SPAN_COUNT } from '../../../src/model/lattice/defaults';
 import { solveLattice } from '../../../src/model/lattice/solveLattice';
@@ -24,7 +31,7 @@ function richardson(f1: number, f2: number, f3: number): { limit: number; order:
 }
 
 // Thin circular wing, exact linear lift slope (Kinner 1937; Jordan 1973) - from memory: 1.790 per rad.
-const KINNER = 1.79;
+const KINNER = KINNER_SLOPE_PER_RAD;
 
 describe('solveLattice: solid thin circular wing without ground', () => {
   it("converges to Kinner's exact slope 1.790 /rad at second order; the default lattice is within 0.5 %", () => {
@@ -53,9 +60,9 @@ describe('solveLattice: solid thin circular wing without ground', () => {
 
   it("lies below Helmbold 2 pi A / (2 + sqrt(A^2 + 4)) = 1.830 and Jones' slender-wing pi A / 2 = 2.0 (A = 4 / pi)", () => {
     // Helmbold 1942 low-aspect-ratio formula; R. T. Jones 1946 slender-wing theory (from memory).
-    const A = 4 / Math.PI;
-    const helmbold = (2 * Math.PI * A) / (2 + Math.sqrt(A * A + 4));
-    const jones = (Math.PI * A) / 2;
+    const A = CIRCULAR_WING_ASPECT_RATIO;
+    const helmbold = helmboldSlopePerRad(A);
+    const jones = jonesSlopePerRad(A);
     expect(Math.abs(helmbold - 1.83), `Helmbold=${helmbold}`).toBeLessThanOrEqual(0.001);
     const got = solid(DEFAULT_SPAN_COUNT, DEFAULT_CHORD_COUNT, false).normalSlope;
     expect(got, `lattice=${got} < Helmbold=${helmbold}`).toBeLessThan(helmbold);
@@ -64,12 +71,12 @@ describe('solveLattice: solid thin circular wing without ground', () => {
 
   it('induced-drag factor Ki near 1 / (pi A) = 1/4 (nearly elliptic loading of the circular wing; tolerance 0.5 %, from memory)', () => {
     const sol = solid(DEFAULT_SPAN_COUNT, DEFAULT_CHORD_COUNT, false);
-    const expected = 0.25; // 1 / (pi A), A = 4 / pi: the elliptic minimum (Munk) - Ki can only be above it.
+    const expected = CIRCULAR_WING_INDUCED_DRAG_FACTOR.value; // 1 / (pi A), A = 4 / pi: the elliptic minimum (Munk) - Ki can only be above it.
     // Measured: 0.25013.
     expect(sol.inducedDragFactor, `Ki=${sol.inducedDragFactor} >= ${expected}`).toBeGreaterThanOrEqual(
       expected,
     );
-    const tol = 0.005 * expected;
+    const tol = CIRCULAR_WING_INDUCED_DRAG_FACTOR.tolRel * expected;
     expect(
       sol.inducedDragFactor - expected,
       `Ki=${sol.inducedDragFactor} expected=${expected} tol=${tol}`,

@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { MARTIN_EXAMPLE } from '../../../src/compute/validation/referenceValues';
 import { martinBearingPowerW } from '../../../src/model/ride/martinBearingPowerW';
 import { martinPower } from '../../../src/model/ride/martinPower';
 
@@ -14,32 +15,17 @@ describe('martinPower (Martin, Milliken, Cobb, McFadden & Coggan 1998, J. Appl. 
     //   P_PE = 10 x 80 x 9.81 x sin(atan 0.02) = 7848 x 0.019996001 = 156.928616 W
     //   P_KE = 0.5 x (80 + 0.14 / 0.311^2) x (10.1^2 - 9.9^2) / 20 = 0.5 x 81.447462 x 0.2 = 8.144746 W
     //   net  = 350.879086 W; P_TOT = 350.879086 / 0.976 = 359.507260 W
-    const got = martinPower({
-      groundSpeedMps: 10,
-      airVelocityAlongMps: 10,
-      rhoKgPerM3: 1.2,
-      cdaM2: 0.25,
-      wheelRotationAreaM2: 0.0044,
-      crr: 0.004,
-      massKg: 80,
-      gradient: 0.02,
-      gravityMps2: 9.81,
-      wheelInertiaKgM2: 0.14,
-      wheelRadiusM: 0.311,
-      initialSpeedMps: 9.9,
-      finalSpeedMps: 10.1,
-      intervalS: 20,
-      drivetrainEfficiency: 0.976,
-    });
-    const tol = 2e-7; // relative: the hand values carry 8-9 significant digits
+    const got = martinPower(MARTIN_EXAMPLE.input);
+    const tol = MARTIN_EXAMPLE.tolRel; // relative: the hand values carry 8-9 significant digits
+    const e = MARTIN_EXAMPLE.expected;
     const checks: [string, number, number][] = [
-      ['aeroW', got.aeroW, 152.64],
-      ['rollingW', got.rollingW, 31.385724],
-      ['bearingW', got.bearingW, 1.78],
-      ['gravityW', got.gravityW, 156.928616],
-      ['kineticW', got.kineticW, 8.144746],
-      ['netW', got.netW, 350.879086],
-      ['totalW', got.totalW, 359.50726],
+      ['aeroW', got.aeroW, e.aeroW],
+      ['rollingW', got.rollingW, e.rollingW],
+      ['bearingW', got.bearingW, e.bearingW],
+      ['gravityW', got.gravityW, e.gravityW],
+      ['kineticW', got.kineticW, e.kineticW],
+      ['netW', got.netW, e.netW],
+      ['totalW', got.totalW, e.totalW],
     ];
     for (const [name, g, e] of checks) {
       expect(Math.abs(g - e) / e, `${name}: got=${g} expected=${e} tol=${tol}`).toBeLessThanOrEqual(tol);

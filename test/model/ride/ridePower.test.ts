@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { MARTIN_EXAMPLE } from '../../../src/compute/validation/referenceValues';
 import { martinPower } from '../../../src/model/ride/martinPower';
 import { ridePower } from '../../../src/model/ride/ridePower';
 import { speedForPower } from '../../../src/model/ride/speedForPower';
@@ -47,21 +48,11 @@ describe('ridePower', () => {
   it('in still air with a load-free wheel equals Martin et al. 1998 without F_W and kinetic terms (hand-checked against martinPower)', () => {
     const got = ridePower(setup, curveOf(0, 0, 10), 10, 0, 0, 0);
     const m = martinPower({
-      groundSpeedMps: 10,
-      airVelocityAlongMps: 10,
-      rhoKgPerM3: 1.2,
-      cdaM2: 0.25,
+      ...MARTIN_EXAMPLE.input,
       wheelRotationAreaM2: 0,
-      crr: 0.004,
-      massKg: 80,
-      gradient: 0.02,
-      gravityMps2: 9.81,
-      wheelInertiaKgM2: 0.14,
-      wheelRadiusM: 0.311,
       initialSpeedMps: 10,
       finalSpeedMps: 10,
       intervalS: 1,
-      drivetrainEfficiency: 0.976,
     });
     // Martin's P_TOT for these inputs by hand: (150 + 31.385724 + 1.78 + 156.928616) / 0.976 = 340.094340 / 0.976 = 348.457316 W.
     expect(

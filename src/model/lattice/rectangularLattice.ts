@@ -1,8 +1,9 @@
-import { buildStripLattice } from '../../../src/model/lattice/buildStripLattice';
-import type { StripLattice } from '../../../src/model/lattice/types';
+import { buildStripLattice } from './buildStripLattice';
+import type { StripLattice } from './types';
 
 /**
- * Test helper: a flat rectangular wing of the given span (z from z0 to z0 + span) and chord
+ * A flat rectangular wing (used for the 2-D flat-plate check of the lattice, Anderson, Fundamentals of
+ * Aerodynamics sec. 4.7) of the given span (z from z0 to z0 + span) and chord
  * (leading edge at x = chord / 2), uniform strips with control points at mid-span, uniform panels.
  */
 export function rectangularLattice(

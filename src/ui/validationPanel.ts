@@ -1,0 +1,86 @@
+/**
+ * The Help tab's validation table: the built-in reference set (src/compute/validation) computed by the
+ * model in a page-jobs worker when Help is first opened (nothing runs at page load), with the same rows
+ * and numbers as `coversweep validate`: case, source, strength of the reference, reference and band,
+ * the model's value, pass or fail. The host's data-state says idle, computing, done or failed.
+ */
+import { formatNumber, withUnit } from '../compute/validation/bandText';
+import type { ValidationReport, ValidationRow } from '../compute/validation/types';
+import { el } from './dom';
+import { JobWorker } from './jobWorker';
+
+function referenceText(row: ValidationRow): string {
+  const nominal = row.reference === null ? '' : `${formatNumber(row.reference)}; `;
+  return withUnit(`${nominal}band ${row.band_text}`, row.unit);
+}
+
+function modelText(row: ValidationRow): string {
+  if (row.model === null) return `not computed: ${row.error ?? 'no value'}`;
+  return `${withUnit(formatNumber(row.model, 6), row.unit)}${row.note ? ` (${row.note})` : ''}`;
+}
+
+function tableRow(row: ValidationRow): HTMLTableRowElement {
+  return el('tr', { attrs: { 'data-id': row.id, 'data-pass': String(row.pass) } }, [
+    el('th', { attrs: { scope: 'row' } }, [
+      el('strong', { text: row.quantity }),
+      el('div', { className: 'small', text: row.description }),
+      el('div', { className: 'small muted', text: `${row.group} · ${row.id}` }),
+    ]),
+    el('td', { text: row.source }),
+    el('td', { text: row.strength }),
+    el('td', { text: referenceText(row) }),
+    el('td', { text: modelText(row) }),
+    el('td', { className: row.pass ? 'pass' : 'fail', text: row.pass ? 'pass' : 'FAIL' }),
+  ]);
+}
+
+function reportTable(report: ValidationReport): HTMLElement {
+  const head = ['Case', 'Source', 'Strength', 'Reference and band', 'Model', 'Result'];
+  return el('div', { className: 'table-scroll validation-scroll' }, [
+    el('table', { className: 'data-table validation-table', attrs: { id: 'validation-table' } }, [
+      el('caption', {
+        text: `${report.passed} of ${report.rows.length} reference cases pass; ${report.failed} fail`,
+      }),
+      el('thead', {}, [
+        el(
+          'tr',
+          {},
+          head.map((h) => el('th', { attrs: { scope: 'col' }, text: h })),
+        ),
+      ]),
+      el('tbody', {}, report.rows.map(tableRow)),
+    ]),
+  ]);
+}
+
+/** Compute the reference set in a worker and show it in `host` (once; later calls do nothing). */
+export class ValidationPanel {
+  private started = false;
+  private readonly worker = new JobWorker();
+
+  constructor(private readonly host: HTMLElement) {
+    host.dataset.state = 'idle';
+  }
+
+  shown(): void {
+    if (this.started) return;
+    this.started = true;
+    this.host.dataset.state = 'computing';
+    this.host.replaceChildren(el('p', { className: 'small', text: 'Computing the reference cases…' }));
+    void this.worker
+      .run((api) => api.validate())
+      .then((outcome) => {
+        if (outcome.status === 'done') {
+          this.host.replaceChildren(reportTable(outcome.value));
+          this.host.dataset.state = 'done';
+        } else {
+          const why = outcome.status === 'failed' ? outcome.error : outcome.status;
+          this.host.replaceChildren(
+            el('p', { className: 'field-error', text: `The reference cases could not be computed: ${why}` }),
+          );
+          this.host.dataset.state = 'failed';
+          this.started = false;
+        }
+      });
+  }
+}
