@@ -258,36 +258,48 @@ export async function writeSweep(
     });
   } else {
     let next = 0;
+    // A sink that fails (a full disk, a closed pipe) stops the run: the pool is cancelled, so no
+    // worker goes on solving, and the error is thrown once the pool has stopped.
+    const stop = new AbortController();
+    let failure: { error: unknown } | null = null;
     const outcome = await runPooledSweep(
       pool,
       plan.cases.map((c) => caseToModelInput(c.caseFile)),
       {
         keepSolutions: false,
+        signal: stop.signal,
         // Jobs of at most ~MAX_JOB_POINTS points: a job's results are held whole in its worker and
         // in the main thread until written, so big plans are cut finer than 8 jobs per worker.
         jobsPerWorker: Math.max(8, Math.ceil(plan.pointCount / (pool.size * MAX_JOB_POINTS))),
         ...(onProgress ? { onProgress } : {}),
         onCase: (i, solution, error) => {
-          const expanded = plan.cases[i]!;
-          const text = render(
-            i,
-            expanded,
-            solution ? solutionToDocument(expanded.caseFile, solution) : null,
-            error,
-          );
-          if (i !== next) {
-            spool.put(i, text);
-            return;
-          }
-          sink(text);
-          next++;
-          for (let held = spool.take(next); held !== null; held = spool.take(next)) {
-            sink(held);
+          if (failure !== null) return;
+          try {
+            const expanded = plan.cases[i]!;
+            const text = render(
+              i,
+              expanded,
+              solution ? solutionToDocument(expanded.caseFile, solution) : null,
+              error,
+            );
+            if (i !== next) {
+              spool.put(i, text);
+              return;
+            }
+            sink(text);
             next++;
+            for (let held = spool.take(next); held !== null; held = spool.take(next)) {
+              sink(held);
+              next++;
+            }
+          } catch (sinkError) {
+            failure = { error: sinkError };
+            stop.abort();
           }
         },
       },
     );
+    if (failure !== null) throw (failure as { error: unknown }).error;
     failed = outcome.failedCount;
     if (spool.size > 0) throw new Error(`sweep: ${spool.size} case(s) finished but were never written`);
     spool.close();
