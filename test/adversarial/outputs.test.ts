@@ -304,6 +304,7 @@ describe('output paths that are not new names or regular files', () => {
       JSON.stringify({
         ...plan,
         wheel: { ...plan.wheel, rim_depth_m: { from: 0.02, to: 0.059, step: 0.001 } },
+        model: { lattice_span: 16, lattice_chord: 8, grid_convergence: false },
       }),
     );
     const expected = await cliProcess(['sweep', 'plan2.json', '--workers', '0'], dir);
