@@ -287,6 +287,60 @@ describe('hostile input files', () => {
     expect(r.stderr).not.toContain('\u001b');
   });
 
+  it('seeded mutations of the example case and ride files (bytes flipped, inserted, cut; lines repeated): exit 0 or 2, never a crash', async () => {
+    const random = mulberry32(1409);
+    const sources: Array<[string, string]> = [
+      ['solve', caseText()],
+      ['ride', readFileSync(join(__dirname, '../../public/examples/ride.json'), 'utf8')],
+    ];
+    const noise = [
+      '"',
+      '{',
+      '}',
+      '[',
+      ']',
+      ',',
+      ':',
+      '-',
+      'e',
+      '9',
+      '0',
+      '\\',
+      '\u0000',
+      '\u00ff',
+      '\ud800',
+      'n',
+      ' ',
+    ];
+    for (let k = 0; k < 240; k++) {
+      const [command, text] = sources[k % 3 === 2 ? 1 : 0]!;
+      let mutated = text;
+      const edits = 1 + Math.floor(random() * 3);
+      for (let e = 0; e < edits; e++) {
+        const at = Math.floor(random() * mutated.length);
+        const kind = random();
+        if (kind < 0.3)
+          mutated = mutated.slice(0, at) + noise[Math.floor(random() * noise.length)] + mutated.slice(at + 1);
+        else if (kind < 0.55)
+          mutated = mutated.slice(0, at) + noise[Math.floor(random() * noise.length)] + mutated.slice(at);
+        else if (kind < 0.8)
+          mutated = mutated.slice(0, at) + mutated.slice(at + 1 + Math.floor(random() * 20));
+        else {
+          const lines = mutated.split('\n');
+          const i = Math.floor(random() * lines.length);
+          lines.splice(i, 0, lines[i]!);
+          mutated = lines.join('\n');
+        }
+      }
+      writeFileSync(join(dir, 'm.json'), mutated);
+      const r = await run([command, 'm.json']);
+      expect([0, 2], `${command} mutation ${k}: ${r.stderr.slice(0, 300)}`).toContain(r.code);
+      expect(r.stderr).not.toMatch(STACK_TRACE);
+      if (r.code === 2) expect(r.stdout, `mutation ${k}`).toBe('');
+      else expect(() => JSON.parse(r.stdout), `mutation ${k}`).not.toThrow();
+    }
+  }, 120_000);
+
   it('usage: an option given twice is refused, whichever form', async () => {
     writeFileSync(join(dir, 'c.json'), caseText());
     for (const argv of [
