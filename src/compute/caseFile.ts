@@ -6,7 +6,6 @@
  * document. It never throws on bad input: every problem becomes a message naming the key path, the
  * value and the rule.
  */
-
 import { z } from 'zod';
 import {
   airDensity,
