@@ -14,7 +14,7 @@ import {
   parseCaseFile,
   validateCase,
 } from '../compute/caseFile';
-import type { CalibrationResult, CompareResult } from '../compute/compare/index';
+import type { CalibrationResult } from '../compute/compare/index';
 import type { ViewField } from '../compute/engine/protocol';
 import { runSweep, type SweepProgress } from '../compute/engine/runSweep';
 import type { WorkerPool } from '../compute/engine/workerPool';
@@ -26,15 +26,18 @@ import {
   type AppState,
   type CalibrationMark,
   hashToState,
-  loadAutosave,
+  MAX_LINK_CHARS,
+  MAX_PROJECT_BYTES,
+  nameErrors,
   projectTextToState,
-  saveAutosave,
-  stateToHash,
+  stateToHashOrNull,
   stateToProjectText,
 } from './appState';
+import { AutosaveStore, type KeptCopy } from './autosave';
 import type { BrowserWorkerHandle } from './browserWorker';
 import { type ComputePlan, computePlan } from './computePlan';
 import { Controls } from './controls';
+import type { PackedResult, ReadOutcome } from './dataJobs';
 import type { DataContext, DataPanel, DataPlotName, DataRunRequest } from './dataPanel';
 import { type Cell, DataTable, type TableColumn } from './dataTable';
 import { defaultCase } from './defaultCase';
@@ -50,7 +53,8 @@ import {
   unitText,
 } from './displayUnits';
 import { downloadBlob, downloadText, safeFileStem } from './download';
-import { crashPoolWorker, scriptStartMs, spawnTracked, workersReadyMs } from './earlyPool';
+import { type DurableCopy, writeDurable } from './durableAutosave';
+import { crashPoolWorker, hangPoolWorkers, scriptStartMs, spawnTracked, workersReadyMs } from './earlyPool';
 import type { Field, FieldValue } from './fields';
 import { JobWorker } from './jobWorker';
 import { LinePlot, type PlotSeries } from './linePlot';
@@ -67,6 +71,7 @@ import {
   type ViewState,
   validateView,
 } from './viewState';
+import { type HangReport, onWorkerHang } from './watchdog';
 
 interface Results {
   plan: ComputePlan;
@@ -147,7 +152,14 @@ export class App {
   private lastCaseKey = '';
   private roadShown: { road: string; unit: string } = { road: '', unit: '' };
 
-  constructor(pool: WorkerPool) {
+  private readonly autosave: AutosaveStore;
+  /** Set aside at start-up (an unreadable autosave, or the autosave replaced by a link's design). */
+  private startupKept: { copy: KeptCopy | string; what: 'unreadable' | 'link'; errors: string[] } | null =
+    null;
+
+  /** `durable`: the autosave's durable copy, read before the page starts (main.ts). */
+  constructor(pool: WorkerPool, durable: DurableCopy | null = null) {
+    this.autosave = new AutosaveStore(localStorage, durable, writeDurable);
     this.messages = new Messages(byId('messages'));
     this.state = this.initialState();
     this.pool = pool;
@@ -158,6 +170,22 @@ export class App {
       handling: new LinePlot(plotDiv('fig-handling')),
     };
     this.designMap = new DesignMap(byId('fig-map').querySelector<HTMLElement>('.map')!);
+    onWorkerHang((r) => this.workerHung(r));
+  }
+
+  /** The watchdog stopped a hung solver worker: say so (the pool replaces it and retries the job once). */
+  private workerHung(r: HangReport): void {
+    const hangs = Number(document.body.dataset.workerHangs ?? '0') + 1;
+    document.body.dataset.workerHangs = String(hangs);
+    const what = `a job of ${r.cases} design${r.cases === 1 ? '' : 's'}`;
+    this.messages.show(
+      'warning',
+      `A solver worker stopped answering (no answer in ${Math.round(r.deadlineMs / 1000)} s for ${what}). It was stopped and replaced; its job is retried once on a fresh worker, and reported here if it fails again.`,
+      [],
+      'hang',
+    );
+    byId('status-text').textContent =
+      'A solver worker stopped answering: retrying its job on a fresh worker…';
   }
 
   private plotSpec(name: PlotName) {
@@ -196,6 +224,15 @@ export class App {
     this.dataLoading ??= import('./dataPanel').then(({ DataPanel }) => {
       const panel: DataPanel = new DataPanel(byId('panel-data'), {
         context: () => this.dataContext(),
+        read: async (ref, context) => {
+          const out = await this.dataWorker.run<ReadOutcome>(
+            (api) => api.readTable(ref, context),
+            readDeadlineMs(ref.source.kind === 'file' ? ref.source.file.size : ref.source.text.length),
+          );
+          if (out.status === 'superseded' || out.status === 'cancelled') return null;
+          if (out.status === 'failed') return { ok: false, errors: [out.error] };
+          return out.value;
+        },
         onLoadDemo: () => void this.loadDemoData(panel),
         onRun: (request) => void this.runComparison(panel, request),
         onCancel: () => {
@@ -228,15 +265,25 @@ export class App {
     this.wireTabs();
     this.apply(this.state, { replaceUrl: true });
     window.addEventListener('hashchange', () => this.onHashChange());
+    window.addEventListener('storage', (event) => {
+      if (this.autosave.isOtherTabSave(event)) this.otherTabSaved();
+      this.refreshKeptButton();
+    });
+    this.reportStartupKept();
     // Inspection for the browser tests and the curious: what each plot shows, the state, the last ride
-    // and comparison; and one test hook, which crashes a sweep worker as a real crash would.
-    (window as unknown as { coversweep: unknown }).coversweep = {
+    // and comparison. The browser tests' build (vite build --mode e2e) adds hooks that crash or hang a
+    // sweep worker as a real fault would; the production build leaves them out.
+    const inspect: Record<string, unknown> = {
       plot: (name: PlotName) => this.plotSpec(name),
       state: () => structuredClone(this.state),
       ride: () => structuredClone(this.road?.lastResult()?.document ?? null),
       comparison: () => structuredClone(this.data?.lastReport() ?? null),
-      crashWorker: () => crashPoolWorker(),
     };
+    if (import.meta.env.MODE === 'e2e') {
+      inspect.crashWorker = () => crashPoolWorker();
+      inspect.hangWorkers = (deadlineMs: number) => hangPoolWorkers(deadlineMs);
+    }
+    (window as unknown as { coversweep: unknown }).coversweep = inspect;
   }
 
   // -------------------------------------------------------------------------------------------
@@ -244,16 +291,25 @@ export class App {
 
   private initialState(): AppState {
     const fromHash = hashToState(location.hash);
-    if (fromHash?.ok) return fromHash.value;
-    let fallback: AppState | null = null;
-    const saved = loadAutosave(localStorage);
-    if (saved?.ok) fallback = saved.value;
-    else if (saved && !saved.ok) {
-      this.messages.show(
-        'warning',
-        'The autosaved design could not be read; starting from the demo wheel.',
-        saved.errors,
+    const saved = this.autosave.load();
+    if (saved.kind === 'unreadable') {
+      // Never replaced unseen: keep it, byte for byte, before anything else is saved.
+      const copy = this.autosave.keepAside(
+        saved.text,
+        `the autosave could not be read: ${saved.errors[0] ?? 'unknown fault'}`,
       );
+      this.startupKept = { copy, what: 'unreadable', errors: saved.errors };
+    }
+    const fallback = saved.kind === 'ok' ? saved.state : null;
+    if (fromHash?.ok) {
+      if (saved.kind === 'ok' && saved.text !== stateToProjectText(fromHash.value)) {
+        const copy = this.autosave.keepAside(
+          saved.text,
+          'your autosaved design, set aside when a link was opened',
+        );
+        this.startupKept = { copy, what: 'link', errors: [] };
+      }
+      return fromHash.value;
     }
     if (fromHash && !fromHash.ok) {
       this.messages.show(
@@ -266,8 +322,113 @@ export class App {
     return fallback ?? { case: defaultCase(), view: defaultView(), baseline: null };
   }
 
+  /** Say what was set aside at start-up, with buttons to restore or download it. */
+  private reportStartupKept(): void {
+    const k = this.startupKept;
+    if (!k) return;
+    if (typeof k.copy === 'string') {
+      this.messages.show(
+        'error',
+        'The autosaved design could not be read, and no copy could be kept; this tab does not autosave until you reload.',
+        [k.copy, ...k.errors],
+        'autosave',
+      );
+      return;
+    }
+    const copy = k.copy;
+    if (k.what === 'unreadable') {
+      this.messages.show(
+        'warning',
+        'The autosaved design could not be read; starting from the demo wheel. The unreadable autosave was kept aside unchanged: download it to repair or report it.',
+        k.errors,
+        'autosave',
+        [this.downloadKeptAction(copy)],
+      );
+    } else {
+      this.messages.show(
+        'info',
+        'Opened the design from the link. Your own autosaved design was kept aside, not overwritten.',
+        [],
+        'autosave',
+        [this.restoreKeptAction(copy), this.downloadKeptAction(copy)],
+      );
+    }
+  }
+
+  private downloadKeptAction(copy: KeptCopy) {
+    return {
+      label: 'Download it',
+      name: 'download-kept',
+      onClick: () =>
+        downloadText(
+          `coversweep-kept-${copy.keptAt.replace(/[:.]/g, '-')}.json`,
+          copy.text,
+          'application/json',
+        ),
+    };
+  }
+
+  private restoreKeptAction(copy: KeptCopy) {
+    return {
+      label: 'Restore it',
+      name: 'restore-kept',
+      onClick: () => {
+        const r = projectTextToState(copy.text, 'kept design');
+        if (!r.ok) {
+          this.messages.show('error', 'The kept design could not be read.', r.errors, 'autosave');
+          return;
+        }
+        // The design shown now is kept aside in its turn, so restoring loses nothing.
+        this.autosave.keepAside(
+          stateToProjectText(this.state),
+          'the design shown before a kept one was restored',
+        );
+        this.messages.clear('autosave');
+        this.apply(r.value);
+        this.messages.show(
+          'info',
+          'Restored the kept design; the one shown before it was kept aside.',
+          [],
+          'autosave',
+        );
+      },
+    };
+  }
+
+  /** Show or hide the "Kept designs" button (shown while copies are kept). */
+  private refreshKeptButton(): void {
+    const n = this.autosave.kept().length;
+    const b = byId('kept-designs');
+    b.hidden = n === 0;
+    b.textContent = `Kept designs (${n})`;
+  }
+
+  /** One notice per kept copy, newest first, each with Restore and Download. */
+  private showKept(): void {
+    const kept = this.autosave.kept();
+    kept.forEach((copy, i) => {
+      this.messages.show(
+        'info',
+        `Kept ${copy.keptAt.replace('T', ' ').slice(0, 19)} UTC: ${copy.reason}.`,
+        [],
+        `kept-${i}`,
+        [this.restoreKeptAction(copy), this.downloadKeptAction(copy)],
+      );
+    });
+  }
+
+  /** Another tab saved its design to the shared autosave. */
+  private otherTabSaved(): void {
+    this.messages.show(
+      'info',
+      'Another tab saved a different design to this browser’s autosave. This tab keeps showing its own; if you change it here, the other tab’s design is kept aside first (not lost), and you can restore it from the notice.',
+      [],
+      'tabs',
+    );
+  }
+
   private onHashChange(): void {
-    if (location.hash === stateToHash(this.state)) return;
+    if (location.hash === (stateToHashOrNull(this.state) ?? '')) return;
     const parsed = hashToState(location.hash);
     if (parsed === null) return;
     if (!parsed.ok) {
@@ -277,20 +438,38 @@ export class App {
         parsed.errors,
         'link',
       );
-      history.replaceState(null, '', stateToHash(this.state));
+      this.showHash(this.state, true);
       return;
     }
     this.messages.clear('link');
+    const before = stateToProjectText(this.state);
+    const keptCopy =
+      before !== stateToProjectText(parsed.value)
+        ? this.autosave.keepAside(before, 'the design shown when a link was opened in its tab')
+        : null;
     this.apply(parsed.value, { replaceUrl: false });
+    if (keptCopy !== null) {
+      this.startupKept = { copy: keptCopy, what: 'link', errors: [] };
+      this.reportStartupKept();
+    }
   }
 
   /** Make `next` the state: autosave, URL, controls, then recompute or redraw. */
   private apply(next: AppState, opts: { replaceUrl: boolean } = { replaceUrl: true }): void {
     this.state = next;
-    const err = saveAutosave(localStorage, next);
-    if (err) this.messages.show('warning', 'Autosave failed', [err], 'autosave');
-    const hash = stateToHash(next);
-    if (opts.replaceUrl || location.hash !== hash) history.replaceState(null, '', hash);
+    const saved = this.autosave.save(next);
+    this.refreshKeptButton();
+    if (saved.error) this.messages.show('warning', 'Autosave failed', [saved.error], 'autosave');
+    if (saved.kept) {
+      this.messages.show(
+        'warning',
+        'Another tab had autosaved a different design since this tab last saved: it was kept aside before this tab’s change was saved.',
+        [],
+        'tabs',
+        [this.restoreKeptAction(saved.kept), this.downloadKeptAction(saved.kept)],
+      );
+    }
+    this.showHash(next, opts.replaceUrl);
     this.controls.refresh(next);
     byId('clear-baseline').hidden = next.baseline === null;
     this.showTab(next.view.tab, false);
@@ -315,6 +494,23 @@ export class App {
     if (next.view.tab === 'road') this.scheduleRide(200);
   }
 
+  /** Put the state in the address bar, or clear it there (and say so) when too long for a link. */
+  private showHash(state: AppState, always: boolean): void {
+    const hash = stateToHashOrNull(state);
+    if (hash === null) {
+      history.replaceState(null, '', `${location.pathname}${location.search}`);
+      this.messages.show(
+        'warning',
+        `This design is too large for a link (more than ${MAX_LINK_CHARS / 1024} kB), so the address no longer holds it; it is still autosaved here. Save a project file to share it.`,
+        [],
+        'link-size',
+      );
+      return;
+    }
+    this.messages.clear('link-size');
+    if (always || location.hash !== hash) history.replaceState(null, '', hash);
+  }
+
   private onEdit(field: Field, value: FieldValue): void {
     const ctx = { case: this.state.case, view: this.state.view };
     const raw = structuredClone(
@@ -328,6 +524,12 @@ export class App {
     }
     if (field.target === 'case') {
       const r = validateCase(raw);
+      const long = r.ok ? nameErrors({ case: r.value }, 'design') : [];
+      if (long.length > 0) {
+        this.messages.show('error', `Not applied: ${field.label(ctx)}`, long, 'edit');
+        this.controls.revert(field.key, { case: this.state.case, view: this.state.view });
+        return;
+      }
       if (!r.ok) {
         this.messages.show(
           'error',
@@ -1340,6 +1542,15 @@ export class App {
       this.messages.clear('baseline');
     });
     byId('copy-link').addEventListener('click', () => {
+      if (stateToHashOrNull(this.state) === null) {
+        this.messages.show(
+          'error',
+          `No link made: this design is too large for a link (more than ${MAX_LINK_CHARS / 1024} kB). Save a project file to share it.`,
+          [],
+          'link-copy',
+        );
+        return;
+      }
       const link = location.href;
       navigator.clipboard?.writeText(link).then(
         () =>
@@ -1387,10 +1598,13 @@ export class App {
       void this.openFile(input, (text, name) => {
         const r = parseCaseFile(text);
         if (!r.ok) return r.errors.map((e) => `${name}: ${e}`);
+        const long = nameErrors({ case: r.value }, name);
+        if (long.length > 0) return long;
         this.apply({ ...this.state, case: r.value });
         return null;
       });
     });
+    byId('kept-designs').addEventListener('click', () => this.showKept());
     byId('reset').addEventListener('click', () => {
       this.apply({
         case: defaultCase(),
@@ -1417,7 +1631,10 @@ export class App {
     if (!file) return;
     let text: string;
     try {
-      if (file.size > 2_000_000) throw new Error(`the file is ${file.size} bytes; a design file is a few kB`);
+      if (file.size > MAX_PROJECT_BYTES)
+        throw new Error(
+          `the file is ${Math.round(file.size / 1024)} kB, more than the ${MAX_PROJECT_BYTES / 1024} kB limit; a design file is a few kB`,
+        );
       text = await file.text();
     } catch (error) {
       this.messages.show(
@@ -1641,7 +1858,7 @@ export class App {
         'demo',
       );
       panel.setDefaultRanges(caseAirDensity(c.value));
-      panel.readText(csvText, 'demo-tunnel.csv');
+      await panel.readText(csvText, 'demo-tunnel.csv');
     } catch (error) {
       panel.setStatus('error', `The demo data could not be loaded: ${(error as Error).message}`);
     }
@@ -1650,16 +1867,19 @@ export class App {
   private async runComparison(panel: DataPanel, req: DataRunRequest): Promise<void> {
     const caseFile: CaseFile = this.state.case;
     panel.setDefaultRanges(caseAirDensity(caseFile));
-    const out = await this.dataWorker.run<CompareResult>((api) =>
-      api.compare({
-        caseFile,
-        table: req.table,
-        map: req.map,
-        dataLabel: req.label,
-        calibrate: req.calibrate ? {} : false,
-        convergence: req.convergence ? {} : false,
-        uncertainty: req.uncertainty ? { ranges: req.uncertainty } : false,
-      }),
+    const heavy = req.calibrate || req.convergence || req.uncertainty !== null;
+    const out = await this.dataWorker.run<PackedResult>(
+      (api) =>
+        api.compareTable({
+          caseFile,
+          ref: req.ref,
+          map: req.map,
+          dataLabel: req.label,
+          calibrate: req.calibrate ? {} : false,
+          convergence: req.convergence ? {} : false,
+          uncertainty: req.uncertainty ? { ranges: req.uncertainty } : false,
+        }),
+      compareDeadlineMs(req.rowCount, heavy),
     );
     if (out.status === 'superseded' || out.status === 'cancelled') return;
     if (out.status === 'failed') {
@@ -1670,7 +1890,7 @@ export class App {
       panel.showErrors('The data could not be compared with the model:', out.value.errors);
       return;
     }
-    panel.showReport(out.value.value, req);
+    await panel.showReport(out.value.value, req);
   }
 
   private useCalibrated(use: boolean, calibration: CalibrationResult | null, points: number): void {
@@ -1710,6 +1930,20 @@ export class App {
       : '';
     this.data?.setCalibratedInUse(mark !== null);
   }
+}
+
+/**
+ * Deadlines of the data panel's background jobs (a worker silent for longer is taken as hung, replaced
+ * and the job retried once): generous on purpose, scaled by the job's size. Reading: 60 s plus 10 s per
+ * MB (reading runs at tens of MB/s). Comparing: 60 s plus 2 ms per data row, 50 times that for a fit,
+ * a convergence study or an uncertainty band (each evaluates the model many times per row).
+ */
+function readDeadlineMs(bytes: number): number {
+  return 60_000 + (10_000 * bytes) / 1_048_576;
+}
+
+function compareDeadlineMs(rows: number, heavy: boolean): number {
+  return 60_000 + 2 * rows * (heavy ? 50 : 1);
 }
 
 function byId<T extends HTMLElement = HTMLElement>(id: string): T {

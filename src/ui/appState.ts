@@ -61,12 +61,33 @@ export const PROJECT_VERSION = 1;
 export const LINK_VERSION = 1;
 export const AUTOSAVE_KEY = 'coversweep.autosave.v1';
 
+/** Longest design name (characters) the page accepts, in a link, a project file or the autosave. */
+export const MAX_NAME_CHARS = 200;
+/** Largest project file the page opens (bytes); a design with its view is a few kB. */
+export const MAX_PROJECT_BYTES = 1024 * 1024;
+/** Longest link fragment the page makes or reads (characters); larger designs go in a project file. */
+export const MAX_LINK_CHARS = 256 * 1024;
+
+/** Names too long for the page: messages naming the field, or none. */
+export function nameErrors(parts: { case?: unknown; baseline?: unknown }, label: string): string[] {
+  const errors: string[] = [];
+  for (const key of ['case', 'baseline'] as const) {
+    const part = parts[key];
+    const name = isObject(part) ? part.name : undefined;
+    if (typeof name === 'string' && name.length > MAX_NAME_CHARS)
+      errors.push(
+        `${label}: ${key}.name: at most ${MAX_NAME_CHARS} characters, got ${name.length} (a name, not a document)`,
+      );
+  }
+  return errors;
+}
+
 /** Validate the parts of a state object; `label` prefixes every message. */
 export function validateStateParts(
   parts: { case: unknown; view: unknown; baseline: unknown; road?: unknown; calibration?: unknown },
   label: string,
 ): Parsed<AppState> {
-  const errors: string[] = [];
+  const errors: string[] = nameErrors(parts, label);
   const c = validateCase(parts.case);
   if (!c.ok) errors.push(...c.errors.map((e) => `${label}: case.${e}`));
   const v = validateView(parts.view ?? {});
@@ -119,6 +140,12 @@ function isObject(x: unknown): x is Record<string, unknown> {
 // ---------------------------------------------------------------------------------------------
 // URL fragment: #s=<base64url of {"v":1,"case":...,"view":...,"baseline":...}>
 
+/** The state's link fragment, or null when it would be longer than MAX_LINK_CHARS. */
+export function stateToHashOrNull(state: AppState): string | null {
+  const hash = stateToHash(state);
+  return hash.length > MAX_LINK_CHARS ? null : hash;
+}
+
 export function stateToHash(state: AppState): string {
   const json = JSON.stringify({
     v: LINK_VERSION,
@@ -134,8 +161,15 @@ export function stateToHash(state: AppState): string {
 export function hashToState(hash: string): Parsed<AppState> | null {
   const body = hash.startsWith('#') ? hash.slice(1) : hash;
   if (body === '') return null;
-  const params = new URLSearchParams(body);
-  const encoded = params.get('s');
+  if (body.length > MAX_LINK_CHARS) {
+    return {
+      ok: false,
+      errors: [
+        `link: ${Math.round(body.length / 1024)} kB long, more than the ${MAX_LINK_CHARS / 1024} kB a link may carry; open the design from a project file instead`,
+      ],
+    };
+  }
+  const encoded = new URLSearchParams(body).get('s');
   if (encoded === null) return null;
   let text: string;
   try {
@@ -186,6 +220,14 @@ export function stateToProjectText(state: AppState): string {
 }
 
 export function projectTextToState(text: string, label = 'project file'): Parsed<AppState> {
+  if (text.length > MAX_PROJECT_BYTES) {
+    return {
+      ok: false,
+      errors: [
+        `${label}: ${Math.round(text.length / 1024)} kB, more than the ${MAX_PROJECT_BYTES / 1024} kB a project file may hold (a design with its view is a few kB)`,
+      ],
+    };
+  }
   const json = parseJsonText(text, label);
   if (!json.ok) return json;
   const raw = json.value;

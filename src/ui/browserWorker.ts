@@ -2,21 +2,27 @@
  * The page's Web Workers, wrapped by comlink: the sweep pool's solver worker (workers/solver.worker.ts)
  * and the worker of the ride and comparison jobs (src/ui/pageJobs.worker.ts). `failed` rejects when a
  * worker reports an uncaught error or cannot load, or when `crash()` stops it (the page's test hook for
- * a worker dying mid-sweep: terminate() alone would leave a call waiting forever, as a real crash does
- * not).
+ * a worker dying mid-sweep, and the watchdog's way to stop a hung one: terminate() alone would leave a
+ * call waiting forever, as a real crash does not).
  */
 import { type Remote, wrap } from 'comlink';
 import type { PageJobsApi } from '../compute/engine/pageJobs';
 import type { SolverApi } from '../compute/engine/protocol';
 import type { WorkerHandle } from '../compute/engine/workerPool';
+import type { DataJobsApi } from './dataJobs';
 
 export interface BrowserWorkerHandle extends WorkerHandle {
-  /** Stop the worker as if it had crashed: terminate it and reject `failed`. */
-  crash(): void;
+  /** The worker's own interface (`api` may be wrapped, e.g. by the watchdog). */
+  readonly rawApi: Remote<SolverApi>;
+  /** Stop the worker as if it had crashed: terminate it and reject `failed` (with `reason`). */
+  crash(reason?: string): void;
 }
 
+/** The page-jobs worker's interface: rides and comparisons, and the data panel's tables. */
+export type PageWorkerApi = PageJobsApi & DataJobsApi;
+
 export interface PageJobsHandle {
-  api: Remote<PageJobsApi>;
+  api: Remote<PageWorkerApi>;
   failed: Promise<never>;
   terminate(): void;
 }
@@ -38,13 +44,15 @@ function watch(worker: Worker, what: string): { failed: Promise<never>; reject: 
 export function spawnBrowserWorker(): BrowserWorkerHandle {
   const worker = new Worker(new URL('../../workers/solver.worker.ts', import.meta.url), { type: 'module' });
   const { failed, reject } = watch(worker, 'solver worker');
+  const api = wrap<SolverApi>(worker);
   return {
-    api: wrap<SolverApi>(worker),
+    api,
+    rawApi: api,
     failed,
     terminate: () => worker.terminate(),
-    crash: () => {
+    crash: (reason = 'solver worker stopped (crashed)') => {
       worker.terminate();
-      reject(new Error('solver worker stopped (crashed)'));
+      reject(new Error(reason));
     },
   };
 }
@@ -52,5 +60,5 @@ export function spawnBrowserWorker(): BrowserWorkerHandle {
 export function spawnPageJobsWorker(): PageJobsHandle {
   const worker = new Worker(new URL('./pageJobs.worker.ts', import.meta.url), { type: 'module' });
   const { failed } = watch(worker, 'ride and comparison worker');
-  return { api: wrap<PageJobsApi>(worker), failed, terminate: () => worker.terminate() };
+  return { api: wrap<PageWorkerApi>(worker), failed, terminate: () => worker.terminate() };
 }

@@ -12,9 +12,7 @@ import {
   type CalibrationResult,
   COEFFICIENT_QUANTITIES,
   type CompareReport,
-  type CsvResult,
-  type CsvTable,
-  guessMap,
+  type GuessContext,
   MAP_FORMAT,
   MAP_VERSION,
   MAX_DATA_BYTES,
@@ -23,17 +21,24 @@ import {
   OUTPUT_LABEL,
   type Output,
   PARAMETER_BOUNDS,
-  parseCsvText,
   QUANTITIES,
   QUANTITY_UNITS,
   type Quantity,
-  readCsvStream,
   UNCERTAIN_INPUTS,
   type UncertainInput,
   type UncertainRange,
   type Unit,
   validateMap,
 } from '../compute/compare/index';
+import {
+  type PackedComparison,
+  type ReadOutcome,
+  residualRowAt,
+  type TableRef,
+  type TableSource,
+  type TableSummary,
+  unpackComparison,
+} from './dataJobs';
 import { type Cell, DataTable } from './dataTable';
 import { fixed, fmt, speedFromMps, speedToMps, speedUnitText } from './displayUnits';
 import { button, el, plotFigure } from './dom';
@@ -54,7 +59,10 @@ export interface DataContext {
 }
 
 export interface DataRunRequest {
-  table: CsvTable;
+  /** The table (kept in the worker that read it; read again from its source by a fresh worker). */
+  ref: TableRef;
+  /** Data rows in the table (scales the job's deadline). */
+  rowCount: number;
   map: MapFile;
   label: string;
   calibrate: boolean;
@@ -107,12 +115,19 @@ interface MapRow {
   areaCell: HTMLElement;
 }
 
+/** At most this many data points are drawn per plot (an even subsample of larger tables). */
+export const MAX_PLOTTED_POINTS = 2000;
+
 export class DataPanel {
-  private table: CsvTable | null = null;
+  private table: TableSummary | null = null;
+  private ref: TableRef | null = null;
+  private nextTableId = 1;
   private label = '';
   private ctx: DataContext | null = null;
-  private applied: { table: CsvTable; map: MapFile; label: string } | null = null;
+  private applied: { ref: TableRef; rowCount: number; map: MapFile; label: string } | null = null;
+  /** The last comparison (slim report: its per-point arrays are in `packed`). */
   private report: CompareReport | null = null;
+  private packed: PackedComparison | null = null;
   private calibration: CalibrationResult | null = null;
   /** The last convergence study and uncertainty band, kept until the data, mapping or design change. */
   private convergence: CompareReport['convergence'] | null = null;
@@ -151,6 +166,8 @@ export class DataPanel {
     private readonly host: HTMLElement,
     private readonly handlers: {
       context(): DataContext;
+      /** Read a table in the background; null when superseded or cancelled. */
+      read(ref: TableRef, context: GuessContext): Promise<ReadOutcome | null>;
       onLoadDemo(): void;
       onRun(request: DataRunRequest): void;
       onCancel(): void;
@@ -427,23 +444,31 @@ export class DataPanel {
   // -------------------------------------------------------------------------------------------
   // Reading
 
-  private async readFile(file: File): Promise<void> {
-    this.setStatus('computing', `Reading ${file.name}…`);
-    let result: CsvResult;
-    try {
-      result = await readCsvStream(file.stream() as ReadableStream<Uint8Array>, { knownSize: file.size });
-    } catch (error) {
-      result = { ok: false, errors: [`could not read the file: ${(error as Error).message}`] };
-    }
-    this.useResult(result, file.name);
+  private readFile(file: File): Promise<void> {
+    return this.readSource({ kind: 'file', file }, file.name);
   }
 
   /** Read CSV or pasted text (also the demo file's text). */
-  readText(text: string, label: string): void {
-    this.useResult(parseCsvText(text), label);
+  readText(text: string, label: string): Promise<void> {
+    return this.readSource({ kind: 'text', text }, label);
   }
 
-  private useResult(result: CsvResult, label: string): void {
+  /** Read a table in the background worker (the page stays responsive however large it is). */
+  private async readSource(source: TableSource, label: string): Promise<void> {
+    this.setStatus('computing', `Reading ${label}…`);
+    const ctx = this.handlers.context();
+    this.ctx = ctx;
+    const ref: TableRef = { id: this.nextTableId++, source, label };
+    const result = await this.handlers.read(ref, {
+      referenceAreaM2: ctx.referenceAreaM2,
+      airspeedMps: ctx.airspeedMps,
+    });
+    if (result === null) return;
+    this.useResult(result, ref);
+  }
+
+  private useResult(result: ReadOutcome, ref: TableRef): void {
+    const label = ref.label;
     if (!result.ok) {
       this.readErrors.replaceChildren(
         el('strong', { text: `${label} could not be read; nothing changed.` }),
@@ -457,9 +482,11 @@ export class DataPanel {
       return;
     }
     this.readErrors.replaceChildren();
-    this.table = result.value;
+    this.table = result.summary;
+    this.ref = ref;
     this.label = label;
     this.report = null;
+    this.packed = null;
     this.calibration = null;
     this.convergence = null;
     this.uncertainty = null;
@@ -468,7 +495,7 @@ export class DataPanel {
     this.fillMapping();
     this.setStatus(
       'mapping',
-      `Read ${label}: ${result.value.rows.length} rows, ${result.value.headers.length} columns. Check what each column holds, then “Apply and compare”.`,
+      `Read ${label}: ${result.summary.rowCount} rows, ${result.summary.headers.length} columns. Check what each column holds, then “Apply and compare”.`,
     );
   }
 
@@ -476,14 +503,13 @@ export class DataPanel {
     const table = this.table!;
     const ctx = this.handlers.context();
     this.ctx = ctx;
-    const guess = guessMap(table.headers, table, {
-      referenceAreaM2: ctx.referenceAreaM2,
-      airspeedMps: ctx.airspeedMps,
-    });
+    const guess = table.guess;
+    // Column names are data: look them up without the prototype chain ("__proto__" is a name too).
+    const guessed = new Map(Object.entries(guess.map.columns));
     const rows: MapRow[] = [];
     const body = document.createDocumentFragment();
     table.headers.forEach((header, k) => {
-      const col = guess.map.columns[header] ?? { quantity: 'ignore', unit: '1' };
+      const col = guessed.get(header) ?? { quantity: 'ignore', unit: '1' };
       const unsure = guess.notes.some((n) => n.startsWith(`"${header}"`) && /CHECK|not recognised/.test(n));
       const quantity = el('select', {
         attrs: { 'aria-label': `Column ${k + 1}: what it holds`, 'data-col': String(k) },
@@ -546,7 +572,7 @@ export class DataPanel {
       {},
       table.headers.map((h) => el('th', { text: h, attrs: { scope: 'col' } })),
     );
-    const previewRows = table.rows.slice(0, 6).map((r) =>
+    const previewRows = table.preview.map((r) =>
       el(
         'tr',
         {},
@@ -567,7 +593,8 @@ export class DataPanel {
   /** The mapping table as a map file (not yet validated). */
   private mapFromForm(): { map: unknown; errors: string[] } {
     const errors: string[] = [];
-    const columns: Record<string, MapColumn> = {};
+    // No prototype: a column may be named "__proto__", "constructor" or "prototype".
+    const columns: Record<string, MapColumn> = Object.create(null);
     for (const r of this.mapRows) {
       const q = r.quantity.value as Quantity;
       const col: MapColumn = { quantity: q, unit: r.unit.value as Unit };
@@ -601,7 +628,7 @@ export class DataPanel {
   }
 
   private apply(): void {
-    if (!this.table) return;
+    if (!this.table || !this.ref) return;
     const { map, errors } = this.mapFromForm();
     const v = validateMap(map);
     const all = [...errors, ...(v.ok ? [] : v.errors)];
@@ -617,7 +644,7 @@ export class DataPanel {
       return;
     }
     this.mapErrors.replaceChildren();
-    this.applied = { table: this.table, map: v.value, label: this.label };
+    this.applied = { ref: this.ref, rowCount: this.table.rowCount, map: v.value, label: this.label };
     this.calibration = null;
     this.convergence = null;
     this.uncertainty = null;
@@ -698,8 +725,13 @@ export class DataPanel {
     return this.plots[name].currentSpec();
   }
 
+  /**
+   * The last comparison in full, once all of it is on screen (its per-point rows rebuilt from the
+   * columns: for inspection).
+   */
   lastReport(): CompareReport | null {
-    return this.report;
+    if (!this.report || !this.packed) return null;
+    return { ...unpackComparison({ ...this.packed, report: this.report }) };
   }
 
   /** The uncertainty ranges' defaults for the design (density +- 2 %, suction recovery 0.3..0.7). */
@@ -731,17 +763,27 @@ export class DataPanel {
     );
   }
 
-  showReport(fresh: CompareReport, request: DataRunRequest): void {
+  /** Counts showReport calls: a newer report stops an older one still drawing. */
+  private reportsShown = 0;
+
+  /**
+   * Show a comparison. Drawn in steps, the page getting control back between them (each plot forces a
+   * layout; a large table's page is built on its own), so no single task blocks the page for long.
+   */
+  async showReport(packed: PackedComparison, request: DataRunRequest): Promise<void> {
+    const token = ++this.reportsShown;
     const ctx = this.handlers.context();
     this.ctx = ctx;
+    const fresh = packed.report;
     if (fresh.convergence) this.convergence = fresh.convergence;
     if (fresh.uncertainty) this.uncertainty = fresh.uncertainty;
     const report: CompareReport = { ...fresh };
     if (this.convergence) report.convergence = this.convergence;
     if (this.uncertainty) report.uncertainty = this.uncertainty;
-    this.report = report;
+    this.report = null; // until it is all on screen
+    this.packed = packed;
     this.results.hidden = false;
-    const n = report.converted.length;
+    const n = packed.converted.count;
     this.summary.textContent = `${n} data point${n === 1 ? '' : 's'} from ${report.data}, compared with ${ctx.designName}. Airspeed: ${report.conversion.airspeed}. Air density: ${report.conversion.density}.`;
     this.flags.replaceChildren(
       ...(report.flags.length > 0
@@ -759,13 +801,31 @@ export class DataPanel {
           ]),
     );
     if (request.calibrate && report.calibration) this.calibration = report.calibration;
-    this.renderOverlay(report);
-    this.renderResiduals(report);
+    // The small tables at once...
     this.renderFit();
     this.convergenceBlock.hidden = !report.convergence;
     if (report.convergence) this.renderConvergence(report);
     this.uncertaintyBlock.hidden = !report.uncertainty;
     if (report.uncertainty) this.renderUncertainty(report);
+    // ...then the plots and the residuals, each after the next frame (or after 100 ms in a hidden tab,
+    // which has no frames), so the browser lays out and paints each on its own.
+    const steps = [
+      () => this.renderOverlay(report, 'dataForce'),
+      () => this.renderOverlay(report, 'dataSide'),
+      () => this.renderResiduals(report),
+    ];
+    for (const step of steps) {
+      await new Promise((resolve) => {
+        const late = setTimeout(resolve, 100);
+        requestAnimationFrame(() => {
+          clearTimeout(late);
+          setTimeout(resolve, 0);
+        });
+      });
+      if (token !== this.reportsShown) return;
+      step();
+    }
+    this.report = report;
     this.setStatus(
       'done',
       request.calibrate
@@ -778,8 +838,10 @@ export class DataPanel {
     );
   }
 
-  private renderOverlay(report: CompareReport): void {
+  private renderOverlay(report: CompareReport, which: DataPlotName): void {
     const outs = new Set(report.band.map((b) => b.output));
+    const conv = this.packed!.converted;
+    this.plotStride = Math.max(1, Math.ceil(conv.count / MAX_PLOTTED_POINTS));
     const first: Output = outs.has('axial_N')
       ? 'axial_N'
       : outs.has('wind_drag_N')
@@ -790,18 +852,26 @@ export class DataPanel {
       : outs.has('yaw_moment_Nm')
         ? 'yaw_moment_Nm'
         : first;
-    this.renderOne('dataForce', first, report);
-    this.renderOne('dataSide', second, report);
+    if (which === 'dataForce') this.renderOne('dataForce', first, report);
+    else this.renderOne('dataSide', second, report);
   }
+
+  /** Every how many data points one is drawn (1 up to MAX_PLOTTED_POINTS points). */
+  private plotStride = 1;
 
   private renderOne(name: DataPlotName, out: Output, report: CompareReport): void {
     const ctx = this.ctx!;
+    const conv = this.packed!.converted;
+    const values = conv.values[out];
+    const stride = this.plotStride;
     const unit = out.endsWith('_Nm') ? 'N m' : 'N';
     const key = (v: number) => v.toPrecision(6);
     const speeds = [...new Map(report.band.map((b) => [key(b.airspeed_mps), b.airspeed_mps])).values()];
     const xsSet = new Set<number>();
     for (const b of report.band) if (b.output === out) xsSet.add(round9(b.yaw_deg));
-    for (const r of report.converted) if (r[out] !== undefined) xsSet.add(round9(r.yaw_deg));
+    if (values)
+      for (let i = 0; i < conv.count; i += stride)
+        if (!Number.isNaN(values[i]!)) xsSet.add(round9(conv.yaw_deg[i]!));
     const xs = [...xsSet].sort((a, b) => a - b);
     const at = new Map(xs.map((x, i) => [x, i]));
     const series: PlotSeries[] = [];
@@ -825,11 +895,13 @@ export class DataPanel {
         }
       }
       const data: Array<number | null> = xs.map(() => null);
-      for (const r of report.converted) {
-        const y = r[out];
-        if (y === undefined || key(r.airspeed_mps) !== key(v)) continue;
-        data[at.get(round9(r.yaw_deg))!] = y;
-      }
+      const speedKey = key(v);
+      if (values)
+        for (let i = 0; i < conv.count; i += stride) {
+          const y = values[i]!;
+          if (Number.isNaN(y) || key(conv.airspeed_mps[i]!) !== speedKey) continue;
+          data[at.get(round9(conv.yaw_deg[i]!))!] = y;
+        }
       series.push({
         label: `model ${speedText}`,
         stroke: colour,
@@ -894,11 +966,13 @@ export class DataPanel {
       }
     });
     const label = OUTPUT_LABEL[out];
-    const title = `${label[0]!.toUpperCase()}${label.slice(1)} vs yaw: data (dots) over the model (lines; shaded: ± lattice uncertainty${report.uncertainty ? ', dotted: input-uncertainty band' : ''})`;
+    const sampled =
+      stride > 1 ? `; every ${stride}th of ${conv.count.toLocaleString('en')} data points drawn` : '';
+    const title = `${label[0]!.toUpperCase()}${label.slice(1)} vs yaw: data (dots) over the model (lines; shaded: ± lattice uncertainty${report.uncertainty ? ', dotted: input-uncertainty band' : ''}${sampled})`;
     this.plotTitles[name].textContent = title;
     this.plots[name].render({
       title,
-      xLabel: `Yaw, deg — model at the data's airspeeds and air density (ρ ${fixed(report.converted[0]?.air_density_kgpm3 ?? Number.NaN, 3)} kg/m³)`,
+      xLabel: `Yaw, deg — model at the data's airspeeds and air density (ρ ${fixed(conv.count > 0 ? conv.air_density_kgpm3[0]! : Number.NaN, 3)} kg/m³)`,
       xLabelShort: 'Yaw, deg',
       yLabel: `${label[0]!.toUpperCase()}${label.slice(1)}, ${unit}`,
       xs,
@@ -908,8 +982,33 @@ export class DataPanel {
   }
 
   private renderResiduals(report: CompareReport): void {
-    const su = speedUnitText(this.ctx!.speedUnit);
-    this.residuals.setData(
+    const speedUnit = this.ctx!.speedUnit;
+    const su = speedUnitText(speedUnit);
+    const res = this.packed!.residuals;
+    const cell = (i: number, k: number): Cell => {
+      const r = residualRowAt(res, i);
+      switch (k) {
+        case 0:
+          return r.line;
+        case 1:
+          return r.yaw_deg;
+        case 2:
+          return speedFromMps(r.airspeed_mps, speedUnit);
+        case 3:
+          return `${OUTPUT_LABEL[r.output]} (${r.output.endsWith('_Nm') ? 'N m' : 'N'})`;
+        case 4:
+          return r.data;
+        case 5:
+          return r.model;
+        case 6:
+          return r.residual;
+        case 7:
+          return r.model_uncertainty;
+        default:
+          return r.within_band === null ? '—' : r.within_band ? 'yes' : 'no';
+      }
+    };
+    this.residuals.setRows(
       [
         { header: 'Line', decimals: 0 },
         { header: 'Yaw, deg', decimals: 2 },
@@ -921,17 +1020,7 @@ export class DataPanel {
         { header: 'Model ±, SI', decimals: 4 },
         { header: 'Within band' },
       ],
-      report.residuals.map((r) => [
-        r.line,
-        r.yaw_deg,
-        speedFromMps(r.airspeed_mps, this.ctx!.speedUnit),
-        `${OUTPUT_LABEL[r.output]} (${r.output.endsWith('_Nm') ? 'N m' : 'N'})`,
-        r.data,
-        r.model,
-        r.residual,
-        r.model_uncertainty,
-        r.within_band === null ? '—' : r.within_band ? 'yes' : 'no',
-      ]),
+      { count: res.count, cell },
     );
     this.residualSummary.setData(
       [

@@ -2,6 +2,10 @@
  * A sortable data table: headers carry units, each header is a button that sorts by its column
  * (aria-sort says which), numbers are shown to a fixed number of decimals and exported to CSV at full
  * precision. All text goes in through textContent.
+ *
+ * Rows come from a source read on demand (a count and a cell getter), so a table of 300,000 rows costs
+ * no per-row objects; at most PAGE_ROWS rows are in the document at a time, with a pager below the table
+ * (first, previous, next, last page, and which rows are shown). Sorting orders an index of the rows.
  */
 import { toCsv } from './csv';
 import { fixed } from './displayUnits';
@@ -14,12 +18,28 @@ export interface TableColumn {
 
 export type Cell = number | string | null;
 
+/** Rows read on demand: `cell(row, column)` for row < count. */
+export interface RowSource {
+  count: number;
+  cell(row: number, column: number): Cell;
+}
+
+/** Most rows in the document at once. */
+export const PAGE_ROWS = 100;
+
+export function rowsSource(rows: readonly Cell[][]): RowSource {
+  return { count: rows.length, cell: (i, k) => rows[i]![k] ?? null };
+}
+
 export class DataTable {
   readonly element: HTMLTableElement;
+  private readonly pager: HTMLElement;
   private columns: TableColumn[] = [];
-  private rows: Cell[][] = [];
+  private source: RowSource = { count: 0, cell: () => null };
+  private order: Uint32Array | null = null;
   private sortColumn = -1;
   private sortAscending = true;
+  private page = 0;
 
   constructor(
     container: HTMLElement,
@@ -32,7 +52,11 @@ export class DataTable {
     const cap = document.createElement('caption');
     cap.textContent = caption;
     this.element.append(cap, document.createElement('thead'), document.createElement('tbody'));
-    container.append(this.element);
+    this.pager = document.createElement('div');
+    this.pager.className = 'pager small';
+    this.pager.id = `${id}-pager`;
+    this.pager.hidden = true;
+    container.append(this.element, this.pager);
   }
 
   setCaption(text: string): void {
@@ -40,28 +64,53 @@ export class DataTable {
   }
 
   setData(columns: TableColumn[], rows: Cell[][]): void {
+    this.setRows(columns, rowsSource(rows));
+  }
+
+  /** Show `source`'s rows under `columns` (the first page; the sort is kept if the columns are). */
+  setRows(columns: TableColumn[], source: RowSource): void {
     const sameColumns =
       columns.length === this.columns.length && columns.every((c, i) => c.header === this.columns[i]!.header);
     this.columns = columns;
-    this.rows = rows;
+    this.source = source;
     if (!sameColumns) this.sortColumn = -1;
+    if (source.count <= this.page * PAGE_ROWS) this.page = 0;
+    this.sortRows();
     this.draw();
   }
 
-  private sorted(): Cell[][] {
-    if (this.sortColumn < 0) return this.rows;
+  get rowCount(): number {
+    return this.source.count;
+  }
+
+  /** Row `i` in display order -> source row. */
+  private rowAt(i: number): number {
+    return this.order ? this.order[i]! : i;
+  }
+
+  private sortRows(): void {
+    const n = this.source.count;
+    if (this.sortColumn < 0) {
+      this.order = null;
+      return;
+    }
     const k = this.sortColumn;
     const dir = this.sortAscending ? 1 : -1;
-    return [...this.rows].sort((a, b) => {
-      const x = a[k];
-      const y = b[k];
+    const keys: Cell[] = new Array(n);
+    for (let i = 0; i < n; i++) keys[i] = this.source.cell(i, k);
+    const order = new Uint32Array(n);
+    for (let i = 0; i < n; i++) order[i] = i;
+    order.sort((a, b) => {
+      const x = keys[a]!;
+      const y = keys[b]!;
       if (typeof x === 'number' && typeof y === 'number') {
-        if (Number.isNaN(x)) return 1;
+        if (Number.isNaN(x)) return Number.isNaN(y) ? a - b : 1;
         if (Number.isNaN(y)) return -1;
-        return (x - y) * dir;
+        return (x - y) * dir || a - b;
       }
-      return String(x ?? '').localeCompare(String(y ?? '')) * dir;
+      return String(x ?? '').localeCompare(String(y ?? '')) * dir || a - b;
     });
+    this.order = order;
   }
 
   private draw(): void {
@@ -84,6 +133,8 @@ export class DataTable {
           this.sortColumn = k;
           this.sortAscending = true;
         }
+        this.page = 0;
+        this.sortRows();
         this.draw();
         (this.element.tHead!.rows[0]!.cells[k]!.firstElementChild as HTMLElement | null)?.focus();
       });
@@ -91,13 +142,17 @@ export class DataTable {
       headRow.append(th);
     });
     thead.replaceChildren(headRow);
+    const n = this.source.count;
+    const first = this.page * PAGE_ROWS;
+    const last = Math.min(n, first + PAGE_ROWS);
     const fragment = document.createDocumentFragment();
-    for (const row of this.sorted()) {
+    for (let i = first; i < last; i++) {
+      const r = this.rowAt(i);
       const tr = document.createElement('tr');
-      row.forEach((cell, k) => {
+      this.columns.forEach((col, k) => {
+        const cell = this.source.cell(r, k);
         const td = document.createElement(k === 0 ? 'th' : 'td');
         if (k === 0) (td as HTMLTableCellElement).scope = 'row';
-        const col = this.columns[k]!;
         td.textContent =
           typeof cell === 'number' ? fixed(cell, col.decimals ?? 3) : cell === null ? '—' : String(cell);
         if (typeof cell === 'number') td.className = 'num';
@@ -106,13 +161,55 @@ export class DataTable {
       fragment.append(tr);
     }
     tbody.replaceChildren(fragment);
+    this.drawPager(first, last, n);
+  }
+
+  private drawPager(first: number, last: number, n: number): void {
+    this.pager.hidden = n <= PAGE_ROWS;
+    if (this.pager.hidden) {
+      this.pager.replaceChildren();
+      return;
+    }
+    const pages = Math.ceil(n / PAGE_ROWS);
+    const go = (label: string, page: number, disabled: boolean) => {
+      const b = document.createElement('button');
+      b.type = 'button';
+      b.textContent = label;
+      b.disabled = disabled;
+      b.dataset.page = String(page);
+      b.addEventListener('click', () => {
+        this.page = page;
+        this.draw();
+      });
+      return b;
+    };
+    const text = document.createElement('span');
+    text.setAttribute('role', 'status');
+    text.textContent = `Rows ${(first + 1).toLocaleString('en')}–${last.toLocaleString('en')} of ${n.toLocaleString('en')} (page ${this.page + 1} of ${pages}); the CSV export has every row.`;
+    this.pager.replaceChildren(
+      go('First', 0, this.page === 0),
+      go('Previous', this.page - 1, this.page === 0),
+      text,
+      go('Next', this.page + 1, this.page >= pages - 1),
+      go('Last', pages - 1, this.page >= pages - 1),
+    );
   }
 
   /** The table as CSV (units in the header names), full precision, in the current sort order. */
   toCsv(): string {
+    const rows: Cell[][] = [];
+    for (let i = 0; i < this.source.count; i++) {
+      const r = this.rowAt(i);
+      rows.push(
+        this.columns.map((_, k) => {
+          const c = this.source.cell(r, k);
+          return typeof c === 'number' && !Number.isFinite(c) ? null : c;
+        }),
+      );
+    }
     return toCsv(
       this.columns.map((c) => c.header),
-      this.sorted().map((r) => r.map((c) => (typeof c === 'number' && !Number.isFinite(c) ? null : c))),
+      rows,
     );
   }
 }

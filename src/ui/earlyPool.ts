@@ -1,11 +1,13 @@
 /**
  * The solver workers, started as soon as the page's script runs (this module is evaluated with
  * main.ts, before the page is built), so that they load while the page builds its controls: the first
- * results wait for a worker, not for the page. Every live worker is tracked for the page's test hook
- * that crashes one mid-sweep.
+ * results wait for a worker, not for the page. Every solver job has a deadline (watchdog.ts): a hung
+ * worker is stopped, replaced and its job retried once. Every live worker is tracked for the page's test
+ * hooks (browser tests only) that crash or hang one mid-sweep.
  */
 import { WorkerPool } from '../compute/engine/workerPool';
 import { type BrowserWorkerHandle, spawnBrowserWorker } from './browserWorker';
+import { overrideDeadline, watchSolver } from './watchdog';
 
 /** When the page's script started (ms after navigation start), for the timings the page reports. */
 export const scriptStartMs = performance.now();
@@ -15,6 +17,7 @@ export const liveWorkers = new Set<BrowserWorkerHandle>();
 /** Spawn a solver worker and track it while it lives. */
 export function spawnTracked(): BrowserWorkerHandle {
   const h = spawnBrowserWorker();
+  watchSolver(h);
   liveWorkers.add(h);
   const terminate = h.terminate;
   h.terminate = () => {
@@ -46,15 +49,35 @@ export const poolWarm: Promise<void> = pool.warm().then(
   () => undefined,
 );
 
-/** Test hook: crash one live sweep worker (the most recently started). Returns whether one was live. */
-export function crashPoolWorker(): boolean {
+/** The most recently started live sweep worker, if any (for the test hooks). */
+function lastLivePoolWorker(): BrowserWorkerHandle | null {
   for (let i = poolWorkers.length - 1; i >= 0; i--) {
     const h = poolWorkers[i]!;
-    if (liveWorkers.has(h)) {
-      h.crash();
-      liveWorkers.delete(h);
-      return true;
-    }
+    if (liveWorkers.has(h)) return h;
   }
-  return false;
+  return null;
+}
+
+/** Test hook: crash one live sweep worker (the most recently started). Returns whether one was live. */
+export function crashPoolWorker(): boolean {
+  const h = lastLivePoolWorker();
+  if (!h) return false;
+  h.crash();
+  liveWorkers.delete(h);
+  return true;
+}
+
+/**
+ * Test hook: make every live sweep worker hang (loop forever) on its next job, with the watchdog's
+ * deadline for them cut to `deadlineMs`. Needs the test build's worker (workers/testHang.ts).
+ */
+export function hangPoolWorkers(deadlineMs: number): number {
+  let n = 0;
+  for (const h of poolWorkers) {
+    if (!liveWorkers.has(h)) continue;
+    overrideDeadline(h, deadlineMs);
+    void (h.rawApi as unknown as { hangNextJob(): Promise<void> }).hangNextJob();
+    n++;
+  }
+  return n;
 }

@@ -3,12 +3,14 @@
  * they neither wait for nor slow down the design's sweeps more than the machine must. Latest wins: a
  * request made while one runs replaces any request still waiting, and a superseded answer is dropped.
  * cancel() stops the worker at once (a long calibration) and the next request starts a fresh one.
+ * A job may carry a deadline (ms): a worker that has not answered by then is taken as hung, stopped and
+ * replaced, and the job is tried once more on a fresh worker; a second hang is reported as a failure
+ * naming the deadline.
  */
 import type { Remote } from 'comlink';
-import type { PageJobsApi } from '../compute/engine/pageJobs';
-import { type PageJobsHandle, spawnPageJobsWorker } from './browserWorker';
+import { type PageJobsHandle, type PageWorkerApi, spawnPageJobsWorker } from './browserWorker';
 
-export type JobCall<T> = (api: Remote<PageJobsApi>) => Promise<T>;
+export type JobCall<T> = (api: Remote<PageWorkerApi>) => Promise<T>;
 
 export type JobOutcome<T> =
   | { status: 'done'; value: T }
@@ -19,6 +21,9 @@ export type JobOutcome<T> =
 interface Pending {
   call: JobCall<unknown>;
   resolve: (outcome: JobOutcome<unknown>) => void;
+  deadlineMs: number;
+  /** Tries so far (a hung try is repeated once). */
+  tries: number;
 }
 
 export class JobWorker {
@@ -33,10 +38,18 @@ export class JobWorker {
     return this.running !== null;
   }
 
-  /** Run a job; resolves with its outcome (never rejects). */
-  run<T>(call: JobCall<T>): Promise<JobOutcome<T>> {
+  /** Jobs given up as hung (for the page's status and tests). */
+  hangs = 0;
+
+  /** Run a job; resolves with its outcome (never rejects). `deadlineMs`: see the class comment. */
+  run<T>(call: JobCall<T>, deadlineMs = Number.POSITIVE_INFINITY): Promise<JobOutcome<T>> {
     return new Promise((resolve) => {
-      const job: Pending = { call, resolve: resolve as (o: JobOutcome<unknown>) => void };
+      const job: Pending = {
+        call,
+        resolve: resolve as (o: JobOutcome<unknown>) => void,
+        deadlineMs,
+        tries: 0,
+      };
       if (this.running) {
         this.waiting?.resolve({ status: 'superseded' });
         this.waiting = job;
@@ -62,6 +75,9 @@ export class JobWorker {
     const epoch = this.epoch;
     let outcome: JobOutcome<unknown>;
     let crashed = false;
+    let hung = false;
+    let timer: ReturnType<typeof setTimeout> | undefined;
+    job.tries++;
     try {
       this.handle ??= this.spawn();
       const h = this.handle;
@@ -69,17 +85,37 @@ export class JobWorker {
         crashed = true;
         throw error;
       });
-      const value = await Promise.race([job.call(h.api), died]);
+      const deadline = new Promise<never>((_, reject) => {
+        if (Number.isFinite(job.deadlineMs))
+          timer = setTimeout(() => {
+            hung = true;
+            reject(
+              new Error(
+                `the background worker stopped answering (no answer in ${Math.round(job.deadlineMs / 1000)} s, twice); it was stopped`,
+              ),
+            );
+          }, job.deadlineMs);
+      });
+      const value = await Promise.race([job.call(h.api), died, deadline]);
       outcome = { status: 'done', value };
     } catch (error) {
       outcome = { status: 'failed', error: error instanceof Error ? error.message : String(error) };
-      if (crashed && epoch === this.epoch) {
-        // The worker crashed or could not load: start afresh next time.
+      if ((crashed || hung) && epoch === this.epoch) {
+        // The worker crashed, could not load or hung: start afresh next time.
         this.handle?.terminate();
         this.handle = null;
       }
+    } finally {
+      clearTimeout(timer);
     }
     if (epoch !== this.epoch) return; // cancelled meanwhile: already resolved
+    if (hung) {
+      this.hangs++;
+      if (job.tries < 2 && !this.waiting) {
+        void this.start(job);
+        return;
+      }
+    }
     this.running = null;
     const next = this.waiting;
     this.waiting = null;

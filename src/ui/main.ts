@@ -1,6 +1,7 @@
 // The web page's entry point (index.html loads it after public/csp-setup.js; the styles are linked
 // from index.html). Importing earlyPool starts the solver workers before the page is built.
 import { App } from './app';
+import { readDurable } from './durableAutosave';
 import { pool } from './earlyPool';
 
 function showStartError(error: unknown): void {
@@ -15,12 +16,15 @@ function showStartError(error: unknown): void {
   }
 }
 
-try {
-  new App(pool).start().catch((error: unknown) => {
+// The autosave's durable copy is read first (a few ms; at most 1 s), while the workers load.
+void readDurable().then((durable) => {
+  try {
+    new App(pool, durable).start().catch((error: unknown) => {
+      showStartError(error);
+      throw error;
+    });
+  } catch (error) {
     showStartError(error);
     throw error;
-  });
-} catch (error) {
-  showStartError(error);
-  throw error;
-}
+  }
+});

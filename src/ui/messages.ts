@@ -5,10 +5,24 @@
  */
 export type MessageKind = 'error' | 'warning' | 'info';
 
+/** A button in a notice (e.g. "Restore it", "Download it"). */
+export interface MessageAction {
+  label: string;
+  onClick: () => void;
+  /** data-action attribute, for tests and styling. */
+  name?: string;
+}
+
 export class Messages {
   constructor(private readonly container: HTMLElement) {}
 
-  show(kind: MessageKind, title: string, lines: readonly string[] = [], id?: string): HTMLElement {
+  show(
+    kind: MessageKind,
+    title: string,
+    lines: readonly string[] = [],
+    id?: string,
+    actions: readonly MessageAction[] = [],
+  ): HTMLElement {
     if (id) this.clear(id);
     const box = document.createElement('div');
     box.className = `message ${kind}`;
@@ -31,6 +45,19 @@ export class Messages {
         ul.append(li);
       }
       body.append(ul);
+    }
+    if (actions.length > 0) {
+      const row = document.createElement('div');
+      row.className = 'button-row';
+      for (const a of actions) {
+        const b = document.createElement('button');
+        b.type = 'button';
+        b.textContent = a.label;
+        if (a.name) b.dataset.action = a.name;
+        b.addEventListener('click', a.onClick);
+        row.append(b);
+      }
+      body.append(row);
     }
     const close = document.createElement('button');
     close.type = 'button';

@@ -1,6 +1,7 @@
 /**
  * End-to-end tests of the web page in headless Chromium (playwright-core, the system's
- * /usr/bin/chromium; no browser is downloaded). The page is built once (vite build into
+ * /usr/bin/chromium; no browser is downloaded). The page is built once (vite build --mode e2e, which keeps
+ * the test hooks, into
  * test-results/ui-dist) and served by `vite preview` on a free port for the whole file.
  * Tests wait for document.body.dataset.state === 'done', never for timers.
  * Screenshots go to test-results/ui-*.png.
@@ -148,10 +149,14 @@ describe.skipIf(!haveBrowser && !requireBrowser)('web page in headless Chromium'
   beforeAll(async () => {
     if (!haveBrowser) throw new Error(`${CHROMIUM} is missing and COVERSWEEP_REQUIRE_BROWSER=1`);
     mkdirSync(OUT, { recursive: true });
-    execFileSync(process.execPath, [VITE, 'build', '--outDir', DIST, '--emptyOutDir', '--logLevel', 'warn'], {
-      cwd: ROOT,
-      stdio: 'pipe',
-    });
+    execFileSync(
+      process.execPath,
+      [VITE, 'build', '--mode', 'e2e', '--outDir', DIST, '--emptyOutDir', '--logLevel', 'warn'],
+      {
+        cwd: ROOT,
+        stdio: 'pipe',
+      },
+    );
     const port = await freePort();
     server = spawn(
       process.execPath,
@@ -505,7 +510,10 @@ describe.skipIf(!haveBrowser && !requireBrowser)('web page in headless Chromium'
     const page = await open(context);
     // A sweep worker dies while the design map runs (the page's test hook, as a real crash would).
     await page.waitForFunction(
-      () => document.body.dataset.stage === 'map' || document.body.dataset.state !== 'computing',
+      // ('loading' until the page has read its autosave and started computing.)
+      () =>
+        document.body.dataset.stage === 'map' ||
+        (document.body.dataset.state !== 'computing' && document.body.dataset.state !== 'loading'),
       null,
       { timeout: 45_000 },
     );

@@ -1,6 +1,8 @@
 /**
- * Reading measured or simulated results as CSV (RFC 4180: quoted fields, doubled quotes, CRLF or LF)
- * or a table pasted from a spreadsheet (tab-separated). The delimiter is detected from the header line
+ * Reading measured or simulated results as CSV (RFC 4180: quoted fields, doubled quotes; CRLF, LF or
+ * CR-only line ends, the last from old spreadsheet exports) or a table pasted from a spreadsheet
+ * (tab-separated). Byte streams are UTF-8, or UTF-16 (little- or big-endian) with its byte-order mark
+ * (WHATWG Encoding: BOM sniffing); UTF-16 without a mark, or any NUL character, is refused by name. The delimiter is detected from the header line
  * (comma, semicolon or tab, whichever occurs most outside quotes); with a semicolon or tab delimiter a
  * decimal comma ("1,25") is accepted. Lines starting with '#' and blank lines are skipped. The reader is
  * incremental (text pushed chunk by chunk), so large files are streamed, with a size limit checked
@@ -87,13 +89,39 @@ export class CsvReader {
   private errors: string[] = [];
   private bytes = 0;
   private stopped = false;
+  private sawNul = false;
 
   constructor(private readonly maxRows = MAX_DATA_ROWS) {}
+
+  /** A CR at the end of the last chunk: a line end, or the first half of a CRLF. */
+  private carryCr = false;
+
+  /** Every line end (CRLF, LF or a lone CR) as LF; a CR ending the chunk waits for the next one. */
+  private normaliseLineEnds(text: string): string {
+    if (this.carryCr) {
+      text = `\r${text}`;
+      this.carryCr = false;
+    }
+    if (text.endsWith('\r')) {
+      text = text.slice(0, -1);
+      this.carryCr = true;
+    }
+    return text.includes('\r') ? text.replace(/\r\n?/g, '\n') : text;
+  }
 
   /** Feed a chunk of text. Returns false once reading should stop (too many errors or rows). */
   push(text: string): boolean {
     if (this.stopped) return false;
     this.bytes += text.length;
+    if (!this.sawNul && text.includes('\u0000')) {
+      this.sawNul = true;
+      this.error(
+        'the file holds NUL characters: it is UTF-16 without a byte-order mark, or not text at all; save it as UTF-8 (or UTF-16 with a byte-order mark) CSV',
+      );
+      this.stopped = true;
+      return false;
+    }
+    text = this.normaliseLineEnds(text);
     if (this.delimiter === null) {
       this.pending += text;
       const first = this.firstContentLine();
@@ -254,6 +282,10 @@ export class CsvReader {
   end(): CsvResult {
     if (this.stopped && this.headers === null && this.errors.length > 0)
       return { ok: false, errors: this.errors };
+    if (this.carryCr) {
+      this.carryCr = false;
+      this.push('\n');
+    }
     if (this.delimiter === null) {
       const t = this.pending;
       this.pending = '';
@@ -326,16 +358,25 @@ export async function readCsvStream(
     const msg = checkDataSize(options.knownSize, maxBytes);
     if (msg) return { ok: false, errors: [msg] };
   }
-  const decoder = new TextDecoder('utf-8');
+  let decoder: TextDecoder | null = null;
   const reader = stream.getReader();
   const csv = new CsvReader();
   let bytes = 0;
   let first = true;
+  let head: Uint8Array = new Uint8Array(0);
   try {
     while (true) {
-      const { done, value } = await reader.read();
+      const { done, value: chunk } = await reader.read();
       if (done) break;
-      bytes += value.byteLength;
+      bytes += chunk.byteLength;
+      let value: Uint8Array = chunk;
+      if (decoder === null) {
+        // The encoding from the byte-order mark (needs the first 2 bytes; chunks may be tiny).
+        head = concatBytes(head, chunk);
+        if (head.length < 2) continue;
+        decoder = new TextDecoder(encodingFromBom(head));
+        value = head;
+      }
       if (bytes > maxBytes) {
         await reader.cancel();
         return {
@@ -353,11 +394,30 @@ export async function readCsvStream(
         break;
       }
     }
-    csv.push(decoder.decode());
+    if (decoder === null && head.length > 0) {
+      decoder = new TextDecoder('utf-8');
+      csv.push(decoder.decode(head, { stream: true }));
+    }
+    if (decoder) csv.push(decoder.decode());
   } finally {
     reader.releaseLock();
   }
   return csv.end();
+}
+
+/** The encoding named by a byte-order mark (UTF-16 LE or BE), else UTF-8 (whose mark is removed later). */
+export function encodingFromBom(head: Uint8Array): 'utf-8' | 'utf-16le' | 'utf-16be' {
+  if (head[0] === 0xff && head[1] === 0xfe) return 'utf-16le';
+  if (head[0] === 0xfe && head[1] === 0xff) return 'utf-16be';
+  return 'utf-8';
+}
+
+function concatBytes(a: Uint8Array, b: Uint8Array): Uint8Array {
+  if (a.length === 0) return b;
+  const out = new Uint8Array(a.length + b.length);
+  out.set(a);
+  out.set(b, a.length);
+  return out;
 }
 
 /**

@@ -146,6 +146,16 @@ function validateMapUnsafe(given: unknown): MapParsed {
     return { ok: false, errors: [...new Set(errors)] };
   }
   const map = parsed.data as MapFile;
+  // Column headers are data: zod builds records on plain objects, where a column named "__proto__" is
+  // lost; rebuild them on an object without a prototype, each column checked again.
+  const columns: Record<string, MapColumn> = Object.create(null);
+  for (const [header, col] of Object.entries((raw as { columns: object }).columns)) {
+    const c = columnSchema.safeParse(col);
+    if (!c.success)
+      return { ok: false, errors: c.error.issues.map((i) => `columns.${header}: ${i.message}`) };
+    columns[header] = c.data as MapColumn;
+  }
+  map.columns = columns;
   const errors = mapRules(map);
   return errors.length > 0 ? { ok: false, errors } : { ok: true, value: map };
 }

@@ -1,0 +1,202 @@
+/**
+ * The page's autosave in the browser's localStorage, written synchronously on every change (a reload,
+ * a crash or a killed browser right after an edit keeps it), and never silently destroyed:
+ *
+ * - An autosave that cannot be read (a newer version, a value out of range, an unknown key, truncated
+ *   JSON, ...) is kept aside, byte for byte, before anything else is saved.
+ * - Two tabs: every save bumps a revision stored beside the document with the writing tab's id. A tab
+ *   about to save over a revision another tab wrote since this tab last saved keeps that document
+ *   aside first (and says so); a tab is also told at once (the 'storage' event) when another tab saves.
+ * - Opening a link keeps the autosaved design aside (when it differs) before the link's design is saved.
+ *
+ * Each save is also mirrored to a durable copy (IndexedDB, durableAutosave.ts); at start-up the newer
+ * of the two is read, so an edit survives a browser killed right after it.
+ *
+ * Kept copies live under their own key (newest first, at most MAX_KEPT; the oldest beyond that is
+ * dropped, and the page says how many are kept) and can be restored or downloaded from the page.
+ */
+import { type AppState, AUTOSAVE_KEY, projectTextToState, stateToProjectText } from './appState';
+import type { DurableCopy } from './durableAutosave';
+
+export const AUTOSAVE_META_KEY = 'coversweep.autosave.meta.v1';
+export const KEPT_KEY = 'coversweep.autosave.kept.v1';
+/** Most kept copies; older ones are dropped beyond this. */
+export const MAX_KEPT = 10;
+
+export interface KeptCopy {
+  /** When it was kept (ISO time) and a unique id. */
+  id: string;
+  keptAt: string;
+  /** Why it was kept, in plain words. */
+  reason: string;
+  /** The autosave's text exactly as it was. */
+  text: string;
+}
+
+interface Meta {
+  rev: number;
+  tab: string;
+}
+
+export type StorageLike = Pick<Storage, 'getItem' | 'setItem'>;
+
+function readMeta(storage: StorageLike): Meta | null {
+  try {
+    const raw = JSON.parse(storage.getItem(AUTOSAVE_META_KEY) ?? 'null') as unknown;
+    if (raw && typeof raw === 'object') {
+      const m = raw as Record<string, unknown>;
+      if (typeof m.rev === 'number' && Number.isFinite(m.rev) && typeof m.tab === 'string')
+        return { rev: m.rev, tab: m.tab };
+    }
+  } catch {
+    // unreadable metadata: treated as none
+  }
+  return null;
+}
+
+/** The copies kept aside, newest first (an unreadable list reads as empty and is never overwritten). */
+export function readKept(storage: Pick<Storage, 'getItem'>): KeptCopy[] | null {
+  let text: string | null;
+  try {
+    text = storage.getItem(KEPT_KEY);
+  } catch {
+    return null;
+  }
+  if (text === null) return [];
+  try {
+    const list = JSON.parse(text) as unknown;
+    if (!Array.isArray(list)) return null;
+    return list.filter(
+      (k): k is KeptCopy =>
+        k !== null &&
+        typeof k === 'object' &&
+        typeof k.id === 'string' &&
+        typeof k.keptAt === 'string' &&
+        typeof k.reason === 'string' &&
+        typeof k.text === 'string',
+    );
+  } catch {
+    return null;
+  }
+}
+
+export type LoadedAutosave =
+  | { kind: 'none' }
+  | { kind: 'ok'; state: AppState; text: string }
+  | { kind: 'unreadable'; errors: string[]; text: string };
+
+export interface SaveOutcome {
+  /** Another tab's document kept aside before this save replaced it. */
+  kept: KeptCopy | null;
+  error: string | null;
+}
+
+export class AutosaveStore {
+  /** This tab's id (random per page load). */
+  readonly tab = `${Date.now().toString(36)}-${Math.random().toString(36).slice(2, 10)}`;
+  /** The revision this tab last read or wrote. */
+  private rev = 0;
+  private serial = 0;
+
+  constructor(
+    private readonly storage: StorageLike,
+    /** The durable copy read at start-up, if any. */
+    private readonly durable: DurableCopy | null = null,
+    /** Writes the durable copy after each save. */
+    private readonly mirror: (copy: DurableCopy) => void = () => undefined,
+  ) {}
+
+  /** Read the autosave (and note its revision as seen by this tab). */
+  load(): LoadedAutosave {
+    let text: string | null;
+    try {
+      text = this.storage.getItem(AUTOSAVE_KEY);
+    } catch {
+      return { kind: 'none' };
+    }
+    const meta = readMeta(this.storage);
+    this.rev = meta?.rev ?? 0;
+    const d = this.durable;
+    if (d && d.rev > this.rev && d.text !== text) {
+      // localStorage lost the latest save (the browser was killed before writing it to disk).
+      text = d.text;
+      this.rev = d.rev;
+      try {
+        this.storage.setItem(AUTOSAVE_KEY, text);
+        this.storage.setItem(AUTOSAVE_META_KEY, JSON.stringify({ rev: d.rev, tab: d.tab }));
+      } catch {
+        // read-only storage: the durable copy is still used
+      }
+    }
+    if (text === null) return { kind: 'none' };
+    const r = projectTextToState(text, 'autosave');
+    return r.ok ? { kind: 'ok', state: r.value, text } : { kind: 'unreadable', errors: r.errors, text };
+  }
+
+  /** Keep `text` aside with `reason`; returns the copy, or an error message when it cannot be stored. */
+  keepAside(text: string, reason: string): KeptCopy | string {
+    const list = readKept(this.storage);
+    if (list === null)
+      return 'the list of kept autosaves is unreadable, so nothing more is added to it (it is left as it is)';
+    const copy: KeptCopy = {
+      id: `${Date.now().toString(36)}-${this.tab}-${++this.serial}`,
+      keptAt: new Date().toISOString(),
+      reason,
+      text,
+    };
+    if (list.some((k) => k.text === text)) return list.find((k) => k.text === text)!;
+    const next = [copy, ...list].slice(0, MAX_KEPT);
+    try {
+      this.storage.setItem(KEPT_KEY, JSON.stringify(next));
+    } catch (error) {
+      return `could not keep a copy: ${(error as Error).message}`;
+    }
+    return copy;
+  }
+
+  /**
+   * Save `state` now. If another tab saved since this tab last did, its document is kept aside first.
+   * Never throws.
+   */
+  save(state: AppState): SaveOutcome {
+    const text = stateToProjectText(state);
+    let kept: KeptCopy | null = null;
+    try {
+      const meta = readMeta(this.storage);
+      const current = this.storage.getItem(AUTOSAVE_KEY);
+      if (meta && meta.rev !== this.rev && meta.tab !== this.tab && current !== null && current !== text) {
+        const k = this.keepAside(current, 'another tab’s design, saved there after this tab last saved');
+        if (typeof k === 'string') {
+          return {
+            kept: null,
+            error: `not autosaved, so as not to lose another tab's design: ${k}. Save a project file to keep this one.`,
+          };
+        }
+        kept = k;
+      }
+      const rev = Math.max(meta?.rev ?? 0, this.rev) + 1;
+      this.storage.setItem(AUTOSAVE_KEY, text);
+      this.storage.setItem(AUTOSAVE_META_KEY, JSON.stringify({ rev, tab: this.tab }));
+      this.rev = rev;
+      this.mirror({ rev, tab: this.tab, text });
+      return { kept, error: null };
+    } catch (error) {
+      return { kept, error: `autosave failed: ${(error as Error).message}` };
+    }
+  }
+
+  /** Whether a 'storage' event says another tab saved the autosave. */
+  isOtherTabSave(event: Pick<StorageEvent, 'key' | 'newValue'>): boolean {
+    if (event.key !== AUTOSAVE_META_KEY || event.newValue === null) return false;
+    try {
+      const m = JSON.parse(event.newValue) as Partial<Meta>;
+      return m.tab !== this.tab;
+    } catch {
+      return false;
+    }
+  }
+
+  kept(): KeptCopy[] {
+    return readKept(this.storage) ?? [];
+  }
+}
