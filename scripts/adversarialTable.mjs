@@ -1,18 +1,35 @@
 #!/usr/bin/env node
-// Merge the adversarial suite's saved counts (test-results/adversarial/*.json, one row per family,
-// written by `npx vitest run test/adversarial` and the page's adversarial tests) into README.md
+// Merge the adversarial suite's saved counts (test-results/adversarial/*.json from the command-line
+// families, test-results/adversarial-page.json from the page's; one row per family) into README.md
 // between the adversarial-table markers. Rows are sorted by family, so suites merge without conflict.
-import { readdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { existsSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
 
 const dir = 'test-results/adversarial';
-const rows = readdirSync(dir)
-  .filter((f) => f.endsWith('.json'))
-  .map((f) => JSON.parse(readFileSync(`${dir}/${f}`, 'utf8')))
-  .sort((a, b) => (a.family < b.family ? -1 : a.family > b.family ? 1 : 0));
+const cliRows = existsSync(dir)
+  ? readdirSync(dir)
+      .filter((f) => f.endsWith('.json'))
+      .map((f) => JSON.parse(readFileSync(`${dir}/${f}`, 'utf8')))
+  : [];
+// The page's suite keeps its rows in one file (test/adversarial/pageHarness.ts, FamilyRow).
+const pageFile = 'test-results/adversarial-page.json';
+const pageRows = existsSync(pageFile)
+  ? JSON.parse(readFileSync(pageFile, 'utf8')).map((r) => ({
+      family: `Page: ${r.family}`,
+      test: 'test/adversarial/page-*.test.ts',
+      tried: r.inputs,
+      crashes: r.crashes,
+      hangs: r.hangs,
+      lostRows: r.lost_work,
+      injections: r.executed_injections,
+    }))
+  : [];
+const rows = [...cliRows, ...pageRows].sort((a, b) =>
+  a.family < b.family ? -1 : a.family > b.family ? 1 : 0,
+);
 const fmt = (n) => String(n).replace(/\B(?=(\d{3})+(?!\d))/g, ' ');
 const total = (k) => rows.reduce((s, r) => s + r[k], 0);
 const lines = [
-  '| family | inputs tried | crashes | hangs | lost rows | executed injections | test |',
+  '| family | inputs tried | crashes | hangs | lost rows or work | executed injections | test |',
   '|---|---|---|---|---|---|---|',
   ...rows.map(
     (r) =>
