@@ -14,7 +14,7 @@ const cliRows = existsSync(dir)
 const pageFile = 'test-results/adversarial-page.json';
 const pageRows = existsSync(pageFile)
   ? JSON.parse(readFileSync(pageFile, 'utf8')).map((r) => ({
-      family: `Page: ${r.family}`,
+      family: /^page\b/i.test(r.family) ? r.family.replace(/^page/i, 'Page') : `Page: ${r.family}`,
       test: 'test/adversarial/page-*.test.ts',
       tried: r.inputs,
       crashes: r.crashes,
