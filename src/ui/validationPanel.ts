@@ -30,7 +30,14 @@ function tableRow(row: ValidationRow): HTMLTableRowElement {
     el('td', { text: row.strength }),
     el('td', { text: referenceText(row) }),
     el('td', { text: modelText(row) }),
-    el('td', { className: row.pass ? 'pass' : 'fail', text: row.pass ? 'pass' : 'FAIL' }),
+    row.pass
+      ? el('td', { className: 'pass', text: 'pass' })
+      : row.known_disagreement !== null
+        ? el('td', { className: 'fail' }, [
+            el('span', { text: 'FAIL (known)' }),
+            el('div', { className: 'small', text: row.known_disagreement }),
+          ])
+        : el('td', { className: 'fail', text: 'FAIL' }),
   ]);
 }
 
@@ -39,7 +46,7 @@ function reportTable(report: ValidationReport): HTMLElement {
   return el('div', { className: 'table-scroll validation-scroll' }, [
     el('table', { className: 'data-table validation-table', attrs: { id: 'validation-table' } }, [
       el('caption', {
-        text: `${report.passed} of ${report.rows.length} reference cases pass; ${report.failed} fail`,
+        text: `${report.passed} of ${report.rows.length} reference cases pass; ${report.failed} fail (${report.known} of them known, documented disagreements)`,
       }),
       el('thead', {}, [
         el(

@@ -5,9 +5,10 @@ import type { ReferenceCase, SolveRaw, ValidationRow } from './types';
 /** Evaluate one reference case: the model's value, the band check; an exception becomes a failed row
  * with its message (never thrown). */
 export function evaluateCase(c: ReferenceCase, solve: SolveRaw): ValidationRow {
-  const { compute, ...described } = c;
+  const { compute, knownDisagreement, ...described } = c;
   const row: ValidationRow = {
     ...described,
+    known_disagreement: knownDisagreement ?? null,
     band: { ...c.band },
     band_text: bandText(c.band),
     model: null,

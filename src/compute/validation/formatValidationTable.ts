@@ -19,18 +19,20 @@ export function formatValidationTable(report: ValidationReport): string {
       lines.push('', `== ${group} ==`);
     }
     const reference = row.reference === null ? '' : `${formatNumber(row.reference)}, `;
+    const known = !row.pass && row.known_disagreement !== null;
     lines.push(
-      `${row.pass ? 'PASS' : 'FAIL'}  ${row.id}: ${row.quantity}`,
+      `${row.pass ? 'PASS' : known ? 'FAIL (known disagreement)' : 'FAIL'}  ${row.id}: ${row.quantity}`,
       `      case:      ${row.description}`,
       `      source:    ${row.source}`,
       `      strength:  ${row.strength}`,
       `      reference: ${withUnit(`${reference}band ${row.band_text}`, row.unit)}`,
       `      model:     ${modelText(row)}`,
     );
+    if (known) lines.push(`      known:     ${row.known_disagreement}`);
   }
   lines.push(
     '',
-    `${report.passed} passed, ${report.failed} failed of ${report.rows.length} reference cases`,
+    `${report.passed} passed, ${report.failed} failed (${report.known} of them known disagreements) of ${report.rows.length} reference cases`,
     '',
   );
   return lines.join('\n');

@@ -8,5 +8,15 @@ export function runValidation(cases: readonly ReferenceCase[] = REFERENCE_CASES)
   const solve = memoisedSolve();
   const rows = cases.map((c) => evaluateCase(c, solve));
   const passed = rows.filter((r) => r.pass).length;
-  return { format: 'coversweep-validation', version: 1, rows, passed, failed: rows.length - passed };
+  const known = rows.filter((r) => !r.pass && r.known_disagreement !== null).length;
+  const failed = rows.length - passed;
+  return {
+    format: 'coversweep-validation',
+    version: 1,
+    rows,
+    passed,
+    failed,
+    known,
+    unexpected: failed - known,
+  };
 }

@@ -56,6 +56,10 @@ export interface ReferenceCase {
   reference: number | null;
   band: ReferenceBand;
   unit: string;
+  /** A disagreement with the reference that is understood and documented but not yet fixed: why the model
+   * misses and what would close it. Such a row still prints FAIL; it does not make `validate` exit 1, and
+   * the tests check that it still fails (so a fix is noticed and the mark removed). */
+  knownDisagreement?: string;
   compute: (solve: SolveRaw) => ModelValue;
 }
 
@@ -69,6 +73,8 @@ export interface ValidationRow extends Omit<ReferenceCase, 'compute'> {
   note: string | null;
   pass: boolean;
   error: string | null;
+  /** The documented reason of a known disagreement (see ReferenceCase), or null. */
+  known_disagreement: string | null;
 }
 
 export interface ValidationReport {
@@ -76,5 +82,10 @@ export interface ValidationReport {
   version: 1;
   rows: ValidationRow[];
   passed: number;
+  /** Every failing row, known disagreements included. */
   failed: number;
+  /** Failing rows with a documented known disagreement. */
+  known: number;
+  /** Failing rows without one: these make `validate` exit 1. */
+  unexpected: number;
 }

@@ -8,4 +8,7 @@ export {
   REATTACHMENT_ONSET_RATIO,
 } from './plateReattachment';
 export { SPLITTER_PLATE_MAX_RATIO, splitterPlateCylinderDrag } from './splitterPlateCylinderDrag';
+export { spokeRowDrag } from './spokeRowDrag';
+export { spokeSectionDrag } from './spokeSectionDrag';
 export { streamlineSectionDrag } from './streamlineSectionDrag';
+export { tandemDragRatio } from './tandemDragRatio';

@@ -17,6 +17,11 @@
  * @param dragLengthM Cd d, the body's drag coefficient times its frontal size (m, >= 0)
  * @throws RangeError for a non-positive distance, a negative drag length or non-finite input.
  */
+/** Schlichting's plane-wake constants: centre-line deficit 0.98 (x / Cd d)^(-1/2), half-value width
+ * 0.25 (x Cd d)^(1/2) (see above); shared with tandemDragRatio. */
+export const PLANE_WAKE_CENTRE_CONSTANT = 0.98;
+export const PLANE_WAKE_HALF_VALUE_CONSTANT = 0.25;
+
 export function planeWakeDeficit(distanceM: number, offsetM: number, dragLengthM: number): number {
   if (!(distanceM > 0) || !Number.isFinite(distanceM)) {
     throw new RangeError(`distanceM=${distanceM}: must be finite and > 0`);
@@ -26,8 +31,8 @@ export function planeWakeDeficit(distanceM: number, offsetM: number, dragLengthM
     throw new RangeError(`dragLengthM=${dragLengthM}: must be finite and >= 0`);
   }
   if (dragLengthM === 0) return 0;
-  const centre = 0.98 * Math.sqrt(dragLengthM / distanceM);
-  const halfWidth = 0.25 * Math.sqrt(distanceM * dragLengthM);
+  const centre = PLANE_WAKE_CENTRE_CONSTANT * Math.sqrt(dragLengthM / distanceM);
+  const halfWidth = PLANE_WAKE_HALF_VALUE_CONSTANT * Math.sqrt(distanceM * dragLengthM);
   const eta = offsetM / halfWidth;
   return Math.min(1, centre * Math.exp(-Math.LN2 * eta * eta));
 }

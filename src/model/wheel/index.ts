@@ -6,7 +6,7 @@ export { meanAbsSinusoid } from './meanAbsSinusoid';
 export { openAnnuli, panelOpenness } from './panelOpenness';
 export { RIM_SECTION_RE_RANGE, rimTyreSection } from './rimTyreLoads';
 export { solveWheel, type WheelInput } from './solveWheel';
-export { screenOpenness, spokeScreenResistance } from './spokeScreen';
+export { screenOpenness, spokeScreenForceLengthM, spokeScreenResistance } from './spokeScreen';
 export { groundTrailM, steeringMoment } from './steeringAxis';
 export { type SurfaceCoefficients, surfaceCoefficients, surfaceSolution } from './surfaceCoefficients';
 export { surfaceKey } from './surfaceKey';

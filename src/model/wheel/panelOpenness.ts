@@ -1,5 +1,5 @@
 import type { RingLattice } from '../lattice/types';
-import { screenOpenness, spokeNormalForceLengthM, spokeScreenResistance } from './spokeScreen';
+import { screenOpenness, spokeScreenForceLengthM, spokeScreenResistance } from './spokeScreen';
 import type { WheelGeometry } from './types';
 import type { WheelRadii } from './wheelRadii';
 
@@ -48,7 +48,6 @@ export function panelOpenness(
   if (out.length !== lattice.panelCount) {
     throw new RangeError(`out must have ${lattice.panelCount} entries, got ${out.length}`);
   }
-  const forceLength = spokeNormalForceLengthM(wheel);
   const { rimInnerRadiusM: rimIn, hubRadiusM: hub, coverInnerRadiusM: cIn, coverOuterRadiusM: cOut } = radii;
   const hasCover = cOut > cIn;
   for (let p = 0; p < lattice.panelCount; p++) {
@@ -59,11 +58,13 @@ export function panelOpenness(
       out[p] = 0;
       continue;
     }
+    const rs = Math.max(r, hub);
+    const a = (rotationRatio * r) / radii.outerRadiusM;
     const k = spokeScreenResistance(
-      Math.max(r, hub),
+      rs,
       wheel.spokeCount,
-      forceLength,
-      (rotationRatio * r) / radii.outerRadiusM,
+      spokeScreenForceLengthM(wheel, rs, a),
+      a,
       porosityScale,
     );
     out[p] = screenOpenness(k);

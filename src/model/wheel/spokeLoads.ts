@@ -1,4 +1,4 @@
-import { bladedSpokeDrag, cylinderDrag } from '../sections';
+import { spokeRowDrag } from '../sections';
 import type { ComponentLoads, FlowConditions, ModelOptions, WheelGeometry } from './types';
 import type { WheelRadii } from './wheelRadii';
 
@@ -16,6 +16,8 @@ const GL_W = [
 
 const sinTheta = new Float64Array(ANGLE_STEPS);
 const cosTheta = new Float64Array(ANGLE_STEPS);
+/** Scratch for spokeRowDrag: drag coefficient, wake drag ratio, Reynolds number. */
+const row = new Float64Array(3);
 for (let k = 0; k < ANGLE_STEPS; k++) {
   const theta = ((k + 0.5) * 2 * Math.PI) / ANGLE_STEPS;
   sinTheta[k] = Math.sin(theta);
@@ -31,12 +33,20 @@ export interface SpokeLoadsReport {
 /**
  * In-plane aerodynamic loads of the spokes, time-averaged over a revolution: the crossflow drag of
  * each spoke element (independence principle, Hoerner, Fluid-Dynamic Drag ch. 3) at its local relative
- * velocity, freestream plus rotation, integrated along the spoke (Gauss-Legendre) and around the
- * revolution. Spokes are straight, radial and in the wheel plane (dish and lacing angle neglected).
+ * velocity, integrated along the spoke (Gauss-Legendre) and around the revolution. Spokes are straight,
+ * radial and in the wheel plane (dish and lacing angle neglected).
  *
  * For an element at radius r and position angle theta (from +x toward +z) the air's velocity across
  * the spoke in the plane is u_t = V cos(beta) sin(theta) + omega r, and along y is V sin(beta). The
- * section force 0.5 rho Cd L |u_perp| u_perp is kept in-plane only: its y part is the through-flow
+ * spokes at one radius cross the same air one after another at the spacing s = 2 pi r / N, so each
+ * element meets the air in the wake of the spoke ahead: spokeRowDrag (Schlichting's plane far wake,
+ * the Reynolds number solved to consistency). That one law is also the momentum balance of the thin
+ * spoke cage: the spokes' momentum deficit, which slows both the freestream's crossing and the
+ * rotation (the swirl the torque puts into the air), is the merged wake of the row, whose centreline
+ * deficit equals the spoke-ahead value (see spokeRowDrag). The through-flow V sin(beta) carries the
+ * wake off the wheel plane, so at yaw the spokes leave each other's wakes.
+ *
+ * The section force 0.5 rho Cd L |u| u (shielded) is kept in-plane only: its y part is the through-flow
  * load that the porous lattice already carries (no double counting). Covered spokes make none (two
  * covers) or `oneSidedCoverSpokeShare` of their load (one cover).
  *
@@ -53,14 +63,16 @@ export function spokeLoads(
   out.fxN = out.fyN = out.fzN = out.mxNm = out.myNm = out.mzNm = out.axleTorqueNm = 0;
   const report = { reynoldsMin: Number.POSITIVE_INFINITY, reynoldsMax: 0 };
   if (wheel.spokeCount === 0) return { reynoldsMin: Number.NaN, reynoldsMax: Number.NaN };
-  const bladed = wheel.spokeSection === 'bladed';
-  const refLength = bladed ? wheel.spokeThicknessM : wheel.spokeDiameterM;
-  const thicknessRatio = bladed ? wheel.spokeThicknessM / wheel.spokeWidthM : 1;
+  const round = wheel.spokeSection !== 'bladed';
+  const refLength = round ? wheel.spokeDiameterM : wheel.spokeThicknessM;
+  const thicknessRatio = round ? 1 : wheel.spokeThicknessM / wheel.spokeWidthM;
   const { rhoKgPerM3: rho, muPaS: mu } = point;
+  const nu = mu / rho;
   const vInPlane = point.airspeedMps * Math.cos(point.yawRad);
   const vNormal = point.airspeedMps * Math.sin(point.yawRad);
   const omega = point.groundSpeedMps / radii.outerRadiusM;
   const coverShare = wheel.coverSides === 2 ? 0 : options.oneSidedCoverSpokeShare;
+  const spacingPerRadius = (2 * Math.PI) / wheel.spokeCount;
 
   // Spoke pieces: inside, over and outside the covered annulus.
   const edges = [radii.hubRadiusM, radii.coverInnerRadiusM, radii.coverOuterRadiusM, radii.rimInnerRadiusM];
@@ -78,15 +90,17 @@ export function spokeLoads(
       const r = mid + half * GL_X[g]!;
       const dr = half * GL_W[g]! * weight;
       const spin = omega * r;
+      const spacing = spacingPerRadius * r;
       for (let k = 0; k < ANGLE_STEPS; k++) {
         const ut = vInPlane * sinTheta[k]! + spin;
         const speed = Math.sqrt(ut * ut + vNormal * vNormal);
         if (speed === 0) continue;
-        const re = (rho * speed * refLength) / mu; // both section laws take Re on the frontal size
-        if (re < report.reynoldsMin) report.reynoldsMin = re;
+        spokeRowDrag(round, thicknessRatio, refLength, spacing, ut, vNormal, nu, row);
+        const re = row[2]!;
+        // A spoke wholly stalled in the wake ahead (drag ratio 0) carries no load and uses no section law.
+        if (row[1]! > 0 && re < report.reynoldsMin) report.reynoldsMin = re;
         if (re > report.reynoldsMax) report.reynoldsMax = re;
-        const cd = bladed ? bladedSpokeDrag(re, thicknessRatio) : cylinderDrag(re);
-        const ft = 0.5 * rho * cd * refLength * speed * ut * dr;
+        const ft = 0.5 * rho * row[0]! * row[1]! * refLength * speed * ut * dr;
         fx -= sinTheta[k]! * ft;
         fz += cosTheta[k]! * ft;
         torque += r * ft;

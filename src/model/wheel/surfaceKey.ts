@@ -1,10 +1,10 @@
-import { spokeNormalForceLengthM } from './spokeScreen';
+import { spokeScreenKey } from './spokeScreen';
 import type { ModelOptions, WheelGeometry } from './types';
 import type { WheelRadii } from './wheelRadii';
 
 /**
  * Everything that determines the lifting surface's solution, as a string: lattice geometry (radius,
- * ground, counts), the region radii, the spokes' screen (count, section force length, porosity scale),
+ * ground, counts), the region radii, the spokes' screen (count, section, porosity scale),
  * the rotation ratio, and whether coarser lattices are solved for the convergence index. Two cases with
  * equal keys share one factorisation.
  */
@@ -25,7 +25,7 @@ export function surfaceKey(
     radii.coverInnerRadiusM,
     radii.coverOuterRadiusM,
     wheel.spokeCount,
-    spokeNormalForceLengthM(wheel),
+    spokeScreenKey(wheel),
     options.porosityScale,
     rotationRatio.toPrecision(12),
   ].join('|');

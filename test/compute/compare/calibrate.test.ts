@@ -16,7 +16,9 @@ describe('calibrate', () => {
     // interval must cover it in at least 4 of 5 (binomial probability of fewer at 95% coverage: 2.3%).
     const caseFile = testCase({ grid_convergence: false });
     const points = gridPoints([8.33, 11.1, 13.9]);
-    const known = { porosity_scale: 1.4, suction_recovered: 0.3, profile_drag_factor: 1.2 };
+    // porosity_scale multiplies the derived screen resistance, which includes the wake shielding of the
+    // spoke ahead (about half the bare crossflow value): 2 gives a screen as closed as 1.4 did without it.
+    const known = { porosity_scale: 2, suction_recovered: 0.3, profile_drag_factor: 1.2 };
     const truth = truthAt(caseFile, points, known);
     const covered = { porosity_scale: 0, suction_recovered: 0, profile_drag_factor: 0 };
     const seeds = [1, 2, 3, 4, 5];

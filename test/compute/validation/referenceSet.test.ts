@@ -31,7 +31,13 @@ describe('the reference set (coversweep validate)', () => {
         `source: ${c.source} [${c.strength}]`,
       ].join('\n  ');
       expect(row.error, message).toBeNull();
-      expect(row.pass, message).toBe(true);
+      if (c.knownDisagreement) {
+        // A documented known disagreement must still fail: when a model change fixes it, this test says so
+        // and the mark comes off.
+        expect(row.pass, `${message}\n  known disagreement no longer fails: remove the mark`).toBe(false);
+      } else {
+        expect(row.pass, message).toBe(true);
+      }
     });
   }
 });

@@ -1,10 +1,13 @@
 import { describe, expect, it } from 'vitest';
+import { sutherlandViscosity } from '../../../src/model/air';
 import { buildWheelLattice } from '../../../src/model/lattice';
+import { cylinderDrag, tandemDragRatio } from '../../../src/model/sections';
 import {
   DEMO_WHEEL,
   openAnnuli,
   panelOpenness,
   screenOpenness,
+  spokeScreenForceLengthM,
   spokeScreenResistance,
   type WheelGeometry,
   wheelRadii,
@@ -28,6 +31,48 @@ describe('spokeScreenResistance', () => {
     expect(screenOpenness(2)).toBe(0.5);
     expect(screenOpenness(1e12)).toBeLessThan(1e-11);
     expect(() => screenOpenness(-1)).toThrow(RangeError);
+  });
+});
+
+describe('spokeScreenForceLengthM', () => {
+  // Independent evaluation: White's cylinder fit at the reference Reynolds number (40 km/h, ISA sea
+  // level, mean crossing speed V <|a + sin|>) and the wake of the spoke ahead on its centreline
+  // (Schlichting's plane wake via tandemDragRatio), iterated to convergence.
+  const nu = sutherlandViscosity(288.15) / 1.225;
+  const reference = (d: number, count: number, r: number, a: number) => {
+    const speed = ((40 / 3.6) * 2 * (Math.sqrt(1 - a * a) + a * Math.asin(a))) / Math.PI;
+    const s = (2 * Math.PI * r) / count;
+    let shielded = speed;
+    let value = 0;
+    for (let i = 0; i < 40; i++) {
+      const cd = cylinderDrag((shielded * d) / nu);
+      const ratio = tandemDragRatio(s, 0, cd * d, d);
+      value = cd * d * ratio;
+      shielded = speed * Math.sqrt(ratio);
+    }
+    return value;
+  };
+
+  it('round: the loads’ section law at the reference Reynolds number, shielded by the wake ahead', () => {
+    for (const [count, r, a] of [
+      [20, 0.15, 0.45],
+      [32, 0.3, 0.9],
+      [36, 0.03, 0.1],
+    ] as const) {
+      const wheel = { ...DEMO_WHEEL, spokeCount: count };
+      const got = spokeScreenForceLengthM(wheel, r, a);
+      const expected = reference(wheel.spokeDiameterM, count, r, a);
+      const tol = 3e-3 * expected; // two fixed-point steps against forty
+      expect(
+        Math.abs(got - expected),
+        `N=${count} r=${r} a=${a} got=${got} expected=${expected} tol=${tol}`,
+      ).toBeLessThanOrEqual(tol);
+    }
+  });
+
+  it('has no spokes, no screen; rejects a radius that is not > 0', () => {
+    expect(spokeScreenForceLengthM({ ...DEMO_WHEEL, spokeCount: 0 }, 0.1, 0.5)).toBe(0);
+    expect(() => spokeScreenForceLengthM(DEMO_WHEEL, 0, 0.5)).toThrow(/radiusM/);
   });
 });
 
