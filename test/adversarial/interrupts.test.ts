@@ -25,11 +25,11 @@ afterAll(() => {
   signals.save();
 });
 
-// 36 cases (cover fraction x rim depth: the pool's jobs run in lattice order, not plan order) of 4
+// 72 cases (cover fraction x rim depth: the pool's jobs run in lattice order, not plan order) of 4
 // points each.
 const plan = {
   wheel: {
-    rim_depth_m: [0.02, 0.04, 0.06, 0.08],
+    rim_depth_m: [0.02, 0.03, 0.04, 0.05, 0.06, 0.07, 0.08, 0.09],
     cover: { fraction: [0, 0.125, 0.25, 0.375, 0.5, 0.625, 0.75, 0.875, 1] },
   },
   conditions: { airspeed_mps: [10, 14], yaw_deg: [0, 10] },
