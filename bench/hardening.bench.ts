@@ -5,11 +5,13 @@
  * what does is the expanded plan (every case's normalised case file is held in memory, about 1 kB
  * each), measured separately at the case limit (MAX_PLAN_CASES).
  */
+import { spawnSync } from 'node:child_process';
 import { closeSync, mkdtempSync, openSync, rmSync, statSync, writeSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { writeSweep } from '../src/cli/main';
 import { expandPlan, MAX_PLAN_CASES, MAX_PLAN_POINTS } from '../src/compute/planFile';
+import { buildNodeWorker } from './buildNodeWorker';
 
 const MB = 1e6;
 const rss = () => process.memoryUsage().rss;
@@ -81,3 +83,13 @@ async function streamedSweep(cases: number, pointsPerCase: number): Promise<void
 print('limits', { maxPlanPoints: MAX_PLAN_POINTS, maxPlanCases: MAX_PLAN_CASES });
 await streamedSweep(100, 1000);
 expansion(MAX_PLAN_CASES);
+// A 993,840-point plan in process and on 2 worker threads, each in its own process (peak RSS is per
+// process); the outputs' SHA-256 must match.
+const entry = buildNodeWorker();
+for (const workers of [0, 2]) {
+  const run = spawnSync('npx', ['tsx', 'bench/limitsSweep.ts', String(workers), entry], {
+    stdio: ['ignore', 'pipe', 'inherit'],
+    encoding: 'utf8',
+  });
+  process.stdout.write(run.stdout);
+}

@@ -24,7 +24,8 @@ import {
 export interface CompareIo {
   stdout(s: string): void;
   stderr(s: string): void;
-  readFile(p: string): string;
+  /** The file's text; `maxBytes` is the limit for this kind of file. */
+  readFile(p: string, maxBytes: number): string;
   fileSize(p: string): number;
 }
 
@@ -77,7 +78,7 @@ function readText(io: CompareIo, path: string, what: string, maxBytes: number): 
   const tooBig = checkDataSize(size, maxBytes);
   if (tooBig) throw new UsageError([`${what} ${path}: ${tooBig}`]);
   try {
-    return io.readFile(path);
+    return io.readFile(path, maxBytes);
   } catch (error) {
     throw new UsageError([
       `${what} ${path}: cannot be read (${error instanceof Error ? error.message : String(error)})`,

@@ -3,7 +3,7 @@
  * Exit codes: 0 success, 1 unexpected internal error, 2 invalid input or usage (messages on stderr,
  * nothing on stdout, no file written).
  */
-import { readFileSync, statSync } from 'node:fs';
+import { readFileSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
 import { resolve } from 'node:path';
 import { parseArgs } from 'node:util';
@@ -16,7 +16,7 @@ import {
 } from '../compute/caseFile';
 import { runSweep as runPooledSweep } from '../compute/engine/runSweep';
 import { WorkerPool } from '../compute/engine/workerPool';
-import { checkJsonFileSize } from '../compute/fileVersion';
+import { checkJsonFileSize, MAX_JSON_FILE_BYTES } from '../compute/fileVersion';
 import {
   type ExpandedCase,
   type ExpandedPlan,
@@ -37,10 +37,16 @@ import {
   readErrorReason,
 } from './io';
 import { nodeWorkerSpawner } from './nodeWorker';
-import { AtomicFile, checkOutputPath } from './outputFile';
+import { AtomicFile, checkOutputPath, OutputTakenError } from './outputFile';
 import { progressReporter } from './progress';
+import { InputFileError, readInputFile } from './readInputFile';
+import { refuseRepeatedOptions } from './refuseRepeatedOptions';
 import { runRide } from './rideCommand';
+import { SweepSpool } from './sweepSpool';
 import { runValidate } from './validateCommand';
+
+/** Points per pooled job to aim for at most (memory per job in flight; see writeSweep). */
+const MAX_JOB_POINTS = 20_000;
 
 /** Below this many cases a sweep runs in-process by default: worker start-up (~1 s) would dominate. */
 const MIN_CASES_FOR_POOL = 8;
@@ -129,20 +135,14 @@ function parseCommandArgs<T>(command: string, parse: () => T): T {
 const HELP_OPTION = { help: { type: 'boolean', short: 'h' } } as const;
 const OUT_OPTIONS = { out: { type: 'string' }, force: { type: 'boolean' }, ...HELP_OPTION } as const;
 
-function readInputFile(path: string, cwd: string, what: string): string {
+/** Read one of our JSON files: a regular file within the size limit, as strict UTF-8 (readInputFile). */
+function readJsonFile(path: string, cwd: string, what: string): string {
   try {
-    return readJsonFile(resolve(cwd, path), what);
+    return readInputFile(resolve(cwd, path), MAX_JSON_FILE_BYTES, (bytes) => checkJsonFileSize(bytes, what));
   } catch (error) {
-    if (error instanceof CliInputError) throw error;
+    if (error instanceof InputFileError && error.whole) throw new CliInputError(error.message);
     throw new CliInputError(`cannot read the ${what} ${path}: ${readErrorReason(error)}`);
   }
-}
-
-/** Read one of our JSON files, refusing one above the size limit before reading it. */
-function readJsonFile(path: string, what: string): string {
-  const tooBig = checkJsonFileSize(statSync(path).size, what);
-  if (tooBig) throw new CliInputError(tooBig);
-  return readFileSync(path, 'utf8');
 }
 
 function onePositional(command: string, positionals: string[], what: string): string {
@@ -170,6 +170,7 @@ function commandExample(args: string[], io: CliIo): number {
 }
 
 function commandSolve(args: string[], io: CliIo): number {
+  refuseRepeatedOptions('solve', args, ['out']);
   const { values, positionals } = parseCommandArgs('solve', () =>
     parseArgs({ args, options: OUT_OPTIONS, allowPositionals: true }),
   );
@@ -180,7 +181,7 @@ function commandSolve(args: string[], io: CliIo): number {
   const path = onePositional('solve', positionals, 'case file');
   const outPath = values.out === undefined ? undefined : resolve(io.cwd, values.out);
   if (outPath !== undefined) checkOutputPath(outPath, values.force === true);
-  const parsed = parseCaseFile(readInputFile(path, io.cwd, 'case file'));
+  const parsed = parseCaseFile(readJsonFile(path, io.cwd, 'case file'));
   if (!parsed.ok) throw new CliInputError(`invalid case file ${path}:`, parsed.errors);
   let document: ResultDocument;
   try {
@@ -194,7 +195,7 @@ function commandSolve(args: string[], io: CliIo): number {
   if (outPath === undefined) {
     io.stdout(text);
   } else {
-    const file = new AtomicFile(outPath, values.force === true);
+    const file = openOutput(outPath, values.force === true, io);
     try {
       file.write(text);
       file.commit();
@@ -208,13 +209,16 @@ function commandSolve(args: string[], io: CliIo): number {
 }
 
 /** Write a sweep's results as CSV or as a JSON list of documents to `sink`, streaming case by case in
- * plan order (a pool's out-of-order results wait for their turn). Returns how many cases failed. */
+ * plan order. A pool's cases that finish before their turn are rendered at once and held in `spool`
+ * (on disk, see SweepSpool) until then; an interrupted caller can drain the spool so every finished case
+ * is written. Each sink call is one whole case (or the header/footer). Returns how many cases failed. */
 export async function writeSweep(
   plan: ExpandedPlan,
   format: 'csv' | 'json',
   sink: (text: string) => void,
   onProgress?: SweepOptions['onProgress'],
   pool?: WorkerPool,
+  spool: SweepSpool = new SweepSpool(),
 ): Promise<number> {
   const keys = plan.variedKeys;
   if (format === 'csv') {
@@ -224,61 +228,97 @@ export async function writeSweep(
       `{\n  "format": "coversweep-sweep",\n  "version": 1,\n  "varied_keys": ${JSON.stringify(keys)},\n  "point_count": ${plan.pointCount},\n  "runs": [`,
     );
   }
-  let first = true;
-  const emit = (expanded: ExpandedCase, document: ResultDocument | null, error: string | null) => {
+  const render = (
+    position: number,
+    expanded: ExpandedCase,
+    document: ResultDocument | null,
+    error: string | null,
+  ): string => {
     if (format === 'csv') {
-      sink(
-        document
-          ? documentCsvLines(document, keys, expanded.varied)
-          : errorCsvLine(keys, expanded.varied, error ?? ''),
-      );
-    } else {
-      const run = document
-        ? { index: expanded.index, varied: expanded.varied, result: document }
-        : { index: expanded.index, varied: expanded.varied, error };
-      sink(`${first ? '\n' : ',\n'}${JSON.stringify(run)}`);
-      first = false;
+      return document
+        ? documentCsvLines(document, keys, expanded.varied)
+        : errorCsvLine(keys, expanded.varied, error ?? '');
     }
+    const run = document
+      ? { index: expanded.index, varied: expanded.varied, result: document }
+      : { index: expanded.index, varied: expanded.varied, error };
+    return `${position === 0 ? '\n' : ',\n'}${JSON.stringify(run)}`;
   };
   let failed = 0;
   if (!pool) {
+    let position = 0;
     await runSweep(plan.cases, {
       ...(onProgress ? { onProgress } : {}),
-      onResult: (expanded: ExpandedCase, document: ResultDocument) => emit(expanded, document, null),
+      onResult: (expanded: ExpandedCase, document: ResultDocument) =>
+        sink(render(position++, expanded, document, null)),
       onError: (expanded: ExpandedCase, message: string) => {
         failed++;
-        emit(expanded, null, message);
+        sink(render(position++, expanded, null, message));
       },
     });
   } else {
-    const waiting = new Map<number, () => void>();
     let next = 0;
+    // A sink that fails (a full disk, a closed pipe) stops the run: the pool is cancelled, so no
+    // worker goes on solving, and the error is thrown once the pool has stopped.
+    const stop = new AbortController();
+    let failure: { error: unknown } | null = null;
     const outcome = await runPooledSweep(
       pool,
       plan.cases.map((c) => caseToModelInput(c.caseFile)),
       {
         keepSolutions: false,
+        signal: stop.signal,
+        // Jobs of at most ~MAX_JOB_POINTS points: a job's results are held whole in its worker and
+        // in the main thread until written, so big plans are cut finer than 8 jobs per worker.
+        jobsPerWorker: Math.max(8, Math.ceil(plan.pointCount / (pool.size * MAX_JOB_POINTS))),
         ...(onProgress ? { onProgress } : {}),
         onCase: (i, solution, error) => {
-          const expanded = plan.cases[i]!;
-          waiting.set(i, () =>
-            emit(expanded, solution ? solutionToDocument(expanded.caseFile, solution) : null, error),
-          );
-          for (let flush = waiting.get(next); flush; flush = waiting.get(next)) {
-            flush();
-            waiting.delete(next);
+          if (failure !== null) return;
+          try {
+            const expanded = plan.cases[i]!;
+            const text = render(
+              i,
+              expanded,
+              solution ? solutionToDocument(expanded.caseFile, solution) : null,
+              error,
+            );
+            if (i !== next) {
+              spool.put(i, text);
+              return;
+            }
+            sink(text);
             next++;
+            for (let held = spool.take(next); held !== null; held = spool.take(next)) {
+              sink(held);
+              next++;
+            }
+          } catch (sinkError) {
+            failure = { error: sinkError };
+            stop.abort();
           }
         },
       },
     );
+    if (failure !== null) throw (failure as { error: unknown }).error;
     failed = outcome.failedCount;
+    if (spool.size > 0) throw new Error(`sweep: ${spool.size} case(s) finished but were never written`);
+    spool.close();
   }
   if (format === 'json') sink('\n  ]\n}\n');
   return failed;
 }
 
+/** Open an atomic output file, naming any stale temporary files of a killed run it cleaned up. */
+function openOutput(path: string, force: boolean, io: CliIo): AtomicFile {
+  const file = new AtomicFile(path, force);
+  for (const stale of file.removedStale) {
+    io.stderr(`coversweep: removed ${stale}, a temporary file left by an earlier run that was killed\n`);
+  }
+  return file;
+}
+
 async function commandSweep(args: string[], io: CliIo): Promise<number> {
+  refuseRepeatedOptions('sweep', args, ['out', 'workers']);
   const { values, positionals } = parseCommandArgs('sweep', () =>
     parseArgs({ args, options: { ...OUT_OPTIONS, workers: { type: 'string' } }, allowPositionals: true }),
   );
@@ -305,7 +345,7 @@ async function commandSweep(args: string[], io: CliIo): Promise<number> {
       throw new CliInputError(`--workers ${values.workers}: must be a whole number from 0 to 64`);
     }
   }
-  const parsed = parsePlanFile(readInputFile(path, io.cwd, 'plan file'));
+  const parsed = parsePlanFile(readJsonFile(path, io.cwd, 'plan file'));
   if (!parsed.ok) throw new CliInputError(`invalid plan file ${path}:`, parsed.errors);
   const plan = parsed.value;
   const progress = progressReporter(io.stderr, io.stderrIsTTY);
@@ -327,15 +367,23 @@ async function commandSweep(args: string[], io: CliIo): Promise<number> {
       pool?.close();
     }
   }
-  const file = new AtomicFile(outPath, force);
-  // Finished rows are never lost: an interrupted or failed sweep leaves them beside the output, in
-  // OUT.partial (never under the output's own name, never over an existing file).
+  const file = openOutput(outPath, force, io);
+  const spool = new SweepSpool();
+  // Finished rows are never lost: an interrupted or failed sweep leaves every finished case beside the
+  // output, in OUT.partial (never under the output's own name, never over an existing file): first the
+  // cases in plan order up to the first unfinished one, then the others that finished, in plan order.
   const keepPartial = (): string => {
+    let drained = '';
+    try {
+      const held = spool.drainTo((text) => file.write(text));
+      if (held > 0) drained = ` (${held} case(s) finished out of turn follow the gap)`;
+    } catch {
+      drained = ' (some cases finished out of turn could not be added)';
+    }
     try {
       const kept = file.keepPartial();
-      return kept === null ? 'no rows had finished' : `the finished rows are in ${kept}`;
+      return kept === null ? 'no rows had finished' : `the finished rows are in ${kept}${drained}`;
     } catch (error) {
-      file.abort();
       return `the finished rows could not be kept: ${error instanceof Error ? error.message : String(error)}`;
     }
   };
@@ -347,12 +395,18 @@ async function commandSweep(args: string[], io: CliIo): Promise<number> {
   process.once('SIGTERM', onSignal);
   let failed = 0;
   try {
-    failed = await writeSweep(plan, format, (text) => file.write(text), progress, pool);
+    failed = await writeSweep(plan, format, (text) => file.write(text), progress, pool, spool);
     file.commit();
   } catch (error) {
-    io.stderr(`sweep: failed; ${values.out} not written; ${keepPartial()}\n`);
+    if (error instanceof OutputTakenError) throw error;
+    const kept = keepPartial();
+    if (error instanceof CliInputError) {
+      throw new CliInputError(`${error.message}; ${values.out} not written; ${kept}`, error.messages);
+    }
+    io.stderr(`sweep: failed; ${values.out} not written; ${kept}\n`);
     throw error;
   } finally {
+    spool.close();
     pool?.close();
     process.off('SIGINT', onSignal);
     process.off('SIGTERM', onSignal);
@@ -392,19 +446,17 @@ export async function main(argv: readonly string[], ioOverrides: Partial<CliIo> 
         return runRide([...rest], {
           stdout: io.stdout,
           stderr: io.stderr,
-          readFile: (path) => {
-            const full = resolve(io.cwd, path);
-            const tooBig = checkJsonFileSize(statSync(full).size, 'ride file');
-            if (tooBig) throw new Error(tooBig);
-            return readFileSync(full, 'utf8');
-          },
+          readFile: (path) =>
+            readInputFile(resolve(io.cwd, path), MAX_JSON_FILE_BYTES, (bytes) =>
+              checkJsonFileSize(bytes, 'ride file'),
+            ),
         });
       case 'compare':
         return runCompare([...rest], {
           stdout: io.stdout,
           stderr: io.stderr,
-          readFile: (path) => readFileSync(resolve(io.cwd, path), 'utf8'),
-          fileSize: (path) => statSync(resolve(io.cwd, path)).size,
+          readFile: (path, maxBytes) => readInputFile(resolve(io.cwd, path), maxBytes),
+          fileSize: () => 0, // readFile checks the size of what it reads, whatever stat says
         });
       case 'validate':
         return runValidate([...rest], io);

@@ -30,6 +30,7 @@ import type {
 } from '../model/wheel/types';
 import { COMPONENT_NAMES as MODEL_COMPONENT_NAMES } from '../model/wheel/types';
 import { migrateCase } from './fileVersion';
+import { findDuplicateKey } from './findDuplicateKey';
 import {
   celsiusToKelvin,
   degToRad,
@@ -353,6 +354,15 @@ function partial<S extends Record<string, z.ZodType>>(shape: S) {
   return out as { [K in keyof S]: z.ZodOptional<S[K]> };
 }
 
+/** Longest case name accepted (characters): a name labels a design, it is not a document. */
+export const MAX_NAME_CHARS = 200;
+
+/** The message for a name over MAX_NAME_CHARS (its start, cut, and its length). */
+export function nameTooLong(name: unknown): string {
+  const text = String(name);
+  return `must be at most ${MAX_NAME_CHARS} characters, got ${text.length} ("${text.slice(0, 40)}...")`;
+}
+
 const objectError = (what: string) => (iss: { input?: unknown }) =>
   `must be an object (${what}), got ${describeValue(iss.input)}`;
 
@@ -360,7 +370,10 @@ const caseSchema = z.strictObject(
   {
     format: z.unknown().optional(),
     version: z.unknown().optional(),
-    name: z.string({ error: (iss) => `must be a string, got ${describeValue(iss.input)}` }).optional(),
+    name: z
+      .string({ error: (iss) => `must be a string, got ${describeValue(iss.input)}` })
+      .max(MAX_NAME_CHARS, { error: (iss) => nameTooLong(iss.input) })
+      .optional(),
     wheel: z
       .strictObject(
         {
@@ -531,6 +544,12 @@ function validateCaseUnsafe(given: unknown): Parsed<CaseFile> {
     );
   }
   if (wheel.cover.placement === 'explicit') {
+    if (cover.fraction !== undefined && cover.fraction !== 0) {
+      // The radii set an explicit cover; a fraction beside them would be echoed but not used.
+      errors.push(
+        `wheel.cover.fraction: not used when wheel.cover.placement is "explicit" (the cover spans inner_radius_m to outer_radius_m); leave it out, got ${cover.fraction}`,
+      );
+    }
     const ci = cover.inner_radius_m;
     const co = cover.outer_radius_m;
     if (ci === undefined)
@@ -998,6 +1017,16 @@ export function parseJsonText(text: string, label = 'input'): JsonParseResult {
       return {
         ok: false,
         errors: [`${label}: nesting deeper than ${MAX_DEPTH} levels at line ${line}, column ${column}`],
+      };
+    }
+    const twice = findDuplicateKey(body);
+    if (twice !== null) {
+      const { line, column } = lineColumn(body, twice.pos);
+      return {
+        ok: false,
+        errors: [
+          `${twice.path}: the key "${twice.key}" appears twice in one object (line ${line}, column ${column}); name each key once`,
+        ],
       };
     }
     return { ok: true, value };

@@ -31,11 +31,20 @@ export function tableColumns(variedKeys: readonly string[]): string[] {
   return [...variedKeys, ...result];
 }
 
-/** One CSV field. */
+/** A plain decimal number written as text: safe in a spreadsheet, kept as it is. */
+const NUMBER_TEXT = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
+
+/**
+ * One CSV field. Numbers are written as numbers (a negative number stays `-1.5e-3`). Text that a
+ * spreadsheet would run as a formula (starting with =, +, -, @, a tab or a carriage return; OWASP,
+ * "CSV Injection") is neutralised by a leading apostrophe and quoted; other text is quoted per RFC 4180
+ * when it holds a comma, quote or line break.
+ */
 export function csvField(value: PlanValue | undefined): string {
   if (value === null || value === undefined) return '';
   if (typeof value === 'number') return Number.isFinite(value) ? String(value) : '';
   const text = String(value);
+  if (/^[=+\-@\t\r]/.test(text) && !NUMBER_TEXT.test(text)) return `"'${text.replace(/"/g, '""')}"`;
   return /[",\r\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
 }
 

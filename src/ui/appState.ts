@@ -8,7 +8,14 @@
  * everything is valid.
  */
 import { z } from 'zod';
-import { type CaseFile, describeValue, type Parsed, parseJsonText, validateCase } from '../compute/caseFile';
+import {
+  type CaseFile,
+  describeValue,
+  MAX_NAME_CHARS,
+  type Parsed,
+  parseJsonText,
+  validateCase,
+} from '../compute/caseFile';
 import { CALIBRATABLE, type Calibratable } from '../compute/compare/index';
 import { base64UrlToText, textToBase64Url } from './base64url';
 import { type RoadState, validateRoadFor, validateRoadShape } from './roadState';
@@ -61,8 +68,9 @@ export const PROJECT_VERSION = 1;
 export const LINK_VERSION = 1;
 export const AUTOSAVE_KEY = 'coversweep.autosave.v1';
 
-/** Longest design name (characters) the page accepts, in a link, a project file or the autosave. */
-export const MAX_NAME_CHARS = 200;
+/** Longest design name (characters) the page accepts, in a link, a project file or the autosave: the
+ * case file's own limit. */
+export { MAX_NAME_CHARS };
 /** Largest project file the page opens (bytes); a design with its view is a few kB. */
 export const MAX_PROJECT_BYTES = 1024 * 1024;
 /** Longest link fragment the page makes or reads (characters); larger designs go in a project file. */

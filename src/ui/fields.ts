@@ -342,6 +342,8 @@ export const FIELDS: readonly Field[] = [
       const cover = raw.wheel.cover;
       cover.placement = v;
       if (v === 'explicit') {
+        // An explicit cover is set by its radii; the case file refuses a fraction beside them.
+        delete (cover as { fraction?: number }).fraction;
         const w = ctx.case.wheel;
         const rimInner = w.outer_radius_m - w.tyre_width_m - w.rim_depth_m;
         cover.inner_radius_m = cover.inner_radius_m ?? clean(w.hub_flange_radius_m);

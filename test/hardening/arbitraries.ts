@@ -61,7 +61,12 @@ export const rawCase = fc
     const rimInner = g.outer - tyre - rimDepth;
     const lo = Math.min(g.explicitA, g.explicitB);
     const hi = Math.max(g.explicitA, g.explicitB);
-    const cover: Record<string, unknown> = { fraction: g.fraction, placement: g.placement, sides: g.sides };
+    // An explicit cover is set by its radii; a fraction beside them is refused.
+    const cover: Record<string, unknown> = {
+      ...(g.placement === 'explicit' ? {} : { fraction: g.fraction }),
+      placement: g.placement,
+      sides: g.sides,
+    };
     if (g.placement === 'explicit') {
       cover.inner_radius_m = hub + lo * (rimInner - hub);
       cover.outer_radius_m = hub + hi * (rimInner - hub);

@@ -5,6 +5,7 @@
  * pressure q = rho V^2 / 2 of their own row (and coefficients by their reference area); the side force
  * and moments by the map's sign. The table itself is never modified.
  */
+import { clipText } from '../clipText';
 import { type CsvTable, parseNumberCell } from './csv';
 import type { MapFile } from './mapFile';
 import { OUTPUTS, type Output, QUANTITY_OUTPUT, type Quantity, toSI, type Unit } from './quantities';
@@ -122,7 +123,9 @@ export function convertTable(table: CsvTable, map: MapFile, defaultRhoKgPerM3: n
       return null;
     }
     if (!Number.isFinite(v)) {
-      errors.push(`line ${line}, column "${table.headers[col]}": "${raw}" is not a number (${what})`);
+      errors.push(
+        `line ${line}, column "${clipText(table.headers[col] ?? '')}": "${clipText(raw)}" is not a number (${what})`,
+      );
       return null;
     }
     return v;

@@ -1,5 +1,6 @@
 import type { Remote } from 'comlink';
 import type { JobResult, SolveJob, SolverApi } from './protocol';
+import { settleFirst } from './settleFirst';
 
 /** A live worker as the pool sees it; made by the environment's spawn function. */
 export interface WorkerHandle {
@@ -110,7 +111,10 @@ export class WorkerPool {
         const w = this.worker(slot);
         let outcome: JobResult | 'cancelled' | Error;
         try {
-          outcome = await Promise.race([w.api.solveJob(next.job), w.failed, cancelPromise]);
+          outcome = await settleFirst<JobResult, 'cancelled'>(w.api.solveJob(next.job), [
+            w.failed,
+            cancelPromise,
+          ]);
         } catch (err) {
           outcome = err instanceof Error ? err : new Error(String(err));
         }

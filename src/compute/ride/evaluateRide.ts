@@ -26,7 +26,13 @@ import { type WindStates, windStates } from '../../model/wind/windStates';
 import { finiteOrNull } from '../caseFile';
 import { degToRad, G0_MPS2, radToDeg } from '../units';
 import { RIDE_CAUTIONS } from './cautions';
-import { MAX_RIDE_SPEED_MPS, type RideCurve, type RideCurves, rideSetup } from './rideCurves';
+import {
+  MAX_RIDE_SPEED_MPS,
+  MIN_RIDING_SPEED_MPS,
+  type RideCurve,
+  type RideCurves,
+  rideSetup,
+} from './rideCurves';
 import type { RideFile } from './rideFile';
 
 export const RIDE_RESULT_FORMAT = 'coversweep-ride-result';
@@ -548,6 +554,22 @@ export function evaluateRide(ride: RideFile, curves: RideCurves): RideDocument {
     design: windAveragedWheelLoads(wheels.design, constantSpeed, hubStates, shield, rho),
     baseline: windAveragedWheelLoads(wheels.baseline, constantSpeed, hubStates, shield, rho),
   };
+
+  if (constantSpeed < MIN_RIDING_SPEED_MPS) {
+    flags.push(
+      `the steady speed on this ride is ${constantSpeed.toPrecision(3)} m/s, below the model's ${MIN_RIDING_SPEED_MPS}..${MAX_RIDE_SPEED_MPS} m/s range (a near standstill at ${constantPower.toPrecision(3)} W): times, powers and wind-averaged figures are extrapolated and say little`,
+    );
+  }
+  for (const [label, a] of [
+    ['design', avg.design],
+    ['baseline', avg.baseline],
+  ] as const) {
+    if (a.cdaM2 < 0) {
+      flags.push(
+        `${label}: the wind-averaged drag area is negative (${a.cdaM2.toPrecision(3)} m^2): at ${constantSpeed.toPrecision(3)} m/s the wind pushes the wheel forward on average (it is referred to the riding speed's dynamic pressure)`,
+      );
+    }
+  }
 
   // Yaw distribution at the hub.
   const yawStates = combinedHubStates(legs, scale.hub, 'yawStates');

@@ -33,6 +33,10 @@ export interface RideCurves {
 /** Yaw step of the curves (deg) and the largest ground speed searched at constant power (m/s). */
 export const CURVE_YAW_STEP_DEG = 1;
 export const MAX_RIDE_SPEED_MPS = 40;
+/** Slowest airspeed a ride's curves are solved at: the case files' airspeed floor. */
+export const MIN_CURVE_SPEED_MPS = 0.001;
+/** Below this steady speed a ride is at a near standstill: the model's airspeed range starts here. */
+export const MIN_RIDING_SPEED_MPS = 2;
 
 /** A wheel with no loads at all, for the rider-only estimate of the reference speed. */
 function emptyCurve(outerRadiusM: number): WheelYawCurve {
@@ -85,9 +89,10 @@ export function rideReferenceSpeed(
     MAX_RIDE_SPEED_MPS,
     0.5,
   );
-  return Number.isFinite(v) && v >= 0.5
-    ? { speedMps: v, capped: false }
-    : { speedMps: MAX_RIDE_SPEED_MPS, capped: true };
+  // NaN: the power is not reached below the cap. A low power gives a low speed (1 W: about 0.3 m/s),
+  // solved as it is (flagged by the model's airspeed range), down to the model's airspeed floor.
+  if (!Number.isFinite(v)) return { speedMps: MAX_RIDE_SPEED_MPS, capped: true };
+  return { speedMps: Math.max(v, MIN_CURVE_SPEED_MPS), capped: false };
 }
 
 /** Solve one wheel's yaw curve, 0..90 deg, at airspeed = ground speed = speedMps. */

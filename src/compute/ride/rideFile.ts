@@ -15,6 +15,8 @@ import {
   caseAirDensity,
   describeValue,
   keyPathText,
+  MAX_NAME_CHARS,
+  nameTooLong,
   type Parsed,
   parseJsonText,
   validateCase,
@@ -259,7 +261,10 @@ const rideSchema = z.strictObject(
   {
     format: anything.optional(),
     version: anything.optional(),
-    name: z.string({ error: (iss) => `must be a string, got ${describeValue(iss.input)}` }).optional(),
+    name: z
+      .string({ error: (iss) => `must be a string, got ${describeValue(iss.input)}` })
+      .max(MAX_NAME_CHARS, { error: (iss) => nameTooLong(iss.input) })
+      .optional(),
     design: anything.optional(),
     baseline: anything.optional(),
     position: z.enum(['front', 'rear'], {
