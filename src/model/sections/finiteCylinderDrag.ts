@@ -1,3 +1,5 @@
+import { interpolateTable } from './interpolateTable';
+
 /**
  * Drag coefficient (on the frontal area length x diameter) of a circular cylinder of finite length with
  * two free ends, in cross-flow at subcritical Reynolds numbers (about 1e4 .. 2e5).
@@ -26,10 +28,5 @@ export function finiteCylinderDrag(lengthRatio: number): number {
     const s = LENGTH_RATIO[last]! / lengthRatio; // 1 at L/D = 40, 0 at infinity
     return TWO_D_DRAG + s * (DRAG[last]! - TWO_D_DRAG);
   }
-  let k = 1;
-  while (LENGTH_RATIO[k]! < lengthRatio) k++;
-  const x0 = LENGTH_RATIO[k - 1]!;
-  const x1 = LENGTH_RATIO[k]!;
-  const t = (lengthRatio - x0) / (x1 - x0);
-  return DRAG[k - 1]! + t * (DRAG[k]! - DRAG[k - 1]!);
+  return interpolateTable(LENGTH_RATIO, DRAG, lengthRatio);
 }

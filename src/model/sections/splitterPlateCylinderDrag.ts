@@ -1,3 +1,5 @@
+import { interpolateTable } from './interpolateTable';
+
 /**
  * Drag coefficient (per unit span, on the cylinder's diameter) of a 2-D circular cylinder with a thin
  * wake splitter plate of length L behind it, at subcritical Reynolds numbers (1e4 .. 5e4 on the diameter).
@@ -24,11 +26,5 @@ export function splitterPlateCylinderDrag(plateLengthRatio: number): number {
   if (!(plateLengthRatio >= 0)) {
     throw new RangeError(`plateLengthRatio=${plateLengthRatio}: must be >= 0`);
   }
-  if (plateLengthRatio >= SPLITTER_PLATE_MAX_RATIO) return DRAG[DRAG.length - 1]!;
-  let k = 1;
-  while (LENGTH_RATIO[k]! < plateLengthRatio) k++;
-  const x0 = LENGTH_RATIO[k - 1]!;
-  const x1 = LENGTH_RATIO[k]!;
-  const t = (plateLengthRatio - x0) / (x1 - x0);
-  return DRAG[k - 1]! + t * (DRAG[k]! - DRAG[k - 1]!);
+  return interpolateTable(LENGTH_RATIO, DRAG, plateLengthRatio);
 }
