@@ -26,13 +26,16 @@ import type { WheelRadii } from './wheelRadii';
  *   potential normal force  C_N,p = Kp sin(beta) cos(beta), at the lattice's centre of pressure;
  *   potential suction       C_S   = (Kp - Kp^2 Ki - Kd) sin^2(beta)  (Kd: porous dissipation),
  * split among the edges where it sits (edgeSuctionShares):
- * - at the tyre's edge (each lattice strip's leading edge), the thrust the round edge can attain,
- *   bounded strip by strip by attainableEdgeThrust, acts forward, scaled by `suctionRecovered` and by
- *   the share of the section whose flow reattaches behind the tyre (plateReattachment of the solid
- *   length behind the tyre: a shallow rim is a bluff section and realises none, a deep rim or a cover
- *   realises it); the
- *   suction the edge cannot hold reappears as vortex normal force at the edge, with the sign of beta
- *   (the leading-edge suction analogy; Polhamus 1971);
+ * - at the tyre's edge (each lattice strip's leading edge) only the share of the section whose flow
+ *   reattaches behind the tyre carries suction at all (plateReattachment of the solid length behind
+ *   the tyre: a shallow rim is a bluff section whose shear layers roll up past its end, like a
+ *   cylinder with a short splitter plate, and carries none; a deep rim or a cover carries all). Of that,
+ *   the thrust the round edge can attain, bounded strip by strip by attainableEdgeThrust and scaled by
+ *   `suctionRecovered`, acts forward; the rest, suction the edge cannot hold, separates at the nose and
+ *   reattaches on the plate behind it, the premise of the leading-edge suction analogy, and reappears
+ *   as vortex normal force at the edge with the sign of beta (Polhamus 1971). The bluff share makes
+ *   neither: without reattachment there is no vortex force of the analogy (its load is the ring's
+ *   crossflow drag, rimTyreLoads);
  * - at inner edges (a solid rim bed or cover edge behind the porous spoked region) the lattice's
  *   suction is an artefact of the linear porous condition next to the edge: a porous edge carries no
  *   suction singularity (Hajian & Jaworski 2017, Proc. R. Soc. A 473:20170266), so it makes neither
@@ -58,11 +61,11 @@ function surfaceLoads(
   addForceAt(potential, 0, normalP, 0, coeff.centreXM, 0, coeff.centreZM);
   if (suction === 0) return negative;
   const reynolds = (point.rhoKgPerM3 * point.airspeedMps * 2 * edgeRadiusM) / point.muPaS;
-  const limit = roundEdgeSuctionLimit(reynolds) * options.suctionRecovered * attachedFraction;
+  const limit = roundEdgeSuctionLimit(reynolds) * options.suctionRecovered;
   const sign = Math.sign(s);
   const zEdges = coeff.stripEdgeZM;
   for (let strip = 0; strip < coeff.tyreEdgeShare.length; strip++) {
-    const theory = coeff.tyreEdgeShare[strip]! * suction;
+    const theory = coeff.tyreEdgeShare[strip]! * suction * attachedFraction;
     if (theory === 0) continue;
     const bound = attainableEdgeThrust(
       q,
