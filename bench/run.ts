@@ -18,6 +18,7 @@ import {
   type WheelInput,
 } from '../src/model/wheel';
 import { buildNodeWorker } from './buildNodeWorker';
+import { benchWholeProcess } from './wholeProcess';
 
 const cores = availableParallelism();
 const machine = { cores, cpu: cpus()[0]?.model ?? 'unknown', node: process.version };
@@ -152,3 +153,6 @@ function sweepIn(dir: string, workers: number, entry: string, label: string): vo
     if (baseline) spawnSync('git', ['worktree', 'remove', '--force', baseline.dir], { stdio: 'ignore' });
   }
 }
+
+// --- The command line as a whole process: start-up and the standard plan, compiled against tsx ----
+benchWholeProcess(print);
