@@ -22,3 +22,8 @@ export function addForceAt(
   loads.myNm += z * fx - x * fz;
   loads.mzNm += x * fy - y * fx;
 }
+
+/** Zero a ComponentLoads record in place (each part's loads function starts from it; no allocation). */
+export function clearLoads(loads: ComponentLoads): void {
+  loads.fxN = loads.fyN = loads.fzN = loads.mxNm = loads.myNm = loads.mzNm = loads.axleTorqueNm = 0;
+}

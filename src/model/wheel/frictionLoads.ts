@@ -1,4 +1,5 @@
 import { flatPlateFriction, rotatingDiscTorque } from '../friction';
+import { clearLoads } from './componentLoads';
 import type { ComponentLoads, FlowConditions, WheelGeometry } from './types';
 import type { WheelRadii } from './wheelRadii';
 
@@ -18,7 +19,7 @@ export function frictionLoads(
   point: FlowConditions,
   out: ComponentLoads,
 ): { reynolds: number } {
-  out.fxN = out.fyN = out.fzN = out.mxNm = out.myNm = out.mzNm = out.axleTorqueNm = 0;
+  clearLoads(out);
   const { rhoKgPerM3: rho, muPaS: mu } = point;
   const vInPlane = point.airspeedMps * Math.cos(point.yawRad);
   const q = 0.5 * rho * vInPlane * vInPlane;

@@ -1,4 +1,5 @@
 import { finiteCylinderDrag } from '../sections';
+import { clearLoads } from './componentLoads';
 import type { ComponentLoads, FlowConditions, ModelOptions, WheelGeometry } from './types';
 import type { WheelRadii } from './wheelRadii';
 
@@ -27,7 +28,7 @@ export function hubLoads(
   options: ModelOptions,
   out: ComponentLoads,
 ): { reynolds: number } {
-  out.fxN = out.fyN = out.fzN = out.mxNm = out.myNm = out.mzNm = out.axleTorqueNm = 0;
+  clearLoads(out);
   const d = wheel.hubShellDiameterM;
   const length = wheel.hubShellWidthM;
   const vInPlane = point.airspeedMps * Math.cos(point.yawRad);

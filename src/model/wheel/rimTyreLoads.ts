@@ -1,5 +1,5 @@
 import { planeWakeDeficit, splitterPlateCylinderDrag } from '../sections';
-import { addForceAt } from './componentLoads';
+import { addForceAt, clearLoads } from './componentLoads';
 import type { ComponentLoads, FlowConditions, ModelOptions, WheelGeometry } from './types';
 import type { WheelRadii } from './wheelRadii';
 
@@ -74,7 +74,7 @@ export function rimTyreLoads(
   options: ModelOptions,
   out: ComponentLoads,
 ): { reynolds: number } {
-  out.fxN = out.fyN = out.fzN = out.mxNm = out.myNm = out.mzNm = out.axleTorqueNm = 0;
+  clearLoads(out);
   const section = rimTyreSection(wheel, radii);
   const t = section.thicknessM;
   const { rhoKgPerM3: rho, muPaS: mu } = point;

@@ -1,4 +1,5 @@
 import { spokeRowDrag } from '../sections';
+import { clearLoads } from './componentLoads';
 import type { ComponentLoads, FlowConditions, ModelOptions, WheelGeometry } from './types';
 import type { WheelRadii } from './wheelRadii';
 
@@ -60,7 +61,7 @@ export function spokeLoads(
   options: ModelOptions,
   out: ComponentLoads,
 ): SpokeLoadsReport {
-  out.fxN = out.fyN = out.fzN = out.mxNm = out.myNm = out.mzNm = out.axleTorqueNm = 0;
+  clearLoads(out);
   const report = { reynoldsMin: Number.POSITIVE_INFINITY, reynoldsMax: 0 };
   if (wheel.spokeCount === 0) return { reynoldsMin: Number.NaN, reynoldsMax: Number.NaN };
   const round = wheel.spokeSection !== 'bladed';
