@@ -18,6 +18,7 @@ import {
   type WheelInput,
 } from '../src/model/wheel';
 import { buildNodeWorker } from './buildNodeWorker';
+import { lapackLu } from './lapackLu';
 
 const cores = availableParallelism();
 const machine = { cores, cpu: cpus()[0]?.model ?? 'unknown', node: process.version };
@@ -43,30 +44,49 @@ function timeIt(repeats: number, fn: () => number): { medianMs: number; checksum
   return { medianMs: median(times), checksum };
 }
 
-// --- Dense LU factorisation at n = 1000 -------------------------------------------------------
+// --- Dense LU factorisation: n = 1000, and the model's lattice sizes 648 and 288 ----------------------
+// Beside it, LAPACK's LU (dgetrf through python3 + scipy, one BLAS thread) on the same matrices in the
+// same run, when python3 has numpy and scipy; the ratio is printed, never asserted.
 {
-  const n = 1000;
-  const source = new Float64Array(n * n);
-  let seed = 12345;
-  for (let i = 0; i < source.length; i++) {
-    seed = (seed * 1103515245 + 12345) % 2147483648;
-    source[i] = seed / 2147483648 - 0.5;
+  const sizes = [
+    { n: 1000, repeats: 5 },
+    { n: 648, repeats: 15 },
+    { n: 288, repeats: 31 },
+  ];
+  const ours: Record<string, { medianMs: number; gflops: number; checksum: number }> = {};
+  for (const { n, repeats } of sizes) {
+    const source = new Float64Array(n * n);
+    let seed = 12345;
+    for (let i = 0; i < source.length; i++) {
+      seed = (seed * 1103515245 + 12345) % 2147483648;
+      source[i] = seed / 2147483648 - 0.5;
+    }
+    for (let i = 0; i < n; i++) source[i * n + i]! += n;
+    const work = new Float64Array(n * n);
+    const pivots = new Int32Array(n);
+    const r = timeIt(repeats, () => {
+      work.set(source);
+      luFactor(work, n, pivots);
+      return work[n * n - 1]!;
+    });
+    const gflops = ((2 / 3) * n ** 3) / (r.medianMs * 1e-3) / 1e9;
+    ours[n] = { medianMs: +r.medianMs.toFixed(2), gflops: +gflops.toFixed(2), checksum: r.checksum };
   }
-  for (let i = 0; i < n; i++) source[i * n + i]! += n;
-  const work = new Float64Array(n * n);
-  const pivots = new Int32Array(n);
-  const r = timeIt(3, () => {
-    work.set(source);
-    luFactor(work, n, pivots);
-    return work[n * n - 1]!;
-  });
-  const gflops = ((2 / 3) * n ** 3) / (r.medianMs * 1e-3) / 1e9;
-  print('lu_factor', {
-    n,
-    medianMs: +r.medianMs.toFixed(1),
-    gflops: +gflops.toFixed(2),
-    checksum: r.checksum,
-  });
+  const lapack = lapackLu(sizes);
+  for (const { n } of sizes) {
+    const mine = ours[n]!;
+    const ref = 'skipped' in lapack ? undefined : lapack.figures[n];
+    print('lu_factor', {
+      n,
+      medianMs: mine.medianMs,
+      gflops: mine.gflops,
+      checksum: mine.checksum,
+      lapackGflops: ref?.gflops ?? null,
+      lapackMedianMs: ref?.medianMs ?? null,
+      ratioToLapack: ref ? +(mine.gflops / ref.gflops).toFixed(3) : null,
+      lapack: 'skipped' in lapack ? `not measured: ${lapack.skipped}` : lapack.info,
+    });
+  }
 }
 
 // --- Lattice build and one design's yaw curve ------------------------------------------------------
