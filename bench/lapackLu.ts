@@ -13,7 +13,12 @@ export interface LapackLu {
 }
 
 export function lapackLu(sizes: { n: number; repeats: number }[]): LapackLu | { skipped: string } {
-  const env = { ...process.env, OPENBLAS_NUM_THREADS: '1', OMP_NUM_THREADS: '1', MKL_NUM_THREADS: '1' };
+  const env: NodeJS.ProcessEnv = {
+    ...process.env,
+    OPENBLAS_NUM_THREADS: '1',
+    OMP_NUM_THREADS: '1',
+    MKL_NUM_THREADS: '1',
+  };
   delete env.OPENBLAS_CORETYPE;
   delete env.OPENBLAS_L2_SIZE;
   const script = fileURLToPath(new URL('lapackLu.py', import.meta.url));
