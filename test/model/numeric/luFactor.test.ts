@@ -160,9 +160,10 @@ describe('luFactor', () => {
     }
   });
 
-  it('matches the unblocked algorithm (Golub & Van Loan alg. 3.4.1): same pivots, factors within 8 n eps max|A| / min|u_kk|', () => {
+  it('matches the unblocked algorithm (Golub & Van Loan alg. 3.4.1): same pivots, factors within n eps max|A| / min|u_kk|', () => {
     // Blocking only reorders the sums of the Schur complements, so the factors agree to rounding:
-    // U within 8 n eps max|A|, L within that divided by the smallest pivot |u_kk|.
+    // U within n eps max|A|, L within that divided by the smallest pivot |u_kk| (observed: at most
+    // 0.054 of that for n = 33, 100, 288).
     for (const n of [33, 100, 288]) {
       const a = seededMatrix(n, 31 * n + 5, 0.5 * Math.sqrt(n));
       const blocked = Float64Array.from(a);
@@ -175,24 +176,29 @@ describe('luFactor', () => {
       for (const v of a) scale = Math.max(scale, Math.abs(v));
       let minPivot = Number.POSITIVE_INFINITY;
       for (let k = 0; k < n; k++) minPivot = Math.min(minPivot, Math.abs(reference[k * n + k]!));
-      const tolU = 8 * n * EPS * scale;
+      const tolU = n * EPS * scale;
       const tolL = tolU / minPivot;
       for (let k = 0; k < n; k++) {
         expect(pBlocked[k], `n=${n} pivots[${k}] got=${pBlocked[k]} expected=${pReference[k]}`).toBe(
           pReference[k],
         );
       }
+      // The worst entry relative to its tolerance, reported with its place.
+      let worst = { excess: 0, i: 0, j: 0, tol: tolU };
       for (let i = 0; i < n; i++) {
         for (let j = 0; j < n; j++) {
-          const got = blocked[i * n + j]!;
-          const expected = reference[i * n + j]!;
           const tol = j < i ? tolL : tolU;
-          expect(
-            Math.abs(got - expected),
-            `n=${n} factor[${i},${j}] got=${got} expected=${expected} tol=${tol}`,
-          ).toBeLessThanOrEqual(tol);
+          const excess = Math.abs(blocked[i * n + j]! - reference[i * n + j]!) / tol;
+          if (excess > worst.excess) worst = { excess, i, j, tol };
         }
       }
+      const { i, j, tol } = worst;
+      const got = blocked[i * n + j]!;
+      const expected = reference[i * n + j]!;
+      expect(
+        Math.abs(got - expected),
+        `n=${n} worst factor[${i},${j}] got=${got} expected=${expected} tol=${tol}`,
+      ).toBeLessThanOrEqual(tol);
     }
   });
 
