@@ -9,6 +9,7 @@ import { availableParallelism, cpus, tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { buildWheelLattice } from '../src/model/lattice';
 import { luFactor } from '../src/model/numeric';
+import { luKernel } from '../src/model/numeric/luKernel';
 import {
   DEFAULT_MODEL_OPTIONS,
   DEFAULT_STEERING,
@@ -53,7 +54,10 @@ function timeIt(repeats: number, fn: () => number): { medianMs: number; checksum
     { n: 648, repeats: 15 },
     { n: 288, repeats: 31 },
   ];
-  const ours: Record<string, { medianMs: number; gflops: number; checksum: number }> = {};
+  const ours: Record<
+    string,
+    Record<'auto' | 'typescript', { medianMs: number; gflops: number; checksum: number }>
+  > = {};
   for (const { n, repeats } of sizes) {
     const source = new Float64Array(n * n);
     let seed = 12345;
@@ -64,26 +68,36 @@ function timeIt(repeats: number, fn: () => number): { medianMs: number; checksum
     for (let i = 0; i < n; i++) source[i * n + i]! += n;
     const work = new Float64Array(n * n);
     const pivots = new Int32Array(n);
-    const r = timeIt(repeats, () => {
-      work.set(source);
-      luFactor(work, n, pivots);
-      return work[n * n - 1]!;
-    });
-    const gflops = ((2 / 3) * n ** 3) / (r.medianMs * 1e-3) / 1e9;
-    ours[n] = { medianMs: +r.medianMs.toFixed(2), gflops: +gflops.toFixed(2), checksum: r.checksum };
+    const figures = (path: 'auto' | 'typescript') => {
+      const r = timeIt(repeats, () => {
+        work.set(source);
+        luFactor(work, n, pivots, path);
+        return work[n * n - 1]!;
+      });
+      const gflops = ((2 / 3) * n ** 3) / (r.medianMs * 1e-3) / 1e9;
+      return { medianMs: +r.medianMs.toFixed(2), gflops: +gflops.toFixed(2), checksum: r.checksum };
+    };
+    ours[n] = { auto: figures('auto'), typescript: figures('typescript') };
   }
   const lapack = lapackLu(sizes);
+  const path = luKernel() === null ? 'typescript (no WebAssembly SIMD here)' : 'wasm-simd trailing update';
   for (const { n } of sizes) {
-    const mine = ours[n]!;
+    const mine = ours[n]!.auto;
+    const plain = ours[n]!.typescript;
     const ref = 'skipped' in lapack ? undefined : lapack.figures[n];
     print('lu_factor', {
       n,
+      path,
       medianMs: mine.medianMs,
       gflops: mine.gflops,
       checksum: mine.checksum,
+      typescriptMedianMs: plain.medianMs,
+      typescriptGflops: plain.gflops,
+      typescriptChecksum: plain.checksum,
       lapackGflops: ref?.gflops ?? null,
       lapackMedianMs: ref?.medianMs ?? null,
       ratioToLapack: ref ? +(mine.gflops / ref.gflops).toFixed(3) : null,
+      typescriptRatioToLapack: ref ? +(plain.gflops / ref.gflops).toFixed(3) : null,
       lapack: 'skipped' in lapack ? `not measured: ${lapack.skipped}` : lapack.info,
     });
   }

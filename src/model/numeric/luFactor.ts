@@ -15,19 +15,29 @@
  *        rows of A22 at a time against four rows of U12 (12 multipliers held in registers; every U12
  *        value loaded once serves three rows, and each A22 element is loaded and stored once per four
  *        rank-1 terms).
- * Plain scalar TypeScript: V8 does not vectorise, so the speed comes from cutting loads and stores
- * per multiply-add (register tiling) and from short panels that stay in cache. Measured with
- * `npm run bench` (see README, Performance); a different block size changes the rounding of the
+ * Two paths give the same bits: step 3 runs in WebAssembly SIMD (luKernel.wat, two f64 lanes) where
+ * it is available, on a copy of the matrix in the kernel's memory, and in plain TypeScript otherwise
+ * (`path` = 'typescript' forces it). Every element of A22 receives the same IEEE-754 operations in the
+ * same order on both paths (groups of four rank-1 terms summed left to right, then subtracted), so
+ * the factors and pivots are identical. Plain scalar TypeScript gets its speed from cutting loads and
+ * stores per multiply-add (register tiling) and from short panels that stay in cache; measured with
+ * `npm run bench` (see README, Performance). A different block size changes the rounding of the
  * factors (summation order), not their accuracy.
  *
  * `pivots[k]` is the row swapped with row k at step k (LAPACK convention, 0-based), to be applied
  * in order k = 0..n-1 by `luSolve`. Throws for an exactly singular (or non-finite) matrix.
  */
 
+import { type LuKernel, luKernel } from './luKernel';
+
 const OUTER_BLOCK = 32;
 const INNER_BLOCK = 8;
+/** Below this order the copy into the kernel's memory costs more than SIMD saves. */
+const WASM_MIN_N = 64;
 
-export function luFactor(a: Float64Array, n: number, pivots: Int32Array): void {
+export type LuPath = 'auto' | 'typescript' | 'wasm';
+
+export function luFactor(a: Float64Array, n: number, pivots: Int32Array, path: LuPath = 'auto'): void {
   if (!Number.isInteger(n) || n < 1) {
     throw new RangeError(`luFactor: n=${n} must be a positive integer`);
   }
@@ -42,10 +52,30 @@ export function luFactor(a: Float64Array, n: number, pivots: Int32Array): void {
       throw new RangeError(`luFactor: a[${i}]=${a[i]} must be finite`);
     }
   }
-  factorColumns(a, n, pivots, 0, n, OUTER_BLOCK);
+  if (path !== 'auto' && path !== 'typescript' && path !== 'wasm') {
+    throw new RangeError(`luFactor: path=${String(path)} must be 'auto', 'typescript' or 'wasm'`);
+  }
+  const kernel = path === 'typescript' || (path === 'auto' && n < WASM_MIN_N) ? null : luKernel();
+  if (path === 'wasm' && kernel === null) {
+    throw new RangeError("luFactor: path='wasm' but WebAssembly SIMD is not available here");
+  }
+  if (kernel === null) {
+    factorColumns(a, n, pivots, 0, n, OUTER_BLOCK, null);
+    return;
+  }
+  const bytes = n * n * 8;
+  const have = kernel.memory.buffer.byteLength;
+  if (have < bytes) kernel.memory.grow(Math.ceil((bytes - have) / 65536));
+  const work = new Float64Array(kernel.memory.buffer, 0, n * n);
+  work.set(a.subarray(0, n * n));
+  factorColumns(work, n, pivots, 0, n, OUTER_BLOCK, kernel);
+  a.set(work);
 }
 
-/** Blocked LU of columns c0..c1-1 (rows c0..n-1), block width `block` (steps 1-3 above). */
+/**
+ * Blocked LU of columns c0..c1-1 (rows c0..n-1), block width `block` (steps 1-3 above); `kernel`
+ * (null: TypeScript) does step 3, with `a` the view of its memory.
+ */
 function factorColumns(
   a: Float64Array,
   n: number,
@@ -53,14 +83,24 @@ function factorColumns(
   c0: number,
   c1: number,
   block: number,
+  kernel: LuKernel | null,
 ): void {
   for (let k0 = c0; k0 < c1; k0 += block) {
     const kEnd = Math.min(k0 + block, c1);
-    if (block > INNER_BLOCK) factorColumns(a, n, pivots, k0, kEnd, INNER_BLOCK);
+    if (block > INNER_BLOCK) factorColumns(a, n, pivots, k0, kEnd, INNER_BLOCK, kernel);
     else factorPanel(a, n, pivots, k0, kEnd);
     if (kEnd === c1) break;
     solveBlockRow(a, n, k0, kEnd, c1);
-    updateTrailing(a, n, k0, kEnd, c1);
+    if (kernel === null || (kEnd - k0) % 4 !== 0) {
+      updateTrailing(a, n, k0, kEnd, kEnd, n, kEnd, c1);
+    } else {
+      // The kernel takes rows and columns in pairs; the odd column and the odd row are done here.
+      kernel.update(n, k0, kEnd, c1);
+      const rowsEven = kEnd + 2 * Math.floor((n - kEnd) / 2);
+      const colsEven = kEnd + 2 * Math.floor((c1 - kEnd) / 2);
+      if (colsEven < c1) updateTrailing(a, n, k0, kEnd, kEnd, rowsEven, colsEven, c1);
+      if (rowsEven < n) updateTrailing(a, n, k0, kEnd, rowsEven, n, kEnd, c1);
+    }
   }
 }
 
@@ -129,10 +169,24 @@ function solveBlockRow(a: Float64Array, n: number, k0: number, kEnd: number, c1:
   }
 }
 
-/** A22 -= L21 U12: rows kEnd..n-1, columns kEnd..c1-1, inner dimension k0..kEnd-1. */
-function updateTrailing(a: Float64Array, n: number, k0: number, kEnd: number, c1: number): void {
-  let i = kEnd;
-  for (; i + 2 < n; i += 3) {
+/**
+ * A22 -= L21 U12 on rows i0..i1-1 and columns j0..j1-1, inner dimension k0..kEnd-1: three rows at a
+ * time, p in groups of four, then single p. Every element gets the same operations in the same
+ * order whatever the row grouping (the last rows go one by one with the same groups of four), as in
+ * luKernel.wat.
+ */
+function updateTrailing(
+  a: Float64Array,
+  n: number,
+  k0: number,
+  kEnd: number,
+  i0: number,
+  i1: number,
+  j0: number,
+  j1: number,
+): void {
+  let i = i0;
+  for (; i + 2 < i1; i += 3) {
     const ri = i * n;
     const rs = ri + n;
     const rt = rs + n;
@@ -147,21 +201,21 @@ function updateTrailing(a: Float64Array, n: number, k0: number, kEnd: number, c1
       const b2 = a[rs + p + 2]!;
       const b3 = a[rs + p + 3]!;
       const c0 = a[rt + p]!;
-      const c1_ = a[rt + p + 1]!;
+      const c1 = a[rt + p + 1]!;
       const c2 = a[rt + p + 2]!;
       const c3 = a[rt + p + 3]!;
       const r0 = p * n;
       const r1 = r0 + n;
       const r2 = r1 + n;
       const r3 = r2 + n;
-      for (let j = kEnd; j < c1; j++) {
+      for (let j = j0; j < j1; j++) {
         const u0 = a[r0 + j]!;
         const u1 = a[r1 + j]!;
         const u2 = a[r2 + j]!;
         const u3 = a[r3 + j]!;
         a[ri + j]! -= a0 * u0 + a1 * u1 + a2 * u2 + a3 * u3;
         a[rs + j]! -= b0 * u0 + b1 * u1 + b2 * u2 + b3 * u3;
-        a[rt + j]! -= c0 * u0 + c1_ * u1 + c2 * u2 + c3 * u3;
+        a[rt + j]! -= c0 * u0 + c1 * u1 + c2 * u2 + c3 * u3;
       }
     }
     for (; p < kEnd; p++) {
@@ -169,7 +223,7 @@ function updateTrailing(a: Float64Array, n: number, k0: number, kEnd: number, c1
       const lb = a[rs + p]!;
       const lc = a[rt + p]!;
       const rp = p * n;
-      for (let j = kEnd; j < c1; j++) {
+      for (let j = j0; j < j1; j++) {
         const u = a[rp + j]!;
         a[ri + j]! -= la * u;
         a[rs + j]! -= lb * u;
@@ -177,12 +231,26 @@ function updateTrailing(a: Float64Array, n: number, k0: number, kEnd: number, c1
       }
     }
   }
-  for (; i < n; i++) {
+  for (; i < i1; i++) {
     const ri = i * n;
-    for (let p = k0; p < kEnd; p++) {
+    let p = k0;
+    for (; p + 3 < kEnd; p += 4) {
+      const a0 = a[ri + p]!;
+      const a1 = a[ri + p + 1]!;
+      const a2 = a[ri + p + 2]!;
+      const a3 = a[ri + p + 3]!;
+      const r0 = p * n;
+      const r1 = r0 + n;
+      const r2 = r1 + n;
+      const r3 = r2 + n;
+      for (let j = j0; j < j1; j++) {
+        a[ri + j]! -= a0 * a[r0 + j]! + a1 * a[r1 + j]! + a2 * a[r2 + j]! + a3 * a[r3 + j]!;
+      }
+    }
+    for (; p < kEnd; p++) {
       const l = a[ri + p]!;
       const rp = p * n;
-      for (let j = kEnd; j < c1; j++) a[ri + j]! -= l * a[rp + j]!;
+      for (let j = j0; j < j1; j++) a[ri + j]! -= l * a[rp + j]!;
     }
   }
 }
