@@ -34,6 +34,11 @@ const OUTER_BLOCK = 32;
 const INNER_BLOCK = 8;
 /** Below this order the copy into the kernel's memory costs more than SIMD saves. */
 const WASM_MIN_N = 64;
+/**
+ * Above this order 'auto' keeps to TypeScript: the kernel's memory (a copy of the matrix) only grows,
+ * and a thread should not hold on to more than 32 MiB for it (n = 2048).
+ */
+const WASM_MAX_N = 2048;
 
 export type LuPath = 'auto' | 'typescript' | 'wasm';
 
@@ -55,21 +60,34 @@ export function luFactor(a: Float64Array, n: number, pivots: Int32Array, path: L
   if (path !== 'auto' && path !== 'typescript' && path !== 'wasm') {
     throw new RangeError(`luFactor: path=${String(path)} must be 'auto', 'typescript' or 'wasm'`);
   }
-  const kernel = path === 'typescript' || (path === 'auto' && n < WASM_MIN_N) ? null : luKernel();
+  const kernel =
+    path === 'typescript' || (path === 'auto' && (n < WASM_MIN_N || n > WASM_MAX_N)) ? null : luKernel();
   if (path === 'wasm' && kernel === null) {
     throw new RangeError("luFactor: path='wasm' but WebAssembly SIMD is not available here");
   }
-  if (kernel === null) {
+  const bytes = n * n * 8;
+  const have = kernel === null ? 0 : kernel.memory.buffer.byteLength;
+  if (kernel !== null && have < bytes && !growMemory(kernel.memory, bytes - have) && path === 'wasm') {
+    throw new RangeError(`luFactor: path='wasm' but the kernel's memory cannot grow to ${bytes} bytes`);
+  }
+  if (kernel === null || kernel.memory.buffer.byteLength < bytes) {
     factorColumns(a, n, pivots, 0, n, OUTER_BLOCK, null);
     return;
   }
-  const bytes = n * n * 8;
-  const have = kernel.memory.buffer.byteLength;
-  if (have < bytes) kernel.memory.grow(Math.ceil((bytes - have) / 65536));
   const work = new Float64Array(kernel.memory.buffer, 0, n * n);
   work.set(a.subarray(0, n * n));
   factorColumns(work, n, pivots, 0, n, OUTER_BLOCK, kernel);
   a.set(work);
+}
+
+/** Grows a WebAssembly memory by at least `extraBytes`; false when the engine refuses. */
+function growMemory(memory: WebAssembly.Memory, extraBytes: number): boolean {
+  try {
+    memory.grow(Math.ceil(extraBytes / 65536));
+    return true;
+  } catch {
+    return false;
+  }
 }
 
 /**
