@@ -124,16 +124,18 @@ function factorColumns(
 
 /** Unblocked partial-pivoting LU of columns k0..kEnd-1, rows k0..n-1 (Golub & Van Loan alg. 3.4.1). */
 function factorPanel(a: Float64Array, n: number, pivots: Int32Array, k0: number, kEnd: number): void {
-  for (let k = k0; k < kEnd; k++) {
-    let p = k;
-    let big = Math.abs(a[k * n + k]!);
-    for (let i = k + 1; i < n; i++) {
-      const v = Math.abs(a[i * n + k]!);
-      if (v > big) {
-        big = v;
-        p = i;
-      }
+  // Largest |a_ik| of the first column; later columns' searches ride along with the elimination
+  // (same rows, same order, same strict comparison as a separate pass: the same pivot).
+  let p = k0;
+  let big = Math.abs(a[k0 * n + k0]!);
+  for (let i = k0 + 1; i < n; i++) {
+    const v = Math.abs(a[i * n + k0]!);
+    if (v > big) {
+      big = v;
+      p = i;
     }
+  }
+  for (let k = k0; k < kEnd; k++) {
     if (!(big > 0) || !Number.isFinite(big)) {
       throw new RangeError(
         `luFactor: matrix is singular or not finite: pivot column ${k} has largest |a|=${big} (must be finite and > 0)`,
@@ -150,14 +152,26 @@ function factorPanel(a: Float64Array, n: number, pivots: Int32Array, k0: number,
       }
     }
     const inv = 1 / a[rk + k]!;
-    for (let i = k + 1; i < n; i++) {
+    const next = k + 1;
+    let nextP = next;
+    let nextBig = 0;
+    for (let i = next; i < n; i++) {
       const ri = i * n;
       const l = a[ri + k]! * inv;
       a[ri + k] = l;
       if (l !== 0) {
-        for (let j = k + 1; j < kEnd; j++) a[ri + j]! -= l * a[rk + j]!;
+        for (let j = next; j < kEnd; j++) a[ri + j]! -= l * a[rk + j]!;
+      }
+      if (next < kEnd) {
+        const v = Math.abs(a[ri + next]!);
+        if (i === next || v > nextBig) {
+          nextBig = v;
+          nextP = i;
+        }
       }
     }
+    p = nextP;
+    big = nextBig;
   }
 }
 
