@@ -177,27 +177,40 @@ function factorPanel(a: Float64Array, n: number, pivots: Int32Array, k0: number,
 
 /** U12 = L11^-1 A12 for rows k0..kEnd-1, columns kEnd..c1-1 (unit lower triangular, row by row). */
 function solveBlockRow(a: Float64Array, n: number, k0: number, kEnd: number, c1: number): void {
-  for (let i = k0 + 1; i < kEnd; i++) {
-    const ri = i * n;
-    let k = k0;
-    for (; k + 3 < i; k += 4) {
-      const l0 = a[ri + k]!;
-      const l1 = a[ri + k + 1]!;
-      const l2 = a[ri + k + 2]!;
-      const l3 = a[ri + k + 3]!;
-      const r0 = k * n;
-      const r1 = r0 + n;
-      const r2 = r1 + n;
-      const r3 = r2 + n;
-      for (let j = kEnd; j < c1; j++) {
-        a[ri + j]! -= l0 * a[r0 + j]! + l1 * a[r1 + j]! + l2 * a[r2 + j]! + l3 * a[r3 + j]!;
-      }
+  for (let i = k0 + 1; i < kEnd; i++) updateRow(a, n, i * n, k0, i, kEnd, c1);
+}
+
+/**
+ * One row (starting at index ri): a[ri + j] -= sum over p = p0..p1-1 of a[ri + p] a[p n + j], for
+ * columns j0..j1-1; p in groups of four summed left to right, then single p.
+ */
+function updateRow(
+  a: Float64Array,
+  n: number,
+  ri: number,
+  p0: number,
+  p1: number,
+  j0: number,
+  j1: number,
+): void {
+  let p = p0;
+  for (; p + 3 < p1; p += 4) {
+    const l0 = a[ri + p]!;
+    const l1 = a[ri + p + 1]!;
+    const l2 = a[ri + p + 2]!;
+    const l3 = a[ri + p + 3]!;
+    const r0 = p * n;
+    const r1 = r0 + n;
+    const r2 = r1 + n;
+    const r3 = r2 + n;
+    for (let j = j0; j < j1; j++) {
+      a[ri + j]! -= l0 * a[r0 + j]! + l1 * a[r1 + j]! + l2 * a[r2 + j]! + l3 * a[r3 + j]!;
     }
-    for (; k < i; k++) {
-      const l = a[ri + k]!;
-      const rk = k * n;
-      for (let j = kEnd; j < c1; j++) a[ri + j]! -= l * a[rk + j]!;
-    }
+  }
+  for (; p < p1; p++) {
+    const l = a[ri + p]!;
+    const rp = p * n;
+    for (let j = j0; j < j1; j++) a[ri + j]! -= l * a[rp + j]!;
   }
 }
 
@@ -263,26 +276,5 @@ function updateTrailing(
       }
     }
   }
-  for (; i < i1; i++) {
-    const ri = i * n;
-    let p = k0;
-    for (; p + 3 < kEnd; p += 4) {
-      const a0 = a[ri + p]!;
-      const a1 = a[ri + p + 1]!;
-      const a2 = a[ri + p + 2]!;
-      const a3 = a[ri + p + 3]!;
-      const r0 = p * n;
-      const r1 = r0 + n;
-      const r2 = r1 + n;
-      const r3 = r2 + n;
-      for (let j = j0; j < j1; j++) {
-        a[ri + j]! -= a0 * a[r0 + j]! + a1 * a[r1 + j]! + a2 * a[r2 + j]! + a3 * a[r3 + j]!;
-      }
-    }
-    for (; p < kEnd; p++) {
-      const l = a[ri + p]!;
-      const rp = p * n;
-      for (let j = j0; j < j1; j++) a[ri + j]! -= l * a[rp + j]!;
-    }
-  }
+  for (; i < i1; i++) updateRow(a, n, i * n, k0, kEnd, j0, j1);
 }
