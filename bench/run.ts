@@ -20,6 +20,7 @@ import {
 } from '../src/model/wheel';
 import { buildNodeWorker } from './buildNodeWorker';
 import { lapackLu } from './lapackLu';
+import { benchWholeProcess } from './wholeProcess';
 
 const cores = availableParallelism();
 const machine = { cores, cpu: cpus()[0]?.model ?? 'unknown', node: process.version };
@@ -186,3 +187,6 @@ function sweepIn(dir: string, workers: number, entry: string, label: string): vo
     if (baseline) spawnSync('git', ['worktree', 'remove', '--force', baseline.dir], { stdio: 'ignore' });
   }
 }
+
+// --- The command line as a whole process: start-up and the standard plan, compiled against tsx ----
+benchWholeProcess(print);

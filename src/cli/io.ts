@@ -7,6 +7,8 @@ export interface CliIo {
   stderrIsTTY: boolean;
   /** Directory relative paths are resolved against. */
   cwd: string;
+  /** Compiled solver worker entry (.mjs) for pooled sweeps; unset: the TypeScript entry through tsx. */
+  workerEntry?: string;
 }
 
 export function processIo(): CliIo {

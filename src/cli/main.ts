@@ -354,7 +354,7 @@ async function commandSweep(args: string[], io: CliIo): Promise<number> {
   io.stderr(
     `sweep: ${plan.cases.length} case(s), ${plan.pointCount} operating point(s), ${workers > 0 ? `${workers} worker thread(s)` : 'in this process'}\n`,
   );
-  const pool = workers > 0 ? new WorkerPool(nodeWorkerSpawner(), workers) : undefined;
+  const pool = workers > 0 ? new WorkerPool(nodeWorkerSpawner(io.workerEntry), workers) : undefined;
   const finish = (failed: number): number => {
     if (failed > 0)
       io.stderr(`sweep: ${failed} of ${plan.cases.length} case(s) failed; see the error column\n`);

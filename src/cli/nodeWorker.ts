@@ -9,8 +9,9 @@ const sourceEntry = new URL('../../workers/solver.node.ts', import.meta.url).hre
 /**
  * A spawn function for solver worker threads. By default the TypeScript entry runs through tsx,
  * registered inside the thread (tsx's loader does not reach worker threads on Node 20): ~1 s to start,
- * always the current source. `compiledEntry` (a path to an .mjs built from workers/solver.node.ts, as
- * the benchmark does) starts in ~0.1 s.
+ * always the current source. `compiledEntry` (a path to an .mjs built from workers/solver.node.ts: the
+ * compiled command line's dist-cli/workers/solver.node.mjs, or the benchmark's own build) starts in
+ * ~0.1 s.
  */
 export function nodeWorkerSpawner(compiledEntry?: string): SpawnWorker {
   return (): WorkerHandle => {
