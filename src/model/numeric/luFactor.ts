@@ -108,7 +108,7 @@ function factorColumns(
     if (block > INNER_BLOCK) factorColumns(a, n, pivots, k0, kEnd, INNER_BLOCK, kernel);
     else factorPanel(a, n, pivots, k0, kEnd);
     if (kEnd === c1) break;
-    solveBlockRow(a, n, k0, kEnd, c1);
+    solveBlockRow(a, n, k0, kEnd, c1, kernel);
     if (kernel === null || (kEnd - k0) % 4 !== 0) {
       updateTrailing(a, n, k0, kEnd, kEnd, n, kEnd, c1);
     } else {
@@ -175,9 +175,30 @@ function factorPanel(a: Float64Array, n: number, pivots: Int32Array, k0: number,
   }
 }
 
-/** U12 = L11^-1 A12 for rows k0..kEnd-1, columns kEnd..c1-1 (unit lower triangular, row by row). */
-function solveBlockRow(a: Float64Array, n: number, k0: number, kEnd: number, c1: number): void {
-  for (let i = k0 + 1; i < kEnd; i++) updateRow(a, n, i * n, k0, i, kEnd, c1);
+/**
+ * U12 = L11^-1 A12 for rows k0..kEnd-1, columns kEnd..c1-1 (unit lower triangular, row by row); the
+ * kernel, when given, does each row's groups of four on column pairs, the rest is done here.
+ */
+function solveBlockRow(
+  a: Float64Array,
+  n: number,
+  k0: number,
+  kEnd: number,
+  c1: number,
+  kernel: LuKernel | null,
+): void {
+  for (let i = k0 + 1; i < kEnd; i++) {
+    if (kernel === null) {
+      updateRow(a, n, i * n, k0, i, kEnd, c1);
+      continue;
+    }
+    kernel.updateRow(n, i, k0, i, kEnd, c1);
+    const groupsEnd = k0 + 4 * Math.floor((i - k0) / 4);
+    const colsEven = kEnd + 2 * Math.floor((c1 - kEnd) / 2);
+    // The odd column (groups then single p, as updateRow), then the single p on the paired columns.
+    if (colsEven < c1) updateRow(a, n, i * n, k0, i, colsEven, c1);
+    if (groupsEnd < i) updateRow(a, n, i * n, groupsEnd, i, kEnd, colsEven);
+  }
 }
 
 /**
