@@ -15,10 +15,11 @@
  *        rows of A22 at a time against four rows of U12 (12 multipliers held in registers; every U12
  *        value loaded once serves three rows, and each A22 element is loaded and stored once per four
  *        rank-1 terms).
- * Two paths give the same bits: step 3 runs in WebAssembly SIMD (luKernel.wat, two f64 lanes) where
- * it is available, on a copy of the matrix in the kernel's memory, and in plain TypeScript otherwise
- * (`path` = 'typescript' forces it). Every element of A22 receives the same IEEE-754 operations in the
- * same order on both paths (groups of four rank-1 terms summed left to right, then subtracted), so
+ * Two paths give the same bits: step 3 and the groups of four of step 2 run in WebAssembly SIMD
+ * (luKernel.wat, two f64 lanes) where it is available, on a copy of the matrix in the kernel's memory,
+ * and in plain TypeScript otherwise (`path` = 'typescript' forces it). Every element receives the same
+ * IEEE-754 operations in the same order on both paths (groups of four rank-1 terms summed left to
+ * right, then subtracted; then the single terms), so
  * the factors and pivots are identical. Plain scalar TypeScript gets its speed from cutting loads and
  * stores per multiply-add (register tiling) and from short panels that stay in cache; measured with
  * `npm run bench` (see README, Performance). A different block size changes the rounding of the
