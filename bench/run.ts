@@ -9,6 +9,7 @@ import { availableParallelism, cpus, tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { buildWheelLattice } from '../src/model/lattice';
 import { luFactor } from '../src/model/numeric';
+import { luKernel } from '../src/model/numeric/luKernel';
 import {
   DEFAULT_MODEL_OPTIONS,
   DEFAULT_STEERING,
@@ -18,6 +19,7 @@ import {
   type WheelInput,
 } from '../src/model/wheel';
 import { buildNodeWorker } from './buildNodeWorker';
+import { lapackLu } from './lapackLu';
 import { benchWholeProcess } from './wholeProcess';
 
 const cores = availableParallelism();
@@ -44,30 +46,62 @@ function timeIt(repeats: number, fn: () => number): { medianMs: number; checksum
   return { medianMs: median(times), checksum };
 }
 
-// --- Dense LU factorisation at n = 1000 -------------------------------------------------------
+// --- Dense LU factorisation: n = 1000, and the model's lattice sizes 648 and 288 ----------------------
+// Beside it, LAPACK's LU (dgetrf through python3 + scipy, one BLAS thread) on the same matrices in the
+// same run, when python3 has numpy and scipy; the ratio is printed, never asserted.
 {
-  const n = 1000;
-  const source = new Float64Array(n * n);
-  let seed = 12345;
-  for (let i = 0; i < source.length; i++) {
-    seed = (seed * 1103515245 + 12345) % 2147483648;
-    source[i] = seed / 2147483648 - 0.5;
+  const sizes = [
+    { n: 1000, repeats: 5 },
+    { n: 648, repeats: 15 },
+    { n: 288, repeats: 31 },
+  ];
+  const ours: Record<
+    string,
+    Record<'auto' | 'typescript', { medianMs: number; gflops: number; checksum: number }>
+  > = {};
+  for (const { n, repeats } of sizes) {
+    const source = new Float64Array(n * n);
+    let seed = 12345;
+    for (let i = 0; i < source.length; i++) {
+      seed = (seed * 1103515245 + 12345) % 2147483648;
+      source[i] = seed / 2147483648 - 0.5;
+    }
+    for (let i = 0; i < n; i++) source[i * n + i]! += n;
+    const work = new Float64Array(n * n);
+    const pivots = new Int32Array(n);
+    const figures = (path: 'auto' | 'typescript') => {
+      const r = timeIt(repeats, () => {
+        work.set(source);
+        luFactor(work, n, pivots, path);
+        return work[n * n - 1]!;
+      });
+      const gflops = ((2 / 3) * n ** 3) / (r.medianMs * 1e-3) / 1e9;
+      return { medianMs: +r.medianMs.toFixed(2), gflops: +gflops.toFixed(2), checksum: r.checksum };
+    };
+    ours[n] = { auto: figures('auto'), typescript: figures('typescript') };
   }
-  for (let i = 0; i < n; i++) source[i * n + i]! += n;
-  const work = new Float64Array(n * n);
-  const pivots = new Int32Array(n);
-  const r = timeIt(3, () => {
-    work.set(source);
-    luFactor(work, n, pivots);
-    return work[n * n - 1]!;
-  });
-  const gflops = ((2 / 3) * n ** 3) / (r.medianMs * 1e-3) / 1e9;
-  print('lu_factor', {
-    n,
-    medianMs: +r.medianMs.toFixed(1),
-    gflops: +gflops.toFixed(2),
-    checksum: r.checksum,
-  });
+  const lapack = lapackLu(sizes);
+  const path = luKernel() === null ? 'typescript (no WebAssembly SIMD here)' : 'wasm-simd updates (panel in TypeScript)';
+  for (const { n } of sizes) {
+    const mine = ours[n]!.auto;
+    const plain = ours[n]!.typescript;
+    const ref = 'skipped' in lapack ? undefined : lapack.figures[n];
+    print('lu_factor', {
+      n,
+      path,
+      medianMs: mine.medianMs,
+      gflops: mine.gflops,
+      checksum: mine.checksum,
+      typescriptMedianMs: plain.medianMs,
+      typescriptGflops: plain.gflops,
+      typescriptChecksum: plain.checksum,
+      lapackGflops: ref?.gflops ?? null,
+      lapackMedianMs: ref?.medianMs ?? null,
+      ratioToLapack: ref ? +(mine.gflops / ref.gflops).toFixed(3) : null,
+      typescriptRatioToLapack: ref ? +(plain.gflops / ref.gflops).toFixed(3) : null,
+      lapack: 'skipped' in lapack ? `not measured: ${lapack.skipped}` : lapack.info,
+    });
+  }
 }
 
 // --- Lattice build and one design's yaw curve ------------------------------------------------------
