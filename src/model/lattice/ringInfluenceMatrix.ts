@@ -13,7 +13,9 @@
  * planarSegmentNormalVelocity), v = r0 . (r1/|r1| - r2/|r2|) / (4 pi (r1z r2x - r1x r2z)), and the
  * semi-infinite leg along -x (planarWakeNormalVelocity), v = (1 - r1x/|r1|) / (4 pi r1z). Every corner
  * is an end of up to three segments, so the unit vectors r/|r| from each corner to the control point
- * are computed once per strip and shared (a third of the square roots). Same cut-off as those kernels.
+ * are computed once per strip and shared (a third of the square roots); on a chordwise side, which
+ * lies on its edge line, the segment law reduces to (u2x - u1x) / (4 pi dz) with one reciprocal per
+ * edge line (two divisions saved per ring). Same cut-off as those kernels.
  *
  * nodeLowerX / nodeUpperX: spanCount x (chordCount + 1) corner x positions on each strip's lower and
  * upper edge lines (see RingLattice).
@@ -89,37 +91,26 @@ function stripContributions(
     upUx[m] = du * iu;
     upUz[m] = dz1 * iu;
   }
+  // A chordwise side lies on its edge line (r1z = r2z = dz, r0 = (r0x, 0)): the segment law reduces
+  // to v = (u2x - u1x) / (4 pi dz), with the cut-off |dz| > CORE_RELATIVE |r0x|; the wake legs to
+  // (1 - ux) / (4 pi dz). One reciprocal per edge line serves them all.
+  const k0 = 1 / (FOUR_PI * dz0);
+  const k1 = 1 / (FOUR_PI * dz1);
+  const dz0Sq = dz0 * dz0;
+  const dz1Sq = dz1 * dz1;
   for (let m = 0; m < chordCount; m++) {
     const span = segment(lowDx[m]!, dz0, lowUx[m]!, lowUz[m]!, upDx[m]!, dz1, upUx[m]!, upUz[m]!);
-    const upperSide = segment(
-      upDx[m]!,
-      dz1,
-      upUx[m]!,
-      upUz[m]!,
-      upDx[m + 1]!,
-      dz1,
-      upUx[m + 1]!,
-      upUz[m + 1]!,
-    );
-    const lowerSide = segment(
-      lowDx[m]!,
-      dz0,
-      lowUx[m]!,
-      lowUz[m]!,
-      lowDx[m + 1]!,
-      dz0,
-      lowUx[m + 1]!,
-      lowUz[m + 1]!,
-    );
+    const r0u = upDx[m]! - upDx[m + 1]!;
+    const upperSide = dz1Sq > CORE_SQ * r0u * r0u ? (upUx[m + 1]! - upUx[m]!) * k1 : 0;
+    const r0l = lowDx[m]! - lowDx[m + 1]!;
+    const lowerSide = dz0Sq > CORE_SQ * r0l * r0l ? (lowUx[m + 1]! - lowUx[m]!) * k0 : 0;
     out[row + base + m]! += sign * (span + upperSide - lowerSide);
     if (m > 0) out[row + base + m - 1]! -= sign * span;
   }
   // Wake legs from the trailing corners along -x.
   let wake = 0;
-  if (dz1 * dz1 > CORE_SQ * (upDx[chordCount]! ** 2 + dz1 * dz1))
-    wake += (1 - upUx[chordCount]!) / (FOUR_PI * dz1);
-  if (dz0 * dz0 > CORE_SQ * (lowDx[chordCount]! ** 2 + dz0 * dz0))
-    wake -= (1 - lowUx[chordCount]!) / (FOUR_PI * dz0);
+  if (dz1Sq > CORE_SQ * (upDx[chordCount]! ** 2 + dz1Sq)) wake += (1 - upUx[chordCount]!) * k1;
+  if (dz0Sq > CORE_SQ * (lowDx[chordCount]! ** 2 + dz0Sq)) wake -= (1 - lowUx[chordCount]!) * k0;
   out[row + base + chordCount - 1]! += sign * wake;
 }
 
