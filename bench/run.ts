@@ -81,7 +81,8 @@ function timeIt(repeats: number, fn: () => number): { medianMs: number; checksum
     ours[n] = { auto: figures('auto'), typescript: figures('typescript') };
   }
   const lapack = lapackLu(sizes);
-  const path = luKernel() === null ? 'typescript (no WebAssembly SIMD here)' : 'wasm-simd updates (panel in TypeScript)';
+  const path =
+    luKernel() === null ? 'typescript (no WebAssembly SIMD here)' : 'wasm-simd updates (panel in TypeScript)';
   for (const { n } of sizes) {
     const mine = ours[n]!.auto;
     const plain = ours[n]!.typescript;

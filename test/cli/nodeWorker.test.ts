@@ -67,4 +67,3 @@ describe('solver pool on Node worker threads', () => {
     expect(busyExit, 'busy worker: got this exit, expected code 1 (terminated)').toMatch(/code 1/);
   }, 60_000);
 });
-
