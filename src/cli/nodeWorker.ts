@@ -23,8 +23,9 @@ const RETIRE_GRACE_MS = 2000;
  * optimising its code on a background thread (a concurrent TurboFan job asks for the foreground task
  * runner of an isolate the platform has already unregistered: "Assertion failed: (data.first) !=
  * nullptr" in NodePlatform::ForIsolate, from IncrementalMarkingJob::ScheduleTask); a thread that has
- * just finished a job is the likely case (measured: about 1 in 60 such terminations, none in 120 self
- * exits). See v8/node#208 (2025): the isolate is now unregistered after it is disposed.
+ * just finished a job is the likely case (measured: 1 abort in 60 such terminations, none in 120 self
+ * exits; see DEVELOPERS.md). Upstream, the isolate is now unregistered after it is disposed
+ * (v8/node#208, 2025).
  */
 export function nodeWorkerSpawner(compiledEntry?: string): SpawnWorker {
   return (): WorkerHandle => {
