@@ -7,24 +7,14 @@ import { spawnSync } from 'node:child_process';
 import { mkdtempSync, symlinkSync } from 'node:fs';
 import { availableParallelism, cpus, tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
-import { buildWheelLattice } from '../src/model/lattice';
 import { luFactor } from '../src/model/numeric';
 import { luKernel } from '../src/model/numeric/luKernel';
-import {
-  DEFAULT_MODEL_OPTIONS,
-  DEFAULT_STEERING,
-  DEMO_WHEEL,
-  type FlowConditions,
-  solveWheel,
-  type WheelInput,
-} from '../src/model/wheel';
 import { buildNodeWorker } from './buildNodeWorker';
 import { lapackLu } from './lapackLu';
 import { benchWholeProcess } from './wholeProcess';
 
 const cores = availableParallelism();
 const machine = { cores, cpu: cpus()[0]?.model ?? 'unknown', node: process.version };
-const deg = Math.PI / 180;
 
 function print(name: string, figures: Record<string, unknown>): void {
   console.log(JSON.stringify({ bench: name, ...figures, machine }));
@@ -105,50 +95,19 @@ function timeIt(repeats: number, fn: () => number): { medianMs: number; checksum
   }
 }
 
-// --- Lattice build and one design's yaw curve ------------------------------------------------------
-const yawCurve = (speed: number): FlowConditions[] =>
-  Array.from({ length: 41 }, (_, k) => ({
-    airspeedMps: speed,
-    yawRad: k * 0.5 * deg,
-    groundSpeedMps: speed,
-    rhoKgPerM3: 1.225,
-    muPaS: 1.7894e-5,
-  }));
-{
-  const options = DEFAULT_MODEL_OPTIONS;
-  const build = timeIt(3, () => {
-    const l = buildWheelLattice({
-      radiusM: DEMO_WHEEL.outerRadiusM,
-      spanCount: options.latticeSpanCount,
-      chordCount: options.latticeChordCount,
-      ground: options.ground,
-      openAnnuliM: [[0, 0.2]],
-    });
-    return l.influence[0]!;
+// --- Lattice build and one design's yaw curve (bench/yawCurve.ts, in its own process per tree) --------
+function yawCurveIn(root: string, label: string): void {
+  const child = spawnSync('npx', ['tsx', 'bench/yawCurve.ts', resolve(root)], {
+    encoding: 'utf8',
+    stdio: ['ignore', 'pipe', 'inherit'],
   });
-  print('lattice_build', {
-    panels: options.latticeSpanCount * options.latticeChordCount,
-    medianMs: +build.medianMs.toFixed(1),
-    checksum: build.checksum,
-  });
-  // Warm: lattice cached (same wheel size), a new cover each time, so the surface is solved afresh,
-  // as when a user changes the cover and the page recomputes.
-  let k = 0;
-  const input = (gci: boolean): WheelInput => ({
-    wheel: { ...DEMO_WHEEL, coverFraction: ((k++ % 20) + 0.5) / 21 },
-    options: { ...options, gridConvergence: gci },
-    steering: DEFAULT_STEERING,
-    points: yawCurve(13.41),
-  });
-  solveWheel(input(true));
-  const withGci = timeIt(9, () => solveWheel(input(true)).points[40]!.axialN);
-  const withoutGci = timeIt(9, () => solveWheel(input(false)).points[40]!.axialN);
-  print('yaw_curve_41', {
-    panels: options.latticeSpanCount * options.latticeChordCount,
-    warmMsWithConvergence: +withGci.medianMs.toFixed(1),
-    warmMsFinestOnly: +withoutGci.medianMs.toFixed(1),
-    checksum: withGci.checksum + withoutGci.checksum,
-  });
+  if (child.status !== 0) throw new Error(`yaw curve (${label}) failed`);
+  const { latticeBuild, yawCurve } = JSON.parse(child.stdout.trim().split('\n').pop()!) as Record<
+    string,
+    Record<string, unknown>
+  >;
+  print('lattice_build', { ...latticeBuild, tree: label });
+  print('yaw_curve_41', { ...yawCurve, tree: label });
 }
 
 // --- The standard sweep, each worker count in a fresh process so its peak memory is its own -------
@@ -180,6 +139,10 @@ function sweepIn(dir: string, workers: number, entry: string, label: string): vo
     baseline = { dir, entry: buildNodeWorker(dir) };
   }
   try {
+    for (let round = 0; round < (baseline ? 2 : 1); round++) {
+      yawCurveIn('.', 'current');
+      if (baseline) yawCurveIn(baseline.dir, `baseline ${baselineRef}`);
+    }
     for (const workers of [...new Set([1, cores])]) {
       sweepIn('.', workers, entry, 'current');
       if (baseline) sweepIn(baseline.dir, workers, baseline.entry, `baseline ${baselineRef}`);
