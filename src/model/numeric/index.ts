@@ -1,2 +1,3 @@
+export { illinoisRoot } from './illinoisRoot';
 export { luFactor } from './luFactor';
 export { luSolve } from './luSolve';

@@ -109,11 +109,30 @@ describe('spokeLoads', () => {
     expect(Math.abs(two.fxN)).toBeLessThan(1e-12);
     expect(Math.abs(two.axleTorqueNm)).toBeLessThan(1e-12);
     const oneSided = { ...full, coverSides: 1 as const };
-    const one = emptyLoads();
-    spokeLoads(oneSided, wheelRadii(oneSided), point, DEFAULT_MODEL_OPTIONS, one);
     const share = DEFAULT_MODEL_OPTIONS.oneSidedCoverSpokeShare;
-    expect(one.fxN).toBeCloseTo(share * open.fxN, 12);
-    expect(one.axleTorqueNm).toBeCloseTo(share * open.axleTorqueNm, 12);
+    // Head-on the spokes' merged wake holds the cage's swirl, so the share is exact; at yaw the cage's
+    // swirl (spokeElementSwirl) comes from the smaller torque of the shared spokes, so their loads are a
+    // little more than the share (the swirl is a few per cent of omega r: within 1 %).
+    for (const [yawRad, tolRel] of [
+      [0, 1e-12],
+      [0.1, 0.01],
+    ] as const) {
+      const at = { ...point, yawRad };
+      const openAt = emptyLoads();
+      spokeLoads(wheel, radii, at, DEFAULT_MODEL_OPTIONS, openAt);
+      const one = emptyLoads();
+      spokeLoads(oneSided, wheelRadii(oneSided), at, DEFAULT_MODEL_OPTIONS, one);
+      for (const [got, all] of [
+        [one.fxN, openAt.fxN],
+        [one.axleTorqueNm, openAt.axleTorqueNm],
+      ] as const) {
+        const exp = share * all;
+        expect(
+          Math.abs(got / exp - 1),
+          `yaw=${yawRad} rad got=${got} expected=${exp} tol(rel)=${tolRel}`,
+        ).toBeLessThanOrEqual(tolRel);
+      }
+    }
   });
 
   it('bladed spokes of equal frontal thickness drag less than round ones', () => {
