@@ -1,3 +1,19 @@
+function swirlInputError(torque: number, radius: number, omega: number, throughflow: number, rho: number) {
+  if (!(torque >= 0) || !Number.isFinite(torque)) {
+    return new RangeError(`torquePerRadiusNmPerM=${torque}: must be finite and >= 0`);
+  }
+  const positive: [string, number][] = [
+    ['radiusM', radius],
+    ['omegaRadPerS', omega],
+    ['throughflowMps', throughflow],
+  ];
+  for (const [name, value] of positive) {
+    if (!(value > 0) || !Number.isFinite(value))
+      return new RangeError(`${name}=${value}: must be finite and > 0`);
+  }
+  return new RangeError(`rhoKgPerM3=${rho}: must be finite and > 0`);
+}
+
 /**
  * Mean swirl fraction a' = v_theta / (omega r) that the torque of one annulus of a rotating cage (a
  * rotor's blades, a wheel's spokes) puts into the air passing through it, from the annulus
@@ -29,19 +45,16 @@ export function cageSwirlFraction(
   throughflowMps: number,
   rhoKgPerM3: number,
 ): number {
-  const checks: [string, number, boolean][] = [
-    ['torquePerRadiusNmPerM', torquePerRadiusNmPerM, torquePerRadiusNmPerM >= 0],
-    ['radiusM', radiusM, radiusM > 0],
-    ['omegaRadPerS', omegaRadPerS, omegaRadPerS > 0],
-    ['throughflowMps', throughflowMps, throughflowMps > 0],
-    ['rhoKgPerM3', rhoKgPerM3, rhoKgPerM3 > 0],
-  ];
-  for (const [name, value, ok] of checks) {
-    if (!ok || !Number.isFinite(value)) {
-      throw new RangeError(
-        `${name}=${value}: must be finite and ${name.startsWith('torque') ? '>= 0' : '> 0'}`,
-      );
-    }
+  // One combined test keeps the hot path small (it runs for every spoke element); the message is built
+  // only on failure.
+  if (
+    !(torquePerRadiusNmPerM >= 0 && torquePerRadiusNmPerM < Number.POSITIVE_INFINITY) ||
+    !(radiusM > 0 && radiusM < Number.POSITIVE_INFINITY) ||
+    !(omegaRadPerS > 0 && omegaRadPerS < Number.POSITIVE_INFINITY) ||
+    !(throughflowMps > 0 && throughflowMps < Number.POSITIVE_INFINITY) ||
+    !(rhoKgPerM3 > 0 && rhoKgPerM3 < Number.POSITIVE_INFINITY)
+  ) {
+    throw swirlInputError(torquePerRadiusNmPerM, radiusM, omegaRadPerS, throughflowMps, rhoKgPerM3);
   }
   return torquePerRadiusNmPerM / (4 * Math.PI * rhoKgPerM3 * throughflowMps * omegaRadPerS * radiusM ** 3);
 }

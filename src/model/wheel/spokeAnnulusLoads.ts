@@ -38,7 +38,10 @@ export interface SpokeRow {
  *
  * Adds into out: [0] x force, [1] z force, [2] torque about the hub resisting rotation; keeps in [3] and
  * [4] the smallest and largest section Reynolds number met (a spoke wholly stalled in the wake ahead
- * carries no load and does not count toward the smallest).
+ * carries no load and does not count toward the smallest); adds into [5] the torque's slope with the spin,
+ * d[2]/d(spin) at fixed drag coefficient and shielding (the section law's Reynolds-number slope, about
+ * -0.04 in ln Cd / ln Re at these Reynolds numbers, left out): the derivative of |u| u_t is
+ * |u| + u_t^2 / |u|.
  *
  * @param radiusM r (> 0)
  * @param spinMps the spokes' own speed across the air from rotation: omega r less any swirl of the air
@@ -62,9 +65,11 @@ export function spokeAnnulusLoads(
     const re = row[2]!;
     if (row[1]! > 0 && re < out[3]!) out[3] = re;
     if (re > out[4]!) out[4] = re;
-    const ft = half * row[0]! * row[1]! * refLengthM * speed * ut * weightM;
+    const perSpeed = half * row[0]! * row[1]! * refLengthM * weightM;
+    const ft = perSpeed * speed * ut;
     out[0] -= sinTheta[k]! * ft;
     out[1] += cosTheta[k]! * ft;
     out[2] += radiusM * ft;
+    out[5] += radiusM * perSpeed * (speed + (ut * ut) / speed);
   }
 }

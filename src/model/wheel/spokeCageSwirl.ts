@@ -1,4 +1,4 @@
-import { SPOKE_ANGLE_STEPS, spokeAnnulusLoads } from './spokeAnnulusLoads';
+import { SPOKE_ANGLE_STEPS } from './spokeAnnulusLoads';
 import { spokeElementSwirl } from './spokeElementSwirl';
 import { spokeElements } from './spokeElements';
 import { spokeRowOf } from './spokeRowOf';
@@ -17,8 +17,7 @@ export interface SpokeCageSwirl {
   planeSwirl: Float64Array;
 }
 
-const sums = new Float64Array(5);
-const swirl = new Float64Array(3);
+const swirl = new Float64Array(9);
 
 /**
  * The spoke cage's swirl at every spoke element, as the spokes' loads (spokeLoads) solve it: for reports
@@ -44,11 +43,7 @@ export function spokeCageSwirl(
   const perSpoke = (wheel.spokeCount / SPOKE_ANGLE_STEPS) * options.profileDragFactor;
   for (let e = 0; e < n; e++) {
     const r = elements.radiusM[e]!;
-    const torqueScale = perSpoke * elements.share[e]!;
-    sums.fill(0);
-    sums[3] = Number.POSITIVE_INFINITY;
-    spokeAnnulusLoads(spokes, r, omega * r, 1, sums);
-    spokeElementSwirl(spokes, r, omega, point.airspeedMps, torqueScale, sums[2]! * torqueScale, swirl);
+    spokeElementSwirl(spokes, r, omega, point.airspeedMps, perSpoke * elements.share[e]!, swirl);
     result.extraSwirl[e] = swirl[0]!;
     result.meanSwirl[e] = swirl[1]!;
     result.planeSwirl[e] = swirl[2]!;

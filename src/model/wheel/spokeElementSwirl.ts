@@ -3,14 +3,25 @@ import { rowWakeTransportSpeed, spokeRowDrag } from '../sections';
 import { cageSwirlFraction } from './cageSwirlFraction';
 import { type SpokeRow, spokeAnnulusLoads } from './spokeAnnulusLoads';
 
-/** Tolerance on the swirl fraction of the root search (far below the section laws' 5-17 % bias). */
-const TOLERANCE = 1e-9;
+/** Tolerance on the residual of the swirl balance, a fraction of omega r: it moves the spokes' loads by
+ * about 2e-4 relative, below the 1e-3 to which the Reynolds-number fixed point (spokeRowDrag) and the
+ * quadrature hold them, and far below the section laws' 5-17 % bias. */
+const TOLERANCE = 1e-4;
+/** Secant steps before falling back to false position. */
+const SECANT_STEPS = 3;
 const row = new Float64Array(3);
-const sums = new Float64Array(5);
+/** spokeAnnulusLoads' sums at the last spin evaluated. */
+const sums = new Float64Array(6);
+
+function loadsAt(spokes: SpokeRow, radiusM: number, spinMps: number): void {
+  sums.fill(0);
+  sums[3] = Number.POSITIVE_INFINITY;
+  spokeAnnulusLoads(spokes, radiusM, spinMps, 1, sums);
+}
 
 /**
- * The swirl of the air the spokes at one radius meet, from the angular-momentum balance of the whole
- * spoke cage, solved consistently with the spokes' drag law.
+ * The loads of the spokes at one radius and the swirl of the air they meet, from the angular-momentum
+ * balance of the whole spoke cage, solved consistently with the spokes' drag law.
  *
  * Two estimates of the same swirl, as a fraction of omega r:
  * - at the spoke plane, the centre of the merged wake of the spokes ahead: delta = 1 - sqrt(drag ratio)
@@ -24,22 +35,23 @@ const sums = new Float64Array(5);
  * The swirl the spokes meet at their plane, where they put it in, is at least the mean over the flushed
  * air. While delta >= a' the merged wake already holds it and nothing is added. Where a' > delta (the
  * wakes carried off by a through-flow at yaw, or a weak through-flow), the spokes meet an extra swirl
- * fraction x, spin omega r (1 - x) before their own row shielding, with x the root of
- *   1 - (1 - x)(1 - delta) = a'(dQ/dr at x)
- * (the spin the spokes meet equals the mean the balance allows); found by false position (illinoisRoot)
- * on [0, 1], where at x = 1 the spokes feel no spin and the in-plane freestream's pushes cancel over a
- * revolution.
+ * fraction x, spin omega r (1 - x) before their own row shielding, with x the root in [0, a'(0)] of
+ *   g(x) = 1 - (1 - x)(1 - delta) - a'(dQ/dr at x)
+ * (the spin the spokes meet equals the mean the balance allows; at x = a'(0) the spokes meet at least
+ * a'(0) while the mean cannot exceed it, so g >= 0 there): one Newton step from x = 0 with the torque's
+ * slope, then secant steps, and false position (illinoisRoot) on [0, a'(0)] should they leave it.
  *
- * Writes into out: [0] the extra swirl fraction x (0 when the merged wake holds the swirl), [1] the mean
- * swirl a' of the balance at that x, [2] delta.
+ * Writes into out (9 entries): [0] the extra swirl fraction x (0 when the merged wake holds the swirl),
+ * [1] the mean swirl a' of the balance at x (at a root, the swirl the spokes meet), [2] delta, and in
+ * [3..8] spokeAnnulusLoads' sums at the spin omega r (1 - x) and unit length (x force, z force, torque,
+ * smallest and largest Reynolds number, torque slope), before the factor N / SPOKE_ANGLE_STEPS.
  *
  * @param spokes the spoke section and the air (spokeAnnulusLoads)
  * @param radiusM r (> 0)
  * @param omegaRadPerS omega (>= 0; 0 gives no swirl)
  * @param airspeedMps V (>= 0)
- * @param torqueScale factor from spokeAnnulusLoads' sum at unit weight to the annulus torque per unit
- *   radius dQ/dr: N / SPOKE_ANGLE_STEPS x the profile drag factor x the cover share
- * @param torquePerRadiusNmPerM dQ/dr at no extra swirl (x = 0)
+ * @param torqueScale factor from spokeAnnulusLoads' sum at unit length to the annulus torque per unit
+ *   radius dQ/dr: N / SPOKE_ANGLE_STEPS x the profile drag factor x the cover share (0: no swirl)
  * @throws RangeError for bad input (from the parts).
  */
 export function spokeElementSwirl(
@@ -48,14 +60,15 @@ export function spokeElementSwirl(
   omegaRadPerS: number,
   airspeedMps: number,
   torqueScale: number,
-  torquePerRadiusNmPerM: number,
   out: Float64Array,
 ): void {
-  out[0] = 0;
-  out[1] = 0;
-  out[2] = 0;
   const spin = omegaRadPerS * radiusM;
-  if (!(spin > 0) || !(torqueScale > 0)) return;
+  loadsAt(spokes, radiusM, spin);
+  out.fill(0, 0, 3);
+  out.set(sums, 3);
+  // A spin below 1e-9 of the airspeed puts no swirl worth solving into the air (and its row geometry
+  // underflows).
+  if (!(spin > 1e-9 * airspeedMps) || !(spin > 0) || !(torqueScale > 0)) return;
   const spacing = spokes.spacingPerRadius * radiusM;
   spokeRowDrag(
     spokes.round,
@@ -69,22 +82,46 @@ export function spokeElementSwirl(
   );
   const delta = 1 - Math.sqrt(row[1]!);
   const throughflow = airspeedMps + rowWakeTransportSpeed(row[0]! * spokes.refLengthM, spacing, spin);
-  const rho = spokes.rhoKgPerM3;
-  const mean = (torque: number) =>
-    cageSwirlFraction(Math.max(0, torque), radiusM, omegaRadPerS, throughflow, rho);
+  // a' per unit torque per radius (N m / m) of the balance.
+  const perTorque = cageSwirlFraction(1, radiusM, omegaRadPerS, throughflow, spokes.rhoKgPerM3);
+  const mean0 = Math.max(0, sums[2]! * torqueScale) * perTorque;
+  out[1] = mean0;
   out[2] = delta;
-  const mean0 = mean(torquePerRadiusNmPerM);
-  if (mean0 <= delta) {
-    out[1] = mean0;
-    return;
-  }
-  const torqueAt = (x: number) => {
-    sums.fill(0);
-    sums[3] = Number.POSITIVE_INFINITY;
-    spokeAnnulusLoads(spokes, radiusM, spin * (1 - x), 1, sums);
-    return sums[2]! * torqueScale;
+  if (mean0 <= delta) return;
+  const residual = (x: number) => {
+    loadsAt(spokes, radiusM, spin * (1 - x));
+    return 1 - (1 - x) * (1 - delta) - Math.max(0, sums[2]! * torqueScale) * perTorque;
   };
-  const x = illinoisRoot((s) => 1 - (1 - s) * (1 - delta) - mean(torqueAt(s)), 0, 1, TOLERANCE);
+  // Newton from x = 0: g(0) = delta - mean0, g'(0) = (1 - delta) + spin dQ/d(spin) a' per torque; then
+  // secant steps (g is nearly linear over [0, mean0]); false position on the bracket if they stray.
+  const slope = 1 - delta + spin * Math.max(0, sums[5]! * torqueScale) * perTorque;
+  let xPrev = 0;
+  let gPrev = delta - mean0;
+  let x = Math.min(mean0, (mean0 - delta) / slope);
+  let g = residual(x);
+  for (let step = 0; step < SECANT_STEPS && Math.abs(g) >= TOLERANCE; step++) {
+    const next = x - (g * (x - xPrev)) / (g - gPrev);
+    if (!(next > 0 && next < mean0)) break;
+    xPrev = x;
+    gPrev = g;
+    x = next;
+    g = residual(x);
+  }
+  if (Math.abs(g) >= TOLERANCE) {
+    const gHi = residual(mean0);
+    x =
+      gHi > 0
+        ? illinoisRoot(
+            (s) => (s === 0 ? delta - mean0 : s === mean0 ? gHi : residual(s)),
+            0,
+            mean0,
+            TOLERANCE,
+          )
+        : mean0;
+    // The search ends on an evaluated point, but not always the last one: make the sums x's.
+    residual(x);
+  }
   out[0] = x;
-  out[1] = mean(torqueAt(x));
+  out[1] = 1 - (1 - x) * (1 - delta);
+  out.set(sums, 3);
 }

@@ -1,22 +1,15 @@
 import { clearLoads } from './componentLoads';
-import { SPOKE_ANGLE_STEPS, type SpokeRow, spokeAnnulusLoads } from './spokeAnnulusLoads';
+import { SPOKE_ANGLE_STEPS } from './spokeAnnulusLoads';
 import { spokeElementSwirl } from './spokeElementSwirl';
 import { spokeElements } from './spokeElements';
 import { spokeRowOf } from './spokeRowOf';
 import type { ComponentLoads, FlowConditions, ModelOptions, WheelGeometry } from './types';
 import type { WheelRadii } from './wheelRadii';
 
-/** Sums of one call and of one element: x force, z force, torque, smallest and largest Reynolds number. */
+/** Sums of one call: x force, z force, torque, smallest and largest Reynolds number. */
 const sums = new Float64Array(5);
-const element = new Float64Array(5);
-/** spokeElementSwirl's answer: extra swirl fraction, mean swirl, plane swirl. */
-const swirl = new Float64Array(3);
-
-function elementLoads(spokes: SpokeRow, radiusM: number, spinMps: number, weightM: number): void {
-  element.fill(0);
-  element[3] = Number.POSITIVE_INFINITY;
-  spokeAnnulusLoads(spokes, radiusM, spinMps, weightM, element);
-}
+/** spokeElementSwirl's answer: extra swirl, mean swirl, plane swirl, the element's loads at unit length. */
+const element = new Float64Array(9);
 
 export interface SpokeLoadsReport {
   /** Smallest and largest section Reynolds number met (for validity flags). */
@@ -70,27 +63,22 @@ export function spokeLoads(
   sums.fill(0);
   sums[3] = Number.POSITIVE_INFINITY;
   for (let e = 0; e < elements.radiusM.length; e++) {
-    const r = elements.radiusM[e]!;
     const weight = elements.weightM[e]!;
-    elementLoads(spokes, r, omega * r, weight);
-    // The swirl of the whole cage (spokeElementSwirl): where it exceeds the merged wake's, the spokes
-    // meet the rotation slowed by the extra swirl fraction.
-    const share = elements.share[e]!;
+    // The element's loads with the swirl of the whole cage (spokeElementSwirl): where it exceeds the
+    // merged wake's, the spokes meet the rotation slowed by the extra swirl fraction.
     spokeElementSwirl(
       spokes,
-      r,
+      elements.radiusM[e]!,
       omega,
       point.airspeedMps,
-      perSpoke * share,
-      (element[2]! * perSpoke * share) / weight,
-      swirl,
+      perSpoke * elements.share[e]!,
+      element,
     );
-    if (swirl[0]! > 0) elementLoads(spokes, r, omega * r * (1 - swirl[0]!), weight);
-    sums[0] += element[0]!;
-    sums[1] += element[1]!;
-    sums[2] += element[2]!;
-    if (element[3]! < sums[3]!) sums[3] = element[3]!;
-    if (element[4]! > sums[4]!) sums[4] = element[4]!;
+    sums[0] += element[3]! * weight;
+    sums[1] += element[4]! * weight;
+    sums[2] += element[5]! * weight;
+    if (element[6]! < sums[3]!) sums[3] = element[6]!;
+    if (element[7]! > sums[4]!) sums[4] = element[7]!;
   }
   const fx = sums[0]!;
   const fz = sums[1]!;

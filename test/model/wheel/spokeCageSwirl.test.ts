@@ -51,7 +51,7 @@ describe('spokeCageSwirl', () => {
     // meet the mean swirl of Glauert's annulus balance, dQ/dr = 4 pi rho U omega r^3 a', with U the airspeed
     // plus the spreading of their wakes. Independent path: the loads of a thin spoke annulus around each
     // radius (spokeLoads, the whole solve) must give the torque per radius that carries that swirl off.
-    // The thin annulus (+-0.5 mm) and Gauss-Legendre: 1e-3 relative.
+    // The balance is solved to 1e-4 in the swirl fraction; the thin annulus (+-0.5 mm): 2e-4 absolute.
     const flow = point(V, 15);
     const s = spokeCageSwirl(wheel, wheelRadii(wheel), flow, DEFAULT_MODEL_OPTIONS);
     const omega = V / wheel.outerRadiusM;
@@ -83,9 +83,7 @@ describe('spokeCageSwirl', () => {
       );
       const u = V + rowWakeTransportSpeed(row[0]! * 0.002, spacing, omega * r);
       const exp = torquePerRadius / (4 * Math.PI * rho * u * omega * r ** 3);
-      expect(Math.abs(a / exp - 1), `r=${r} got=${a} expected=${exp} tol(rel)=1e-3`).toBeLessThanOrEqual(
-        1e-3,
-      );
+      expect(Math.abs(a - exp), `r=${r} got=${a} expected=${exp} tol=2e-4`).toBeLessThanOrEqual(2e-4);
     }
   });
 
