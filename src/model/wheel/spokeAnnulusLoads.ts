@@ -38,10 +38,12 @@ export interface SpokeRow {
  *
  * Adds into out: [0] x force, [1] z force, [2] torque about the hub resisting rotation; keeps in [3] and
  * [4] the smallest and largest section Reynolds number met (a spoke wholly stalled in the wake ahead
- * carries no load and does not count toward the smallest); adds into [5] the torque's slope with the spin,
- * d[2]/d(spin) at fixed drag coefficient and shielding (the section law's Reynolds-number slope, about
- * -0.04 in ln Cd / ln Re at these Reynolds numbers, left out): the derivative of |u| u_t is
- * |u| + u_t^2 / |u|.
+ * carries no load and does not count toward the smallest); adds into [5], [6], [7] the slopes of [0],
+ * [1], [2] with the spin, d/d(spin) at fixed drag coefficient and shielding (the section law's
+ * Reynolds-number slope, about -0.04 in ln Cd / ln Re at these Reynolds numbers, left out): the
+ * derivative of |u| u_t is |u| + u_t^2 / |u|. out needs 8 entries. When `coefficients` (at least
+ * SPOKE_ANGLE_STEPS entries) is given, it receives each position's 0.5 rho Cd L x shielding x weight, for
+ * spokeAnnulusLoadsFrozen.
  *
  * @param radiusM r (> 0)
  * @param spinMps the spokes' own speed across the air from rotation: omega r less any swirl of the air
@@ -53,6 +55,7 @@ export function spokeAnnulusLoads(
   spinMps: number,
   weightM: number,
   out: Float64Array,
+  coefficients?: Float64Array,
 ): void {
   const { round, thicknessRatio, refLengthM, vInPlaneMps, vNormalMps, nuM2PerS } = spokes;
   const spacing = spokes.spacingPerRadius * radiusM;
@@ -60,16 +63,46 @@ export function spokeAnnulusLoads(
   for (let k = 0; k < SPOKE_ANGLE_STEPS; k++) {
     const ut = vInPlaneMps * sinTheta[k]! + spinMps;
     const speed = Math.sqrt(ut * ut + vNormalMps * vNormalMps);
+    if (coefficients) coefficients[k] = 0;
     if (speed === 0) continue;
     spokeRowDrag(round, thicknessRatio, refLengthM, spacing, ut, vNormalMps, nuM2PerS, row);
     const re = row[2]!;
     if (row[1]! > 0 && re < out[3]!) out[3] = re;
     if (re > out[4]!) out[4] = re;
     const perSpeed = half * row[0]! * row[1]! * refLengthM * weightM;
+    if (coefficients) coefficients[k] = perSpeed;
     const ft = perSpeed * speed * ut;
     out[0] -= sinTheta[k]! * ft;
     out[1] += cosTheta[k]! * ft;
     out[2] += radiusM * ft;
-    out[5] += radiusM * perSpeed * (speed + (ut * ut) / speed);
+    const slope = perSpeed * (speed + (ut * ut) / speed);
+    out[5] -= sinTheta[k]! * slope;
+    out[6] += cosTheta[k]! * slope;
+    out[7] += radiusM * slope;
+  }
+}
+
+/**
+ * The in-plane loads of spokeAnnulusLoads at another spin, with each revolution position's drag
+ * coefficient and wake shielding kept as spokeAnnulusLoads found them (`coefficients`): only the
+ * relative velocity changes, u_t = V cos(beta) sin(theta) + spin, force per length coefficient x |u| u_t.
+ * For small changes of the spin (a few per cent), where Cd moves with the Reynolds number by
+ * d ln Cd / d ln Re ~ -0.04. Adds into out [0] x force, [1] z force, [2] torque (as spokeAnnulusLoads).
+ */
+export function spokeAnnulusLoadsFrozen(
+  spokes: SpokeRow,
+  radiusM: number,
+  spinMps: number,
+  coefficients: Float64Array,
+  out: Float64Array,
+): void {
+  const { vInPlaneMps, vNormalMps } = spokes;
+  const vn2 = vNormalMps * vNormalMps;
+  for (let k = 0; k < SPOKE_ANGLE_STEPS; k++) {
+    const ut = vInPlaneMps * sinTheta[k]! + spinMps;
+    const ft = coefficients[k]! * Math.sqrt(ut * ut + vn2) * ut;
+    out[0] -= sinTheta[k]! * ft;
+    out[1] += cosTheta[k]! * ft;
+    out[2] += radiusM * ft;
   }
 }

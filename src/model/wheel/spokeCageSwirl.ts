@@ -17,7 +17,7 @@ export interface SpokeCageSwirl {
   planeSwirl: Float64Array;
 }
 
-const swirl = new Float64Array(9);
+const swirl = new Float64Array(8);
 
 /**
  * The spoke cage's swirl at every spoke element, as the spokes' loads (spokeLoads) solve it: for reports

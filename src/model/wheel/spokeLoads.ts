@@ -9,7 +9,7 @@ import type { WheelRadii } from './wheelRadii';
 /** Sums of one call: x force, z force, torque, smallest and largest Reynolds number. */
 const sums = new Float64Array(5);
 /** spokeElementSwirl's answer: extra swirl, mean swirl, plane swirl, the element's loads at unit length. */
-const element = new Float64Array(9);
+const element = new Float64Array(8);
 
 export interface SpokeLoadsReport {
   /** Smallest and largest section Reynolds number met (for validity flags). */
