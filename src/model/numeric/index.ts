@@ -1,3 +1,2 @@
-export { illinoisRoot } from './illinoisRoot';
 export { luFactor } from './luFactor';
 export { luSolve } from './luSolve';
