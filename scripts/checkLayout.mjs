@@ -170,14 +170,15 @@ export function checkLayout(root, { pendingSplit = PENDING_SPLIT, maxLines = MAX
     problems.push(`cycle: ${path.map(rel).join(' -> ')}`);
   }
   // Folders too: two folders importing each other (through different files) are one concept split
-  // in two, or two concepts tangled; either way one of them should move.
+  // in two, or two concepts tangled; either way one of them should move. A folder and its own
+  // subfolder are exempt (a barrel re-exporting its subfolder, which uses the folder's shared helpers).
   const folderGraph = new Map();
   const folderEdge = new Map();
   for (const [file, targets] of graph) {
     const from = rel(dirname(file));
     for (const target of targets) {
       const to = rel(dirname(target));
-      if (to === from) continue;
+      if (to === from || to.startsWith(`${from}/`) || from.startsWith(`${to}/`)) continue;
       if (!folderGraph.has(from)) folderGraph.set(from, []);
       if (!folderGraph.get(from).includes(to)) folderGraph.get(from).push(to);
       if (!folderEdge.has(`${from} ${to}`)) folderEdge.set(`${from} ${to}`, `${rel(file)} -> ${rel(target)}`);
