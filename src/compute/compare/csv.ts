@@ -10,16 +10,6 @@
  * file. Browser-safe: no Node imports.
  */
 export { CsvReader, parseCsvText } from './csvReader';
-export {
-  type CsvResult,
-  type CsvTable,
-  checkDataSize,
-  type Delimiter,
-  MAX_CSV_ERRORS,
-  MAX_DATA_BYTES,
-  MAX_DATA_COLUMNS,
-  MAX_DATA_ROWS,
-  MAX_PREAMBLE_CHARS,
-} from './csvTable';
+export * from './csvTable';
 export { parseNumberCell } from './parseNumberCell';
 export { encodingFromBom, readCsvStream } from './readCsvStream';

@@ -44,17 +44,7 @@ import { curveFlags, gustFor, steeringSummary } from './rideHandling';
 import { buildLegs, combinedHubStates, meanWindSpeed } from './rideLegs';
 import { segmentResult } from './segmentResult';
 
-export {
-  type Pair,
-  type PowerBreakdown,
-  RIDE_NOTES,
-  RIDE_QUADRATURE,
-  RIDE_RESULT_FORMAT,
-  RIDE_RESULT_VERSION,
-  type RideDocument,
-  type RideSegmentResult,
-  type SteeringSummary,
-} from './rideDocument';
+export * from './rideDocument';
 
 const scratchWind = { airspeedMps: 0, yawRad: 0 };
 

@@ -8,19 +8,6 @@
  * The parts: rideFileTypes (format, defaults, limits, types), rideSchema, validateRide, rideCases;
  * this module is their one import path.
  */
-export { rideCases } from './rideCases';
-export {
-  RIDE_DEFAULTS,
-  RIDE_FORMAT,
-  RIDE_LIMITS,
-  RIDE_VERSION,
-  type RideCases,
-  type RideFile,
-  type RideHandling,
-  type RideRide,
-  type RideRider,
-  type RideSegment,
-  type RideWind,
-  type WindSpeedSpec,
-} from './rideFileTypes';
-export { parseRideFile, validateRide } from './validateRide';
+export * from './rideCases';
+export * from './rideFileTypes';
+export * from './validateRide';
