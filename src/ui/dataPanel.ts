@@ -16,8 +16,14 @@ import type {
   UncertainRange,
 } from '../compute/compare/index';
 import { validateMap } from '../compute/compare/index';
-import { buildDataPanelDom, type DataPanelDom, type DataPlotName } from './data/buildDataPanelDom';
-import type { DataContext, DataPanelState, DataRunRequest } from './data/dataPanelTypes';
+import { buildDataPanelDom } from './data/buildDataPanelDom';
+import type {
+  DataContext,
+  DataPanelDom,
+  DataPanelState,
+  DataPlotName,
+  DataRunRequest,
+} from './data/dataPanelTypes';
 import { fillMappingForm, type MapRow, mapFromForm } from './data/mappingForm';
 import { overlayOutput, renderDataPlot } from './data/renderDataPlot';
 import { renderConvergence, renderFit, renderResiduals, renderUncertainty } from './data/renderDataTables';
@@ -32,8 +38,7 @@ import {
 import { el } from './dom';
 import type { PlotSpec } from './linePlot';
 
-export type { DataPlotName } from './data/buildDataPanelDom';
-export type { DataContext, DataPanelState, DataRunRequest } from './data/dataPanelTypes';
+export type { DataContext, DataPanelState, DataPlotName, DataRunRequest } from './data/dataPanelTypes';
 export { MAX_PLOTTED_POINTS } from './data/renderDataPlot';
 
 export class DataPanel {

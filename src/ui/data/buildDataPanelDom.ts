@@ -1,66 +1,13 @@
 /** The "Your data" panel's elements: bring the data, what each column holds, and the results. */
-import {
-  MAX_DATA_BYTES,
-  UNCERTAIN_INPUTS,
-  type UncertainInput,
-  type UncertainRange,
-} from '../../compute/compare/index';
-import { DataTable } from '../dataTable';
-import { button, el, plotFigure } from '../dom';
-import { LinePlot } from '../linePlot';
-
-export type DataPlotName = 'dataForce' | 'dataSide';
-
-/** What the panel's controls ask for (the panel's own methods). */
-export interface DataPanelActions {
-  readFile(file: File): void;
-  readText(text: string, label: string): void;
-  loadDemo(): void;
-  apply(): void;
-  cancel(): void;
-  run(extra: { calibrate?: boolean; convergence?: boolean; uncertainty?: UncertainRange[] }): void;
-  runUncertainty(): void;
-  useCalibratedChanged(checked: boolean): void;
-}
-
-export interface DataPanelDom {
-  status: HTMLElement;
-  readErrors: HTMLElement;
-  mapping: HTMLElement;
-  mapBody: HTMLTableSectionElement;
-  mapErrors: HTMLElement;
-  guessNotes: HTMLElement;
-  preview: HTMLElement;
-  sideSign: HTMLSelectElement;
-  speedInput: HTMLInputElement;
-  speedUnitEl: HTMLElement;
-  densityInput: HTMLInputElement;
-  results: HTMLElement;
-  summary: HTMLElement;
-  flags: HTMLElement;
-  plots: Record<DataPlotName, LinePlot>;
-  plotTitles: Record<DataPlotName, HTMLElement>;
-  residuals: DataTable;
-  residualSummary: DataTable;
-  fitBlock: HTMLElement;
-  fitTable: DataTable;
-  fitText: HTMLElement;
-  useCalibrated: HTMLInputElement;
-  convergenceBlock: HTMLElement;
-  convergenceTable: DataTable;
-  uncertaintyBlock: HTMLElement;
-  uncertaintyTable: DataTable;
-  rangeInputs: Map<UncertainInput, { min: HTMLInputElement; max: HTMLInputElement }>;
-  cancelButton: HTMLButtonElement;
-  actionButtons: HTMLButtonElement[];
-}
+import { MAX_DATA_BYTES } from '../../compute/compare/index';
+import { button, el } from '../dom';
+import { buildDataResultsDom } from './buildDataResultsDom';
+import type { DataPanelActions, DataPanelDom } from './dataPanelTypes';
 
 /** Build the panel into `host` (emptied first) and return its elements. */
 export function buildDataPanelDom(host: HTMLElement, actions: DataPanelActions): DataPanelDom {
   host.replaceChildren();
   host.dataset.state = 'empty';
-  const rangeInputs = new Map<UncertainInput, { min: HTMLInputElement; max: HTMLInputElement }>();
-  const actionButtons: HTMLButtonElement[] = [];
   // 1. Bring the data.
   const fileInput = el('input', {
     className: 'visually-hidden',
@@ -200,103 +147,27 @@ export function buildDataPanelDom(host: HTMLElement, actions: DataPanelActions):
   ]);
   mapping.hidden = true;
 
-  // 3. Results.
-  const status = el('p', {
-    className: 'road-status',
-    attrs: { id: 'data-status', role: 'status', 'aria-live': 'polite' },
-  });
-  const cancelButton = button('Cancel', () => actions.cancel(), { id: 'data-cancel' });
-  cancelButton.hidden = true;
-  const summary = el('p', { className: 'small', attrs: { id: 'data-summary' } });
-  const flags = el('div', { className: 'data-flags', attrs: { id: 'data-flags' } });
-  const f1 = plotFigure('fig-data-force', 'Axial drag vs yaw: data over the model');
-  const f2 = plotFigure('fig-data-side', 'Side force vs yaw: data over the model');
-  const plots = { dataForce: new LinePlot(f1.plot, 240), dataSide: new LinePlot(f2.plot, 240) };
-  const plotTitles = { dataForce: f1.title, dataSide: f2.title };
-  const resScroll = el('div', { className: 'table-scroll' });
-  const residuals = new DataTable(
-    resScroll,
-    'table-data-residuals',
-    'Residuals: data − model at every data point',
-  );
-  const sumScroll = el('div', { className: 'table-scroll' });
-  const residualSummary = new DataTable(sumScroll, 'table-data-summary', 'Residual summary per quantity');
-  // Fit.
-  const fitScroll = el('div', { className: 'table-scroll' });
-  const fitTable = new DataTable(fitScroll, 'table-data-fit', 'Fitted model parameters');
-  const fitText = el('p', { className: 'small', attrs: { id: 'data-fit-text' } });
-  const useCalibrated = el('input', { attrs: { type: 'checkbox', id: 'data-use-calibrated' } });
-  useCalibrated.disabled = true;
-  useCalibrated.addEventListener('change', () => actions.useCalibratedChanged(useCalibrated.checked));
-  const fitBlock = el('div', { className: 'table-block', attrs: { id: 'data-fit' } }, [
-    fitScroll,
-    fitText,
-    el('label', { className: 'toggle', attrs: { for: 'data-use-calibrated' } }, [
-      useCalibrated,
-      ' Use the calibrated model (puts the fitted values into the design’s model options; the page header says CALIBRATED while it is on)',
-    ]),
-  ]);
-  fitBlock.hidden = true;
-  const convScroll = el('div', { className: 'table-scroll' });
-  const convergenceTable = new DataTable(convScroll, 'table-data-convergence', 'Lattice convergence study');
-  const convergenceBlock = el('div', { className: 'table-block' }, [convScroll]);
-  convergenceBlock.hidden = true;
-  const uncScroll = el('div', { className: 'table-scroll' });
-  const uncertaintyTable = new DataTable(uncScroll, 'table-data-uncertainty', 'Input-uncertainty band');
-  const uncertaintyBlock = el('div', { className: 'table-block' }, [uncScroll]);
-  uncertaintyBlock.hidden = true;
-  const ranges = el('div', { className: 'ranges' });
-  for (const name of UNCERTAIN_INPUTS) {
-    const min = el('input', {
-      attrs: {
-        type: 'number',
-        step: 'any',
-        'aria-label': `${name}: lowest value`,
-        'data-range': `${name}-min`,
-      },
-    });
-    const max = el('input', {
-      attrs: {
-        type: 'number',
-        step: 'any',
-        'aria-label': `${name}: highest value`,
-        'data-range': `${name}-max`,
-      },
-    });
-    rangeInputs.set(name, { min, max });
-    ranges.append(
-      el('div', { className: 'range' }, [el('span', { text: name }), min, el('span', { text: 'to' }), max]),
-    );
-  }
-  const fit = button('Fit model parameters', () => actions.run({ calibrate: true }), { id: 'data-fit-run' });
-  const conv = button('Convergence study', () => actions.run({ convergence: true }), {
-    id: 'data-convergence-run',
-  });
-  const unc = button('Input-uncertainty band', () => actions.runUncertainty(), {
-    id: 'data-uncertainty-run',
-  });
-  actionButtons.push(fit, conv, unc);
-  const results = el('section', { className: 'data-results', attrs: { id: 'data-results' } }, [
+  const {
+    status,
+    cancelButton,
     summary,
     flags,
-    el('div', { className: 'plot-grid' }, [f1.figure, f2.figure]),
-    el('div', { className: 'table-block' }, [sumScroll]),
-    el('div', { className: 'table-block' }, [resScroll]),
-    el('h3', { text: 'Calibrate and check the model' }),
-    el('p', {
-      className: 'small',
-      text: 'Each of these runs in the background; the page stays usable. A fit takes a few seconds.',
-    }),
-    el('div', { className: 'button-row' }, [fit, conv, unc]),
-    el('details', {}, [
-      el('summary', { text: 'Ranges of the input-uncertainty band (blank: not varied)' }),
-      ranges,
-    ]),
+    plots,
+    plotTitles,
+    residuals,
+    residualSummary,
     fitBlock,
+    fitTable,
+    fitText,
+    useCalibrated,
     convergenceBlock,
+    convergenceTable,
     uncertaintyBlock,
-  ]);
-  results.hidden = true;
+    uncertaintyTable,
+    rangeInputs,
+    actionButtons,
+    results,
+  } = buildDataResultsDom(actions);
 
   host.append(
     el('h2', { text: 'Your data: CFD or wind-tunnel results against the model' }),

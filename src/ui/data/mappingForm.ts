@@ -16,9 +16,8 @@ import type { TableSummary } from '../dataJobs';
 import { speedFromMps, speedToMps, speedUnitText } from '../displayUnits';
 import { el } from '../dom';
 import type { SpeedUnit } from '../viewState';
-import type { DataPanelDom } from './buildDataPanelDom';
 import { QUANTITY_TEXT, UNIT_TEXT } from './dataLabels';
-import type { DataContext } from './dataPanelTypes';
+import type { DataContext, DataPanelDom } from './dataPanelTypes';
 
 export interface MapRow {
   header: string;

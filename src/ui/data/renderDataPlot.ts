@@ -4,8 +4,8 @@ import type { PackedComparison } from '../dataJobs';
 import { fixed, fmt, speedFromMps, speedUnitText } from '../displayUnits';
 import type { LinePlot, PlotBand, PlotSeries } from '../linePlot';
 import type { SpeedUnit } from '../viewState';
-import type { DataPlotName } from './buildDataPanelDom';
 import { SPEED_COLOURS } from './dataLabels';
+import type { DataPlotName } from './dataPanelTypes';
 
 /** At most this many data points are drawn per plot (an even subsample of larger tables). */
 export const MAX_PLOTTED_POINTS = 2000;

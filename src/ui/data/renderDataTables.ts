@@ -9,7 +9,7 @@ import { type PackedComparison, residualRowAt } from '../dataJobs';
 import type { Cell } from '../dataTable';
 import { fixed, speedFromMps, speedUnitText } from '../displayUnits';
 import type { SpeedUnit } from '../viewState';
-import type { DataPanelDom } from './buildDataPanelDom';
+import type { DataPanelDom } from './dataPanelTypes';
 
 export function renderResiduals(
   dom: DataPanelDom,
