@@ -147,27 +147,7 @@ export function buildDataPanelDom(host: HTMLElement, actions: DataPanelActions):
   ]);
   mapping.hidden = true;
 
-  const {
-    status,
-    cancelButton,
-    summary,
-    flags,
-    plots,
-    plotTitles,
-    residuals,
-    residualSummary,
-    fitBlock,
-    fitTable,
-    fitText,
-    useCalibrated,
-    convergenceBlock,
-    convergenceTable,
-    uncertaintyBlock,
-    uncertaintyTable,
-    rangeInputs,
-    actionButtons,
-    results,
-  } = buildDataResultsDom(actions);
+  const resultsDom = buildDataResultsDom(actions);
 
   host.append(
     el('h2', { text: 'Your data: CFD or wind-tunnel results against the model' }),
@@ -184,12 +164,12 @@ export function buildDataPanelDom(host: HTMLElement, actions: DataPanelActions):
       ]),
     ]),
     readErrors,
-    el('div', { className: 'button-row' }, [status, cancelButton]),
+    el('div', { className: 'button-row' }, [resultsDom.status, resultsDom.cancelButton]),
     mapping,
-    results,
+    resultsDom.results,
   );
   return {
-    status,
+    ...resultsDom,
     readErrors,
     mapping,
     mapBody,
@@ -200,23 +180,5 @@ export function buildDataPanelDom(host: HTMLElement, actions: DataPanelActions):
     speedInput,
     speedUnitEl,
     densityInput,
-    results,
-    summary,
-    flags,
-    plots,
-    plotTitles,
-    residuals,
-    residualSummary,
-    fitBlock,
-    fitTable,
-    fitText,
-    useCalibrated,
-    convergenceBlock,
-    convergenceTable,
-    uncertaintyBlock,
-    uncertaintyTable,
-    rangeInputs,
-    cancelButton,
-    actionButtons,
   };
 }
