@@ -5,7 +5,6 @@
  * and an input-uncertainty band. Without --map it prints the guessed map for confirmation and stops.
  * Exit codes: 0 success, 1 internal error, 2 invalid input or usage (messages on stderr, nothing on stdout).
  */
-import { parseArgs } from 'node:util';
 import { parseCaseFile } from '../compute/caseFile';
 import {
   CALIBRATABLE,
@@ -20,6 +19,7 @@ import {
   type UncertainInput,
   type UncertainRange,
 } from '../compute/compare/index';
+import { OptionError, parseOptions } from './parseOptions';
 
 export interface CompareIo {
   stdout(s: string): void;
@@ -129,10 +129,9 @@ function integerOption(
 export function runCompare(argv: string[], io: CompareIo): number {
   const args = argv[0] === 'compare' ? argv.slice(1) : argv;
   try {
-    const { values, positionals } = parseArgs({
+    const { values, positionals } = parseOptions('compare', {
       args,
       allowPositionals: true,
-      strict: true,
       options: {
         map: { type: 'string' },
         calibrate: { type: 'boolean' },
@@ -227,11 +226,8 @@ export function runCompare(argv: string[], io: CompareIo): number {
       for (const m of error.messages) io.stderr(`coversweep compare: ${m}\n`);
       return 2;
     }
-    if (
-      error instanceof TypeError &&
-      /Unknown option|Unexpected argument|argument missing/i.test(error.message)
-    ) {
-      io.stderr(`coversweep compare: ${error.message}\nrun "coversweep compare --help" for the usage\n`);
+    if (error instanceof OptionError) {
+      io.stderr(`coversweep ${error.message}\nrun "coversweep compare --help" for the usage\n`);
       return 2;
     }
     io.stderr(

@@ -6,7 +6,7 @@
 import { readFileSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
 import { resolve } from 'node:path';
-import { parseArgs } from 'node:util';
+import type { ParseArgsConfig } from 'node:util';
 import {
   caseToModelInput,
   parseCaseFile,
@@ -38,6 +38,7 @@ import {
 } from './io';
 import { nodeWorkerSpawner } from './nodeWorker';
 import { AtomicFile, checkOutputPath, OutputTakenError } from './outputFile';
+import { parseOptions } from './parseOptions';
 import { progressReporter } from './progress';
 import { InputFileError, readInputFile } from './readInputFile';
 import { refuseRepeatedOptions } from './refuseRepeatedOptions';
@@ -121,12 +122,12 @@ function version(): string {
   }
 }
 
-/** Run an argument parser, turning its complaints into usage errors (exit 2). */
-function parseCommandArgs<T>(command: string, parse: () => T): T {
+/** Parse a command's options, turning complaints into usage errors (exit 2) with a nearest-option hint. */
+function parseCommandArgs<T extends ParseArgsConfig>(command: string, config: T) {
   try {
-    return parse();
+    return parseOptions(command, config);
   } catch (error) {
-    throw new CliInputError(`${command}: ${error instanceof Error ? error.message : String(error)}`, [
+    throw new CliInputError(error instanceof Error ? error.message : String(error), [
       `see: coversweep ${command} --help`,
     ]);
   }
@@ -157,9 +158,11 @@ function onePositional(command: string, positionals: string[], what: string): st
 }
 
 function commandExample(args: string[], io: CliIo): number {
-  const { values, positionals } = parseCommandArgs('example', () =>
-    parseArgs({ args, options: { plan: { type: 'boolean' }, ...HELP_OPTION }, allowPositionals: true }),
-  );
+  const { values, positionals } = parseCommandArgs('example', {
+    args,
+    options: { plan: { type: 'boolean' }, ...HELP_OPTION },
+    allowPositionals: true,
+  });
   if (values.help) {
     io.stdout(HELP.example!);
     return EXIT_OK;
@@ -171,9 +174,7 @@ function commandExample(args: string[], io: CliIo): number {
 
 function commandSolve(args: string[], io: CliIo): number {
   refuseRepeatedOptions('solve', args, ['out']);
-  const { values, positionals } = parseCommandArgs('solve', () =>
-    parseArgs({ args, options: OUT_OPTIONS, allowPositionals: true }),
-  );
+  const { values, positionals } = parseCommandArgs('solve', { args, options: OUT_OPTIONS, allowPositionals: true });
   if (values.help) {
     io.stdout(HELP.solve!);
     return EXIT_OK;
@@ -319,9 +320,11 @@ function openOutput(path: string, force: boolean, io: CliIo): AtomicFile {
 
 async function commandSweep(args: string[], io: CliIo): Promise<number> {
   refuseRepeatedOptions('sweep', args, ['out', 'workers']);
-  const { values, positionals } = parseCommandArgs('sweep', () =>
-    parseArgs({ args, options: { ...OUT_OPTIONS, workers: { type: 'string' } }, allowPositionals: true }),
-  );
+  const { values, positionals } = parseCommandArgs('sweep', {
+    args,
+    options: { ...OUT_OPTIONS, workers: { type: 'string' } },
+    allowPositionals: true,
+  });
   if (values.help) {
     io.stdout(HELP.sweep!);
     return EXIT_OK;

@@ -3,9 +3,9 @@
  * (JSON) on stdout. Exit codes as for `solve`: 0 success, 1 internal error, 2 invalid input or usage
  * (messages naming the field and the rule on stderr, nothing on stdout).
  */
-import { parseArgs } from 'node:util';
 import { parseRideFile, solveRide } from '../compute/ride/index';
 import { readErrorReason } from './io';
+import { parseOptions } from './parseOptions';
 
 export const RIDE_HELP = `Usage: coversweep ride RIDE.json
 
@@ -38,13 +38,13 @@ export function runRide(argv: string[], io: RideIo): number {
   let values: { help?: boolean };
   let positionals: string[];
   try {
-    ({ values, positionals } = parseArgs({
+    ({ values, positionals } = parseOptions('ride', {
       args: argv,
       options: { help: { type: 'boolean', short: 'h' } },
       allowPositionals: true,
     }));
   } catch (error) {
-    return fail(io, `ride: ${error instanceof Error ? error.message : String(error)}`, [
+    return fail(io, error instanceof Error ? error.message : String(error), [
       'see: coversweep ride --help',
     ]);
   }

@@ -131,7 +131,7 @@ describe('coversweep compare', () => {
         /map\.json: columns:/,
       ],
       [demo, ['case.json'], /exactly two files/],
-      [demo, ['case.json', 'data.csv', '--bogus'], /Unknown option/],
+      [demo, ['case.json', 'data.csv', '--bogus'], /unknown option --bogus\n/],
       [demo, ['case.json', 'missing.csv', '--map', 'map.json'], /data file missing\.csv: cannot be read/],
       [
         demo,
