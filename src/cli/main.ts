@@ -174,7 +174,11 @@ function commandExample(args: string[], io: CliIo): number {
 
 function commandSolve(args: string[], io: CliIo): number {
   refuseRepeatedOptions('solve', args, ['out']);
-  const { values, positionals } = parseCommandArgs('solve', { args, options: OUT_OPTIONS, allowPositionals: true });
+  const { values, positionals } = parseCommandArgs('solve', {
+    args,
+    options: OUT_OPTIONS,
+    allowPositionals: true,
+  });
   if (values.help) {
     io.stdout(HELP.solve!);
     return EXIT_OK;

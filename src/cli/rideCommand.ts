@@ -44,9 +44,7 @@ export function runRide(argv: string[], io: RideIo): number {
       allowPositionals: true,
     }));
   } catch (error) {
-    return fail(io, error instanceof Error ? error.message : String(error), [
-      'see: coversweep ride --help',
-    ]);
+    return fail(io, error instanceof Error ? error.message : String(error), ['see: coversweep ride --help']);
   }
   if (values.help) {
     io.stdout(RIDE_HELP);

@@ -5,7 +5,11 @@ import { nearestName } from './nearestName';
  * close: `wheel.rim_dept_m: unknown key (did you mean wheel.rim_depth_m?) (allowed here: ...)`.
  * `where` is the key path of the enclosing object ('' at the top level).
  */
-export function unknownKeyMessage(where: string, key: string, allowed: readonly string[] | undefined): string {
+export function unknownKeyMessage(
+  where: string,
+  key: string,
+  allowed: readonly string[] | undefined,
+): string {
   const keyPath = where === '' ? key : `${where}.${key}`;
   const near = allowed ? nearestName(key, allowed) : null;
   const hint = near === null ? '' : ` (did you mean ${where === '' ? near : `${where}.${near}`}?)`;

@@ -1,10 +1,10 @@
 // The command line's option errors: plain text, the nearest option suggested (common practice, no source).
 import { describe, expect, it } from 'vitest';
-import { main } from '../../src/cli/main';
 import { runCompare } from '../../src/cli/compareCommand';
+import { main } from '../../src/cli/main';
+import { OptionError, parseOptions } from '../../src/cli/parseOptions';
 import { runRide } from '../../src/cli/rideCommand';
 import { runValidate } from '../../src/cli/validateCommand';
-import { OptionError, parseOptions } from '../../src/cli/parseOptions';
 
 function capture() {
   let out = '';
@@ -28,7 +28,9 @@ describe('parseOptions', () => {
     expect(() => parseOptions('solve', { args: ['--zebra=1'], options })).toThrow(
       /^solve: unknown option --zebra$/,
     );
-    expect(() => parseOptions('solve', { args: ['--out'], options })).toThrow('solve: option --out needs a value');
+    expect(() => parseOptions('solve', { args: ['--out'], options })).toThrow(
+      'solve: option --out needs a value',
+    );
     expect(() => parseOptions('solve', { args: ['a'], options, allowPositionals: false })).toThrow(
       'solve: unexpected argument a',
     );
@@ -50,7 +52,9 @@ describe('every command names an unknown option with a suggestion and no stray q
       const code = await main(argv, { ...t.io, cwd: '/nonexistent' });
       expect(code, t.err()).toBe(2);
       const bad = argv.find((a) => a.startsWith('--'))!;
-      expect(t.err(), `stderr of ${argv.join(' ')}`).toContain(`unknown option ${bad} (did you mean ${near}?)`);
+      expect(t.err(), `stderr of ${argv.join(' ')}`).toContain(
+        `unknown option ${bad} (did you mean ${near}?)`,
+      );
       expect(t.err()).not.toMatch(/'/);
       expect(t.out()).toBe('');
     });

@@ -7,7 +7,7 @@ import { type CalibrationOptions, type CalibrationResult, calibrate } from './ca
 import { type ConvergenceOptions, type ConvergenceStudy, convergenceStudy } from './convergenceStudy';
 import { type ConvertedData, convertTable, type DataPoint } from './convertData';
 import type { CsvTable } from './csv';
-import { detectSlips, type SlipFlag } from './detectSlips';
+import { detectSlips, type SlipFlag, type SlipLabels } from './detectSlips';
 import type { MapFile } from './mapFile';
 import { createModelEvaluator, modelUncertainty, modelValue, type ParameterValues } from './modelAtData';
 import {
@@ -31,6 +31,8 @@ export interface CompareRequest {
   calibrate?: CalibrationOptions | false;
   convergence?: ConvergenceOptions | false;
   uncertainty?: { ranges: UncertainRange[]; options?: UncertaintyOptions } | false;
+  /** What to call the map's keys in slip messages (default: the map file's keys). */
+  slipLabels?: SlipLabels;
 }
 
 export interface ConvertedRow {
@@ -168,7 +170,7 @@ export function runComparison(req: CompareRequest): CompareResult {
     map: req.map,
     conversion: { airspeed: conv.airspeedSource, density: conv.densitySource, sources: conv.sources },
     converted: convertedRows(conv),
-    flags: detectSlips(conv, model, req.caseFile),
+    flags: detectSlips(conv, model, req.caseFile, req.slipLabels ? { labels: req.slipLabels } : {}),
     residuals,
     residual_summary: summariseResiduals(residuals),
     band: modelBand(req.caseFile, grid.conditions, grid.yawDeg, conv.outputs),

@@ -37,6 +37,9 @@ export interface ConvertedData {
   /** Unit the airspeed was given in ('mps' when from the map's airspeed_mps). */
   speedUnit: Unit;
   densitySource: string;
+  /** The map's signs, as applied (messages say what to change them to). */
+  sideForceSign?: 1 | -1;
+  yawMomentSign?: 1 | -1;
 }
 
 export type ConvertResult = { ok: true; value: ConvertedData } | { ok: false; errors: string[] };
@@ -188,6 +191,8 @@ export function convertTable(table: CsvTable, map: MapFile, defaultRhoKgPerM3: n
       outputs,
       sources,
       speedUnit: speedCol >= 0 ? speedUnit : 'mps',
+      sideForceSign: sideSign,
+      yawMomentSign: momentSign,
       airspeedSource:
         speedCol >= 0 ? `column "${table.headers[speedCol]}" (${speedUnit})` : 'map airspeed_mps',
       densitySource:

@@ -31,9 +31,9 @@ describe('parseMapFile', () => {
     expect(bad({ side_force_sing: -1 })[0]).toMatch(
       /^side_force_sing: unknown key \(did you mean side_force_sign\?\)/,
     );
-    expect(
-      bad({ columns: { yaw: { quantity: 'yaw_deg', unit: 'deg', unti: 'x' } } })[0],
-    ).toMatch(/^columns\.yaw\.unti: unknown key \(did you mean columns\.yaw\.unit\?\)/);
+    expect(bad({ columns: { yaw: { quantity: 'yaw_deg', unit: 'deg', unti: 'x' } } })[0]).toMatch(
+      /^columns\.yaw\.unti: unknown key \(did you mean columns\.yaw\.unit\?\)/,
+    );
     expect(
       bad({
         columns: { yaw: { quantity: 'yaw_deg', unit: 'deg' }, drag: { quantity: 'axial_force', unit: 'm2' } },
