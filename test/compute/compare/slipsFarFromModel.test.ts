@@ -93,7 +93,10 @@ describe('slips on data far from the default model', () => {
     const flags = flagsFor({ sideSign: -1 });
     const f = flags.find((x) => x.code === 'side_force_sign');
     expect(f?.message ?? show(flags)).toMatch(/set side_force_sign to -1/);
-    expect(flags.filter((x) => x.code === 'unit_factor'), show(flags)).toEqual([]);
+    expect(
+      flags.filter((x) => x.code === 'unit_factor'),
+      show(flags),
+    ).toEqual([]);
   });
 
   it('names all three at once', () => {
@@ -105,7 +108,10 @@ describe('slips on data far from the default model', () => {
     expect(flags.find((x) => x.code === 'unit_factor' && x.output === 'side_N')?.message, summary).toMatch(
       /pounds-force/,
     );
-    expect(flags.some((x) => x.code === 'side_force_sign'), summary).toBe(true);
+    expect(
+      flags.some((x) => x.code === 'side_force_sign'),
+      summary,
+    ).toBe(true);
   });
 
   it('does not advise -1 when -1 is already chosen, and speaks a given label', () => {
@@ -114,7 +120,10 @@ describe('slips on data far from the default model', () => {
     const f = flags.find((x) => x.code === 'side_force_sign');
     expect(f?.message ?? show(flags)).toMatch(/side_force_sign is -1 now.*set side_force_sign to 1\./);
     expect(f!.message).not.toMatch(/to -1/);
-    const labelled = flagsFor({ sideSign: -1, labels: { side_force_sign: '"Side force positive to the right"' } });
+    const labelled = flagsFor({
+      sideSign: -1,
+      labels: { side_force_sign: '"Side force positive to the right"' },
+    });
     const g = labelled.find((x) => x.code === 'side_force_sign')!;
     expect(g.message).toMatch(/set "Side force positive to the right" to -1/);
     expect(g.message).not.toMatch(/side_force_sign/);
