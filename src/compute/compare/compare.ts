@@ -5,7 +5,7 @@
 import { type CaseFile, caseAirDensity } from '../caseFile';
 import { type CalibrationOptions, type CalibrationResult, calibrate } from './calibrate';
 import { type ConvergenceOptions, type ConvergenceStudy, convergenceStudy } from './convergenceStudy';
-import { type ConvertedData, convertTable, type DataPoint } from './convertData';
+import { type ConvertedData, convertTable, type DataPoint, pointYawDeg } from './convertData';
 import type { CsvTable } from './csv';
 import { detectSlips, type SlipFlag, type SlipLabels } from './detectSlips';
 import type { MapFile } from './mapFile';
@@ -88,7 +88,7 @@ export const COMPARE_NOTES: readonly string[] = [
 export function convertedRows(conv: ConvertedData): ConvertedRow[] {
   return conv.points.map((p) => ({
     line: p.line,
-    yaw_deg: (p.yawRad * 180) / Math.PI,
+    yaw_deg: pointYawDeg(p),
     airspeed_mps: p.airspeedMps,
     air_density_kgpm3: p.rhoKgPerM3,
     ...p.values,
@@ -111,6 +111,7 @@ export function modelBand(
       pts.push({
         line: 0,
         yawRad: (y * Math.PI) / 180,
+        yawDeg: y,
         airspeedMps: c.airspeedMps,
         rhoKgPerM3: c.rhoKgPerM3,
         values: {},
@@ -122,7 +123,7 @@ export function modelBand(
     for (const out of outputs) {
       const u = modelUncertainty(res[i]!, out);
       rows.push({
-        yaw_deg: (p.yawRad * 180) / Math.PI,
+        yaw_deg: pointYawDeg(p),
         airspeed_mps: p.airspeedMps,
         air_density_kgpm3: p.rhoKgPerM3,
         output: out,
@@ -145,7 +146,7 @@ export function bandGrid(conv: ConvertedData): {
   let hi = 0;
   for (const p of conv.points) {
     if (!seen.has(key(p))) seen.set(key(p), { airspeedMps: p.airspeedMps, rhoKgPerM3: p.rhoKgPerM3 });
-    const d = (p.yawRad * 180) / Math.PI;
+    const d = pointYawDeg(p);
     lo = Math.min(lo, Math.floor(d));
     hi = Math.max(hi, Math.ceil(d));
   }
