@@ -27,6 +27,8 @@ import {
 import { csvHeader, documentCsvLines, errorCsvLine } from '../compute/resultTable';
 import { runCompare } from './compareCommand';
 import { exampleCase, examplePlan } from './examples';
+import { formatSolveTable } from './formatSolve';
+import { outputFormat } from './formatTable';
 import {
   CliInputError,
   type CliIo,
@@ -82,7 +84,7 @@ Print an example case file (an invented wheel, "Demo 50 mm half-cover") on stdou
 example plan file that varies rim depth and cover fraction. Save it, edit it, then run
   coversweep solve case.json      or      coversweep sweep plan.json --out results.csv
 `,
-  solve: `Usage: coversweep solve CASE.json [--out RESULT.json] [--force]
+  solve: `Usage: coversweep solve CASE.json [--out RESULT.json] [--force] [--format json|table]
 
 Solve one case file: every airspeed x yaw angle it lists. Prints the result document (JSON,
 format "coversweep-result") on stdout, or writes it to --out atomically.
@@ -90,6 +92,7 @@ format "coversweep-result") on stdout, or writes it to --out atomically.
 Options:
   --out FILE   write the document to FILE instead of stdout (refuses to overwrite without --force)
   --force      allow --out to replace an existing file
+  --format F   json (default): the result document; table: a readable summary of the same results
   --help       show this help
 `,
   sweep: `Usage: coversweep sweep PLAN.json [--out results.csv|results.json] [--workers N] [--force]
@@ -176,7 +179,7 @@ function commandSolve(args: string[], io: CliIo): number {
   refuseRepeatedOptions('solve', args, ['out']);
   const { values, positionals } = parseCommandArgs('solve', {
     args,
-    options: OUT_OPTIONS,
+    options: { ...OUT_OPTIONS, format: { type: 'string' } },
     allowPositionals: true,
   });
   if (values.help) {
@@ -184,6 +187,7 @@ function commandSolve(args: string[], io: CliIo): number {
     return EXIT_OK;
   }
   const path = onePositional('solve', positionals, 'case file');
+  const format = outputFormat(values.format);
   const outPath = values.out === undefined ? undefined : resolve(io.cwd, values.out);
   if (outPath !== undefined) checkOutputPath(outPath, values.force === true);
   const parsed = parseCaseFile(readJsonFile(path, io.cwd, 'case file'));
@@ -196,7 +200,7 @@ function commandSolve(args: string[], io: CliIo): number {
     if (!(error instanceof RangeError)) throw error;
     throw new CliInputError(`the model cannot solve the case in ${path}:`, [error.message]);
   }
-  const text = `${JSON.stringify(document, null, 2)}\n`;
+  const text = format === 'table' ? formatSolveTable(document) : `${JSON.stringify(document, null, 2)}\n`;
   if (outPath === undefined) {
     io.stdout(text);
   } else {
@@ -464,6 +468,7 @@ export async function main(argv: readonly string[], ioOverrides: Partial<CliIo> 
           stderr: io.stderr,
           readFile: (path, maxBytes) => readInputFile(resolve(io.cwd, path), maxBytes),
           fileSize: () => 0, // readFile checks the size of what it reads, whatever stat says
+          cwd: io.cwd,
         });
       case 'validate':
         return runValidate([...rest], io);
