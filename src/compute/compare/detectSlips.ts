@@ -155,7 +155,14 @@ function pairs(data: readonly DataPoint[], model: readonly PointResult[], out: O
   return { d, m, idx };
 }
 
-function candidatesFor(conv: ConvertedData, out: Output, caseFile: CaseFile, unitKey: string): Candidate[] {
+function candidatesFor(
+  conv: ConvertedData,
+  out: Output,
+  caseFile: CaseFile,
+  labels: SlipLabels,
+): Candidate[] {
+  const unitKey = labels.unit ?? 'unit';
+  const areaKey = labels.reference_area_m2 ?? 'reference_area_m2';
   const src = conv.sources[out];
   if (!src) return [];
   const list: Candidate[] = [];
@@ -215,7 +222,7 @@ function candidatesFor(conv: ConvertedData, out: Output, caseFile: CaseFile, uni
       list.push({
         factor: a / area,
         code: 'reference_area',
-        text: `the coefficients look based on ${text}, not the mapped ${fmt(a, 4)} m^2; set reference_area_m2 accordingly`,
+        text: `the coefficients look based on ${text}, not the mapped ${fmt(a, 4)} m^2; set ${areaKey} accordingly`,
       });
     }
   }
@@ -337,7 +344,7 @@ function factorFlags(
     // other force columns share this column's factor.
     const others = FORCE_OUTPUTS.filter((o) => o !== out && fits.has(o));
     const shared = others.every((o) => Math.abs(Math.log(Math.abs(fits.get(o)!.k) / r)) < Math.log(1.5));
-    const matches = candidatesFor(conv, out, caseFile, labels.unit ?? 'unit')
+    const matches = candidatesFor(conv, out, caseFile, labels)
       .filter((c) => c.code !== 'speed_unit' || shared)
       .map((c) => ({ c, miss: Math.abs(Math.log(r / c.factor)), envelope: envelopeMiss(out, own, c.factor) }))
       .filter(

@@ -127,5 +127,9 @@ describe('slips on data far from the default model', () => {
     const g = labelled.find((x) => x.code === 'side_force_sign')!;
     expect(g.message).toMatch(/set "Side force positive to the right" to -1/);
     expect(g.message).not.toMatch(/side_force_sign/);
+    const units = flagsFor({ drag: GF_PER_N, labels: { unit: 'unit menu' } });
+    expect(units.find((x) => x.code === 'unit_factor')?.message ?? show(units)).toMatch(
+      /set its unit menu to "gf"/,
+    );
   });
 });
