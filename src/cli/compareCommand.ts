@@ -42,8 +42,8 @@ export const COMPARE_HELP = `Usage: coversweep compare CASE.json DATA.csv [--map
 Hold a table of measured or simulated results (CSV, or a tab-separated table pasted from a
 spreadsheet) against the model for the wheel and conditions of CASE.json. Prints JSON (format
 "coversweep-compare"): the data converted to SI and the tool's axes, flags for likely slips (units,
-axes, reference area, side-force sign, zero-yaw offset, speed scaling), and residuals data - model
-with the model's band. DATA.csv is never modified (at most ${MAX_DATA_BYTES / (1024 * 1024)} MB).
+axes, reference area, side-force sign, zero-yaw offset, yaw symmetry, speed scaling), and residuals
+data - model with the model's band. DATA.csv is never modified (at most ${MAX_DATA_BYTES / (1024 * 1024)} MB).
 
 Without --map, the column mapping guessed from the header is printed (a map file) for you to check,
 save and pass with --map; nothing is compared.
@@ -260,7 +260,8 @@ export function runCompare(argv: string[], io: CompareIo): number {
         ? formatCompareTable(result.value)
         : `${JSON.stringify(result.value, (_k, v) => (typeof v === 'number' && !Number.isFinite(v) ? null : v), 2)}\n`,
     );
-    for (const f of result.value.flags) io.stderr(`flag ${f.code}: ${f.message}\n`);
+    // The table lists the flags itself; with JSON on stdout they are repeated on stderr for a reader.
+    if (format === 'json') for (const f of result.value.flags) io.stderr(`flag ${f.code}: ${f.message}\n`);
     if (writeCase !== undefined) io.stderr(`wrote ${writeCase} (the calibrated case)\n`);
     return 0;
   } catch (error) {

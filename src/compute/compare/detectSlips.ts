@@ -41,7 +41,8 @@ export type SlipCode =
   | 'drag_axis'
   | 'side_force_at_zero_yaw'
   | 'dynamic_pressure_scaling'
-  | 'beyond_model_range';
+  | 'beyond_model_range'
+  | 'yaw_symmetry';
 
 export interface SlipFlag {
   code: SlipCode;
@@ -531,6 +532,54 @@ function speedFlags(conv: ConvertedData, model: readonly PointResult[], flags: S
   }
 }
 
+/**
+ * Yaw symmetry, from the data alone: at +b and -b (same airspeed) a symmetric wheel's side force is
+ * antisymmetric, S(-b) = -S(b). Writing S = odd + even over each pair, a yaw offset d gives
+ * even / odd = tan(d) / tan(b) (S ~ k sin(b + d)); unsigned yaw angles give an even part as large as
+ * the odd one (a side force whose sign was lost). Flagged when the even part exceeds a fifth of the odd part over the pairs: common
+ * practice, no source.
+ */
+function symmetryFlags(conv: ConvertedData, caseFile: CaseFile, flags: SlipFlag[]): void {
+  if (!conv.outputs.includes('side_N')) return;
+  const pts = conv.points.filter((p) => p.values.side_N !== undefined && Math.abs(p.yawRad) >= 2 * RAD);
+  let even = 0;
+  let odd = 0;
+  let pairs = 0;
+  const offsets: number[] = [];
+  for (const a of pts) {
+    if (a.yawRad <= 0) continue;
+    const b = pts.find(
+      (x) => Math.abs(x.yawRad + a.yawRad) < 0.05 * RAD && Math.abs(x.airspeedMps / a.airspeedMps - 1) < 0.01,
+    );
+    if (!b) continue;
+    // Per dynamic pressure, so a small speed difference within the pair does not count as asymmetry.
+    const sa = a.values.side_N! / (a.rhoKgPerM3 * a.airspeedMps * a.airspeedMps);
+    const sb = b.values.side_N! / (b.rhoKgPerM3 * b.airspeedMps * b.airspeedMps);
+    const e = 0.5 * (sa + sb);
+    const o = 0.5 * (sa - sb);
+    even += Math.abs(e);
+    odd += Math.abs(o);
+    pairs++;
+    if (o !== 0) offsets.push(Math.atan((e / o) * Math.tan(a.yawRad)) / RAD);
+  }
+  if (pairs === 0 || !(even > 0.2 * odd)) return;
+  const oneSided = caseFile.wheel.cover.sides === 1 && caseFile.wheel.cover.fraction > 0;
+  const offset = median(offsets);
+  const unsigned = even > 0.8 * odd;
+  flags.push({
+    code: 'yaw_symmetry',
+    output: 'side_N',
+    message:
+      `over ${pairs} pair(s) of points at +yaw and -yaw the side force is far from antisymmetric (its symmetric part is ${fmt((100 * even) / Math.max(odd, Number.MIN_VALUE), 2)}% of its antisymmetric part), where a symmetric wheel gives S(-yaw) = -S(yaw). ` +
+      (unsigned
+        ? 'The side force has nearly the same value at +yaw and -yaw: the column may hold magnitudes (its sign lost), or the yaw sign may be lost. '
+        : `It is what a yaw offset of about ${fmt(offset, 2)} deg would give. `) +
+      'Check the turntable zero, the yaw sign, and the balance tare' +
+      (oneSided ? ' (this wheel has a one-sided cover, so some asymmetry may be real)' : '') +
+      '.',
+  });
+}
+
 /** All the slips found, given the converted data and the model (default parameters) at the same points. */
 export function detectSlips(
   conv: ConvertedData,
@@ -549,6 +598,7 @@ export function detectSlips(
   factorFlags(conv, model, caseFile, flags, labels);
   axisFlags(conv, model, flags);
   zeroYawFlags(conv, model, caseFile, flags);
+  symmetryFlags(conv, caseFile, flags);
   speedFlags(conv, model, flags);
   const beyond = model.filter(
     (p) => p.flags.includes('yaw_beyond_range') || p.flags.includes('airspeed_beyond_range'),
