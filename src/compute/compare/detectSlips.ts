@@ -367,17 +367,17 @@ function factorFlags(
         : '';
     if (matches.length > 0) {
       const best = matches[0]!;
-      const others2 = matches.slice(1).map((x) => x.c.text);
+      const alternatives = matches.slice(1).map((x) => x.c.text);
       const corrected = Number.isFinite(own) ? `; read so, its ${what} is ${fmt(own / best.c.factor)}` : '';
       const rest =
         Math.abs(Math.log(r / best.c.factor)) > Math.log(SLIP_TOLERANCE)
-          ? ` and the model is ${fmt(r / best.c.factor)} times off (calibrate once the unit is set)`
+          ? ` and the model is ${fmt(r / best.c.factor)} times off (calibrate once this is set right)`
           : '';
       flags.push({
         code: best.c.code,
         output: out,
         factor: r,
-        message: `${head}${envelopeText}; ${best.c.text}${corrected}${rest}${others2.length > 0 ? `. Also possible: ${others2.join('; ')}` : ''}.`,
+        message: `${head}${envelopeText}; ${best.c.text}${corrected}${rest}${alternatives.length > 0 ? `. Also possible: ${alternatives.join('; ')}` : ''}.`,
       });
     } else {
       flags.push({
