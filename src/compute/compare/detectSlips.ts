@@ -1,19 +1,35 @@
 /**
- * Likely slips in imported data, found by holding the converted data against the model at the same
- * points: a unit mix-up (grams or kilograms-force or pounds-force read as newtons, cm^2 as m^2, km/h as
- * m/s), a reference-area mismatch of coefficients, wind-axis drag mapped as axial drag (or the reverse;
- * the two differ more as yaw grows), a flipped side-force sign, a side force at zero yaw on a symmetric
- * wheel, and forces not scaling with dynamic pressure between speeds. Each flag has a short `code` and a
- * plain-language `message`. The model is an estimate, so a factor is blamed on a slip only when it is
- * large (over 1.8x) and within 30% of a known slip's factor; otherwise a large factor is reported as
- * unexplained. Thresholds: common practice, no source.
+ * Likely slips in imported data: a unit mix-up (grams or kilograms-force or pounds-force read as newtons,
+ * N mm as N m, cm^2 as m^2, km/h as m/s), a reference-area mismatch of coefficients, wind-axis drag mapped
+ * as axial drag (or the reverse; the two differ more as yaw grows), a flipped side-force sign, a side
+ * force at zero yaw on a symmetric wheel, and forces not scaling with dynamic pressure between speeds.
+ * Each flag has a short `code` and a plain-language `message`.
+ *
+ * The data are first held against themselves, so a slip is named even when the uncalibrated model is
+ * itself off: the side force's sign against yaw (wind from the right pushes any wheel to the left, so
+ * side force rises with yaw whatever the wheel), each force's coefficient on the wheel's disc area
+ * against a physical envelope (PHYSICAL_ENVELOPE), the ratio between force columns (a speed slip moves
+ * every force column alike, a unit slip one column), and the scaling with V^2 between speeds. The model
+ * then picks between known unit factors: a factor is blamed on a slip when the data read in the other
+ * unit are inside the envelope and within MODEL_SPREAD of the model while, as mapped, they are outside
+ * the envelope or beyond MODEL_SPREAD; a factor over MIN_FACTOR within SLIP_TOLERANCE of a known slip's
+ * is blamed as before; any other large factor is reported as unexplained. Thresholds: common practice,
+ * no source.
  */
 
 import type { PointResult } from '../../model/wheel/index';
 import type { CaseFile } from '../caseFile';
 import type { ConvertedData, DataPoint } from './convertData';
 import { modelValue } from './modelAtData';
-import { FORCE_UNITS, OUTPUT_LABEL, type Output, SPEED_UNITS, UNIT_TO_SI, type Unit } from './quantities';
+import {
+  FORCE_UNITS,
+  MOMENT_UNITS,
+  OUTPUT_LABEL,
+  type Output,
+  SPEED_UNITS,
+  UNIT_TO_SI,
+  type Unit,
+} from './quantities';
 
 export type SlipCode =
   | 'unit_factor'
@@ -25,7 +41,8 @@ export type SlipCode =
   | 'drag_axis'
   | 'side_force_at_zero_yaw'
   | 'dynamic_pressure_scaling'
-  | 'beyond_model_range';
+  | 'beyond_model_range'
+  | 'yaw_symmetry';
 
 export interface SlipFlag {
   code: SlipCode;
@@ -39,6 +56,38 @@ export interface SlipFlag {
 /** A factor is blamed on a slip only when |ln r| > ln(MIN_FACTOR) and within SLIP_TOLERANCE of the slip's. */
 export const MIN_FACTOR = 1.8;
 export const SLIP_TOLERANCE = 1.3;
+/**
+ * How far the uncalibrated model may be from a wheel it describes (a factor either way) before a
+ * difference says more about the data than about the model: common practice, no source (the
+ * calibratable parameters move this model's drag by up to about 2x over their plausible ranges).
+ */
+export const MODEL_SPREAD = 2.2;
+/**
+ * Physical envelope of a wheel's force coefficients on its disc area pi R^2, with wide margins:
+ * - axial (and wind-axis) drag at |yaw| <= 10 deg: 0.004..0.3. A 700C tyre alone (frontal area about
+ *   0.017 m^2, Cd about 0.3) gives about 0.013 on the disc; a flat plate face-on gives 1.17 (Hoerner,
+ *   Fluid-Dynamic Drag, 1965, ch. 3) and an edge-on wheel far less. The model's wheels give 0.017..0.06.
+ * - side force per sin(yaw): 0.3..4 per unit sin(yaw). The exact lift slope of a thin circular wing is
+ *   1.79 per radian (Kinner 1937; Jordan 1973), at most about doubled by the ground image; the model's
+ *   bare spoked wheel gives about 1.2, its disc about 2.1.
+ * Bounds: common practice, no source (the cited figures set their scale).
+ */
+export const PHYSICAL_ENVELOPE = {
+  axialCoefficient: [0.004, 0.3],
+  sideSlope: [0.3, 4],
+} as const;
+
+/** What to call the map's keys in messages (the page passes its control labels). */
+export interface SlipLabels {
+  side_force_sign?: string;
+  yaw_moment_sign?: string;
+  unit?: string;
+  reference_area_m2?: string;
+}
+
+export interface DetectOptions {
+  labels?: SlipLabels;
+}
 const RAD = Math.PI / 180;
 
 interface Candidate {
@@ -62,6 +111,8 @@ function unitName(u: Unit): string {
     mps: 'm/s',
     kmh: 'km/h',
     mph: 'mph',
+    Nm: 'N m',
+    Nmm: 'N mm',
   };
   return names[u] ?? u;
 }
@@ -105,22 +156,31 @@ function pairs(data: readonly DataPoint[], model: readonly PointResult[], out: O
   return { d, m, idx };
 }
 
-function candidatesFor(conv: ConvertedData, out: Output, caseFile: CaseFile): Candidate[] {
+function candidatesFor(
+  conv: ConvertedData,
+  out: Output,
+  caseFile: CaseFile,
+  labels: SlipLabels,
+): Candidate[] {
+  const unitKey = labels.unit ?? 'unit';
+  const areaKey = labels.reference_area_m2 ?? 'reference_area_m2';
   const src = conv.sources[out];
   if (!src) return [];
   const list: Candidate[] = [];
   const R = caseFile.wheel.outer_radius_m;
-  const isForce =
-    FORCE_UNITS.includes(src.unit) && src.quantity !== 'yaw_moment' && src.quantity !== 'steering_moment';
+  const isMoment = src.quantity === 'yaw_moment' || src.quantity === 'steering_moment';
+  const isForce = FORCE_UNITS.includes(src.unit) && !isMoment;
+  const sameKind = isForce ? FORCE_UNITS : isMoment ? MOMENT_UNITS : [];
+  for (const y of sameKind) {
+    if (y === src.unit) continue;
+    const f = UNIT_TO_SI[src.unit] / UNIT_TO_SI[y];
+    list.push({
+      factor: f,
+      code: 'unit_factor',
+      text: `the values look like ${unitName(y)} but the column is mapped as ${unitName(src.unit)} (factor ${fmt(f)}); set its ${unitKey} to "${y}"`,
+    });
+  }
   if (isForce) {
-    for (const y of FORCE_UNITS) {
-      if (y === src.unit) continue;
-      list.push({
-        factor: UNIT_TO_SI[src.unit] / UNIT_TO_SI[y],
-        code: 'unit_factor',
-        text: `the values look like ${unitName(y)} but the column is mapped as ${unitName(src.unit)} (factor ${fmt(UNIT_TO_SI[src.unit] / UNIT_TO_SI[y])}); set its unit to "${y}"`,
-      });
-    }
     // A speed given in the wrong unit changes the model's dynamic pressure, not the measured force.
     const speedUnit = conv.speedUnit;
     for (const t of SPEED_UNITS) {
@@ -139,7 +199,7 @@ function candidatesFor(conv: ConvertedData, out: Output, caseFile: CaseFile): Ca
     list.push({
       factor: f,
       code: 'area_unit',
-      text: `the drag areas look like ${unitName(other)} but are mapped as ${unitName(src.unit)} (factor ${fmt(f)}); set the unit to "${other}"`,
+      text: `the drag areas look like ${unitName(other)} but are mapped as ${unitName(src.unit)} (factor ${fmt(f)}); set the ${unitKey} to "${other}"`,
     });
   }
   if (src.reference_area_m2 !== undefined) {
@@ -163,11 +223,85 @@ function candidatesFor(conv: ConvertedData, out: Output, caseFile: CaseFile): Ca
       list.push({
         factor: a / area,
         code: 'reference_area',
-        text: `the coefficients look based on ${text}, not the mapped ${fmt(a, 4)} m^2; set reference_area_m2 accordingly`,
+        text: `the coefficients look based on ${text}, not the mapped ${fmt(a, 4)} m^2; set ${areaKey} accordingly`,
       });
     }
   }
   return list;
+}
+
+function median(values: number[]): number {
+  if (values.length === 0) return Number.NaN;
+  const v = [...values].sort((x, y) => x - y);
+  const h = Math.floor(v.length / 2);
+  return v.length % 2 === 1 ? v[h]! : 0.5 * (v[h - 1]! + v[h]!);
+}
+
+/**
+ * The data's own coefficient for `out` on the disc area (median over the usable points): drag at
+ * |yaw| <= 10 deg, side force per sin(yaw) at |yaw| >= 4 deg (its size: the sign is checked apart).
+ * NaN where the envelope does not apply (moments, too few points, a negative median drag).
+ */
+function ownCoefficient(conv: ConvertedData, out: Output, discM2: number): number {
+  const c: number[] = [];
+  for (const p of conv.points) {
+    const v = p.values[out];
+    if (v === undefined) continue;
+    const q = 0.5 * p.rhoKgPerM3 * p.airspeedMps * p.airspeedMps;
+    if ((out === 'axial_N' || out === 'wind_drag_N') && Math.abs(p.yawRad) <= 10 * RAD)
+      c.push(v / (q * discM2));
+    if (out === 'side_N' && Math.abs(p.yawRad) >= 4 * RAD) c.push(v / (q * discM2 * Math.sin(p.yawRad)));
+  }
+  if (c.length < 2) return Number.NaN;
+  const m = median(c);
+  if (out === 'side_N') return Math.abs(m);
+  return m > 0 ? m : Number.NaN;
+}
+
+/** How far (ln units) a coefficient divided by `factor` lies outside the envelope: 0 inside, NaN unknown. */
+function envelopeMiss(out: Output, coefficient: number, factor: number): number {
+  if (!Number.isFinite(coefficient)) return Number.NaN;
+  const [lo, hi] = out === 'side_N' ? PHYSICAL_ENVELOPE.sideSlope : PHYSICAL_ENVELOPE.axialCoefficient;
+  const c = coefficient / factor;
+  return Math.max(0, Math.log(lo / c), Math.log(c / hi));
+}
+
+const FORCE_OUTPUTS: readonly Output[] = ['axial_N', 'wind_drag_N', 'side_N'];
+
+/** The side force against yaw, from the data alone: it must rise with yaw whatever the wheel. */
+function signFlags(conv: ConvertedData, flags: SlipFlag[], labels: SlipLabels): void {
+  if (!conv.outputs.includes('side_N')) return;
+  let xy = 0;
+  let xx = 0;
+  let yy = 0;
+  let n = 0;
+  for (const p of conv.points) {
+    const v = p.values.side_N;
+    if (v === undefined || Math.abs(p.yawRad) < 2 * RAD) continue;
+    const x = Math.sin(p.yawRad);
+    const y = v / (0.5 * p.rhoKgPerM3 * p.airspeedMps * p.airspeedMps);
+    xy += x * y;
+    xx += x * x;
+    yy += y * y;
+    n++;
+  }
+  if (n < 2 || !(xx > 0 && yy > 0)) return;
+  const correlation = xy / Math.sqrt(xx * yy);
+  if (!(correlation < -0.8)) return;
+  const current = conv.sideForceSign ?? 1;
+  const key = labels.side_force_sign ?? 'side_force_sign';
+  const advice =
+    current === 1
+      ? `if your balance's lateral axis points to the right, set ${key} to -1`
+      : `${key} is -1 now (the data's lateral axis taken to point to the right), and with it the side force falls with yaw: set ${key} to 1`;
+  flags.push({
+    code: 'side_force_sign',
+    output: 'side_N',
+    factor: xy / xx,
+    message:
+      `the measured side force falls as yaw rises (correlation ${fmt(correlation, 2)} with sin(yaw) over ${n} points at |yaw| >= 2 deg), but wind from the rider's right (positive yaw) pushes any wheel to the left (positive side force), so it must rise. ` +
+      `${advice}.`,
+  });
 }
 
 function factorFlags(
@@ -175,46 +309,82 @@ function factorFlags(
   model: readonly PointResult[],
   caseFile: CaseFile,
   flags: SlipFlag[],
+  labels: SlipLabels,
 ): void {
+  const R = caseFile.wheel.outer_radius_m;
+  const disc = Math.PI * R * R;
+  const fits = new Map<Output, { k: number; correlation: number; n: number }>();
   for (const out of conv.outputs) {
     const { d, m } = pairs(conv.points, model, out);
     if (d.length === 0) continue;
     const fit = scaleFit(d, m);
-    if (!Number.isFinite(fit.k)) continue;
-    const lateral = out === 'side_N' || out === 'yaw_moment_Nm' || out === 'steering_moment_Nm';
-    if (lateral && fit.k < 0 && fit.correlation < -0.8) {
+    if (Number.isFinite(fit.k)) fits.set(out, { k: fit.k, correlation: fit.correlation, n: d.length });
+  }
+  for (const [out, fit] of fits) {
+    const moment = out === 'yaw_moment_Nm' || out === 'steering_moment_Nm';
+    if (moment && fit.k < 0 && fit.correlation < -0.8) {
+      const current = conv.yawMomentSign ?? 1;
+      const key = labels.yaw_moment_sign ?? 'yaw_moment_sign';
       flags.push({
         code: 'side_force_sign',
         output: out,
         factor: fit.k,
         message:
-          `the measured ${OUTPUT_LABEL[out]} has the opposite sign to the model's at yaw (best fit: data = ${fmt(fit.k)} x model over ${d.length} points). ` +
-          "Here a positive yaw is wind from the rider's right and pushes the wheel to the left (positive side force); " +
-          "if your balance's lateral axis points to the right, set side_force_sign to -1 in the map.",
+          `the measured ${OUTPUT_LABEL[out]} has the opposite sign to the model's at yaw (best fit: data = ${fmt(fit.k)} x model over ${fit.n} points); ` +
+          `if its axis is mirrored, set ${key} to ${-current}${current === -1 ? ' (it is -1 now)' : ''}.`,
       });
     }
     const r = Math.abs(fit.k);
-    if (!(r > 0) || Math.abs(Math.log(r)) < Math.log(MIN_FACTOR)) continue;
-    const matches = candidatesFor(conv, out, caseFile)
-      .map((c) => ({ c, miss: Math.abs(Math.log(r / c.factor)) }))
-      .filter((x) => x.miss < Math.log(SLIP_TOLERANCE))
+    if (!(r > 0)) continue;
+    const own = ownCoefficient(conv, out, disc);
+    const mappedEnvelope = envelopeMiss(out, own, 1);
+    const mappedMiss = Math.abs(Math.log(r));
+    const mappedOut = mappedEnvelope > 0 || mappedMiss > Math.log(MODEL_SPREAD);
+    if (!mappedOut && mappedMiss < Math.log(MIN_FACTOR)) continue;
+    // Between columns: a speed slip scales every force column alike, so it is named only when the
+    // other force columns share this column's factor.
+    const others = FORCE_OUTPUTS.filter((o) => o !== out && fits.has(o));
+    const shared = others.every((o) => Math.abs(Math.log(Math.abs(fits.get(o)!.k) / r)) < Math.log(1.5));
+    const matches = candidatesFor(conv, out, caseFile, labels)
+      .filter((c) => c.code !== 'speed_unit' || shared)
+      .map((c) => ({ c, miss: Math.abs(Math.log(r / c.factor)), envelope: envelopeMiss(out, own, c.factor) }))
+      .filter(
+        (x) =>
+          !(x.envelope > 0) &&
+          ((mappedMiss > Math.log(MIN_FACTOR) && x.miss < Math.log(SLIP_TOLERANCE)) ||
+            (mappedOut && x.miss < Math.log(MODEL_SPREAD) && x.miss < mappedMiss)),
+      )
       .sort((a, b) => a.miss - b.miss);
-    const head = `${OUTPUT_LABEL[out]}: the data are ${fmt(r)} times the model over ${d.length} points`;
+    const head = `${OUTPUT_LABEL[out]}: the data are ${fmt(r)} times the model over ${fit.n} points`;
+    const what =
+      out === 'side_N'
+        ? "side-force slope on the wheel's disc area"
+        : "drag coefficient on the wheel's disc area";
+    const [lo, hi] = out === 'side_N' ? PHYSICAL_ENVELOPE.sideSlope : PHYSICAL_ENVELOPE.axialCoefficient;
+    const envelopeText =
+      mappedEnvelope > 0
+        ? `; as mapped, the data's own ${what} is ${fmt(own)}, outside what any wheel makes (${lo}..${hi})`
+        : '';
     if (matches.length > 0) {
-      const best = matches[0]!.c;
-      const others = matches.slice(1).map((x) => x.c.text);
+      const best = matches[0]!;
+      const alternatives = matches.slice(1).map((x) => x.c.text);
+      const corrected = Number.isFinite(own) ? `; read so, its ${what} is ${fmt(own / best.c.factor)}` : '';
+      const rest =
+        Math.abs(Math.log(r / best.c.factor)) > Math.log(SLIP_TOLERANCE)
+          ? ` and the model is ${fmt(r / best.c.factor)} times off (calibrate once this is set right)`
+          : '';
       flags.push({
-        code: best.code,
+        code: best.c.code,
         output: out,
         factor: r,
-        message: `${head}; ${best.text}${others.length > 0 ? `. Also possible: ${others.join('; ')}` : ''}.`,
+        message: `${head}${envelopeText}; ${best.c.text}${corrected}${rest}${alternatives.length > 0 ? `. Also possible: ${alternatives.join('; ')}` : ''}.`,
       });
     } else {
       flags.push({
         code: 'scale_mismatch',
         output: out,
         factor: r,
-        message: `${head}, and no common unit, area or speed slip explains that factor: check the wheel description, the reference area, a tare, or calibrate the model.`,
+        message: `${head}${envelopeText}, and no common unit, area or speed slip explains that factor: check the wheel description, the reference area, a tare, or calibrate the model.`,
       });
     }
   }
@@ -362,11 +532,60 @@ function speedFlags(conv: ConvertedData, model: readonly PointResult[], flags: S
   }
 }
 
+/**
+ * Yaw symmetry, from the data alone: at +b and -b (same airspeed) a symmetric wheel's side force is
+ * antisymmetric, S(-b) = -S(b). Writing S = odd + even over each pair, a yaw offset d gives
+ * even / odd = tan(d) / tan(b) (S ~ k sin(b + d)); unsigned yaw angles give an even part as large as
+ * the odd one (a side force whose sign was lost). Flagged when the even part exceeds a fifth of the odd part over the pairs: common
+ * practice, no source.
+ */
+function symmetryFlags(conv: ConvertedData, caseFile: CaseFile, flags: SlipFlag[]): void {
+  if (!conv.outputs.includes('side_N')) return;
+  const pts = conv.points.filter((p) => p.values.side_N !== undefined && Math.abs(p.yawRad) >= 2 * RAD);
+  let even = 0;
+  let odd = 0;
+  let pairs = 0;
+  const offsets: number[] = [];
+  for (const a of pts) {
+    if (a.yawRad <= 0) continue;
+    const b = pts.find(
+      (x) => Math.abs(x.yawRad + a.yawRad) < 0.05 * RAD && Math.abs(x.airspeedMps / a.airspeedMps - 1) < 0.01,
+    );
+    if (!b) continue;
+    // Per dynamic pressure, so a small speed difference within the pair does not count as asymmetry.
+    const sa = a.values.side_N! / (a.rhoKgPerM3 * a.airspeedMps * a.airspeedMps);
+    const sb = b.values.side_N! / (b.rhoKgPerM3 * b.airspeedMps * b.airspeedMps);
+    const e = 0.5 * (sa + sb);
+    const o = 0.5 * (sa - sb);
+    even += Math.abs(e);
+    odd += Math.abs(o);
+    pairs++;
+    if (o !== 0) offsets.push(Math.atan((e / o) * Math.tan(a.yawRad)) / RAD);
+  }
+  if (pairs === 0 || !(even > 0.2 * odd)) return;
+  const oneSided = caseFile.wheel.cover.sides === 1 && caseFile.wheel.cover.fraction > 0;
+  const offset = median(offsets);
+  const unsigned = even > 0.8 * odd;
+  flags.push({
+    code: 'yaw_symmetry',
+    output: 'side_N',
+    message:
+      `over ${pairs} pair(s) of points at +yaw and -yaw the side force is far from antisymmetric (its symmetric part is ${fmt((100 * even) / Math.max(odd, Number.MIN_VALUE), 2)}% of its antisymmetric part), where a symmetric wheel gives S(-yaw) = -S(yaw). ` +
+      (unsigned
+        ? 'The side force has nearly the same value at +yaw and -yaw: the column may hold magnitudes (its sign lost), or the yaw sign may be lost. '
+        : `It is what a yaw offset of about ${fmt(offset, 2)} deg would give. `) +
+      'Check the turntable zero, the yaw sign, and the balance tare' +
+      (oneSided ? ' (this wheel has a one-sided cover, so some asymmetry may be real)' : '') +
+      '.',
+  });
+}
+
 /** All the slips found, given the converted data and the model (default parameters) at the same points. */
 export function detectSlips(
   conv: ConvertedData,
   model: readonly PointResult[],
   caseFile: CaseFile,
+  options: DetectOptions = {},
 ): SlipFlag[] {
   if (model.length !== conv.points.length) {
     throw new RangeError(
@@ -374,9 +593,12 @@ export function detectSlips(
     );
   }
   const flags: SlipFlag[] = [];
-  factorFlags(conv, model, caseFile, flags);
+  const labels = options.labels ?? {};
+  signFlags(conv, flags, labels);
+  factorFlags(conv, model, caseFile, flags, labels);
   axisFlags(conv, model, flags);
   zeroYawFlags(conv, model, caseFile, flags);
+  symmetryFlags(conv, caseFile, flags);
   speedFlags(conv, model, flags);
   const beyond = model.filter(
     (p) => p.flags.includes('yaw_beyond_range') || p.flags.includes('airspeed_beyond_range'),
