@@ -11,6 +11,8 @@ export interface ContinuousVariable {
   unit: string;
   /** Bounds every wheel allows (the case file's rules); a study's bounds lie within them. */
   limits(wheel: DesignWheel): { min: number; max: number };
+  /** Why the upper bound is what it is, for messages (absent: the case file's range). */
+  limitsRule?: string;
   get(wheel: DesignWheel): number;
   set(wheel: DesignWheel, value: number): DesignWheel;
 }
@@ -47,6 +49,8 @@ export const DESIGN_VARIABLES: readonly DesignVariable[] = [
     kind: 'continuous',
     label: 'Rim depth',
     unit: 'm',
+    limitsRule:
+      'outer radius - tyre width - hub flange radius - 1 mm, the tyre at its widest: the rim must clear the hub flange',
     limits: (w) => ({
       min: 0,
       max: w.outer_radius_m - w.tyre_width_m - w.hub_flange_radius_m - HUB_CLEARANCE_M,
@@ -59,6 +63,7 @@ export const DESIGN_VARIABLES: readonly DesignVariable[] = [
     kind: 'continuous',
     label: 'Tyre width',
     unit: 'm',
+    limitsRule: 'outer radius - rim depth - hub flange radius - 1 mm, the rim at its deepest, and 0.15 m',
     limits: (w) => ({
       min: 0.005,
       max: Math.min(0.15, w.outer_radius_m - w.rim_depth_m - w.hub_flange_radius_m - HUB_CLEARANCE_M),

@@ -122,10 +122,10 @@ export function studyDocument(o: StudyOutcome) {
 export type StudyDocument = ReturnType<typeof studyDocument>;
 
 /**
- * The study table (CSV): the baseline, then every evaluated design, one row each: role (baseline,
- * optimum, front, design), the study's variables, every objective (units in the names), the limits'
- * violation and whether the design is on the front. The cautions follow as the last rows' note column
- * would lose them, so they open the file as a comment-free first column of a `caution` row each.
+ * The study table (CSV): first one `caution` row per caution (in the note column), then the baseline,
+ * then every evaluated design in the order evaluated, one row each: role (baseline, optimum, front,
+ * design), index, the study's variables, every objective (units in the names), the limits' violation,
+ * whether it meets them and whether it is on the front.
  */
 export function studyCsv(o: StudyOutcome): string {
   const s = o.study;

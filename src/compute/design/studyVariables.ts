@@ -85,12 +85,12 @@ export function checkVariables(
     const others = { ...widest };
     delete others[c.id];
     const lim = v.limits(applyDesign(wheel, others));
+    const unit = v.unit === '1' ? '' : ` ${v.unit}`;
     if (c.min < lim.min)
-      errors.push(`variables.${c.id}.min: must be at least ${fmt(lim.min)} ${v.unit}, got ${c.min}`);
+      errors.push(`variables.${c.id}.min: must be at least ${fmt(lim.min)}${unit}, got ${c.min}`);
     if (c.max > lim.max) {
-      errors.push(
-        `variables.${c.id}.max: must be at most ${fmt(lim.max)} ${v.unit} (with the other freed variables at their largest, the rim must clear the hub flange), got ${c.max}`,
-      );
+      const why = v.limitsRule === undefined ? '' : ` (${v.limitsRule})`;
+      errors.push(`variables.${c.id}.max: must be at most ${fmt(lim.max)}${unit}${why}, got ${c.max}`);
     }
   }
   return errors.length > before ? null : { continuous, discrete };
