@@ -69,3 +69,49 @@ describe('optimiseStudy on the example study (cover fraction x rim depth, time a
     expect(convergenceLattices({ span: 4, chord: 2 })[2]).toEqual({ span: 4, chord: 2 });
   });
 });
+
+describe('optimiseStudy with discrete variables', () => {
+  function study(change: (s: Record<string, unknown>) => void) {
+    const s = JSON.parse(text);
+    s.search = {
+      grid_points: 3,
+      starts: 1,
+      max_evaluations: 30,
+      tolerance: 0.02,
+      lattice_span: 6,
+      lattice_chord: 3,
+    };
+    s.front = { limit_steps: 0 };
+    s.limits = {};
+    change(s);
+    const p = parseStudyFile(JSON.stringify(s));
+    if (!p.ok) throw new Error(p.errors.join('\n'));
+    return p.value;
+  }
+
+  it('only discrete choices: each is evaluated once and the optimum is the better one', () => {
+    const o = optimiseStudy(
+      study((s) => {
+        s.variables = { spoke_section: ['round', 'bladed'] };
+      }),
+    );
+    expect(o.points.map((p) => p.values.spoke_section)).toEqual(['round', 'bladed']);
+    const times = o.points.map((p) => p.objectives.time_s!);
+    expect(o.points[o.optimum]!.objectives.time_s).toBe(Math.min(...times));
+    expect(o.runs).toBe(0);
+  });
+
+  it('a discrete choice with a continuous variable: a grid and a run per choice; the optimum is the best evaluated', () => {
+    const o = optimiseStudy(
+      study((s) => {
+        s.variables = { cover_fraction: { min: 0, max: 1 }, cover_sides: [1, 2] };
+      }),
+    );
+    for (const sides of [1, 2]) {
+      expect(o.points.filter((p) => p.values.cover_sides === sides).length).toBeGreaterThan(3);
+    }
+    const best = Math.min(...o.points.map((p) => p.objectives.time_s!));
+    expect(o.points[o.optimum]!.objectives.time_s).toBe(best);
+    expect(o.evaluations).toBeLessThanOrEqual(30);
+  });
+});
