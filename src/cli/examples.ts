@@ -53,14 +53,7 @@ export function examplePlan(): Record<string, unknown> {
 /** The example study: the example ride's front wheel, cover fraction x rim depth, time at 300 W under a
  * steering-moment limit. The limit is an invented example value, not a recommendation. */
 export function exampleStudy(): Record<string, unknown> {
-  const wheel = {
-    outer_radius_m: 0.334,
-    tyre_width_m: 0.025,
-    rim_depth_m: 0.05,
-    rim_width_m: 0.028,
-    hub_flange_radius_m: 0.028,
-    spokes: { count: 20, section: 'bladed', diameter_m: 0.002, width_m: 0.0022, thickness_m: 0.001 },
-  };
+  const { cover: _cover, ...wheel } = exampleCase().wheel as Record<string, unknown>;
   return {
     format: 'coversweep-study',
     version: 1,

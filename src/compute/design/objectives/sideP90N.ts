@@ -1,19 +1,12 @@
-import type { WheelLoads } from '../../../model/ride/types';
 import { wheelYawCurveLoads } from '../../../model/ride/wheelYawCurveLoads';
 import { apparentWind } from '../../../model/wind/apparentWind';
 import { weightedQuantile } from '../../../model/wind/weightedQuantile';
 import type { DesignRide, RideObjective } from '../types';
 import { ALWAYS } from './numberOrNaN';
+import { wheelLoadsRecord } from './wheelLoadsRecord';
 
 const wind = { airspeedMps: 0, yawRad: 0 };
-const loads: WheelLoads = {
-  axialN: 0,
-  sideN: 0,
-  rollMomentNm: 0,
-  steeringMomentNm: 0,
-  axleTorqueNm: 0,
-  mirrored: false,
-};
+const loads = wheelLoadsRecord();
 
 /** |side force| (N) of the design in every hub-height wind state of the ride at its constant speed. */
 export function rideSideForcesN(d: DesignRide): Float64Array {

@@ -1,17 +1,10 @@
-import type { WheelLoads } from '../../../model/ride/types';
 import { wheelYawCurveLoads } from '../../../model/ride/wheelYawCurveLoads';
 import { apparentWind } from '../../../model/wind/apparentWind';
 import type { RideObjective } from '../types';
+import { wheelLoadsRecord } from './wheelLoadsRecord';
 
 const wind = { airspeedMps: 0, yawRad: 0 };
-const loads: WheelLoads = {
-  axialN: 0,
-  sideN: 0,
-  rollMomentNm: 0,
-  steeringMomentNm: 0,
-  axleTorqueNm: 0,
-  mirrored: false,
-};
+const loads = wheelLoadsRecord();
 
 /**
  * The largest |steering moment| of a front wheel in the ride's design gust (N m): the gust (hub mean wind
