@@ -77,7 +77,7 @@ export function exampleStudy(): Record<string, unknown> {
     search: {
       grid_points: 5,
       starts: 3,
-      max_evaluations: 120,
+      max_evaluations: 200,
       tolerance: 0.002,
       lattice_span: 12,
       lattice_chord: 6,
