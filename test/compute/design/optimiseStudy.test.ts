@@ -58,7 +58,7 @@ describe('optimiseStudy on the example study (cover fraction x rim depth, time a
     const u = outcome.uncertainty.find((x) => x.id === 'time_s')!;
     expect(u.values[0]).toBe(opt.objectives.time_s);
     expect(u.absolute >= 0 && Number.isFinite(u.absolute), `uncertainty ${JSON.stringify(u)}`).toBe(true);
-  });
+  }, 300_000);
 
   it('the convergence lattices coarsen by 1.5 and 2.25, as the solve does (24 x 12 -> 16 x 8 -> 11 x 5)', () => {
     expect(convergenceLattices({ span: 24, chord: 12 })).toEqual([
