@@ -152,7 +152,8 @@ export function optimiseStudy(study: DesignStudy, onProgress?: StudyProgress): S
     const perStep = Math.floor(sweepBudget / front.limitSteps);
     for (let k = 1; k <= front.limitSteps; k++) {
       const limit = lo + ((hi - lo) * k) / (front.limitSteps + 1);
-      const lim = { ...limits, [h]: Math.min(limit, limits[h] ?? Number.POSITIVE_INFINITY) };
+      // The front shows the trade-off beyond the study's own limit on h too: the sweep replaces it.
+      const lim = { ...limits, [h]: limit };
       const start = bestOf(points, lim);
       const at = where.get(start.index)!;
       run(at.combo, at.u, lim, SWEEP_STEP, perStep);

@@ -4,7 +4,7 @@
  * click on a row (or Enter on it) calls `onSelect` with the design's index. The optimum and the
  * front's designs are marked, the selected row highlighted, and the cautions stand under the table.
  */
-import type { StudyDocument } from '../../compute/design/index';
+import { designVariable, type StudyDocument } from '../../compute/design/index';
 import { el } from '../dom';
 import { studyCautions } from './studyCautions';
 import {
@@ -29,7 +29,7 @@ export function designColumns(doc: StudyDocument): StudyColumn[] {
   const seen = new Set<string>();
   const cols: StudyColumn[] = doc.variables.map((v) => ({
     key: v.id,
-    label: v.id.replaceAll('_', ' '),
+    label: designVariable(v.id)?.label ?? v.id,
     unit: v.unit,
     from: 'design',
   }));
