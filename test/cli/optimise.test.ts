@@ -78,6 +78,19 @@ describe('coversweep optimise', () => {
     expect(JSON.parse(r.stdout).optimum.meets_limits).toBe(true);
   });
 
+  it('when no design meets the limits: exit 0, the least violating design, said plainly', async () => {
+    const s = smallStudy();
+    s.limits = { steering_gust_Nm: 0.01 };
+    writeFileSync(join(dir, 'strict.json'), JSON.stringify(s));
+    const r = await run(['optimise', 'strict.json', '--json', 'strict-out.json']);
+    expect(r.code, r.stderr).toBe(0);
+    expect(r.stderr).toContain('no design met every limit; least violating design');
+    const doc = JSON.parse(readFileSync(join(dir, 'strict-out.json'), 'utf8'));
+    expect(doc.feasible).toBe(false);
+    const least = Math.min(...doc.designs.map((d: { violation: number }) => d.violation));
+    expect(doc.optimum.violation).toBe(least);
+  });
+
   it('an invalid study: exit 2, the field and the rule on stderr, nothing on stdout, no file', async () => {
     const s = smallStudy();
     (s.variables as Record<string, unknown>).cover_fraction = { min: 0, max: 2 };

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import type { StudyDocument } from '../../../src/compute/design/index';
 import { designColumns } from '../../../src/ui/study/designTable';
+import { optimumLines } from '../../../src/ui/study/optimumSummary';
 import { cellText, headerText, nearestPoint, sortRows, studyRows } from '../../../src/ui/study/studyRows';
 import { tradeOffData } from '../../../src/ui/study/tradeOffPlot';
 
@@ -96,6 +97,23 @@ describe('study view helpers (no DOM)', () => {
       'objectives:time_s',
       'objectives:steering_gust_Nm',
       'saved:time_s',
+    ]);
+  });
+});
+
+describe('optimum summary lines', () => {
+  it('the design, the objective with its uncertainty and saving, each limit with its source', () => {
+    const d = doc() as unknown as Record<string, unknown>;
+    const optimum = d.optimum as Record<string, unknown>;
+    optimum.uncertainty = [{ id: 'time_s', absolute: 1.2 }];
+    d.feasible = true;
+    d.search = { evaluations: 4, lattice_span: 12, lattice_chord: 6 };
+    (d.limits as Record<string, unknown>[])[0]!.source = 'the study file (no default)';
+    expect(optimumLines(d as unknown as StudyDocument)).toEqual([
+      'Optimum: cover_fraction 0.3',
+      'Time over the ride (s): 95 ± 1.2 (lattice); saved against the baseline: 5',
+      'Steering moment (N m): 1.5, limit 2.5 (the study file (no default))',
+      '4 designs evaluated on a 12 x 6 lattice',
     ]);
   });
 });
