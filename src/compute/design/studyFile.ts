@@ -200,8 +200,10 @@ export function validateStudy(given: unknown): Parsed<DesignStudy> {
   const handlingIds = OBJECTIVES.filter(
     (o) => o.kind === 'handling' && (r === null || o.applies(r) === null),
   ).map((o) => o.id);
+  // Default: the first limited handling figure, else the steering moment (a front wheel) or the lean.
   const dfltHandling =
-    Object.keys(limits)[0] ?? (r?.position === 'rear' ? 'lean_gust_deg' : 'steering_gust_Nm');
+    Object.keys(limits).find((id) => handlingIds.includes(id)) ??
+    (r?.position === 'rear' ? 'lean_gust_deg' : 'steering_gust_Nm');
   const handling = front.handling ?? dfltHandling;
   if (typeof handling !== 'string' || !handlingIds.includes(handling)) {
     errors.push(

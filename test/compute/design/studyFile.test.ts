@@ -79,6 +79,15 @@ describe('the study file', () => {
     ).toBe(true);
   });
 
+  it('the front defaults to the first limited handling figure (a limit on power is not one)', () => {
+    const s = structuredClone(example);
+    s.limits = { power_W: 400, lean_gust_deg: 2 };
+    delete s.front;
+    const p = validateStudy(s);
+    if (!p.ok) throw new Error(p.errors.join('\n'));
+    expect(p.value.front).toEqual({ handling: 'lean_gust_deg', limitSteps: 3 });
+  });
+
   it('a rear wheel: the steering moment is neither an objective nor a limit', () => {
     const errors = errorsOf((s) => {
       s.ride.position = 'rear';
