@@ -39,6 +39,7 @@ import {
   readErrorReason,
 } from './io';
 import { nodeWorkerSpawner } from './nodeWorker';
+import { runOptimise } from './optimiseCommand';
 import { AtomicFile, checkOutputPath, OutputTakenError } from './outputFile';
 import { parseOptions } from './parseOptions';
 import { progressReporter } from './progress';
@@ -65,6 +66,7 @@ Usage:
                                            wind-averaged drag, crosswind handling (JSON on stdout)
   coversweep compare CASE.json DATA.csv    hold measured or simulated data against the model:
                                            unit and axis slips, residuals, --calibrate
+  coversweep optimise STUDY.json           the best cover and rim for a ride within handling limits
   coversweep validate [--json]             the model against the built-in reference cases (published
                                            and exact values, with sources and bands): PASS or FAIL
   coversweep <command> --help              help on one command
@@ -472,6 +474,8 @@ export async function main(argv: readonly string[], ioOverrides: Partial<CliIo> 
         });
       case 'validate':
         return runValidate([...rest], io);
+      case 'optimise':
+        return runOptimise([...rest], io);
       default:
         throw new CliInputError(`unknown command "${command}"`, [
           'commands: example, solve, sweep, ride, compare, validate (see coversweep --help)',
