@@ -2,12 +2,14 @@
  * The case file's shape (zod) with the rule of every key in its messages, and the translation of
  * zod's issues into messages naming the key path, the value and the rule.
  */
+
 import { z } from 'zod';
 import {
   STANDARD_ATMOSPHERE_MAX_ALTITUDE_M,
   STANDARD_ATMOSPHERE_MIN_ALTITUDE_M,
 } from '../../model/air/index';
 import { describeValue, keyPathText } from '../describeValue';
+import { unknownKeyMessage } from '../unknownKeyMessage';
 import { LIMITS } from './caseTypes';
 
 interface NumberRule {
@@ -217,10 +219,7 @@ export function issueMessages(issue: z.core.$ZodIssue, raw: unknown): string[] {
   if (issue.code === 'unrecognized_keys') {
     const where = path.map(String).join('.');
     const allowed = ALLOWED_KEYS[where];
-    return issue.keys.map((key) => {
-      const keyPath = where === '' ? key : `${where}.${key}`;
-      return `${keyPath}: unknown key${allowed ? ` (allowed here: ${allowed.join(', ')})` : ''}`;
-    });
+    return issue.keys.map((key) => unknownKeyMessage(where, key, allowed));
   }
   const at = keyPathText(path);
   if (issue.code === 'invalid_type' && valueAt(raw, path) === undefined && path.length > 0) {

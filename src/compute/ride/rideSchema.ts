@@ -1,6 +1,8 @@
 /** The ride file's shape (zod), with messages in the case file's style (key path, value, rule). */
+
 import { z } from 'zod';
 import { describeValue, keyPathText, MAX_NAME_CHARS, nameTooLong } from '../caseFile';
+import { unknownKeyMessage } from '../unknownKeyMessage';
 import { RIDE_LIMITS } from './rideFileTypes';
 
 interface Rule {
@@ -206,10 +208,7 @@ export function issueMessages(issue: z.core.$ZodIssue, raw: unknown): string[] {
     const generic = where.replace(/\.\d+$/, '').replace(/^course$/, 'course[]');
     const allowed = generic === 'course[]' ? Object.keys(segmentShape) : ALLOWED_KEYS[where];
     const at = keyPathText(path);
-    return issue.keys.map((key) => {
-      const keyPath = where === '' ? key : `${at}.${key}`;
-      return `${keyPath}: unknown key${allowed ? ` (allowed here: ${allowed.join(', ')})` : ''}`;
-    });
+    return issue.keys.map((key) => unknownKeyMessage(where === '' ? '' : at, key, allowed));
   }
   const at = keyPathText(path);
   let v: unknown = raw;
