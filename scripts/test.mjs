@@ -1,5 +1,5 @@
 #!/usr/bin/env node
-// The project's one test command: format+lint, type-check, then every vitest suite.
+// The project's one test command: format+lint, type-check, the layout check, then every vitest suite.
 // Ends with a plain `N passed, N failed, N skipped` line, read by CI, and fails when no test ran.
 import { spawnSync } from 'node:child_process';
 import { mkdirSync, readFileSync, rmSync } from 'node:fs';
@@ -13,6 +13,7 @@ function run(label, cmd, args) {
 let failedSteps = 0;
 failedSteps += run('format and lint', 'npx', ['biome', 'check', '.']) === 0 ? 0 : 1;
 failedSteps += run('type-check', 'npx', ['tsc', '--noEmit', '-p', 'tsconfig.json']) === 0 ? 0 : 1;
+failedSteps += run('layout (cycles, layers, file size)', 'node', ['scripts/checkLayout.mjs']) === 0 ? 0 : 1;
 
 mkdirSync('test-results', { recursive: true });
 const jsonPath = 'test-results/vitest.json';
@@ -43,7 +44,7 @@ try {
   failed += 1;
 }
 if (failedSteps > 0)
-  process.stderr.write(`\n${failedSteps} check step(s) failed (lint/format or type-check)\n`);
+  process.stderr.write(`\n${failedSteps} check step(s) failed (lint/format, type-check or layout)\n`);
 failed += failedSteps;
 console.log(`${passed} passed, ${failed} failed, ${skipped} skipped`);
 if (passed === 0) {

@@ -5,11 +5,12 @@
  * and an input-uncertainty band. Without --map it prints the guessed map for confirmation and stops.
  * Exit codes: 0 success, 1 internal error, 2 invalid input or usage (messages on stderr, nothing on stdout).
  */
-import { parseArgs } from 'node:util';
+import { resolve } from 'node:path';
 import { parseCaseFile } from '../compute/caseFile';
 import {
   CALIBRATABLE,
   type Calibratable,
+  calibratedCase,
   checkDataSize,
   guessMap,
   MAX_DATA_BYTES,
@@ -20,6 +21,11 @@ import {
   type UncertainInput,
   type UncertainRange,
 } from '../compute/compare/index';
+import { formatCompareTable } from './formatCompare';
+import { outputFormat } from './formatTable';
+import { CliInputError } from './io';
+import { AtomicFile, checkOutputPath } from './outputFile';
+import { OptionError, parseOptions } from './parseOptions';
 
 export interface CompareIo {
   stdout(s: string): void;
@@ -27,6 +33,8 @@ export interface CompareIo {
   /** The file's text; `maxBytes` is the limit for this kind of file. */
   readFile(p: string, maxBytes: number): string;
   fileSize(p: string): number;
+  /** Folder that relative output paths (--write-case) are resolved against (default: the process's). */
+  cwd?: string;
 }
 
 export const COMPARE_HELP = `Usage: coversweep compare CASE.json DATA.csv [--map MAP.json] [options]
@@ -34,8 +42,8 @@ export const COMPARE_HELP = `Usage: coversweep compare CASE.json DATA.csv [--map
 Hold a table of measured or simulated results (CSV, or a tab-separated table pasted from a
 spreadsheet) against the model for the wheel and conditions of CASE.json. Prints JSON (format
 "coversweep-compare"): the data converted to SI and the tool's axes, flags for likely slips (units,
-axes, reference area, side-force sign, zero-yaw offset, speed scaling), and residuals data - model
-with the model's band. DATA.csv is never modified (at most ${MAX_DATA_BYTES / (1024 * 1024)} MB).
+axes, reference area, side-force sign, zero-yaw offset, yaw symmetry, speed scaling), and residuals
+data - model with the model's band. DATA.csv is never modified (at most ${MAX_DATA_BYTES / (1024 * 1024)} MB).
 
 Without --map, the column mapping guessed from the header is printed (a map file) for you to check,
 save and pass with --map; nothing is compared.
@@ -55,6 +63,12 @@ Options:
   --convergence           add a lattice convergence study (three refinements, GCI per output)
   --uncertainty SPEC      add a Monte Carlo band; SPEC = name=min:max[,name=min:max...] with names
                           ${UNCERTAIN_INPUTS.join(', ')}
+  --write-case FILE       with --calibrate: write the calibrated case file (the case with the fitted
+                          parameters in its "model" section, named CALIBRATED); \`coversweep solve\` of
+                          it draws the fitted curve. Written atomically; never over an existing file
+                          without --force
+  --force                 allow --write-case to replace an existing file
+  --format json|table     json (default): the report document on stdout; table: a readable summary
   --samples N             Monte Carlo draws (default 64)
   --seed N                Monte Carlo seed (default 1)
   --help                  show this help
@@ -129,10 +143,9 @@ function integerOption(
 export function runCompare(argv: string[], io: CompareIo): number {
   const args = argv[0] === 'compare' ? argv.slice(1) : argv;
   try {
-    const { values, positionals } = parseArgs({
+    const { values, positionals } = parseOptions('compare', {
       args,
       allowPositionals: true,
-      strict: true,
       options: {
         map: { type: 'string' },
         calibrate: { type: 'boolean' },
@@ -141,6 +154,9 @@ export function runCompare(argv: string[], io: CompareIo): number {
         uncertainty: { type: 'string' },
         samples: { type: 'string' },
         seed: { type: 'string' },
+        'write-case': { type: 'string' },
+        force: { type: 'boolean' },
+        format: { type: 'string' },
         help: { type: 'boolean', short: 'h' },
       },
     });
@@ -155,6 +171,17 @@ export function runCompare(argv: string[], io: CompareIo): number {
       ]);
     }
     const [casePath, dataPath] = positionals as [string, string];
+    const format = outputFormat(values.format);
+    const writeCase = values['write-case'];
+    let writePath: string | undefined;
+    if (writeCase !== undefined) {
+      if (!values.calibrate) throw new UsageError(['--write-case: only used with --calibrate']);
+      if (values.map === undefined) throw new UsageError(['--write-case: needs --map (and --calibrate)']);
+      writePath = resolve(io.cwd ?? process.cwd(), writeCase);
+      checkOutputPath(writePath, values.force === true, '--write-case');
+    } else if (values.force) {
+      throw new UsageError(['--force: only used with --write-case']);
+    }
     const parsedCase = parseCaseFile(readText(io, casePath, 'case file', 4 * 1024 * 1024));
     if (!parsedCase.ok) throw new UsageError(parsedCase.errors.map((e) => `${casePath}: ${e}`));
     const caseFile = parsedCase.value;
@@ -217,21 +244,38 @@ export function runCompare(argv: string[], io: CompareIo): number {
       throw error;
     }
     if (!result.ok) throw new UsageError(result.errors.map((e) => `${dataPath}: ${e}`));
+    if (writePath !== undefined && result.value.calibration) {
+      const text = `${JSON.stringify(calibratedCase(caseFile, result.value.calibration), null, 2)}\n`;
+      const file = new AtomicFile(writePath, values.force === true);
+      try {
+        file.write(text);
+        file.commit();
+      } catch (error) {
+        file.abort();
+        throw error;
+      }
+    }
     io.stdout(
-      `${JSON.stringify(result.value, (_k, v) => (typeof v === 'number' && !Number.isFinite(v) ? null : v), 2)}\n`,
+      format === 'table'
+        ? formatCompareTable(result.value)
+        : `${JSON.stringify(result.value, (_k, v) => (typeof v === 'number' && !Number.isFinite(v) ? null : v), 2)}\n`,
     );
-    for (const f of result.value.flags) io.stderr(`flag ${f.code}: ${f.message}\n`);
+    // The table lists the flags itself; with JSON on stdout they are repeated on stderr for a reader.
+    if (format === 'json') for (const f of result.value.flags) io.stderr(`flag ${f.code}: ${f.message}\n`);
+    if (writeCase !== undefined) io.stderr(`wrote ${writeCase} (the calibrated case)\n`);
     return 0;
   } catch (error) {
     if (error instanceof UsageError) {
       for (const m of error.messages) io.stderr(`coversweep compare: ${m}\n`);
       return 2;
     }
-    if (
-      error instanceof TypeError &&
-      /Unknown option|Unexpected argument|argument missing/i.test(error.message)
-    ) {
-      io.stderr(`coversweep compare: ${error.message}\nrun "coversweep compare --help" for the usage\n`);
+    if (error instanceof CliInputError) {
+      io.stderr(`coversweep compare: ${error.message}\n`);
+      for (const m of error.messages) io.stderr(`  ${m}\n`);
+      return 2;
+    }
+    if (error instanceof OptionError) {
+      io.stderr(`coversweep ${error.message}\nrun "coversweep compare --help" for the usage\n`);
       return 2;
     }
     io.stderr(

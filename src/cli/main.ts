@@ -6,7 +6,7 @@
 import { readFileSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
 import { resolve } from 'node:path';
-import { parseArgs } from 'node:util';
+import type { ParseArgsConfig } from 'node:util';
 import {
   caseToModelInput,
   parseCaseFile,
@@ -27,6 +27,8 @@ import {
 import { csvHeader, documentCsvLines, errorCsvLine } from '../compute/resultTable';
 import { runCompare } from './compareCommand';
 import { exampleCase, examplePlan } from './examples';
+import { formatSolveTable } from './formatSolve';
+import { outputFormat } from './formatTable';
 import {
   CliInputError,
   type CliIo,
@@ -37,7 +39,9 @@ import {
   readErrorReason,
 } from './io';
 import { nodeWorkerSpawner } from './nodeWorker';
+import { runOptimise } from './optimiseCommand';
 import { AtomicFile, checkOutputPath, OutputTakenError } from './outputFile';
+import { parseOptions } from './parseOptions';
 import { progressReporter } from './progress';
 import { InputFileError, readInputFile } from './readInputFile';
 import { refuseRepeatedOptions } from './refuseRepeatedOptions';
@@ -62,6 +66,7 @@ Usage:
                                            wind-averaged drag, crosswind handling (JSON on stdout)
   coversweep compare CASE.json DATA.csv    hold measured or simulated data against the model:
                                            unit and axis slips, residuals, --calibrate
+  coversweep optimise STUDY.json           the best cover and rim for a ride within handling limits
   coversweep validate [--json]             the model against the built-in reference cases (published
                                            and exact values, with sources and bands): PASS or FAIL
   coversweep <command> --help              help on one command
@@ -81,7 +86,7 @@ Print an example case file (an invented wheel, "Demo 50 mm half-cover") on stdou
 example plan file that varies rim depth and cover fraction. Save it, edit it, then run
   coversweep solve case.json      or      coversweep sweep plan.json --out results.csv
 `,
-  solve: `Usage: coversweep solve CASE.json [--out RESULT.json] [--force]
+  solve: `Usage: coversweep solve CASE.json [--out RESULT.json] [--force] [--format json|table]
 
 Solve one case file: every airspeed x yaw angle it lists. Prints the result document (JSON,
 format "coversweep-result") on stdout, or writes it to --out atomically.
@@ -89,6 +94,7 @@ format "coversweep-result") on stdout, or writes it to --out atomically.
 Options:
   --out FILE   write the document to FILE instead of stdout (refuses to overwrite without --force)
   --force      allow --out to replace an existing file
+  --format F   json (default): the result document; table: a readable summary of the same results
   --help       show this help
 `,
   sweep: `Usage: coversweep sweep PLAN.json [--out results.csv|results.json] [--workers N] [--force]
@@ -121,12 +127,12 @@ function version(): string {
   }
 }
 
-/** Run an argument parser, turning its complaints into usage errors (exit 2). */
-function parseCommandArgs<T>(command: string, parse: () => T): T {
+/** Parse a command's options, turning complaints into usage errors (exit 2) with a nearest-option hint. */
+function parseCommandArgs<T extends ParseArgsConfig>(command: string, config: T) {
   try {
-    return parse();
+    return parseOptions(command, config);
   } catch (error) {
-    throw new CliInputError(`${command}: ${error instanceof Error ? error.message : String(error)}`, [
+    throw new CliInputError(error instanceof Error ? error.message : String(error), [
       `see: coversweep ${command} --help`,
     ]);
   }
@@ -157,9 +163,11 @@ function onePositional(command: string, positionals: string[], what: string): st
 }
 
 function commandExample(args: string[], io: CliIo): number {
-  const { values, positionals } = parseCommandArgs('example', () =>
-    parseArgs({ args, options: { plan: { type: 'boolean' }, ...HELP_OPTION }, allowPositionals: true }),
-  );
+  const { values, positionals } = parseCommandArgs('example', {
+    args,
+    options: { plan: { type: 'boolean' }, ...HELP_OPTION },
+    allowPositionals: true,
+  });
   if (values.help) {
     io.stdout(HELP.example!);
     return EXIT_OK;
@@ -171,14 +179,17 @@ function commandExample(args: string[], io: CliIo): number {
 
 function commandSolve(args: string[], io: CliIo): number {
   refuseRepeatedOptions('solve', args, ['out']);
-  const { values, positionals } = parseCommandArgs('solve', () =>
-    parseArgs({ args, options: OUT_OPTIONS, allowPositionals: true }),
-  );
+  const { values, positionals } = parseCommandArgs('solve', {
+    args,
+    options: { ...OUT_OPTIONS, format: { type: 'string' } },
+    allowPositionals: true,
+  });
   if (values.help) {
     io.stdout(HELP.solve!);
     return EXIT_OK;
   }
   const path = onePositional('solve', positionals, 'case file');
+  const format = outputFormat(values.format);
   const outPath = values.out === undefined ? undefined : resolve(io.cwd, values.out);
   if (outPath !== undefined) checkOutputPath(outPath, values.force === true);
   const parsed = parseCaseFile(readJsonFile(path, io.cwd, 'case file'));
@@ -191,7 +202,7 @@ function commandSolve(args: string[], io: CliIo): number {
     if (!(error instanceof RangeError)) throw error;
     throw new CliInputError(`the model cannot solve the case in ${path}:`, [error.message]);
   }
-  const text = `${JSON.stringify(document, null, 2)}\n`;
+  const text = format === 'table' ? formatSolveTable(document) : `${JSON.stringify(document, null, 2)}\n`;
   if (outPath === undefined) {
     io.stdout(text);
   } else {
@@ -319,9 +330,11 @@ function openOutput(path: string, force: boolean, io: CliIo): AtomicFile {
 
 async function commandSweep(args: string[], io: CliIo): Promise<number> {
   refuseRepeatedOptions('sweep', args, ['out', 'workers']);
-  const { values, positionals } = parseCommandArgs('sweep', () =>
-    parseArgs({ args, options: { ...OUT_OPTIONS, workers: { type: 'string' } }, allowPositionals: true }),
-  );
+  const { values, positionals } = parseCommandArgs('sweep', {
+    args,
+    options: { ...OUT_OPTIONS, workers: { type: 'string' } },
+    allowPositionals: true,
+  });
   if (values.help) {
     io.stdout(HELP.sweep!);
     return EXIT_OK;
@@ -457,9 +470,12 @@ export async function main(argv: readonly string[], ioOverrides: Partial<CliIo> 
           stderr: io.stderr,
           readFile: (path, maxBytes) => readInputFile(resolve(io.cwd, path), maxBytes),
           fileSize: () => 0, // readFile checks the size of what it reads, whatever stat says
+          cwd: io.cwd,
         });
       case 'validate':
         return runValidate([...rest], io);
+      case 'optimise':
+        return runOptimise([...rest], io);
       default:
         throw new CliInputError(`unknown command "${command}"`, [
           'commands: example, solve, sweep, ride, compare, validate (see coversweep --help)',

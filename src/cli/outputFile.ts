@@ -46,7 +46,7 @@ function kindOf(stats: Stats): string {
 }
 
 /** Why `path` may not be written (a message), or null when it is a new name or (with force) a regular file. */
-function outputRefusal(path: string, force: boolean): string | null {
+function outputRefusal(path: string, force: boolean, option = '--out'): string | null {
   const stats = lstatOrNull(path);
   if (stats === null) return null;
   if (stats.isSymbolicLink()) {
@@ -57,18 +57,18 @@ function outputRefusal(path: string, force: boolean): string | null {
     } catch {
       // a dangling link
     }
-    return `--out ${path}: is a symbolic link (to ${target}); name the file itself or a new name`;
+    return `${option} ${path}: is a symbolic link (to ${target}); name the file itself or a new name`;
   }
   if (!stats.isFile()) {
-    return `--out ${path}: is ${kindOf(stats)}, not a regular file; outputs are regular files or new names (never replaced, even with --force)`;
+    return `${option} ${path}: is ${kindOf(stats)}, not a regular file; outputs are regular files or new names (never replaced, even with --force)`;
   }
-  if (!force) return `--out ${path}: the file already exists; use --force to overwrite it`;
+  if (!force) return `${option} ${path}: the file already exists; use --force to overwrite it`;
   return null;
 }
 
 /** Check an output path before any work is done: its folder exists, and the path is a new name or
- * (with --force) a regular file. */
-export function checkOutputPath(path: string, force: boolean): void {
+ * (with --force) a regular file. `option` names the option in messages. */
+export function checkOutputPath(path: string, force: boolean, option = '--out'): void {
   const dir = dirname(path);
   let dirStats: Stats | null = null;
   try {
@@ -77,9 +77,9 @@ export function checkOutputPath(path: string, force: boolean): void {
     dirStats = null;
   }
   if (dirStats === null || !dirStats.isDirectory()) {
-    throw new CliInputError(`--out ${path}: the folder ${dir} does not exist`);
+    throw new CliInputError(`${option} ${path}: the folder ${dir} does not exist`);
   }
-  const refusal = outputRefusal(path, force);
+  const refusal = outputRefusal(path, force, option);
   if (refusal) throw new CliInputError(refusal);
 }
 

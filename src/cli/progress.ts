@@ -1,8 +1,9 @@
 import type { SweepProgress } from '../compute/planFile';
+import { remainingTime } from './remainingTime';
 
 /**
  * Sweep progress on stderr: a redrawn bar when stderr is a terminal, otherwise a plain line at each
- * 10 % step (at most one per two seconds, plus the last).
+ * 10 % step (at most one per two seconds, plus the last). The time left is smoothed (remainingTime).
  */
 export function progressReporter(
   write: (text: string) => void,
@@ -13,11 +14,13 @@ export function progressReporter(
   let lastDraw = 0;
   let lastStep = -1;
   let lastLine = Number.NEGATIVE_INFINITY;
+  const left = remainingTime();
   return (p) => {
     const fraction = p.pointsTotal > 0 ? p.pointsDone / p.pointsTotal : 1;
     const done = p.casesDone === p.casesTotal;
     const elapsedS = (now() - start) / 1000;
-    const leftS = fraction > 0 && !done ? (elapsedS * (1 - fraction)) / fraction : 0;
+    left.update(p.pointsDone, elapsedS);
+    const leftS = done ? 0 : (left.estimate(p.pointsTotal, elapsedS) ?? 0);
     const text = `${Math.floor(fraction * 100)}% ${p.casesDone}/${p.casesTotal} cases, ${p.pointsDone}/${p.pointsTotal} points, ${elapsedS.toFixed(1)} s${leftS > 0 ? `, about ${Math.ceil(leftS)} s left` : ''}`;
     if (isTTY) {
       const t = now();

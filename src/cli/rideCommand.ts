@@ -3,11 +3,13 @@
  * (JSON) on stdout. Exit codes as for `solve`: 0 success, 1 internal error, 2 invalid input or usage
  * (messages naming the field and the rule on stderr, nothing on stdout).
  */
-import { parseArgs } from 'node:util';
 import { parseRideFile, solveRide } from '../compute/ride/index';
+import { formatRideTable } from './formatRide';
+import { type OutputFormat, outputFormat } from './formatTable';
 import { readErrorReason } from './io';
+import { parseOptions } from './parseOptions';
 
-export const RIDE_HELP = `Usage: coversweep ride RIDE.json
+export const RIDE_HELP = `Usage: coversweep ride RIDE.json [--format json|table]
 
 Compare a wheel design with a baseline on the road: power at constant speed, time at constant power
 over a distance or a course, wind-averaged drag and side force, the yaw angles met, and handling (the
@@ -18,6 +20,8 @@ Results are estimates from a reduced-order model: allow margin for gusts and lig
 qualified testing and the competition's rules before riding a design.
 
 Options:
+  --format F   json (default): the result document; table: a readable summary (design, baseline,
+               difference) with the cautions
   --help       show this help
 `;
 
@@ -35,18 +39,16 @@ function fail(io: RideIo, headline: string, messages: string[] = []): number {
 
 /** Run `ride` on its arguments (after the command name). Returns the exit code. */
 export function runRide(argv: string[], io: RideIo): number {
-  let values: { help?: boolean };
+  let values: { help?: boolean; format?: string };
   let positionals: string[];
   try {
-    ({ values, positionals } = parseArgs({
+    ({ values, positionals } = parseOptions('ride', {
       args: argv,
-      options: { help: { type: 'boolean', short: 'h' } },
+      options: { help: { type: 'boolean', short: 'h' }, format: { type: 'string' } },
       allowPositionals: true,
     }));
   } catch (error) {
-    return fail(io, `ride: ${error instanceof Error ? error.message : String(error)}`, [
-      'see: coversweep ride --help',
-    ]);
+    return fail(io, error instanceof Error ? error.message : String(error), ['see: coversweep ride --help']);
   }
   if (values.help) {
     io.stdout(RIDE_HELP);
@@ -57,6 +59,12 @@ export function runRide(argv: string[], io: RideIo): number {
     return fail(io, `ride: expected one ride file, got ${positionals.length}: ${positionals.join(' ')}`);
   }
   const path = positionals[0]!;
+  let format: OutputFormat;
+  try {
+    format = outputFormat(values.format);
+  } catch (error) {
+    return fail(io, `ride: ${error instanceof Error ? error.message : String(error)}`);
+  }
   let text: string;
   try {
     text = io.readFile(path);
@@ -67,7 +75,8 @@ export function runRide(argv: string[], io: RideIo): number {
   if (!parsed.ok) return fail(io, `invalid ride file ${path}:`, parsed.errors);
   let out: string;
   try {
-    out = `${JSON.stringify(solveRide(parsed.value), null, 2)}\n`;
+    const result = solveRide(parsed.value);
+    out = format === 'table' ? formatRideTable(result) : `${JSON.stringify(result, null, 2)}\n`;
   } catch (error) {
     const detail = error instanceof Error ? (error.stack ?? error.message) : String(error);
     io.stderr(`coversweep: internal error (please report it): ${detail}\n`);

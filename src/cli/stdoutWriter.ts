@@ -6,7 +6,8 @@
  * write-only; /proc/self/fdinfo gives the open flags).
  */
 import { fstatSync, readFileSync } from 'node:fs';
-import { CliInputError, writeErrorReason } from './io';
+import { CliInputError } from './cliInputError';
+import { writeErrorReason } from './errorReason';
 import { writeAll } from './writeAll';
 
 /** /dev/null is character device 1:3 on Linux. */

@@ -4,8 +4,8 @@
  * FAIL; --json prints the same as a document. Exit codes: 0 every case passed or failed only as a
  * documented known disagreement, 1 some other case failed (or an internal error), 2 usage.
  */
-import { parseArgs } from 'node:util';
 import { formatValidationTable, runValidation } from '../compute/validation/index';
+import { parseOptions } from './parseOptions';
 
 export const VALIDATE_HELP = `Usage: coversweep validate [--json]
 
@@ -33,13 +33,13 @@ export interface ValidateIo {
 export function runValidate(argv: string[], io: ValidateIo): number {
   let values: { json?: boolean; help?: boolean };
   try {
-    ({ values } = parseArgs({
+    ({ values } = parseOptions('validate', {
       args: argv,
       options: { json: { type: 'boolean' }, help: { type: 'boolean', short: 'h' } },
       allowPositionals: false,
     }));
   } catch (error) {
-    io.stderr(`coversweep: error: validate: ${error instanceof Error ? error.message : String(error)}\n`);
+    io.stderr(`coversweep: error: ${error instanceof Error ? error.message : String(error)}\n`);
     io.stderr('  see: coversweep validate --help\n');
     return 2;
   }

@@ -6,7 +6,7 @@
  * reads is refused with a message saying so; nothing is guessed. Today every format is at version 1,
  * so the step lists are empty: the mechanism is exercised by the tests with a stand-in step.
  */
-import { describeValue } from './caseFile';
+import { describeValue } from './describeValue';
 
 /** Largest case, plan, ride or map file accepted (bytes): hand-written files are a few kB. */
 export const MAX_JSON_FILE_BYTES = 4 * 1024 * 1024;

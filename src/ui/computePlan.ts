@@ -9,9 +9,8 @@
  * uncertainty estimate, which the page shows for the current design).
  */
 import { type CaseFile, caseToModelInput } from '../compute/caseFile';
+import type { FlowConditions, WheelInput } from '../compute/model';
 import { degToRad } from '../compute/units';
-import type { WheelInput } from '../model/wheel/solveWheel';
-import type { FlowConditions } from '../model/wheel/types';
 import type { ViewState } from './viewState';
 
 export const SWEEP_FRACTIONS: readonly number[] = [0, 0.1, 0.2, 0.3, 0.4, 0.5, 0.6, 0.7, 0.8, 0.9, 1];

@@ -42,6 +42,7 @@ const demo = {
   ),
   'data.csv': readFileSync('public/demo/demo-tunnel.csv', 'utf8'),
   'map.json': readFileSync('public/demo/demo-map.json', 'utf8'),
+  'slips.json': readFileSync('public/demo/demo-map-slips.json', 'utf8'),
 };
 
 describe('coversweep compare', () => {
@@ -60,6 +61,23 @@ describe('coversweep compare', () => {
     // The file's grams-force became newtons: the first row's drag x g0 / 1000 (NIST SP 811).
     const grams = Number(firstDragCell(demo['data.csv']));
     expect(Math.abs(doc.converted[0].axial_N - (grams / 1000) * 9.80665)).toBeLessThan(1e-12);
+  });
+
+  it('the demo data (mixed units) show no slip with demo-map.json and each slip with demo-map-slips.json', () => {
+    const right = io(demo);
+    expect(runCompare(['case.json', 'data.csv', '--map', 'map.json'], right.io), right.err()).toBe(0);
+    const clean = JSON.parse(right.out()).flags as { code: string }[];
+    expect(clean.filter((f) => f.code !== 'beyond_model_range')).toEqual([]);
+    const t = io(demo);
+    expect(runCompare(['case.json', 'data.csv', '--map', 'slips.json'], t.io), t.err()).toBe(0);
+    const flags = JSON.parse(t.out()).flags as { code: string; output?: string; message: string }[];
+    const find = (code: string, output: string) => flags.find((f) => f.code === code && f.output === output);
+    expect(find('unit_factor', 'axial_N')?.message, t.err()).toMatch(/grams-force.*set its unit to "gf"/);
+    expect(find('unit_factor', 'side_N')?.message, t.err()).toMatch(/pounds-force.*set its unit to "lbf"/);
+    expect(find('side_force_sign', 'side_N')?.message, t.err()).toMatch(
+      /side_force_sign is -1 now.*set side_force_sign to 1\./,
+    );
+    expect(t.err()).toMatch(/^flag unit_factor: axial drag/m);
   });
 
   it('--calibrate adds fitted parameters with intervals', () => {
@@ -131,7 +149,7 @@ describe('coversweep compare', () => {
         /map\.json: columns:/,
       ],
       [demo, ['case.json'], /exactly two files/],
-      [demo, ['case.json', 'data.csv', '--bogus'], /Unknown option/],
+      [demo, ['case.json', 'data.csv', '--bogus'], /unknown option --bogus\n/],
       [demo, ['case.json', 'missing.csv', '--map', 'map.json'], /data file missing\.csv: cannot be read/],
       [
         demo,

@@ -94,6 +94,13 @@ describe('parseCaseFile: defaults', () => {
 });
 
 describe('parseCaseFile: validation messages name the key path, the value and the rule', () => {
+  it('suggests the nearest allowed key for a misspelt one (optimal string alignment distance)', () => {
+    const errors = errorsOf({ wheel: { rim_dept_m: 0.05 } });
+    expect(errors[0], errors.join('\n')).toMatch(
+      /^wheel\.rim_dept_m: unknown key \(did you mean wheel\.rim_depth_m\?\)/,
+    );
+  });
+
   it('reports every error at once', () => {
     const errors = errorsOf({
       wheel: {

@@ -11,7 +11,7 @@
  */
 
 import { leastSquaresCovariance, levenbergMarquardt, studentTQuantile } from '../../model/fit/index';
-import type { CaseFile } from '../caseFile';
+import { type CaseFile, MAX_NAME_CHARS } from '../caseFile';
 import type { ConvertedData } from './convertData';
 import {
   CALIBRATABLE,
@@ -202,5 +202,7 @@ export function calibratedCase(caseFile: CaseFile, result: CalibrationResult): C
   const model = { ...caseFile.model };
   for (const p of result.parameters) model[p.name] = p.value;
   const base = caseFile.name ?? 'case';
-  return { ...caseFile, name: `${base} [CALIBRATED: ${result.label}]`, model };
+  // Within the case file's name limit: the mark is kept whole, the base name cut if need be.
+  const mark = ` [CALIBRATED: ${result.label}]`.slice(0, MAX_NAME_CHARS);
+  return { ...caseFile, name: `${base.slice(0, MAX_NAME_CHARS - mark.length)}${mark}`, model };
 }

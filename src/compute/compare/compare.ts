@@ -5,9 +5,9 @@
 import { type CaseFile, caseAirDensity } from '../caseFile';
 import { type CalibrationOptions, type CalibrationResult, calibrate } from './calibrate';
 import { type ConvergenceOptions, type ConvergenceStudy, convergenceStudy } from './convergenceStudy';
-import { type ConvertedData, convertTable, type DataPoint } from './convertData';
+import { type ConvertedData, convertTable, type DataPoint, pointYawDeg } from './convertData';
 import type { CsvTable } from './csv';
-import { detectSlips, type SlipFlag } from './detectSlips';
+import { detectSlips, type SlipFlag, type SlipLabels } from './detectSlips';
 import type { MapFile } from './mapFile';
 import { createModelEvaluator, modelUncertainty, modelValue, type ParameterValues } from './modelAtData';
 import {
@@ -31,6 +31,8 @@ export interface CompareRequest {
   calibrate?: CalibrationOptions | false;
   convergence?: ConvergenceOptions | false;
   uncertainty?: { ranges: UncertainRange[]; options?: UncertaintyOptions } | false;
+  /** What to call the map's keys in slip messages (default: the map file's keys). */
+  slipLabels?: SlipLabels;
 }
 
 export interface ConvertedRow {
@@ -86,7 +88,7 @@ export const COMPARE_NOTES: readonly string[] = [
 export function convertedRows(conv: ConvertedData): ConvertedRow[] {
   return conv.points.map((p) => ({
     line: p.line,
-    yaw_deg: (p.yawRad * 180) / Math.PI,
+    yaw_deg: pointYawDeg(p),
     airspeed_mps: p.airspeedMps,
     air_density_kgpm3: p.rhoKgPerM3,
     ...p.values,
@@ -109,6 +111,7 @@ export function modelBand(
       pts.push({
         line: 0,
         yawRad: (y * Math.PI) / 180,
+        yawDeg: y,
         airspeedMps: c.airspeedMps,
         rhoKgPerM3: c.rhoKgPerM3,
         values: {},
@@ -120,7 +123,7 @@ export function modelBand(
     for (const out of outputs) {
       const u = modelUncertainty(res[i]!, out);
       rows.push({
-        yaw_deg: (p.yawRad * 180) / Math.PI,
+        yaw_deg: pointYawDeg(p),
         airspeed_mps: p.airspeedMps,
         air_density_kgpm3: p.rhoKgPerM3,
         output: out,
@@ -143,7 +146,7 @@ export function bandGrid(conv: ConvertedData): {
   let hi = 0;
   for (const p of conv.points) {
     if (!seen.has(key(p))) seen.set(key(p), { airspeedMps: p.airspeedMps, rhoKgPerM3: p.rhoKgPerM3 });
-    const d = (p.yawRad * 180) / Math.PI;
+    const d = pointYawDeg(p);
     lo = Math.min(lo, Math.floor(d));
     hi = Math.max(hi, Math.ceil(d));
   }
@@ -168,7 +171,7 @@ export function runComparison(req: CompareRequest): CompareResult {
     map: req.map,
     conversion: { airspeed: conv.airspeedSource, density: conv.densitySource, sources: conv.sources },
     converted: convertedRows(conv),
-    flags: detectSlips(conv, model, req.caseFile),
+    flags: detectSlips(conv, model, req.caseFile, req.slipLabels ? { labels: req.slipLabels } : {}),
     residuals,
     residual_summary: summariseResiduals(residuals),
     band: modelBand(req.caseFile, grid.conditions, grid.yawDeg, conv.outputs),

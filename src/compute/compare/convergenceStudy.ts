@@ -7,7 +7,7 @@
 
 import { gridConvergenceIndex } from '../../model/convergence/index';
 import type { CaseFile } from '../caseFile';
-import type { DataPoint } from './convertData';
+import { type DataPoint, pointYawDeg } from './convertData';
 import { createModelEvaluator, modelValue } from './modelAtData';
 import { OUTPUTS, type Output } from './quantities';
 
@@ -103,7 +103,7 @@ export function convergenceStudy(
         phi3: v[2],
       });
       rows.push({
-        yaw_deg: (p.yawRad * 180) / Math.PI,
+        yaw_deg: pointYawDeg(p),
         airspeed_mps: p.airspeedMps,
         output: out,
         values: v,

@@ -6,6 +6,7 @@
  * and moments by the map's sign. The table itself is never modified.
  */
 import { clipText } from '../clipText';
+import { displayNumber } from '../displayNumber';
 import { type CsvTable, parseNumberCell } from './csv';
 import type { MapFile } from './mapFile';
 import { OUTPUTS, type Output, QUANTITY_OUTPUT, type Quantity, toSI, type Unit } from './quantities';
@@ -14,6 +15,8 @@ export interface DataPoint {
   /** Line of the data file the point comes from (1-based). */
   line: number;
   yawRad: number;
+  /** The yaw as given, in degrees (echoed back as typed; absent for points not read from a file). */
+  yawDeg?: number;
   airspeedMps: number;
   rhoKgPerM3: number;
   /** Measured values in SI and the tool's axes, by output (absent where the cell was empty). */
@@ -37,6 +40,9 @@ export interface ConvertedData {
   /** Unit the airspeed was given in ('mps' when from the map's airspeed_mps). */
   speedUnit: Unit;
   densitySource: string;
+  /** The map's signs, as applied (messages say what to change them to). */
+  sideForceSign?: 1 | -1;
+  yawMomentSign?: 1 | -1;
 }
 
 export type ConvertResult = { ok: true; value: ConvertedData } | { ok: false; errors: string[] };
@@ -176,7 +182,8 @@ export function convertTable(table: CsvTable, map: MapFile, defaultRhoKgPerM3: n
       if (out === 'yaw_moment_Nm' || out === 'steering_moment_Nm') si *= momentSign;
       values[out] = si;
     }
-    points.push({ line, yawRad, airspeedMps, rhoKgPerM3, values });
+    const yawDeg = yawCol < 0 ? 0 : yawUnit === 'deg' ? yawValue : displayNumber((yawRad * 180) / Math.PI);
+    points.push({ line, yawRad, yawDeg, airspeedMps, rhoKgPerM3, values });
   }
   if (errors.length > 0) return { ok: false, errors: errors.slice(0, MAX_ERRORS) };
   if (points.length === 0) return { ok: false, errors: ['no usable data rows after conversion'] };
@@ -188,6 +195,8 @@ export function convertTable(table: CsvTable, map: MapFile, defaultRhoKgPerM3: n
       outputs,
       sources,
       speedUnit: speedCol >= 0 ? speedUnit : 'mps',
+      sideForceSign: sideSign,
+      yawMomentSign: momentSign,
       airspeedSource:
         speedCol >= 0 ? `column "${table.headers[speedCol]}" (${speedUnit})` : 'map airspeed_mps',
       densitySource:
@@ -198,4 +207,9 @@ export function convertTable(table: CsvTable, map: MapFile, defaultRhoKgPerM3: n
             : "the case's air",
     },
   };
+}
+
+/** A point's yaw in degrees as the user gave it, or converted back and rounded for display. */
+export function pointYawDeg(p: DataPoint): number {
+  return p.yawDeg ?? displayNumber((p.yawRad * 180) / Math.PI);
 }

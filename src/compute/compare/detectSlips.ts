@@ -1,372 +1,45 @@
 /**
- * Likely slips in imported data, found by holding the converted data against the model at the same
- * points: a unit mix-up (grams or kilograms-force or pounds-force read as newtons, cm^2 as m^2, km/h as
- * m/s), a reference-area mismatch of coefficients, wind-axis drag mapped as axial drag (or the reverse;
- * the two differ more as yaw grows), a flipped side-force sign, a side force at zero yaw on a symmetric
- * wheel, and forces not scaling with dynamic pressure between speeds. Each flag has a short `code` and a
- * plain-language `message`. The model is an estimate, so a factor is blamed on a slip only when it is
- * large (over 1.8x) and within 30% of a known slip's factor; otherwise a large factor is reported as
- * unexplained. Thresholds: common practice, no source.
+ * Likely slips in imported data: a unit mix-up (grams or kilograms-force or pounds-force read as newtons,
+ * N mm as N m, cm^2 as m^2, km/h as m/s), a reference-area mismatch of coefficients, wind-axis drag mapped
+ * as axial drag (or the reverse; the two differ more as yaw grows), a flipped side-force sign, a side
+ * force at zero yaw on a symmetric wheel, and forces not scaling with dynamic pressure between speeds.
+ * Each flag has a short `code` and a plain-language `message`.
+ *
+ * The data are first held against themselves, so a slip is named even when the uncalibrated model is
+ * itself off: the side force's sign against yaw (wind from the right pushes any wheel to the left, so
+ * side force rises with yaw whatever the wheel), each force's coefficient on the wheel's disc area
+ * against a physical envelope (PHYSICAL_ENVELOPE), the ratio between force columns (a speed slip moves
+ * every force column alike, a unit slip one column), and the scaling with V^2 between speeds. The model
+ * then picks between known unit factors: a factor is blamed on a slip when the data read in the other
+ * unit are inside the envelope and within MODEL_SPREAD of the model while, as mapped, they are outside
+ * the envelope or beyond MODEL_SPREAD; a factor over MIN_FACTOR within SLIP_TOLERANCE of a known slip's
+ * is blamed as before; any other large factor is reported as unexplained. Thresholds: common practice,
+ * no source.
  */
 
 import type { PointResult } from '../../model/wheel/index';
 import type { CaseFile } from '../caseFile';
-import type { ConvertedData, DataPoint } from './convertData';
-import { modelValue } from './modelAtData';
-import { FORCE_UNITS, OUTPUT_LABEL, type Output, SPEED_UNITS, UNIT_TO_SI, type Unit } from './quantities';
+import type { ConvertedData } from './convertData';
+import { axisFlags, factorFlags, signFlags, speedFlags, symmetryFlags, zeroYawFlags } from './slipChecks';
+import type { DetectOptions, SlipFlag } from './slipTypes';
 
-export type SlipCode =
-  | 'unit_factor'
-  | 'speed_unit'
-  | 'area_unit'
-  | 'reference_area'
-  | 'scale_mismatch'
-  | 'side_force_sign'
-  | 'drag_axis'
-  | 'side_force_at_zero_yaw'
-  | 'dynamic_pressure_scaling'
-  | 'beyond_model_range';
-
-export interface SlipFlag {
-  code: SlipCode;
-  message: string;
-  /** The output concerned, when one. */
-  output?: Output;
-  /** The factor data / model found, when relevant. */
-  factor?: number;
-}
-
-/** A factor is blamed on a slip only when |ln r| > ln(MIN_FACTOR) and within SLIP_TOLERANCE of the slip's. */
-export const MIN_FACTOR = 1.8;
-export const SLIP_TOLERANCE = 1.3;
-const RAD = Math.PI / 180;
-
-interface Candidate {
-  factor: number;
-  code: SlipCode;
-  text: string;
-}
-
-function fmt(x: number, digits = 3): string {
-  return Number(x.toPrecision(digits)).toString();
-}
-
-function unitName(u: Unit): string {
-  const names: Partial<Record<Unit, string>> = {
-    N: 'newtons',
-    gf: 'grams-force',
-    kgf: 'kilograms-force',
-    lbf: 'pounds-force',
-    m2: 'm^2',
-    cm2: 'cm^2',
-    mps: 'm/s',
-    kmh: 'km/h',
-    mph: 'mph',
-  };
-  return names[u] ?? u;
-}
-
-/** Least-squares scale through the origin, data ~ k model, and the correlation of the two. */
-function scaleFit(d: number[], m: number[]): { k: number; correlation: number; sse: number } {
-  let dm = 0;
-  let mm = 0;
-  let dd = 0;
-  for (let i = 0; i < d.length; i++) {
-    dm += d[i]! * m[i]!;
-    mm += m[i]! * m[i]!;
-    dd += d[i]! * d[i]!;
-  }
-  const k = mm > 0 ? dm / mm : Number.NaN;
-  const sse = mm > 0 ? dd - (dm * dm) / mm : dd;
-  return { k, correlation: dd > 0 && mm > 0 ? dm / Math.sqrt(dd * mm) : 0, sse: Math.max(0, sse) };
-}
-
-/** Points usable for the factor of one output: present in the data, and not near zero in the model. */
-function pairs(data: readonly DataPoint[], model: readonly PointResult[], out: Output) {
-  const d: number[] = [];
-  const m: number[] = [];
-  const idx: number[] = [];
-  let maxM = 0;
-  for (let i = 0; i < data.length; i++) {
-    if (data[i]!.values[out] === undefined) continue;
-    maxM = Math.max(maxM, Math.abs(modelValue(model[i]!, out)));
-  }
-  for (let i = 0; i < data.length; i++) {
-    const v = data[i]!.values[out];
-    if (v === undefined) continue;
-    const mv = modelValue(model[i]!, out);
-    const lateral = out !== 'axial_N' && out !== 'wind_drag_N';
-    if (lateral && Math.abs(data[i]!.yawRad) < 2 * RAD) continue;
-    if (!(Math.abs(mv) > 0.1 * maxM)) continue;
-    d.push(v);
-    m.push(mv);
-    idx.push(i);
-  }
-  return { d, m, idx };
-}
-
-function candidatesFor(conv: ConvertedData, out: Output, caseFile: CaseFile): Candidate[] {
-  const src = conv.sources[out];
-  if (!src) return [];
-  const list: Candidate[] = [];
-  const R = caseFile.wheel.outer_radius_m;
-  const isForce =
-    FORCE_UNITS.includes(src.unit) && src.quantity !== 'yaw_moment' && src.quantity !== 'steering_moment';
-  if (isForce) {
-    for (const y of FORCE_UNITS) {
-      if (y === src.unit) continue;
-      list.push({
-        factor: UNIT_TO_SI[src.unit] / UNIT_TO_SI[y],
-        code: 'unit_factor',
-        text: `the values look like ${unitName(y)} but the column is mapped as ${unitName(src.unit)} (factor ${fmt(UNIT_TO_SI[src.unit] / UNIT_TO_SI[y])}); set its unit to "${y}"`,
-      });
-    }
-    // A speed given in the wrong unit changes the model's dynamic pressure, not the measured force.
-    const speedUnit = conv.speedUnit;
-    for (const t of SPEED_UNITS) {
-      if (t === speedUnit) continue;
-      const f = (UNIT_TO_SI[t] / UNIT_TO_SI[speedUnit]) ** 2;
-      list.push({
-        factor: f,
-        code: 'speed_unit',
-        text: `the forces match the model as if the airspeed were in ${unitName(t)}, not ${unitName(speedUnit)} (factor ${fmt(f)}, the square of the speed ratio); check the speed's unit`,
-      });
-    }
-  }
-  if (src.quantity === 'drag_area' || src.quantity === 'drag_area_wind') {
-    const other: Unit = src.unit === 'm2' ? 'cm2' : 'm2';
-    const f = UNIT_TO_SI[src.unit] / UNIT_TO_SI[other];
-    list.push({
-      factor: f,
-      code: 'area_unit',
-      text: `the drag areas look like ${unitName(other)} but are mapped as ${unitName(src.unit)} (factor ${fmt(f)}); set the unit to "${other}"`,
-    });
-  }
-  if (src.reference_area_m2 !== undefined) {
-    const a = src.reference_area_m2;
-    const areas: [number, string][] = [
-      [Math.PI * R * R, `the wheel's disc area pi R^2 = ${fmt(Math.PI * R * R, 4)} m^2`],
-      [
-        2 * R * caseFile.wheel.tyre_width_m,
-        `a frontal area, diameter x tyre width = ${fmt(2 * R * caseFile.wheel.tyre_width_m, 4)} m^2`,
-      ],
-      [4 * Math.PI * R * R, `pi D^2 = ${fmt(4 * Math.PI * R * R, 4)} m^2 (the diameter used as a radius)`],
-      [
-        (Math.PI * R * R) / 4,
-        `pi R^2 / 4 = ${fmt((Math.PI * R * R) / 4, 4)} m^2 (the radius used as a diameter)`,
-      ],
-      [1, '1 m^2 (the column may hold drag areas in m^2, not coefficients)'],
-      [1e-4, '1 cm^2 (the column may hold drag areas in cm^2, not coefficients)'],
-    ];
-    for (const [area, text] of areas) {
-      if (Math.abs(Math.log(area / a)) < Math.log(1.05)) continue;
-      list.push({
-        factor: a / area,
-        code: 'reference_area',
-        text: `the coefficients look based on ${text}, not the mapped ${fmt(a, 4)} m^2; set reference_area_m2 accordingly`,
-      });
-    }
-  }
-  return list;
-}
-
-function factorFlags(
-  conv: ConvertedData,
-  model: readonly PointResult[],
-  caseFile: CaseFile,
-  flags: SlipFlag[],
-): void {
-  for (const out of conv.outputs) {
-    const { d, m } = pairs(conv.points, model, out);
-    if (d.length === 0) continue;
-    const fit = scaleFit(d, m);
-    if (!Number.isFinite(fit.k)) continue;
-    const lateral = out === 'side_N' || out === 'yaw_moment_Nm' || out === 'steering_moment_Nm';
-    if (lateral && fit.k < 0 && fit.correlation < -0.8) {
-      flags.push({
-        code: 'side_force_sign',
-        output: out,
-        factor: fit.k,
-        message:
-          `the measured ${OUTPUT_LABEL[out]} has the opposite sign to the model's at yaw (best fit: data = ${fmt(fit.k)} x model over ${d.length} points). ` +
-          "Here a positive yaw is wind from the rider's right and pushes the wheel to the left (positive side force); " +
-          "if your balance's lateral axis points to the right, set side_force_sign to -1 in the map.",
-      });
-    }
-    const r = Math.abs(fit.k);
-    if (!(r > 0) || Math.abs(Math.log(r)) < Math.log(MIN_FACTOR)) continue;
-    const matches = candidatesFor(conv, out, caseFile)
-      .map((c) => ({ c, miss: Math.abs(Math.log(r / c.factor)) }))
-      .filter((x) => x.miss < Math.log(SLIP_TOLERANCE))
-      .sort((a, b) => a.miss - b.miss);
-    const head = `${OUTPUT_LABEL[out]}: the data are ${fmt(r)} times the model over ${d.length} points`;
-    if (matches.length > 0) {
-      const best = matches[0]!.c;
-      const others = matches.slice(1).map((x) => x.c.text);
-      flags.push({
-        code: best.code,
-        output: out,
-        factor: r,
-        message: `${head}; ${best.text}${others.length > 0 ? `. Also possible: ${others.join('; ')}` : ''}.`,
-      });
-    } else {
-      flags.push({
-        code: 'scale_mismatch',
-        output: out,
-        factor: r,
-        message: `${head}, and no common unit, area or speed slip explains that factor: check the wheel description, the reference area, a tare, or calibrate the model.`,
-      });
-    }
-  }
-}
-
-function axisFlags(conv: ConvertedData, model: readonly PointResult[], flags: SlipFlag[]): void {
-  for (const [own, other] of [
-    ['axial_N', 'wind_drag_N'],
-    ['wind_drag_N', 'axial_N'],
-  ] as const) {
-    if (!conv.outputs.includes(own) || conv.outputs.includes(other)) continue;
-    const d: number[] = [];
-    const mOwn: number[] = [];
-    const mOther: number[] = [];
-    let maxDiff = 0;
-    let maxOwn = 0;
-    for (let i = 0; i < conv.points.length; i++) {
-      const v = conv.points[i]!.values[own];
-      if (v === undefined) continue;
-      const a = modelValue(model[i]!, own);
-      const b = modelValue(model[i]!, other);
-      d.push(v);
-      mOwn.push(a);
-      mOther.push(b);
-      maxDiff = Math.max(maxDiff, Math.abs(a - b));
-      maxOwn = Math.max(maxOwn, Math.abs(a));
-    }
-    const yawed = conv.points.filter(
-      (p) => p.values[own] !== undefined && Math.abs(p.yawRad) >= 5 * RAD,
-    ).length;
-    if (yawed < 2 || !(maxDiff > 0.2 * maxOwn)) continue;
-    const fOwn = scaleFit(d, mOwn);
-    const fOther = scaleFit(d, mOther);
-    if (!(fOther.k > 0) || !(fOther.sse < 0.25 * fOwn.sse)) continue;
-    const label = own === 'axial_N' ? 'axial drag' : 'wind-axis drag';
-    const otherLabel =
-      own === 'axial_N'
-        ? 'wind-axis drag (along the apparent wind)'
-        : 'axial drag (along the direction of travel)';
-    const src = conv.sources[own]!;
-    flags.push({
-      code: 'drag_axis',
-      output: own,
-      message:
-        `column "${src.column}" is mapped as ${label}, but across yaw it follows the model's ${otherLabel} much better ` +
-        `(fit residual ${fmt(Math.sqrt(fOther.sse / d.length))} N against ${fmt(Math.sqrt(fOwn.sse / d.length))} N rms). ` +
-        'Wind-axis drag = axial drag x cos(yaw) + side force x sin(yaw), so the two part as yaw grows; ' +
-        `map the column as ${own === 'axial_N' ? 'drag_force_wind (or drag_area_wind / drag_coefficient_wind)' : 'axial_force (or drag_area / drag_coefficient)'} if that is what it holds.`,
-    });
-  }
-}
-
-function zeroYawFlags(
-  conv: ConvertedData,
-  model: readonly PointResult[],
-  caseFile: CaseFile,
-  flags: SlipFlag[],
-): void {
-  if (!conv.outputs.includes('side_N')) return;
-  // Work with side force / dynamic pressure (m^2), so points at different speeds compare.
-  const q = (p: DataPoint) => 0.5 * p.rhoKgPerM3 * p.airspeedMps * p.airspeedMps;
-  let maxArea = 0;
-  let slopeArea = 0;
-  for (let i = 0; i < conv.points.length; i++) {
-    const p = conv.points[i]!;
-    const v = p.values.side_N;
-    if (v === undefined) continue;
-    maxArea = Math.max(maxArea, Math.abs(v / q(p)));
-    if (Math.abs(p.yawRad) >= 2 * RAD)
-      slopeArea = Math.max(slopeArea, Math.abs(model[i]!.sideN / q(p) / Math.sin(p.yawRad)));
-  }
-  const zero = conv.points.filter((p) => p.values.side_N !== undefined && Math.abs(p.yawRad) <= 0.25 * RAD);
-  if (zero.length === 0 || !(maxArea > 0)) return;
-  const meanArea = zero.reduce((s, p) => s + p.values.side_N! / q(p), 0) / zero.length;
-  const meanN = zero.reduce((s, p) => s + p.values.side_N!, 0) / zero.length;
-  // Above both 5% of the largest measured (per dynamic pressure) and half a degree's worth of the model's slope.
-  const threshold = Math.max(0.05 * maxArea, slopeArea * Math.sin(0.5 * RAD));
-  if (!(Math.abs(meanArea) > threshold)) return;
-  const oneSided = caseFile.wheel.cover.sides === 1 && caseFile.wheel.cover.fraction > 0;
-  const offsetDeg =
-    slopeArea > 0 ? Math.asin(Math.max(-1, Math.min(1, meanArea / slopeArea))) / RAD : Number.NaN;
-  flags.push({
-    code: 'side_force_at_zero_yaw',
-    output: 'side_N',
-    message:
-      `the side force at zero yaw averages ${fmt(meanN)} N (${fmt((100 * Math.abs(meanArea)) / maxArea, 2)}% of the largest measured, at equal dynamic pressure), where a symmetric wheel makes none. ` +
-      (Number.isFinite(offsetDeg)
-        ? `It is what a yaw offset of about ${fmt(offsetDeg, 2)} deg would give; `
-        : '') +
-      'check the turntable zero, the balance tare, or the yaw sign convention' +
-      (oneSided ? ' (this wheel has a one-sided cover, so a small side force at zero yaw may be real)' : '') +
-      '.',
-  });
-}
-
-function speedFlags(conv: ConvertedData, model: readonly PointResult[], flags: SlipFlag[]): void {
-  const groups = new Map<string, number[]>();
-  conv.points.forEach((p, i) => {
-    const key = (p.yawRad / RAD).toFixed(1);
-    const g = groups.get(key);
-    if (g) g.push(i);
-    else groups.set(key, [i]);
-  });
-  for (const out of ['axial_N', 'wind_drag_N', 'side_N'] as const) {
-    if (!conv.outputs.includes(out)) continue;
-    const nData: number[] = [];
-    const nModel: number[] = [];
-    let vLo = Number.POSITIVE_INFINITY;
-    let vHi = 0;
-    for (const [key, idx] of groups) {
-      if (out === 'side_N' && Math.abs(Number(key)) < 2) continue;
-      const with_ = idx.filter((i) => conv.points[i]!.values[out] !== undefined);
-      if (with_.length < 2) continue;
-      with_.sort((a, b) => conv.points[a]!.airspeedMps - conv.points[b]!.airspeedMps);
-      const lo = with_[0]!;
-      const hi = with_[with_.length - 1]!;
-      const pl = conv.points[lo]!;
-      const ph = conv.points[hi]!;
-      if (!(ph.airspeedMps > 1.1 * pl.airspeedMps)) continue;
-      const dl = pl.values[out]!;
-      const dh = ph.values[out]!;
-      const ml = modelValue(model[lo]!, out);
-      const mh = modelValue(model[hi]!, out);
-      if (!(dl * dh > 0 && ml * mh > 0)) continue;
-      const lnV = Math.log(ph.airspeedMps / pl.airspeedMps);
-      // Exponent of V after removing the density difference (forces scale with rho V^2).
-      const lnRho = Math.log(ph.rhoKgPerM3 / pl.rhoKgPerM3);
-      nData.push((Math.log(dh / dl) - lnRho) / lnV);
-      nModel.push((Math.log(mh / ml) - lnRho) / lnV);
-      vLo = Math.min(vLo, pl.airspeedMps);
-      vHi = Math.max(vHi, ph.airspeedMps);
-    }
-    if (nData.length === 0) continue;
-    const med = (a: number[]) => [...a].sort((x, y) => x - y)[Math.floor(a.length / 2)]!;
-    const nd = med(nData);
-    const nm = med(nModel);
-    if (Math.abs(nd - nm) <= 0.4) continue;
-    flags.push({
-      code: 'dynamic_pressure_scaling',
-      output: out,
-      message:
-        `between ${fmt(vLo)} and ${fmt(vHi)} m/s the measured ${OUTPUT_LABEL[out]} grows as V^${fmt(nd, 2)} at equal yaw, the model's as V^${fmt(nm, 2)}: ` +
-        'forces should scale with dynamic pressure (about V^2). Check the speed column and its unit, the density of each run, or a load-cell offset (tare).',
-    });
-  }
-}
+export {
+  type DetectOptions,
+  MIN_FACTOR,
+  MODEL_SPREAD,
+  PHYSICAL_ENVELOPE,
+  SLIP_TOLERANCE,
+  type SlipCode,
+  type SlipFlag,
+  type SlipLabels,
+} from './slipTypes';
 
 /** All the slips found, given the converted data and the model (default parameters) at the same points. */
 export function detectSlips(
   conv: ConvertedData,
   model: readonly PointResult[],
   caseFile: CaseFile,
+  options: DetectOptions = {},
 ): SlipFlag[] {
   if (model.length !== conv.points.length) {
     throw new RangeError(
@@ -374,9 +47,12 @@ export function detectSlips(
     );
   }
   const flags: SlipFlag[] = [];
-  factorFlags(conv, model, caseFile, flags);
+  const labels = options.labels ?? {};
+  signFlags(conv, flags, labels);
+  factorFlags(conv, model, caseFile, flags, labels);
   axisFlags(conv, model, flags);
   zeroYawFlags(conv, model, caseFile, flags);
+  symmetryFlags(conv, caseFile, flags);
   speedFlags(conv, model, flags);
   const beyond = model.filter(
     (p) => p.flags.includes('yaw_beyond_range') || p.flags.includes('airspeed_beyond_range'),

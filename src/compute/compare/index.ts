@@ -46,7 +46,17 @@ export {
   parseNumberCell,
   readCsvStream,
 } from './csv';
-export { detectSlips, MIN_FACTOR, SLIP_TOLERANCE, type SlipCode, type SlipFlag } from './detectSlips';
+export {
+  type DetectOptions,
+  detectSlips,
+  MIN_FACTOR,
+  MODEL_SPREAD,
+  PHYSICAL_ENVELOPE,
+  SLIP_TOLERANCE,
+  type SlipCode,
+  type SlipFlag,
+  type SlipLabels,
+} from './detectSlips';
 export { type GuessContext, guessMap, type MapGuess, splitHeader } from './guessMap';
 export {
   MAP_FORMAT,

@@ -21,6 +21,7 @@
 import { z } from 'zod';
 import { describeValue, keyPathText, parseJsonText } from '../caseFile';
 import { migrateMap } from '../fileVersion';
+import { unknownKeyMessage } from '../unknownKeyMessage';
 import {
   COEFFICIENT_QUANTITIES,
   OUTPUT_LABEL,
@@ -134,11 +135,7 @@ function validateMapUnsafe(given: unknown): MapParsed {
       if (issue.code === 'unrecognized_keys') {
         const where = path.map(String).join('.');
         const allowed = where === '' ? ALLOWED_TOP : ['quantity', 'unit', 'reference_area_m2'];
-        for (const key of issue.keys) {
-          errors.push(
-            `${where === '' ? key : `${where}.${key}`}: unknown key (allowed here: ${allowed.join(', ')})`,
-          );
-        }
+        for (const key of issue.keys) errors.push(unknownKeyMessage(where, key, allowed));
         continue;
       }
       errors.push(`${keyPathText(path)}: ${issue.message}`);

@@ -9,7 +9,7 @@
 import { quantileSorted } from '../../model/fit/index';
 import { mulberry32, uniformInRange } from '../../model/random/index';
 import type { CaseFile } from '../caseFile';
-import type { DataPoint } from './convertData';
+import { type DataPoint, pointYawDeg } from './convertData';
 import {
   CALIBRATABLE,
   type Calibratable,
@@ -145,7 +145,7 @@ export function propagateUncertainty(
       const mean = v.reduce((a, b) => a + b, 0) / samples;
       const sd = Math.sqrt(v.reduce((a, b) => a + (b - mean) * (b - mean), 0) / (samples - 1));
       rows.push({
-        yaw_deg: (p.yawRad * 180) / Math.PI,
+        yaw_deg: pointYawDeg(p),
         airspeed_mps: p.airspeedMps,
         output: out,
         nominal: modelValue(nominal[i]!, out),

@@ -71,6 +71,7 @@ export const UNIT_TO_SI: Readonly<Record<Unit, number>> = {
 export const FORCE_UNITS: readonly Unit[] = ['N', 'gf', 'kgf', 'lbf'];
 export const AREA_UNITS: readonly Unit[] = ['m2', 'cm2'];
 export const SPEED_UNITS: readonly Unit[] = ['mps', 'kmh', 'mph'];
+export const MOMENT_UNITS: readonly Unit[] = ['Nm', 'Nmm'];
 
 /** Units allowed for each quantity. */
 export const QUANTITY_UNITS: Readonly<Record<Quantity, readonly Unit[]>> = {
@@ -85,8 +86,8 @@ export const QUANTITY_UNITS: Readonly<Record<Quantity, readonly Unit[]>> = {
   drag_coefficient: ['1'],
   drag_coefficient_wind: ['1'],
   side_coefficient: ['1'],
-  yaw_moment: ['Nm', 'Nmm'],
-  steering_moment: ['Nm', 'Nmm'],
+  yaw_moment: MOMENT_UNITS,
+  steering_moment: MOMENT_UNITS,
   ignore: [...UNITS],
 };
 

@@ -1,6 +1,6 @@
 /** Residuals data - model at every data point and output, with the model's band and a summary. */
 import type { PointResult } from '../../model/wheel/index';
-import type { ConvertedData } from './convertData';
+import { type ConvertedData, pointYawDeg } from './convertData';
 import { modelUncertainty, modelValue } from './modelAtData';
 import type { Output } from './quantities';
 
@@ -40,7 +40,7 @@ export function computeResiduals(conv: ConvertedData, model: readonly PointResul
       const finiteU = Number.isFinite(u) ? u : null;
       rows.push({
         line: p.line,
-        yaw_deg: (p.yawRad * 180) / Math.PI,
+        yaw_deg: pointYawDeg(p),
         airspeed_mps: p.airspeedMps,
         output: out,
         data: d,

@@ -10,3 +10,4 @@ export { speedForPower } from './speedForPower';
 export type * from './types';
 export { validateWheelYawCurve } from './validateWheelYawCurve';
 export { wheelYawCurveLoads } from './wheelYawCurveLoads';
+export { type WindAveragedWheelLoads, windAveragedWheelLoads } from './windAveragedWheelLoads';

@@ -7,6 +7,7 @@ export {
   REATTACHMENT_FULL_RATIO,
   REATTACHMENT_ONSET_RATIO,
 } from './plateReattachment';
+export { rowWakeTransportSpeed } from './rowWakeTransportSpeed';
 export { SPLITTER_PLATE_MAX_RATIO, splitterPlateCylinderDrag } from './splitterPlateCylinderDrag';
 export { spokeRowDrag } from './spokeRowDrag';
 export { spokeSectionDrag } from './spokeSectionDrag';

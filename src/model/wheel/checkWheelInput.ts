@@ -1,4 +1,4 @@
-import type { WheelInput } from './solveWheel';
+import type { WheelInput } from './wheelInput';
 
 function fail(name: string, value: unknown, rule: string): never {
   throw new RangeError(`${name} must be ${rule}, got ${String(value)}`);

@@ -6,6 +6,7 @@ export { meanAbsSinusoid } from './meanAbsSinusoid';
 export { openAnnuli, panelOpenness } from './panelOpenness';
 export { RIM_SECTION_RE_RANGE, rimTyreSection } from './rimTyreLoads';
 export { solveWheel, type WheelInput } from './solveWheel';
+export { type SpokeCageSwirl, spokeCageSwirl } from './spokeCageSwirl';
 export { screenOpenness, spokeScreenForceLengthM, spokeScreenResistance } from './spokeScreen';
 export { groundTrailM, steeringMoment } from './steeringAxis';
 export { type SurfaceCoefficients, surfaceCoefficients, surfaceSolution } from './surfaceCoefficients';

@@ -2,15 +2,11 @@ import { assemblePoint } from './assemblePoint';
 import { checkWheelInput } from './checkWheelInput';
 import { type SurfaceCoefficients, surfaceCoefficients } from './surfaceCoefficients';
 import { surfaceKey } from './surfaceKey';
-import type { FlowConditions, ModelOptions, SteeringGeometry, WheelGeometry, WheelSolution } from './types';
+import type { WheelSolution } from './types';
+import type { WheelInput } from './wheelInput';
 import { wheelRadii } from './wheelRadii';
 
-export interface WheelInput {
-  wheel: WheelGeometry;
-  options: ModelOptions;
-  steering: SteeringGeometry;
-  points: FlowConditions[];
-}
+export type { WheelInput } from './wheelInput';
 
 /**
  * Solve one wheel at a list of operating points. The lattice is linear in V sin(beta), so one

@@ -1,29 +1,15 @@
-import { spokeRowDrag } from '../sections';
 import { clearLoads } from './componentLoads';
+import { SPOKE_ANGLE_STEPS } from './spokeAnnulusLoads';
+import { spokeElementSwirl } from './spokeElementSwirl';
+import { spokeElements } from './spokeElements';
+import { spokeRowOf } from './spokeRowOf';
 import type { ComponentLoads, FlowConditions, ModelOptions, WheelGeometry } from './types';
 import type { WheelRadii } from './wheelRadii';
 
-/** Revolution positions averaged (midpoint rule, spectrally accurate for a periodic integrand). */
-const ANGLE_STEPS = 36;
-/** Gauss-Legendre nodes and weights on [-1, 1] (Abramowitz & Stegun, Table 25.4, n = 6). */
-const GL_X = [
-  -0.932469514203152, -0.661209386466265, -0.238619186083197, 0.238619186083197, 0.661209386466265,
-  0.932469514203152,
-];
-const GL_W = [
-  0.17132449237917, 0.360761573048139, 0.467913934572691, 0.467913934572691, 0.360761573048139,
-  0.17132449237917,
-];
-
-const sinTheta = new Float64Array(ANGLE_STEPS);
-const cosTheta = new Float64Array(ANGLE_STEPS);
-/** Scratch for spokeRowDrag: drag coefficient, wake drag ratio, Reynolds number. */
-const row = new Float64Array(3);
-for (let k = 0; k < ANGLE_STEPS; k++) {
-  const theta = ((k + 0.5) * 2 * Math.PI) / ANGLE_STEPS;
-  sinTheta[k] = Math.sin(theta);
-  cosTheta[k] = Math.cos(theta);
-}
+/** Sums of one call: x force, z force, torque, smallest and largest Reynolds number. */
+const sums = new Float64Array(5);
+/** spokeElementSwirl's answer: extra swirl, mean swirl, plane swirl, the element's loads at unit length. */
+const element = new Float64Array(8);
 
 export interface SpokeLoadsReport {
   /** Smallest and largest section Reynolds number met (for validity flags). */
@@ -47,6 +33,12 @@ export interface SpokeLoadsReport {
  * deficit equals the spoke-ahead value (see spokeRowDrag). The through-flow V sin(beta) carries the
  * wake off the wheel plane, so at yaw the spokes leave each other's wakes.
  *
+ * The swirl of the whole cage: at each radius the annulus torque must leave with the air flushed through
+ * the disc (Glauert's annulus balance, the airspeed plus the merged wake's own spreading as through-flow:
+ * spokeElementSwirl). The swirl at the spoke plane is at least that mean; where the merged wake's swirl
+ * is smaller (its wakes carried off at yaw), the spokes meet the rotation slowed by the extra swirl,
+ * omega r (1 - x), solved to consistency with their drag.
+ *
  * The section force 0.5 rho Cd L |u| u (shielded) is kept in-plane only: its y part is the through-flow
  * load that the porous lattice already carries (no double counting). Covered spokes make none (two
  * covers) or `oneSidedCoverSpokeShare` of their load (one cover).
@@ -64,51 +56,36 @@ export function spokeLoads(
   clearLoads(out);
   const report = { reynoldsMin: Number.POSITIVE_INFINITY, reynoldsMax: 0 };
   if (wheel.spokeCount === 0) return { reynoldsMin: Number.NaN, reynoldsMax: Number.NaN };
-  const round = wheel.spokeSection !== 'bladed';
-  const refLength = round ? wheel.spokeDiameterM : wheel.spokeThicknessM;
-  const thicknessRatio = round ? 1 : wheel.spokeThicknessM / wheel.spokeWidthM;
-  const { rhoKgPerM3: rho, muPaS: mu } = point;
-  const nu = mu / rho;
-  const vInPlane = point.airspeedMps * Math.cos(point.yawRad);
-  const vNormal = point.airspeedMps * Math.sin(point.yawRad);
+  const spokes = spokeRowOf(wheel, point);
   const omega = point.groundSpeedMps / radii.outerRadiusM;
-  const coverShare = wheel.coverSides === 2 ? 0 : options.oneSidedCoverSpokeShare;
-  const spacingPerRadius = (2 * Math.PI) / wheel.spokeCount;
-
-  // Spoke pieces: inside, over and outside the covered annulus.
-  const edges = [radii.hubRadiusM, radii.coverInnerRadiusM, radii.coverOuterRadiusM, radii.rimInnerRadiusM];
-  let fx = 0;
-  let fz = 0;
-  let torque = 0;
-  for (let piece = 0; piece < 3; piece++) {
-    const r0 = edges[piece]!;
-    const r1 = edges[piece + 1]!;
-    const weight = piece === 1 ? coverShare : 1;
-    if (!(r1 > r0) || weight === 0) continue;
-    const half = 0.5 * (r1 - r0);
-    const mid = 0.5 * (r1 + r0);
-    for (let g = 0; g < GL_X.length; g++) {
-      const r = mid + half * GL_X[g]!;
-      const dr = half * GL_W[g]! * weight;
-      const spin = omega * r;
-      const spacing = spacingPerRadius * r;
-      for (let k = 0; k < ANGLE_STEPS; k++) {
-        const ut = vInPlane * sinTheta[k]! + spin;
-        const speed = Math.sqrt(ut * ut + vNormal * vNormal);
-        if (speed === 0) continue;
-        spokeRowDrag(round, thicknessRatio, refLength, spacing, ut, vNormal, nu, row);
-        const re = row[2]!;
-        // A spoke wholly stalled in the wake ahead (drag ratio 0) carries no load and uses no section law.
-        if (row[1]! > 0 && re < report.reynoldsMin) report.reynoldsMin = re;
-        if (re > report.reynoldsMax) report.reynoldsMax = re;
-        const ft = 0.5 * rho * row[0]! * row[1]! * refLength * speed * ut * dr;
-        fx -= sinTheta[k]! * ft;
-        fz += cosTheta[k]! * ft;
-        torque += r * ft;
-      }
-    }
+  const elements = spokeElements(wheel, radii, options);
+  const perSpoke = (wheel.spokeCount / SPOKE_ANGLE_STEPS) * options.profileDragFactor;
+  sums.fill(0);
+  sums[3] = Number.POSITIVE_INFINITY;
+  for (let e = 0; e < elements.radiusM.length; e++) {
+    const weight = elements.weightM[e]!;
+    // The element's loads with the swirl of the whole cage (spokeElementSwirl): where it exceeds the
+    // merged wake's, the spokes meet the rotation slowed by the extra swirl fraction.
+    spokeElementSwirl(
+      spokes,
+      elements.radiusM[e]!,
+      omega,
+      point.airspeedMps,
+      perSpoke * elements.share[e]!,
+      element,
+    );
+    sums[0] += element[3]! * weight;
+    sums[1] += element[4]! * weight;
+    sums[2] += element[5]! * weight;
+    if (element[6]! < sums[3]!) sums[3] = element[6]!;
+    if (element[7]! > sums[4]!) sums[4] = element[7]!;
   }
-  const scale = (wheel.spokeCount / ANGLE_STEPS) * options.profileDragFactor;
+  const fx = sums[0]!;
+  const fz = sums[1]!;
+  const torque = sums[2]!;
+  report.reynoldsMin = sums[3]!;
+  report.reynoldsMax = sums[4]!;
+  const scale = perSpoke;
   out.fxN = fx * scale;
   out.fzN = fz * scale;
   out.axleTorqueNm = torque * scale;

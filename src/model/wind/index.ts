@@ -6,7 +6,6 @@ export { weibullMean } from './weibullMean';
 export { weibullQuantile } from './weibullQuantile';
 export { weightedHistogram } from './weightedHistogram';
 export { weightedQuantile } from './weightedQuantile';
-export { type WindAveragedWheelLoads, windAveragedWheelLoads } from './windAveragedWheelLoads';
 export { type WindDirectionDistribution, windDirectionNodes } from './windDirectionNodes';
 export { type WindSpeedDistribution, windSpeedNodes } from './windSpeedNodes';
 export { type WindStates, windStates } from './windStates';

@@ -119,6 +119,24 @@ describe('detectSlips on synthetic data planted with one slip each', () => {
     expect(f?.message ?? JSON.stringify(flags)).toMatch(/yaw offset of about 1\.\d deg/);
   });
 
+  it('yaw symmetry: the same 1.5 deg offset, from the +-5 deg pairs alone', () => {
+    const flags = run({
+      side: (s, i) => {
+        const slope = truth[Math.floor(i / 10) * 10 + 5]!.sideN / Math.sin((10 * Math.PI) / 180);
+        return s + slope * Math.sin((1.5 * Math.PI) / 180);
+      },
+    });
+    const f = flags.find((x) => x.code === 'yaw_symmetry');
+    // even/odd = tan(1.5 deg)/tan(5 deg) for S ~ k sin(b + d); the planted offset is additive, so about 1.5 deg.
+    expect(f?.message ?? JSON.stringify(flags)).toMatch(/yaw offset of about 1\.[3-7] deg/);
+  });
+
+  it('yaw symmetry: a side force whose sign was lost (magnitudes)', () => {
+    const flags = run({ side: (s) => Math.abs(s) });
+    const f = flags.find((x) => x.code === 'yaw_symmetry');
+    expect(f?.message ?? JSON.stringify(flags)).toMatch(/may hold magnitudes/);
+  });
+
   it('forces not scaling with dynamic pressure (a constant 0.3 N tare on the drag)', () => {
     const flags = run({ drag: (a) => a + 0.3 });
     expect(codes(flags), JSON.stringify(flags)).toContain('dynamic_pressure_scaling');

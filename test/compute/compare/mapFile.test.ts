@@ -27,7 +27,13 @@ describe('parseMapFile', () => {
     };
     expect(bad({ version: 2 })[0]).toMatch(/^version: unsupported map-file version 2/);
     expect(bad({ side_force_sign: 2 })[0]).toMatch(/^side_force_sign: must be 1 or -1, got 2/);
-    expect(bad({ colour: 'red' })[0]).toMatch(/^colour: unknown key/);
+    expect(bad({ colour: 'red' })[0]).toMatch(/^colour: unknown key \(allowed here/);
+    expect(bad({ side_force_sing: -1 })[0]).toMatch(
+      /^side_force_sing: unknown key \(did you mean side_force_sign\?\)/,
+    );
+    expect(bad({ columns: { yaw: { quantity: 'yaw_deg', unit: 'deg', unti: 'x' } } })[0]).toMatch(
+      /^columns\.yaw\.unti: unknown key \(did you mean columns\.yaw\.unit\?\)/,
+    );
     expect(
       bad({
         columns: { yaw: { quantity: 'yaw_deg', unit: 'deg' }, drag: { quantity: 'axial_force', unit: 'm2' } },

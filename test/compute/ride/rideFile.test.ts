@@ -51,6 +51,9 @@ describe('parseRideFile', () => {
     expect(errorsOf(withChange((r) => (r.rider.mass_kg = 5)))).toEqual([
       'rider.mass_kg: must be a number at least 20 and at most 300 kg (rider and bike), got 5',
     ]);
+    expect(errorsOf(withChange((r) => (r.rider.mass_kgg = 80)))[0]).toMatch(
+      /^rider.mass_kgg: unknown key \(did you mean rider.mass_kg\?\)/,
+    );
     expect(errorsOf(withChange((r) => (r.rider.weight = 5)))[0]).toMatch(
       /^rider.weight: unknown key \(allowed here: mass_kg/,
     );

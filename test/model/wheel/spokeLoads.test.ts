@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { MARTIN_WHEEL_ROTATION_AREA } from '../../../src/compute/validation/referenceValues';
 import { cylinderDrag, tandemDragRatio } from '../../../src/model/sections';
 import { DEFAULT_MODEL_OPTIONS, DEMO_WHEEL, wheelRadii } from '../../../src/model/wheel';
 import { emptyLoads } from '../../../src/model/wheel/componentLoads';
@@ -98,6 +99,28 @@ describe('spokeLoads', () => {
     expect(Math.abs(out.fxN)).toBeLessThan(1e-9);
   });
 
+  it('spun in still air, a pair of 32-spoke wheels needs the published rotation power', () => {
+    // J. C. Martin et al. (1998), J. Appl. Biomech. 14, 276-291 (from memory): incremental drag area of
+    // wheel rotation 0.0044 m^2, band 0.0029-0.0059 (the `martin-rotation-area` row). Still air (the
+    // swirl carried off by the spokes' own wakes, spokeCageSwirl): the spokes alone, R 0.34 m, 32 round
+    // 2 mm spokes, 20 mm rim, 23 mm tyre, spun at 40 km/h. Rolling, the model needs twice this (README,
+    // known disagreement).
+    const pair = { ...wheel, spokeCount: 32, rimDepthM: 0.02, tyreWidthM: 0.023, outerRadiusM: 0.34 };
+    const v = 40 / 3.6;
+    const out = emptyLoads();
+    spokeLoads(
+      pair,
+      wheelRadii(pair),
+      { airspeedMps: 0, yawRad: 0, groundSpeedMps: v, rhoKgPerM3: rho, muPaS: mu },
+      DEFAULT_MODEL_OPTIONS,
+      out,
+    );
+    const area = (2 * out.axleTorqueNm * (v / 0.34)) / (0.5 * rho * v ** 3);
+    const { lowM2, highM2, valueM2 } = MARTIN_WHEEL_ROTATION_AREA;
+    expect(area, `got=${area} expected=${valueM2} band ${lowM2}..${highM2}`).toBeGreaterThanOrEqual(lowM2);
+    expect(area, `got=${area} expected=${valueM2} band ${lowM2}..${highM2}`).toBeLessThanOrEqual(highM2);
+  });
+
   it('covered spokes make none behind two covers and a share behind one', () => {
     const point = { airspeedMps: 12, yawRad: 0.1, groundSpeedMps: 12, rhoKgPerM3: rho, muPaS: mu };
     const open = emptyLoads();
@@ -109,11 +132,30 @@ describe('spokeLoads', () => {
     expect(Math.abs(two.fxN)).toBeLessThan(1e-12);
     expect(Math.abs(two.axleTorqueNm)).toBeLessThan(1e-12);
     const oneSided = { ...full, coverSides: 1 as const };
-    const one = emptyLoads();
-    spokeLoads(oneSided, wheelRadii(oneSided), point, DEFAULT_MODEL_OPTIONS, one);
     const share = DEFAULT_MODEL_OPTIONS.oneSidedCoverSpokeShare;
-    expect(one.fxN).toBeCloseTo(share * open.fxN, 12);
-    expect(one.axleTorqueNm).toBeCloseTo(share * open.axleTorqueNm, 12);
+    // Head-on the spokes' merged wake holds the cage's swirl, so the share is exact; at yaw the cage's
+    // swirl (spokeElementSwirl) comes from the smaller torque of the shared spokes, so their loads are a
+    // little more than the share (the swirl is a few per cent of omega r: within 1 %).
+    for (const [yawRad, tolRel] of [
+      [0, 1e-12],
+      [0.1, 0.01],
+    ] as const) {
+      const at = { ...point, yawRad };
+      const openAt = emptyLoads();
+      spokeLoads(wheel, radii, at, DEFAULT_MODEL_OPTIONS, openAt);
+      const one = emptyLoads();
+      spokeLoads(oneSided, wheelRadii(oneSided), at, DEFAULT_MODEL_OPTIONS, one);
+      for (const [got, all] of [
+        [one.fxN, openAt.fxN],
+        [one.axleTorqueNm, openAt.axleTorqueNm],
+      ] as const) {
+        const exp = share * all;
+        expect(
+          Math.abs(got / exp - 1),
+          `yaw=${yawRad} rad got=${got} expected=${exp} tol(rel)=${tolRel}`,
+        ).toBeLessThanOrEqual(tolRel);
+      }
+    }
   });
 
   it('bladed spokes of equal frontal thickness drag less than round ones', () => {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { WheelYawCurve } from '../../../src/model/ride/types';
-import { windAveragedWheelLoads } from '../../../src/model/wind/windAveragedWheelLoads';
+import { windAveragedWheelLoads } from '../../../src/model/ride/windAveragedWheelLoads';
 import { windDirectionNodes } from '../../../src/model/wind/windDirectionNodes';
 import { windSpeedNodes } from '../../../src/model/wind/windSpeedNodes';
 import { windStates } from '../../../src/model/wind/windStates';

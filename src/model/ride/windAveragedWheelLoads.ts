@@ -1,7 +1,7 @@
-import type { WheelLoads, WheelYawCurve } from '../ride/types';
-import { wheelYawCurveLoads } from '../ride/wheelYawCurveLoads';
-import { apparentWind } from './apparentWind';
-import type { WindStates } from './windStates';
+import { apparentWind } from '../wind/apparentWind';
+import type { WindStates } from '../wind/windStates';
+import type { WheelLoads, WheelYawCurve } from './types';
+import { wheelYawCurveLoads } from './wheelYawCurveLoads';
 
 export interface WindAveragedWheelLoads {
   /** Weighted mean axial force (N), the shielding share applied. */
