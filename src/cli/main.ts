@@ -7,24 +7,16 @@ import { readFileSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
 import { resolve } from 'node:path';
 import { parseArgs } from 'node:util';
-import {
-  caseToModelInput,
-  parseCaseFile,
-  type ResultDocument,
-  solutionToDocument,
-  solveCase,
-} from '../compute/caseFile';
-import { runSweep as runPooledSweep } from '../compute/engine/runSweep';
+import { parseCaseFile, type ResultDocument, solutionToDocument, solveCase } from '../compute/caseFile';
+import { InProcessRunner } from '../compute/engine/inProcessRunner';
+import type { JobRunner } from '../compute/engine/jobRunner';
+import type { SweepProgress } from '../compute/engine/runCases';
 import { WorkerPool } from '../compute/engine/workerPool';
 import { checkJsonFileSize, MAX_JSON_FILE_BYTES } from '../compute/fileVersion';
-import {
-  type ExpandedCase,
-  type ExpandedPlan,
-  parsePlanFile,
-  runSweep,
-  type SweepOptions,
-} from '../compute/planFile';
+import { type ExpandedCase, type ExpandedPlan, parsePlanFile } from '../compute/planFile';
 import { csvHeader, documentCsvLines, errorCsvLine } from '../compute/resultTable';
+import { commandLineStudy } from '../compute/study/commandLineStudy';
+import { runStudies } from '../compute/study/runStudies';
 import { runCompare } from './compareCommand';
 import { exampleCase, examplePlan } from './examples';
 import {
@@ -209,15 +201,16 @@ function commandSolve(args: string[], io: CliIo): number {
 }
 
 /** Write a sweep's results as CSV or as a JSON list of documents to `sink`, streaming case by case in
- * plan order. A pool's cases that finish before their turn are rendered at once and held in `spool`
+ * plan order. The plan runs as one study (commandLineStudy) on `runner`: a worker pool, or this thread.
+ * Cases that finish before their turn are rendered at once and held in `spool`
  * (on disk, see SweepSpool) until then; an interrupted caller can drain the spool so every finished case
  * is written. Each sink call is one whole case (or the header/footer). Returns how many cases failed. */
 export async function writeSweep(
   plan: ExpandedPlan,
   format: 'csv' | 'json',
   sink: (text: string) => void,
-  onProgress?: SweepOptions['onProgress'],
-  pool?: WorkerPool,
+  onProgress?: (progress: SweepProgress) => void,
+  runner: JobRunner = new InProcessRunner(),
   spool: SweepSpool = new SweepSpool(),
 ): Promise<number> {
   const keys = plan.variedKeys;
@@ -244,68 +237,48 @@ export async function writeSweep(
       : { index: expanded.index, varied: expanded.varied, error };
     return `${position === 0 ? '\n' : ',\n'}${JSON.stringify(run)}`;
   };
-  let failed = 0;
-  if (!pool) {
-    let position = 0;
-    await runSweep(plan.cases, {
-      ...(onProgress ? { onProgress } : {}),
-      onResult: (expanded: ExpandedCase, document: ResultDocument) =>
-        sink(render(position++, expanded, document, null)),
-      onError: (expanded: ExpandedCase, message: string) => {
-        failed++;
-        sink(render(position++, expanded, null, message));
-      },
-    });
-  } else {
-    let next = 0;
-    // A sink that fails (a full disk, a closed pipe) stops the run: the pool is cancelled, so no
-    // worker goes on solving, and the error is thrown once the pool has stopped.
-    const stop = new AbortController();
-    let failure: { error: unknown } | null = null;
-    const outcome = await runPooledSweep(
-      pool,
-      plan.cases.map((c) => caseToModelInput(c.caseFile)),
-      {
-        keepSolutions: false,
-        signal: stop.signal,
-        // Jobs of at most ~MAX_JOB_POINTS points: a job's results are held whole in its worker and
-        // in the main thread until written, so big plans are cut finer than 8 jobs per worker.
-        jobsPerWorker: Math.max(8, Math.ceil(plan.pointCount / (pool.size * MAX_JOB_POINTS))),
-        ...(onProgress ? { onProgress } : {}),
-        onCase: (i, solution, error) => {
-          if (failure !== null) return;
-          try {
-            const expanded = plan.cases[i]!;
-            const text = render(
-              i,
-              expanded,
-              solution ? solutionToDocument(expanded.caseFile, solution) : null,
-              error,
-            );
-            if (i !== next) {
-              spool.put(i, text);
-              return;
-            }
-            sink(text);
-            next++;
-            for (let held = spool.take(next); held !== null; held = spool.take(next)) {
-              sink(held);
-              next++;
-            }
-          } catch (sinkError) {
-            failure = { error: sinkError };
-            stop.abort();
-          }
-        },
-      },
-    );
-    if (failure !== null) throw (failure as { error: unknown }).error;
-    failed = outcome.failedCount;
-    if (spool.size > 0) throw new Error(`sweep: ${spool.size} case(s) finished but were never written`);
-    spool.close();
-  }
+  let next = 0;
+  // A sink that fails (a full disk, a closed pipe) stops the run: the runner is cancelled, so no
+  // worker goes on solving, and the error is thrown once it has stopped.
+  const stop = new AbortController();
+  let failure: { error: unknown } | null = null;
+  const outcome = await runStudies(runner, [commandLineStudy(plan)], {
+    keep: false,
+    signal: stop.signal,
+    // Jobs of at most ~MAX_JOB_POINTS points: a job's results are held whole in its worker and in the
+    // main thread until written, so big plans are cut finer than 8 jobs per worker.
+    jobsPerWorker: Math.max(8, Math.ceil(plan.pointCount / (runner.size * MAX_JOB_POINTS))),
+    ...(onProgress ? { onProgress } : {}),
+    // In this thread the bar starts at 0 %; a pool's first line comes with its first finished job.
+    reportStart: runner.inOrder === true,
+    onCase: ({ caseIndex: i, cube, surface, error }) => {
+      if (failure !== null) return;
+      try {
+        const expanded = plan.cases[i]!;
+        const document =
+          cube && surface ? solutionToDocument(expanded.caseFile, { surface, points: cube.points() }) : null;
+        const text = render(i, expanded, document, error);
+        if (i !== next) {
+          spool.put(i, text);
+          return;
+        }
+        sink(text);
+        next++;
+        for (let held = spool.take(next); held !== null; held = spool.take(next)) {
+          sink(held);
+          next++;
+        }
+      } catch (sinkError) {
+        failure = { error: sinkError };
+        stop.abort();
+      }
+    },
+  });
+  if (failure !== null) throw (failure as { error: unknown }).error;
+  if (spool.size > 0) throw new Error(`sweep: ${spool.size} case(s) finished but were never written`);
+  spool.close();
   if (format === 'json') sink('\n  ]\n}\n');
-  return failed;
+  return outcome.failedCount;
 }
 
 /** Open an atomic output file, naming any stale temporary files of a killed run it cleaned up. */

@@ -8,7 +8,6 @@
 import {
   type CaseFile,
   type CaseWheel,
-  COMPONENT_NAMES,
   caseAirDensity,
   caseToModelInput,
   parseCaseFile,
@@ -16,12 +15,18 @@ import {
 } from '../compute/caseFile';
 import type { CalibrationResult } from '../compute/compare/index';
 import type { ViewField } from '../compute/engine/protocol';
-import { runSweep, type SweepProgress } from '../compute/engine/runSweep';
+import type { SweepProgress } from '../compute/engine/runCases';
 import type { WorkerPool } from '../compute/engine/workerPool';
+import {
+  FLAG_MESSAGES,
+  type PageStudies,
+  pageStudies,
+  type RunStudiesOptions,
+  runStudies,
+  type StudiesOutcome,
+  type StudyPlan,
+} from '../compute/study';
 import { degToRad, kmhToMps } from '../compute/units';
-import type { WheelInput } from '../model/wheel/solveWheel';
-import type { PointResult, WheelSolution } from '../model/wheel/types';
-import { FLAG_MESSAGES } from '../model/wheel/validity';
 import {
   type AppState,
   type CalibrationMark,
@@ -35,79 +40,35 @@ import {
 } from './appState';
 import { AutosaveStore, type KeptCopy } from './autosave';
 import type { BrowserWorkerHandle } from './browserWorker';
-import { type ComputePlan, computePlan } from './computePlan';
 import { Controls } from './controls';
 import type { PackedResult, ReadOutcome } from './dataJobs';
 import type { DataContext, DataPanel, DataPlotName, DataRunRequest } from './dataPanel';
-import { type Cell, DataTable, type TableColumn } from './dataTable';
 import { defaultCase } from './defaultCase';
 import { DesignMap } from './designMap';
-import {
-  type DisplayUnits,
-  fixed,
-  fmt,
-  speedFromMps,
-  speedUnitText,
-  toDisplay,
-  unitShort,
-  unitText,
-} from './displayUnits';
+import { fmt } from './displayUnits';
 import { downloadBlob, downloadText, safeFileStem } from './download';
 import { type DurableCopy, writeDurable } from './durableAutosave';
 import { crashPoolWorker, hangPoolWorkers, scriptStartMs, spawnTracked, workersReadyMs } from './earlyPool';
 import type { Field, FieldValue } from './fields';
 import { JobWorker } from './jobWorker';
-import { LinePlot, type PlotSeries } from './linePlot';
+import { LinePlot } from './linePlot';
 import { Messages } from './messages';
-import { OUTPUTS, type OutputKey, type OutputSpec } from './outputs';
 import type { RoadContext, RoadPanel, RoadPlotName } from './roadPanel';
 import { defaultRoad, type RoadState, roadToRideRaw, validateRoadFor } from './roadState';
 import { view3dLoader, type WheelView } from './view3dSlot';
-import {
-  type DifferenceMode,
-  defaultView,
-  TAB_IDS,
-  type TabId,
-  type ViewState,
-  validateView,
-} from './viewState';
+import { defaultView, TAB_IDS, type TabId, type ViewState, validateView } from './viewState';
+import { renderCoverPlot } from './views/coverPlot';
+import { renderHeadline } from './views/headline';
+import { renderMap } from './views/mapView';
+import { allPoints, axisOf, type PageResults } from './views/pageResults';
+import { PageTables } from './views/pageTables';
+import { byId, conditionsText, plotDiv, presentOf } from './views/present';
+import { renderYawPlots } from './views/yawPlots';
 import { type HangReport, onWorkerHang } from './watchdog';
-
-interface Results {
-  plan: ComputePlan;
-  current: WheelSolution | null;
-  family: Array<WheelSolution | null>;
-  cover: Array<WheelSolution | null>;
-  map: Array<WheelSolution | null>;
-  baseline: { curve: WheelSolution | null; cover: WheelSolution | null; map: WheelSolution | null } | null;
-  rhoKgPerM3: number;
-}
 
 type Phase = 'computing' | 'done' | 'error';
 type MainPlotName = 'dragYaw' | 'sideYaw' | 'dragCover' | 'handling';
 export type PlotName = MainPlotName | RoadPlotName | DataPlotName;
-
-const CURRENT_COLOUR = '#c2412d';
-const BASELINE_COLOUR = '#111111';
-
-/** Family colours from light to dark blue-green by covering fraction (our own ramp). */
-function familyColour(k: number, n: number): string {
-  const t = n <= 1 ? 1 : k / (n - 1);
-  const a = [132, 188, 196];
-  const b = [16, 58, 88];
-  const c = a.map((x, i) => Math.round(x + (b[i]! - x) * t));
-  return `rgb(${c[0]}, ${c[1]}, ${c[2]})`;
-}
-
-const SPEED_YAW_COLOURS = ['#1c6876', '#c2412d', '#6b4fa0', '#b8860b', '#2e7d32', '#5d4037'];
-
-function nearestIndex(values: readonly number[], target: number): number {
-  let best = 0;
-  for (let i = 1; i < values.length; i++) {
-    if (Math.abs(values[i]! - target) < Math.abs(values[best]! - target)) best = i;
-  }
-  return best;
-}
 
 function computeKey(s: AppState): string {
   const v = s.view;
@@ -127,14 +88,16 @@ export class App {
   private readonly pool: WorkerPool;
   private controls!: Controls;
   private readonly messages: Messages;
-  private results: Results | null = null;
+  private results: PageResults | null = null;
   private abort: AbortController | null = null;
   private timer: ReturnType<typeof setTimeout> | null = null;
   private lastComputeKey = '';
   private firstResultMs: number | null = null;
   private readonly plots: Record<MainPlotName, LinePlot>;
   private readonly designMap: DesignMap;
-  private readonly tables = new Map<string, DataTable>();
+  private tables: PageTables | null = null;
+  /** Designs replaced by picking a map cell, most recent last (Undo takes them back). */
+  private readonly picked: CaseFile[] = [];
   private view3d: WheelView | null = null;
   private view3dWorker: BrowserWorkerHandle | null = null;
   private view3dRequest = 0;
@@ -259,7 +222,9 @@ export class App {
     void this.compute();
     await new Promise((resolve) => setTimeout(resolve, 0));
     this.controls = new Controls(byId('controls'), this.state, (field, value) => this.onEdit(field, value));
-    this.buildTables();
+    this.tables = new PageTables(byId('tables'), () => this.state.case.name);
+    this.designMap.onPick((i, j) => this.pickMapCell(i, j));
+    byId('undo-pick').addEventListener('click', () => this.undoPick());
     this.wireFigureActions();
     this.wireActions();
     this.wireTabs();
@@ -594,13 +559,13 @@ export class App {
   }
 
   /**
-   * runSweep on the pool, one run at a time: WorkerPool.run is not re-entrant (a cancelled run
+   * runStudies on the pool, one run at a time: WorkerPool.run is not re-entrant (a cancelled run
    * terminates its busy workers, which a second run may already be waiting on), so each run waits
    * for the previous one, which ends promptly once its signal is aborted.
    */
-  private sweep(cases: readonly WheelInput[], options: Parameters<typeof runSweep>[2]) {
+  private run(plans: readonly StudyPlan[], options: RunStudiesOptions): Promise<StudiesOutcome> {
     const previous = this.poolIdle;
-    const run = previous.then(() => runSweep(this.pool, cases, options));
+    const run = previous.then(() => runStudies(this.pool, plans, options));
     this.poolIdle = run.then(
       () => undefined,
       () => undefined,
@@ -621,20 +586,20 @@ export class App {
     const ac = new AbortController();
     this.abort = ac;
     const state = this.state;
-    let plan: ComputePlan;
+    let studies: PageStudies;
     try {
-      plan = computePlan(state.case, state.view, state.baseline);
+      studies = pageStudies(state.case, state.view, state.baseline);
     } catch (error) {
       this.fail(`The design could not be prepared for the model: ${(error as Error).message}`);
       return;
     }
-    const r: Results = {
-      plan,
+    const r: PageResults = {
+      studies,
       current: null,
-      family: plan.family.inputs.map(() => null),
-      cover: plan.cover.inputs.map(() => null),
-      map: plan.map.inputs.map(() => null),
-      baseline: plan.baseline ? { curve: null, cover: null, map: null } : null,
+      family: null,
+      cover: null,
+      map: null,
+      baseline: studies.baseline ? { curve: null, cover: null, map: null } : null,
       rhoKgPerM3: caseAirDensity(state.case),
     };
     const superseded = () => this.abort !== ac;
@@ -646,19 +611,15 @@ export class App {
     // 1. The current design, exactly as its case file says, but first without the grid-convergence
     //    lattices (the same values, about half the cost): its numbers show at once; the uncertainty
     //    estimate follows with the next stage.
-    const gci = plan.current.options.gridConvergence;
-    const quick = gci
-      ? { ...plan.current, options: { ...plan.current.options, gridConvergence: false } }
-      : plan.current;
-    const s1 = await this.sweep([quick], { signal: ac.signal });
+    const s1 = await this.run([studies.quick ?? studies.current], { signal: ac.signal });
     if (superseded()) return;
     if (s1.cancelled) return this.cancelled(r);
-    const currentSolution = s1.solutions[0] ?? null;
-    if (!currentSolution) {
-      this.fail(`The model could not solve this design: ${s1.errors[0] ?? 'unknown error'}`);
+    const first = s1.results[0]!;
+    if (first.errors[0] !== null || first.landed[0] !== 1) {
+      this.fail(`The model could not solve this design: ${first.errors[0] ?? 'unknown error'}`);
       return;
     }
-    r.current = currentSolution;
+    r.current = first.cube;
     this.results = r;
     const t1 = performance.now();
     this.messages.clear('model');
@@ -678,44 +639,41 @@ export class App {
     }
 
     // 2. The current design with its grid-convergence estimate, the family, drag vs cover and the
-    //    baseline.
+    //    baseline, in one run (cases of one surface share their factorisation).
     this.stage('sweeps');
-    const extra: WheelInput[] = [...plan.family.inputs, ...plan.cover.inputs];
-    if (plan.baseline) extra.push(plan.baseline.curve, plan.baseline.cover, plan.baseline.map);
-    if (gci) extra.push(plan.current);
-    const nf = plan.family.inputs.length;
-    const nc = plan.cover.inputs.length;
-    const gciIndex = gci ? extra.length - 1 : -1;
-    const s2 = await this.sweep(extra, {
+    const b = studies.baseline;
+    const plans: StudyPlan[] = [studies.family, studies.cover];
+    if (b) plans.push(b.curve, b.cover, b.map);
+    if (studies.quick) plans.push(studies.current);
+    const gciStudy = studies.quick ? plans.length - 1 : -1;
+    const s2 = await this.run(plans, {
       signal: ac.signal,
       onProgress: (p) => this.status(`Cover-fraction sweeps: ${p.casesDone}/${p.casesTotal} cases`, p),
-      onCase: (i, sol) => {
-        if (i === gciIndex && sol && !superseded()) {
-          r.current = sol;
+      onCase: (landed) => {
+        if (landed.study === gciStudy && landed.cube && !superseded()) {
+          r.current = landed.cube;
           this.renderAll();
         }
       },
     });
     if (superseded()) return;
     const t2 = performance.now();
-    s2.solutions.forEach((sol, i) => {
-      if (i === gciIndex) {
-        if (sol) r.current = sol;
-      } else if (i < nf) r.family[i] = sol;
-      else if (i < nf + nc) r.cover[i - nf] = sol;
-      else if (r.baseline) {
-        const k = i - nf - nc;
-        if (k === 0) r.baseline.curve = sol;
-        else if (k === 1) r.baseline.cover = sol;
-        else r.baseline.map = sol;
-      }
-    });
+    const [family, cover, ...rest] = s2.results;
+    r.family = family!;
+    r.cover = cover!;
+    if (r.baseline) {
+      r.baseline.curve = rest[0]!;
+      r.baseline.cover = rest[1]!;
+      r.baseline.map = rest[2]!;
+    }
+    const gci = gciStudy >= 0 ? s2.results[gciStudy]! : null;
+    if (gci?.cube && gci.landed[0] === 1 && gci.errors[0] === null) r.current = gci.cube;
     this.renderAll();
     if (s2.cancelled) return this.cancelled(r);
 
     // 3. The design map (the longer sweep).
     this.stage('map');
-    const s3 = await this.sweep(plan.map.inputs, {
+    const s3 = await this.run([studies.map], {
       signal: ac.signal,
       onProgress: (p) => {
         const left = Number.isFinite(p.remainingMs)
@@ -723,19 +681,14 @@ export class App {
           : '';
         this.status(`Design map: ${p.casesDone}/${p.casesTotal} designs${left}`, p);
       },
-      onCase: (i, sol) => {
-        r.map[i] = sol;
-      },
     });
     if (superseded()) return;
-    s3.solutions.forEach((sol, i) => {
-      r.map[i] = sol;
-    });
+    r.map = s3.results[0]!;
     this.renderAll();
     if (s3.cancelled) return this.cancelled(r);
     const failed = s2.failedCount + s3.failedCount;
     if (failed > 0) {
-      const first = [...s2.errors, ...s3.errors].find((e) => e !== null) ?? '';
+      const first = [...s2.results, ...s3.results].flatMap((x) => x.errors).find((e) => e !== null) ?? '';
       this.messages.show(
         'warning',
         `${failed} swept design(s) could not be solved and are left blank.`,
@@ -767,7 +720,7 @@ export class App {
     document.body.dataset.stage = name;
   }
 
-  private cancelled(r: Results): void {
+  private cancelled(r: PageResults): void {
     this.results = r.current ? r : this.results;
     this.renderAll();
     this.status('Cancelled: the sweeps are incomplete. Change any control to compute again.');
@@ -786,86 +739,33 @@ export class App {
   }
 
   // -------------------------------------------------------------------------------------------
-  // Display helpers
-
-  private units(): DisplayUnits {
-    const v = this.state.view;
-    return {
-      speed: v.speedUnit,
-      force: v.forceUnit,
-      area: v.areaUnit,
-      referenceSpeedMps: kmhToMps(this.state.case.conditions.reference_speed_kmh),
-    };
-  }
-
-  private conditionsText(speedMps: number, rho: number, short = false): string {
-    const u = this.state.view.speedUnit;
-    if (short) return `${fmt(speedFromMps(speedMps, u), 3)} ${speedUnitText(u)}, ρ ${rho.toFixed(3)} kg/m³`;
-    return `at ${fmt(speedFromMps(speedMps, u), 3)} ${speedUnitText(u)} (${fmt(speedMps, 3)} m/s), ρ ${rho.toFixed(3)} kg/m³`;
-  }
-
-  private display(spec: OutputSpec, p: PointResult): number {
-    return toDisplay(spec.get(p), spec.kind, this.units(), p);
-  }
-
-  /** A value, or its difference from the baseline point under the difference mode. */
-  private compared(
-    spec: OutputSpec,
-    p: PointResult,
-    b: PointResult | undefined,
-    mode: DifferenceMode,
-  ): number {
-    if (mode === 'none' || !b) return this.display(spec, p);
-    if (mode === 'force') return this.display(spec, p) - this.display(spec, b);
-    if (mode === 'power') return p.powerW - b.powerW;
-    const base = spec.get(b);
-    return (100 * (spec.get(p) - base)) / Math.abs(base);
-  }
-
-  private comparedLabel(spec: OutputSpec, mode: DifferenceMode): string {
-    const unit = unitText(spec.kind, this.units());
-    const name = spec.short ?? spec.label;
-    if (mode === 'force') return `${name} − baseline, ${unit}`;
-    if (mode === 'power') return 'Power − baseline, W';
-    if (mode === 'percent') return `${name} vs baseline, %`;
-    return `${spec.label}, ${unit}`;
-  }
-
-  private differenceMode(): DifferenceMode {
-    return this.state.baseline && this.results?.baseline ? this.state.view.difference : 'none';
-  }
-
-  /** The current design's points at its first (main) airspeed. */
-  private mainPoints(sol: WheelSolution): PointResult[] {
-    return sol.points.slice(0, this.state.case.conditions.yaw_deg.length);
-  }
-
-  // -------------------------------------------------------------------------------------------
-  // Rendering
+  // Views: each reads the state and the results' cubes (src/ui/views)
 
   private renderAll(opts: { light?: boolean } = {}): void {
     const r = this.results;
     if (!r?.current) return;
+    const ctx = presentOf(this.state, r);
     this.renderFlags(r);
-    this.renderHeadline(r);
-    this.renderYawPlots(r);
-    this.renderCoverPlot(r);
+    renderHeadline(byId('headline'), ctx, r);
+    renderYawPlots(this.plots, ctx, r);
+    renderCoverPlot(this.plots.dragCover, ctx, r);
     if (!opts.light) {
-      this.renderMap(r);
-      this.renderTables(r);
+      renderMap(this.designMap, ctx, r);
+      this.tables?.render(ctx, r);
     }
-    const notes = [...r.plan.notes];
+    const notes = [...r.studies.notes];
     if (this.state.case.conditions.airspeed_mps.length > 1) {
       notes.push(
         `This design lists ${this.state.case.conditions.airspeed_mps.length} airspeeds; the plots show the first, the “current design” table lists all.`,
       );
     }
     byId('plot-notes').textContent = notes.join(' ');
+    byId('undo-pick').hidden = this.picked.length === 0;
   }
 
-  private renderFlags(r: Results): void {
+  private renderFlags(r: PageResults): void {
     const flags = new Set<string>();
-    for (const p of r.current!.points) for (const f of p.flags) flags.add(f);
+    for (const p of allPoints(r)) for (const f of p.flags) flags.add(f);
     if (flags.size === 0) {
       this.messages.clear('flags');
       return;
@@ -878,540 +778,31 @@ export class App {
     );
   }
 
-  private renderHeadline(r: Results): void {
-    const u = this.units();
-    const pts = this.mainPoints(r.current!);
-    const yaws = this.state.case.conditions.yaw_deg;
-    const i0 = nearestIndex(yaws, 0);
-    const i10 = nearestIndex(yaws, 10);
-    const base = r.baseline?.curve ? r.baseline.curve.points : null;
-    const cards: Array<{ label: string; spec: OutputSpec; i: number; extra?: string }> = [];
-    const p0 = pts[i0]!;
-    const gfRef = toDisplay(p0.axialN, 'force', { ...u, force: 'gf' }, p0);
-    cards.push({
-      label: `Axial drag at ${fmt(yaws[i0]!)}° yaw`,
-      spec: OUTPUTS.axial,
-      i: i0,
-      extra:
-        u.force === 'N'
-          ? `${fixed(gfRef, 0)} gf at ${fmt(speedFromMps(u.referenceSpeedMps, u.speed), 3)} ${speedUnitText(u.speed)}`
-          : `${fixed(p0.axialN, 3)} N at the airspeed`,
-    });
-    cards.push({ label: `Axial drag at ${fmt(yaws[i10]!)}° yaw`, spec: OUTPUTS.axial, i: i10 });
-    cards.push({ label: `Side force at ${fmt(yaws[i10]!)}° yaw`, spec: OUTPUTS.side, i: i10 });
-    cards.push({ label: `Steering moment at ${fmt(yaws[i10]!)}°`, spec: OUTPUTS.steering, i: i10 });
-    cards.push({ label: `Power at ${fmt(yaws[i0]!)}° (one wheel)`, spec: OUTPUTS.power, i: i0 });
-    cards.push({ label: `Drag area at ${fmt(yaws[i0]!)}° yaw`, spec: OUTPUTS.cda, i: i0 });
-    const box = byId('headline');
-    const frag = document.createDocumentFragment();
-    for (const c of cards) {
-      const p = pts[c.i]!;
-      const card = document.createElement('div');
-      card.className = 'figure-card';
-      const label = document.createElement('div');
-      label.className = 'label';
-      label.textContent = c.label;
-      const value = document.createElement('div');
-      value.className = 'value';
-      const decimals = c.spec.kind === 'force' ? (u.force === 'N' ? 3 : 0) : c.spec.kind === 'moment' ? 3 : 2;
-      value.textContent = `${fixed(this.display(c.spec, p), decimals)} ${unitText(c.spec.kind, u)}`;
-      card.append(label, value);
-      const subs: string[] = [];
-      if (c.extra) subs.push(c.extra);
-      if (c.spec.key === 'axial' && p.uncertaintyAxialN > 0) {
-        subs.push(
-          `lattice ± ${fixed(toDisplay(p.uncertaintyAxialN, 'force', u, p), u.force === 'N' ? 3 : 1)}`,
-        );
-      }
-      if (c.spec.key === 'side' && p.uncertaintySideN > 0) {
-        subs.push(
-          `lattice ± ${fixed(toDisplay(p.uncertaintySideN, 'force', u, p), u.force === 'N' ? 3 : 1)}`,
-        );
-      }
-      if (subs.length > 0) {
-        const sub = document.createElement('div');
-        sub.className = 'sub';
-        sub.textContent = subs.join(' · ');
-        card.append(sub);
-      }
-      const b = base?.[c.i];
-      if (b) {
-        const delta = document.createElement('div');
-        delta.className = 'delta';
-        const d = this.display(c.spec, p) - this.display(c.spec, b);
-        const pct = (100 * (c.spec.get(p) - c.spec.get(b))) / Math.abs(c.spec.get(b));
-        const parts = [`${d >= 0 ? '+' : ''}${fixed(d, decimals)} ${unitText(c.spec.kind, u)}`];
-        if (Number.isFinite(pct)) parts.push(`${pct >= 0 ? '+' : ''}${fixed(pct, 1)} %`);
-        if (c.spec.key === 'axial')
-          parts.push(`${p.powerW - b.powerW >= 0 ? '+' : ''}${fixed(p.powerW - b.powerW, 2)} W`);
-        delta.textContent = `vs baseline: ${parts.join(', ')}`;
-        card.append(delta);
-      }
-      frag.append(card);
-    }
-    box.replaceChildren(frag);
-  }
-
-  private renderYawPlots(r: Results): void {
-    const u = this.units();
+  /** A map cell picked: its covering fraction and rim depth become the current design (Undo restores). */
+  private pickMapCell(i: number, j: number): void {
+    const r = this.results;
+    if (!r) return;
+    const fraction = axisOf(r.studies.map, 'coverFraction')[i];
+    const depthM = axisOf(r.studies.map, 'rimDepth')[j];
+    if (fraction === undefined || depthM === undefined) return;
     const c = this.state.case;
-    const yaws = [...c.conditions.yaw_deg];
-    const pts = this.mainPoints(r.current!);
-    const mode = this.differenceMode();
-    const basePts = r.baseline?.curve?.points;
-    const cond = this.conditionsText(c.conditions.airspeed_mps[0]!, r.rhoKgPerM3);
-    const xLabel = `Yaw angle, deg — ${cond}`;
-    const xLabelShort = `Yaw, deg — ${this.conditionsText(c.conditions.airspeed_mps[0]!, r.rhoKgPerM3, true)}`;
-    const fractions = r.plan.family.fractions;
-    const famSeries = (spec: OutputSpec, m: DifferenceMode): PlotSeries[] =>
-      fractions.map((f, k) => ({
-        label: `cover ${fmt(f, 3)}`,
-        stroke: familyColour(k, fractions.length),
-        width: 1.2,
-        values: r.family[k]
-          ? r.family[k]!.points.map((p, i) => nullIfNaN(this.compared(spec, p, basePts?.[i], m)))
-          : yaws.map(() => null),
-      }));
-    const currentLabel = `this design (cover ${fmt(c.wheel.cover.fraction, 3)}, ${c.wheel.cover.placement})`;
-    // Axial drag vs yaw.
-    const dragSeries = famSeries(OUTPUTS.axial, mode);
-    dragSeries.push({
-      label: currentLabel,
-      stroke: CURRENT_COLOUR,
-      width: 2.6,
-      values: pts.map((p, i) => nullIfNaN(this.compared(OUTPUTS.axial, p, basePts?.[i], mode))),
-    });
-    if (basePts && mode === 'none') {
-      dragSeries.push({
-        label: 'baseline',
-        stroke: BASELINE_COLOUR,
-        width: 1.8,
-        dash: [6, 4],
-        values: basePts.map((p) => nullIfNaN(this.display(OUTPUTS.axial, p))),
-      });
-    }
-    const dragTitle =
-      mode === 'none'
-        ? 'Axial drag (along travel) vs yaw'
-        : 'Axial drag vs yaw, as a difference from the baseline';
-    setFigTitle('fig-drag-yaw', dragTitle);
-    this.plots.dragYaw.render({
-      title: dragTitle,
-      xLabel,
-      xLabelShort,
-      yLabel: this.comparedLabel(OUTPUTS.axial, mode),
-      xs: yaws,
-      series: dragSeries,
-    });
-    // Side force vs yaw.
-    const sideSeries = famSeries(OUTPUTS.side, 'none');
-    sideSeries.push({
-      label: currentLabel,
-      stroke: CURRENT_COLOUR,
-      width: 2.6,
-      values: pts.map((p) => nullIfNaN(this.display(OUTPUTS.side, p))),
-    });
-    if (basePts) {
-      sideSeries.push({
-        label: 'baseline',
-        stroke: BASELINE_COLOUR,
-        width: 1.8,
-        dash: [6, 4],
-        values: basePts.map((p) => nullIfNaN(this.display(OUTPUTS.side, p))),
-      });
-    }
-    setFigTitle('fig-side-yaw', 'Side force vs yaw');
-    this.plots.sideYaw.render({
-      title: 'Side force vs yaw',
-      xLabel,
-      xLabelShort,
-      yLabel: `Side force, ${unitText('force', u)}`,
-      xs: yaws,
-      series: sideSeries,
-    });
-    // Centre of pressure and steering moment.
-    const handling: PlotSeries[] = [
-      {
-        label: 'CP ahead of hub, mm',
-        stroke: '#1c6876',
-        width: 2,
-        values: pts.map((p) => nullIfNaN(p.cpXM * 1000)),
-      },
-      {
-        label: 'CP above hub, mm',
-        stroke: '#6b4fa0',
-        width: 2,
-        values: pts.map((p) => nullIfNaN(p.cpZM * 1000)),
-      },
-      {
-        label: 'steering moment, N m',
-        stroke: CURRENT_COLOUR,
-        width: 2.4,
-        scale: 'y2',
-        values: pts.map((p) => nullIfNaN(p.steeringMomentNm)),
-      },
-    ];
-    if (basePts) {
-      handling.push({
-        label: 'baseline steering moment, N m',
-        stroke: BASELINE_COLOUR,
-        width: 1.6,
-        dash: [6, 4],
-        scale: 'y2',
-        values: basePts.map((p) => nullIfNaN(p.steeringMomentNm)),
-      });
-    }
-    const s = c.steering;
-    const handlingTitle = `Centre of pressure and steering moment vs yaw (head ${fmt(s.head_angle_deg)}°, offset ${fmt(s.fork_offset_m * 1000)} mm)`;
-    setFigTitle('fig-handling', handlingTitle);
-    this.plots.handling.render({
-      title: handlingTitle,
-      xLabel,
-      xLabelShort,
-      yLabel: 'Centre of pressure, mm',
-      y2Label: 'Steering moment, N m',
-      xs: yaws,
-      series: handling,
-    });
-  }
-
-  private renderCoverPlot(r: Results): void {
-    const { fractions, speedsMps, yawsDeg } = r.plan.cover;
-    const mode = this.differenceMode();
-    const basePts = r.baseline?.cover?.points;
-    const series: PlotSeries[] = [];
-    const u = this.state.view.speedUnit;
-    let k = 0;
-    speedsMps.forEach((v, si) => {
-      yawsDeg.forEach((yaw, yi) => {
-        const idx = si * yawsDeg.length + yi;
-        series.push({
-          label: `${fmt(yaw)}° at ${fmt(speedFromMps(v, u), 3)} ${speedUnitText(u)}`,
-          stroke: SPEED_YAW_COLOURS[yi % SPEED_YAW_COLOURS.length]!,
-          width: 1.8,
-          ...(si > 0 ? { dash: si === 1 ? [7, 4] : [2, 3] } : {}),
-          values: r.cover.map((sol) =>
-            sol ? nullIfNaN(this.compared(OUTPUTS.axial, sol.points[idx]!, basePts?.[idx], mode)) : null,
-          ),
-        });
-        k++;
-      });
-    });
-    void k;
-    const c = this.state.case;
-    const title =
-      mode === 'none'
-        ? 'Axial drag (along travel) vs covered fraction'
-        : 'Axial drag vs covered fraction, as a difference from the baseline';
-    setFigTitle('fig-drag-cover', title);
     const placement = c.wheel.cover.placement === 'explicit' ? 'rim' : c.wheel.cover.placement;
-    this.plots.dragCover.render({
-      title,
-      xLabel: `Covered fraction (covers at the ${placement}) — ρ ${r.rhoKgPerM3.toFixed(3)} kg/m³; yaw and airspeed per line`,
-      xLabelShort: `Covered fraction — ρ ${r.rhoKgPerM3.toFixed(3)} kg/m³`,
-      yLabel: this.comparedLabel(OUTPUTS.axial, mode),
-      xs: [...fractions],
-      series,
-      markerX: c.wheel.cover.placement === 'explicit' ? null : c.wheel.cover.fraction,
+    const next = validateCase({
+      ...c,
+      wheel: { ...c.wheel, rim_depth_m: depthM, cover: { ...c.wheel.cover, fraction, placement } },
     });
-  }
-
-  private mapGrid(r: Results, key: OutputKey, mode: DifferenceMode): Float64Array {
-    const spec = OUTPUTS[key];
-    const b = r.baseline?.map?.points[0];
-    return Float64Array.from(r.map, (sol) => {
-      const p = sol?.points[0];
-      return p ? this.compared(spec, p, b, mode) : Number.NaN;
-    });
-  }
-
-  private renderMap(r: Results): void {
-    const v = this.state.view;
-    const c = this.state.case;
-    const mode = this.differenceMode();
-    const { fractions, depthsM, yawDeg } = r.plan.map;
-    const colourSpec = OUTPUTS[v.mapColour];
-    const contourSpec = OUTPUTS[v.mapContour];
-    const colourLabel = this.comparedLabel(colourSpec, mode);
-    const contourLabel = `${contourSpec.label}, ${unitText(contourSpec.kind, this.units())}`;
-    const title = [
-      `Colour: ${colourLabel}.  Lines: ${contourLabel}.`,
-      `At ${fmt(yawDeg)}° yaw, ${this.conditionsText(c.conditions.airspeed_mps[0]!, r.rhoKgPerM3)}.`,
-    ];
-    setFigTitle('fig-map', `Design map: covered fraction × rim depth at ${fmt(yawDeg)}° yaw`);
-    const explicit = c.wheel.cover.placement === 'explicit';
-    const b = this.state.baseline;
-    this.designMap.render({
-      xs: fractions,
-      ys: depthsM.map((d) => d * 1000),
-      colour: this.mapGrid(r, v.mapColour, mode),
-      colourLabel,
-      diverging: mode !== 'none',
-      contour: this.mapGrid(r, v.mapContour, 'none'),
-      contourLabel,
-      title,
-      current: explicit ? null : { x: c.wheel.cover.fraction, y: c.wheel.rim_depth_m * 1000 },
-      baseline:
-        b && b.wheel.cover.placement !== 'explicit'
-          ? { x: b.wheel.cover.fraction, y: b.wheel.rim_depth_m * 1000 }
-          : null,
-    });
-  }
-
-  // -------------------------------------------------------------------------------------------
-  // Tables
-
-  private buildTables(): void {
-    const host = byId('tables');
-    const specs: Array<[string, string]> = [
-      ['table-current', 'Current design at each airspeed and yaw (drag and yaw plots, handling plot)'],
-      ['table-components', 'Current design: axial drag by model component (first airspeed)'],
-      ['table-family', 'Covering-fraction family vs yaw (drag and side-force plots)'],
-      ['table-cover', 'Axial drag vs covered fraction (drag vs cover plot)'],
-      ['table-map', 'Design map grid'],
-      ['table-baseline', 'Current design against the pinned baseline'],
-    ];
-    for (const [id, caption] of specs) {
-      const block = document.createElement('section');
-      block.className = 'table-block';
-      block.id = `${id}-block`;
-      const head = document.createElement('div');
-      head.className = 'table-head';
-      const csv = document.createElement('button');
-      csv.type = 'button';
-      csv.textContent = 'CSV';
-      csv.setAttribute('aria-label', `Save as CSV: ${caption}`);
-      const scroll = document.createElement('div');
-      scroll.className = 'table-scroll';
-      scroll.tabIndex = 0;
-      scroll.setAttribute('role', 'region');
-      scroll.setAttribute('aria-label', caption);
-      const table = new DataTable(scroll, id, caption);
-      csv.addEventListener('click', () =>
-        downloadText(
-          `${safeFileStem(this.state.case.name, 'coversweep')}-${id.replace('table-', '')}.csv`,
-          table.toCsv(),
-          'text/csv',
-        ),
-      );
-      head.append(csv);
-      block.append(head, scroll);
-      host.append(block);
-      this.tables.set(id, table);
+    if (!next.ok) {
+      this.messages.show('error', 'That map cell cannot be made the current design:', next.errors, 'edit');
+      return;
     }
+    this.picked.push(c);
+    this.messages.clear('edit');
+    this.apply({ ...this.state, case: next.value });
   }
 
-  private renderTables(r: Results): void {
-    const u = this.units();
-    const fu = unitShort('force', u);
-    const au = unitShort('area', u);
-    const fd = u.force === 'N' ? 4 : 1;
-    const ad = u.area === 'm2' ? 6 : 2;
-    const refText = `${fmt(speedFromMps(u.referenceSpeedMps, u.speed), 3)} ${speedUnitText(u.speed)}`;
-    const sp = speedUnitText(u.speed);
-    const c = this.state.case;
-    const yaws = c.conditions.yaw_deg;
-    // Current design.
-    const cur = r.current!;
-    const curColumns: TableColumn[] = [
-      { header: 'Yaw, deg', decimals: 2 },
-      { header: `Airspeed, ${sp}`, decimals: 2 },
-      { header: `Axial drag, ${fu}`, decimals: fd },
-      { header: `Axial drag, gf at ${refText}`, decimals: 1 },
-      { header: `Axial lattice ±, ${fu}`, decimals: fd },
-      { header: `Side force, ${fu}`, decimals: fd },
-      { header: `Side lattice ±, ${fu}`, decimals: fd },
-      { header: `Vertical force, ${fu}`, decimals: fd },
-      { header: `Wind-axis drag, ${fu}`, decimals: fd },
-      { header: `Wind-axis lift, ${fu}`, decimals: fd },
-      { header: 'CP ahead of hub, mm', decimals: 1 },
-      { header: 'CP above hub, mm', decimals: 1 },
-      { header: 'Yaw moment, N m', decimals: 4 },
-      { header: 'Roll moment, N m', decimals: 4 },
-      { header: 'Steering moment, N m', decimals: 4 },
-      { header: 'Axle torque, N m', decimals: 5 },
-      { header: 'Power, W', decimals: 3 },
-      { header: `Drag area, ${au}`, decimals: ad },
-      { header: 'Flags' },
-    ];
-    const curRows: Cell[][] = cur.points.map((p, i) => [
-      yaws[i % yaws.length]!,
-      speedFromMps(p.airspeedMps, u.speed),
-      toDisplay(p.axialN, 'force', u, p),
-      toDisplay(p.axialN, 'force', { ...u, force: 'gf' }, p),
-      toDisplay(p.uncertaintyAxialN, 'force', u, p),
-      toDisplay(p.sideN, 'force', u, p),
-      toDisplay(p.uncertaintySideN, 'force', u, p),
-      toDisplay(p.verticalN, 'force', u, p),
-      toDisplay(p.windDragN, 'force', u, p),
-      toDisplay(p.windLiftN, 'force', u, p),
-      p.cpXM * 1000,
-      p.cpZM * 1000,
-      p.yawMomentNm,
-      p.rollMomentNm,
-      p.steeringMomentNm,
-      p.axleTorqueNm,
-      p.powerW,
-      toDisplay(p.cdaAxialM2, 'area', u, p),
-      p.flags.join(' '),
-    ]);
-    this.tables.get('table-current')!.setData(curColumns, curRows);
-    // Components.
-    const names = COMPONENT_NAMES;
-    const compColumns: TableColumn[] = [
-      { header: 'Yaw, deg', decimals: 2 },
-      ...names.map((n) => ({ header: `${n.replace('_', ' & ')} axial, ${fu}`, decimals: fd })),
-      ...names.map((n) => ({ header: `${n.replace('_', ' & ')} axle torque, N m`, decimals: 5 })),
-      { header: `Total axial, ${fu}`, decimals: fd },
-    ];
-    const compRows: Cell[][] = this.mainPoints(cur).map((p, i) => [
-      yaws[i]!,
-      ...names.map((n) => toDisplay(-p.components[n].fxN, 'force', u, p)),
-      ...names.map((n) => p.components[n].axleTorqueNm),
-      toDisplay(p.axialN, 'force', u, p),
-    ]);
-    this.tables.get('table-components')!.setData(compColumns, compRows);
-    // Family.
-    const fr = r.plan.family.fractions;
-    const famColumns: TableColumn[] = [
-      { header: 'Yaw, deg', decimals: 2 },
-      ...fr.map((f) => ({ header: `Axial drag at cover ${fmt(f, 3)}, ${fu}`, decimals: fd })),
-      ...fr.map((f) => ({ header: `Side force at cover ${fmt(f, 3)}, ${fu}`, decimals: fd })),
-    ];
-    const famRows: Cell[][] = yaws.map((yaw, i) => [
-      yaw,
-      ...fr.map((_, k) => {
-        const p = r.family[k]?.points[i];
-        return p ? toDisplay(p.axialN, 'force', u, p) : null;
-      }),
-      ...fr.map((_, k) => {
-        const p = r.family[k]?.points[i];
-        return p ? toDisplay(p.sideN, 'force', u, p) : null;
-      }),
-    ]);
-    this.tables.get('table-family')!.setData(famColumns, famRows);
-    // Cover.
-    const { speedsMps, yawsDeg } = r.plan.cover;
-    const coverBase = r.baseline?.cover?.points;
-    const coverColumns: TableColumn[] = [
-      { header: 'Covered fraction', decimals: 2 },
-      { header: `Airspeed, ${sp}`, decimals: 2 },
-      { header: 'Yaw, deg', decimals: 2 },
-      { header: `Axial drag, ${fu}`, decimals: fd },
-      { header: `Side force, ${fu}`, decimals: fd },
-      { header: 'Steering moment, N m', decimals: 4 },
-      { header: 'Power, W', decimals: 3 },
-      ...(coverBase
-        ? [
-            { header: `Axial drag − baseline, ${fu}`, decimals: fd },
-            { header: 'Power − baseline, W', decimals: 3 },
-            { header: 'Axial drag vs baseline, %', decimals: 1 },
-          ]
-        : []),
-    ];
-    const coverRows: Cell[][] = [];
-    r.cover.forEach((sol, fi) => {
-      if (!sol) return;
-      speedsMps.forEach((v, si) => {
-        yawsDeg.forEach((yaw, yi) => {
-          const idx = si * yawsDeg.length + yi;
-          const p = sol.points[idx]!;
-          const b = coverBase?.[idx];
-          coverRows.push([
-            r.plan.cover.fractions[fi]!,
-            speedFromMps(v, u.speed),
-            yaw,
-            toDisplay(p.axialN, 'force', u, p),
-            toDisplay(p.sideN, 'force', u, p),
-            p.steeringMomentNm,
-            p.powerW,
-            ...(b
-              ? [
-                  toDisplay(p.axialN, 'force', u, p) - toDisplay(b.axialN, 'force', u, b),
-                  p.powerW - b.powerW,
-                  (100 * (p.axialN - b.axialN)) / Math.abs(b.axialN),
-                ]
-              : []),
-          ]);
-        });
-      });
-    });
-    this.tables.get('table-cover')!.setData(coverColumns, coverRows);
-    // Map.
-    const v = this.state.view;
-    const mapKeys: OutputKey[] = [
-      ...new Set<OutputKey>([v.mapColour, v.mapContour, 'axial', 'side', 'steering', 'power']),
-    ];
-    const mapColumns: TableColumn[] = [
-      { header: 'Covered fraction', decimals: 2 },
-      { header: 'Rim depth, mm', decimals: 1 },
-      ...mapKeys.map((k) => ({
-        header: `${OUTPUTS[k].label}, ${unitShort(OUTPUTS[k].kind, u)}`,
-        decimals:
-          OUTPUTS[k].kind === 'force'
-            ? fd
-            : OUTPUTS[k].kind === 'moment'
-              ? 4
-              : OUTPUTS[k].kind === 'area'
-                ? ad
-                : 2,
-      })),
-    ];
-    const mapRows: Cell[][] = [];
-    const nx = r.plan.map.fractions.length;
-    r.map.forEach((sol, k) => {
-      const p = sol?.points[0];
-      if (!p) return;
-      mapRows.push([
-        r.plan.map.fractions[k % nx]!,
-        r.plan.map.depthsM[Math.floor(k / nx)]! * 1000,
-        ...mapKeys.map((key) => this.display(OUTPUTS[key], p)),
-      ]);
-    });
-    const mapTable = this.tables.get('table-map')!;
-    mapTable.setCaption(
-      `Design map grid at ${fmt(r.plan.map.yawDeg)}° yaw, ${this.conditionsText(c.conditions.airspeed_mps[0]!, r.rhoKgPerM3)}`,
-    );
-    mapTable.setData(mapColumns, mapRows);
-    // Baseline.
-    const block = byId('table-baseline-block');
-    const bpts = r.baseline?.curve?.points;
-    block.hidden = !bpts;
-    if (bpts) {
-      const pts = this.mainPoints(cur);
-      this.tables.get('table-baseline')!.setData(
-        [
-          { header: 'Yaw, deg', decimals: 2 },
-          { header: `Baseline axial drag, ${fu}`, decimals: fd },
-          { header: `This design's axial drag, ${fu}`, decimals: fd },
-          { header: `Difference, ${fu}`, decimals: fd },
-          { header: 'Difference, gf at reference speed', decimals: 1 },
-          { header: 'Power difference, W', decimals: 3 },
-          { header: 'Axial drag difference, %', decimals: 1 },
-          { header: `Baseline side force, ${fu}`, decimals: fd },
-          { header: `This design's side force, ${fu}`, decimals: fd },
-          { header: 'Baseline steering moment, N m', decimals: 4 },
-          { header: "This design's steering moment, N m", decimals: 4 },
-        ],
-        pts.map((p, i) => {
-          const b = bpts[i]!;
-          const gf = { ...u, force: 'gf' as const };
-          return [
-            yaws[i]!,
-            toDisplay(b.axialN, 'force', u, b),
-            toDisplay(p.axialN, 'force', u, p),
-            toDisplay(p.axialN, 'force', u, p) - toDisplay(b.axialN, 'force', u, b),
-            toDisplay(p.axialN, 'force', gf, p) - toDisplay(b.axialN, 'force', gf, b),
-            p.powerW - b.powerW,
-            (100 * (p.axialN - b.axialN)) / Math.abs(b.axialN),
-            toDisplay(b.sideN, 'force', u, b),
-            toDisplay(p.sideN, 'force', u, p),
-            b.steeringMomentNm,
-            p.steeringMomentNm,
-          ];
-        }),
-      );
-    }
+  private undoPick(): void {
+    const previous = this.picked.pop();
+    if (previous) this.apply({ ...this.state, case: previous });
   }
 
   // -------------------------------------------------------------------------------------------
@@ -1465,7 +856,7 @@ export class App {
       if (ticket !== this.view3dRequest || !this.view3d) return;
       this.view3d.update(field);
       byId('view3d-note').textContent =
-        `Pressure jump on the wheel at ${fmt(yawDeg)}° yaw, ${this.conditionsText(p0.airspeedMps, p0.rhoKgPerM3)}; drag to orbit.`;
+        `Pressure jump on the wheel at ${fmt(yawDeg)}° yaw, ${conditionsText(presentOf(this.state, this.results), p0.airspeedMps, p0.rhoKgPerM3)}; drag to orbit.`;
     } catch (error) {
       this.view3dWorker?.terminate();
       this.view3dWorker = null;
@@ -1944,23 +1335,4 @@ function readDeadlineMs(bytes: number): number {
 
 function compareDeadlineMs(rows: number, heavy: boolean): number {
   return 60_000 + 2 * rows * (heavy ? 50 : 1);
-}
-
-function byId<T extends HTMLElement = HTMLElement>(id: string): T {
-  const el = document.getElementById(id);
-  if (!el) throw new Error(`page element #${id} is missing`);
-  return el as T;
-}
-
-function plotDiv(figureId: string): HTMLElement {
-  return byId(figureId).querySelector<HTMLElement>('.plot')!;
-}
-
-function setFigTitle(figureId: string, text: string): void {
-  const el = byId(figureId).querySelector('.fig-title');
-  if (el) el.textContent = text;
-}
-
-function nullIfNaN(x: number): number | null {
-  return Number.isFinite(x) ? x : null;
 }

@@ -1,7 +1,7 @@
 /**
  * The page's reference states for the bit-identity test (studyReference.test.ts): the default design
  * and a non-default state (explicit cover radii, two airspeeds, a pinned baseline, a changed view).
- * `npx tsx test/compute/study/makePageReference.ts` wrote reference/page-*.json from the code before
+ * test/compute/study/makePageReference.ts (commit 1df3d46) wrote reference/page-*.json from the code before
  * the study runner: every model input the page solved (as a sha256 of its JSON) and every result, in the
  * page's old per-role lists (family[k], cover[k] with point index speed * yaws + yaw, map[depth * nx +
  * fraction]), each packed result as the base64 of its Float64Array bytes (little-endian).
