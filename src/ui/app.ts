@@ -9,7 +9,6 @@ import {
   type CaseFile,
   type CaseWheel,
   caseAirDensity,
-  caseToModelInput,
   parseCaseFile,
   validateCase,
 } from '../compute/caseFile';
@@ -25,8 +24,9 @@ import {
   runStudies,
   type StudiesOutcome,
   type StudyPlan,
+  viewFieldRequest,
 } from '../compute/study';
-import { degToRad, kmhToMps } from '../compute/units';
+import { kmhToMps } from '../compute/units';
 import {
   type AppState,
   type CalibrationMark,
@@ -835,17 +835,9 @@ export class App {
 
   private async update3d(): Promise<void> {
     if (!this.view3d || !this.results?.current) return;
-    const c = this.state.case;
-    const input = caseToModelInput(c);
-    const p0 = input.points[0]!;
     const yawDeg = this.state.view.view3dYawDeg;
-    const request = {
-      input: {
-        ...input,
-        options: { ...input.options, gridConvergence: false },
-        points: [{ ...p0, yawRad: degToRad(yawDeg) }],
-      },
-    };
+    const request = viewFieldRequest(this.state.case, yawDeg);
+    const p0 = request.input.points[0]!;
     const ticket = ++this.view3dRequest;
     try {
       this.view3dWorker ??= spawnTracked();

@@ -36,3 +36,4 @@ export {
   type UnplannedCase,
 } from './studyPlan';
 export { pointsAt, variantInput } from './variantInput';
+export { viewFieldRequest } from './viewFieldRequest';
