@@ -14,18 +14,8 @@ import {
 } from '../compute/caseFile';
 import type { CalibrationResult } from '../compute/compare/index';
 import type { ViewField } from '../compute/engine/protocol';
-import type { SweepProgress } from '../compute/engine/runCases';
 import type { WorkerPool } from '../compute/engine/workerPool';
-import {
-  FLAG_MESSAGES,
-  type PageStudies,
-  pageStudies,
-  type RunStudiesOptions,
-  runStudies,
-  type StudiesOutcome,
-  type StudyPlan,
-  viewFieldRequest,
-} from '../compute/study';
+import { FLAG_MESSAGES, viewFieldRequest } from '../compute/study';
 import { kmhToMps } from '../compute/units';
 import {
   type AppState,
@@ -48,11 +38,12 @@ import { DesignMap } from './designMap';
 import { fmt } from './displayUnits';
 import { downloadBlob, downloadText, safeFileStem } from './download';
 import { type DurableCopy, writeDurable } from './durableAutosave';
-import { crashPoolWorker, hangPoolWorkers, scriptStartMs, spawnTracked, workersReadyMs } from './earlyPool';
+import { crashPoolWorker, hangPoolWorkers, spawnTracked } from './earlyPool';
 import type { Field, FieldValue } from './fields';
 import { JobWorker } from './jobWorker';
 import { LinePlot } from './linePlot';
 import { Messages } from './messages';
+import { type ComputeHost, PageCompute } from './pageCompute';
 import type { RoadContext, RoadPanel, RoadPlotName } from './roadPanel';
 import { defaultRoad, type RoadState, roadToRideRaw, validateRoadFor } from './roadState';
 import { view3dLoader, type WheelView } from './view3dSlot';
@@ -66,33 +57,15 @@ import { byId, conditionsText, plotDiv, presentOf } from './views/present';
 import { renderYawPlots } from './views/yawPlots';
 import { type HangReport, onWorkerHang } from './watchdog';
 
-type Phase = 'computing' | 'done' | 'error';
 type MainPlotName = 'dragYaw' | 'sideYaw' | 'dragCover' | 'handling';
 export type PlotName = MainPlotName | RoadPlotName | DataPlotName;
 
-function computeKey(s: AppState): string {
-  const v = s.view;
-  return JSON.stringify([
-    s.case,
-    s.baseline,
-    v.familyFractions,
-    v.coverPlotYawsDeg,
-    v.coverPlotSpeedsMps,
-    v.mapYawDeg,
-    v.mapMaxRimDepthM,
-  ]);
-}
-
-export class App {
-  private state: AppState;
-  private readonly pool: WorkerPool;
+export class App implements ComputeHost {
+  state: AppState;
+  private readonly computer: PageCompute;
   private controls!: Controls;
-  private readonly messages: Messages;
-  private results: PageResults | null = null;
-  private abort: AbortController | null = null;
-  private timer: ReturnType<typeof setTimeout> | null = null;
-  private lastComputeKey = '';
-  private firstResultMs: number | null = null;
+  readonly messages: Messages;
+  results: PageResults | null = null;
   private readonly plots: Record<MainPlotName, LinePlot>;
   private readonly designMap: DesignMap;
   private tables: PageTables | null = null;
@@ -102,7 +75,6 @@ export class App {
   private view3dWorker: BrowserWorkerHandle | null = null;
   private view3dRequest = 0;
   private view3dStarted = false;
-  private poolIdle: Promise<void> = Promise.resolve();
   /** The two panels are built (and their code loaded) when first opened. */
   private road: RoadPanel | null = null;
   private data: DataPanel | null = null;
@@ -125,7 +97,7 @@ export class App {
     this.autosave = new AutosaveStore(localStorage, durable, writeDurable);
     this.messages = new Messages(byId('messages'));
     this.state = this.initialState();
-    this.pool = pool;
+    this.computer = new PageCompute(pool, this);
     this.plots = {
       dragYaw: new LinePlot(plotDiv('fig-drag-yaw')),
       sideYaw: new LinePlot(plotDiv('fig-side-yaw')),
@@ -217,9 +189,7 @@ export class App {
    * its answer cannot arrive before they are.
    */
   async start(): Promise<void> {
-    this.lastComputeKey = computeKey(this.state);
-    this.setPhase('computing');
-    void this.compute();
+    this.computer.startNow();
     await new Promise((resolve) => setTimeout(resolve, 0));
     this.controls = new Controls(byId('controls'), this.state, (field, value) => this.onEdit(field, value));
     this.tables = new PageTables(byId('tables'), () => this.state.case.name);
@@ -453,8 +423,7 @@ export class App {
       if (this.lastCaseKey !== '') this.data?.designChanged();
       this.lastCaseKey = caseKey;
     }
-    const key = computeKey(next);
-    if (key !== this.lastComputeKey) this.scheduleCompute(150);
+    if (this.computer.needed(next)) this.computer.schedule(150);
     else this.renderAll();
     if (next.view.tab === 'road') this.scheduleRide(200);
   }
@@ -528,220 +497,19 @@ export class App {
   }
 
   // -------------------------------------------------------------------------------------------
-  // Compute
+  // Views: each reads the state and the results' cubes (src/ui/views)
 
-  private setPhase(phase: Phase): void {
-    document.body.dataset.state = phase;
-  }
-
-  private scheduleCompute(delayMs: number): void {
-    if (this.timer) clearTimeout(this.timer);
-    this.lastComputeKey = computeKey(this.state);
-    this.setPhase('computing');
-    this.timer = setTimeout(() => {
-      this.timer = null;
-      void this.compute();
-    }, delayMs);
-  }
-
-  private status(text: string, progress: SweepProgress | null = null): void {
-    byId('status-text').textContent = text;
-    const bar = byId<HTMLProgressElement>('progress');
-    const cancel = byId('cancel');
-    if (progress) {
-      bar.hidden = false;
-      bar.max = Math.max(1, progress.pointsTotal);
-      bar.value = progress.pointsDone;
-      cancel.hidden = false;
-    } else {
-      bar.hidden = true;
-    }
-  }
-
-  /**
-   * runStudies on the pool, one run at a time: WorkerPool.run is not re-entrant (a cancelled run
-   * terminates its busy workers, which a second run may already be waiting on), so each run waits
-   * for the previous one, which ends promptly once its signal is aborted.
-   */
-  private run(plans: readonly StudyPlan[], options: RunStudiesOptions): Promise<StudiesOutcome> {
-    const previous = this.poolIdle;
-    const run = previous.then(() => runStudies(this.pool, plans, options));
-    this.poolIdle = run.then(
-      () => undefined,
-      () => undefined,
-    );
-    return run;
-  }
-
-  private async compute(): Promise<void> {
-    try {
-      await this.computeStages();
-    } catch (error) {
-      this.fail(`Internal error while computing: ${(error as Error).message}`);
-    }
-  }
-
-  private async computeStages(): Promise<void> {
-    this.abort?.abort();
-    const ac = new AbortController();
-    this.abort = ac;
-    const state = this.state;
-    let studies: PageStudies;
-    try {
-      studies = pageStudies(state.case, state.view, state.baseline);
-    } catch (error) {
-      this.fail(`The design could not be prepared for the model: ${(error as Error).message}`);
-      return;
-    }
-    const r: PageResults = {
-      studies,
-      current: null,
-      family: null,
-      cover: null,
-      map: null,
-      baseline: studies.baseline ? { curve: null, cover: null, map: null } : null,
-      rhoKgPerM3: caseAirDensity(state.case),
-    };
-    const superseded = () => this.abort !== ac;
-    byId('cancel').hidden = false;
-    this.status('Solving the current design…');
-    this.stage('current');
-    const started = performance.now();
-
-    // 1. The current design, exactly as its case file says, but first without the grid-convergence
-    //    lattices (the same values, about half the cost): its numbers show at once; the uncertainty
-    //    estimate follows with the next stage.
-    const s1 = await this.run([studies.quick ?? studies.current], { signal: ac.signal });
-    if (superseded()) return;
-    if (s1.cancelled) return this.cancelled(r);
-    const first = s1.results[0]!;
-    if (first.errors[0] !== null || first.landed[0] !== 1) {
-      this.fail(`The model could not solve this design: ${first.errors[0] ?? 'unknown error'}`);
-      return;
-    }
-    r.current = first.cube;
-    this.results = r;
-    const t1 = performance.now();
-    this.messages.clear('model');
-    // The first numbers: the headline and the plots now; the tables and the map with the next stage.
-    this.renderAll({ light: true });
-    if (this.firstResultMs === null) {
-      // On screen: the figures and plots are drawn (the browser paints them at the next frame).
-      this.firstResultMs = performance.now();
-      document.body.dataset.firstResultMs = this.firstResultMs.toFixed(0);
-    }
-    // The 3D view (a large module and a WebGL context) starts once the first numbers are on screen.
+  /** The first numbers are on screen: the 3D view (a large module and a WebGL context) starts now. */
+  firstNumbersShown(): void {
     if (!this.view3dStarted) {
       this.view3dStarted = true;
       void this.setUp3d();
     } else {
       void this.update3d();
     }
-
-    // 2. The current design with its grid-convergence estimate, the family, drag vs cover and the
-    //    baseline, in one run (cases of one surface share their factorisation).
-    this.stage('sweeps');
-    const b = studies.baseline;
-    const plans: StudyPlan[] = [studies.family, studies.cover];
-    if (b) plans.push(b.curve, b.cover, b.map);
-    if (studies.quick) plans.push(studies.current);
-    const gciStudy = studies.quick ? plans.length - 1 : -1;
-    const s2 = await this.run(plans, {
-      signal: ac.signal,
-      onProgress: (p) => this.status(`Cover-fraction sweeps: ${p.casesDone}/${p.casesTotal} cases`, p),
-      onCase: (landed) => {
-        if (landed.study === gciStudy && landed.cube && !superseded()) {
-          r.current = landed.cube;
-          this.renderAll();
-        }
-      },
-    });
-    if (superseded()) return;
-    const t2 = performance.now();
-    const [family, cover, ...rest] = s2.results;
-    r.family = family!;
-    r.cover = cover!;
-    if (r.baseline) {
-      r.baseline.curve = rest[0]!;
-      r.baseline.cover = rest[1]!;
-      r.baseline.map = rest[2]!;
-    }
-    const gci = gciStudy >= 0 ? s2.results[gciStudy]! : null;
-    if (gci?.cube && gci.landed[0] === 1 && gci.errors[0] === null) r.current = gci.cube;
-    this.renderAll();
-    if (s2.cancelled) return this.cancelled(r);
-
-    // 3. The design map (the longer sweep).
-    this.stage('map');
-    const s3 = await this.run([studies.map], {
-      signal: ac.signal,
-      onProgress: (p) => {
-        const left = Number.isFinite(p.remainingMs)
-          ? `, about ${(p.remainingMs / 1000).toFixed(1)} s left`
-          : '';
-        this.status(`Design map: ${p.casesDone}/${p.casesTotal} designs${left}`, p);
-      },
-    });
-    if (superseded()) return;
-    r.map = s3.results[0]!;
-    this.renderAll();
-    if (s3.cancelled) return this.cancelled(r);
-    const failed = s2.failedCount + s3.failedCount;
-    if (failed > 0) {
-      const first = [...s2.results, ...s3.results].flatMap((x) => x.errors).find((e) => e !== null) ?? '';
-      this.messages.show(
-        'warning',
-        `${failed} swept design(s) could not be solved and are left blank.`,
-        [first],
-        'sweep',
-      );
-    } else {
-      this.messages.clear('sweep');
-    }
-    const t3 = performance.now();
-    document.body.dataset.timings = JSON.stringify({
-      scriptStartMs: Math.round(scriptStartMs),
-      workersReadyMs: Math.round(workersReadyMs),
-      computeStartMs: Math.round(started),
-      firstResultMs: Math.round(this.firstResultMs ?? Number.NaN),
-      currentMs: Math.round(t1 - started),
-      sweepsMs: Math.round(t2 - t1),
-      mapMs: Math.round(t3 - t2),
-    });
-    const seconds = ((t3 - started) / 1000).toFixed(2);
-    this.status(`Done in ${seconds} s on ${this.pool.size} worker${this.pool.size > 1 ? 's' : ''}.`);
-    byId('cancel').hidden = true;
-    this.abort = null;
-    this.stage('done');
-    this.setPhase('done');
   }
 
-  private stage(name: 'current' | 'sweeps' | 'map' | 'done'): void {
-    document.body.dataset.stage = name;
-  }
-
-  private cancelled(r: PageResults): void {
-    this.results = r.current ? r : this.results;
-    this.renderAll();
-    this.status('Cancelled: the sweeps are incomplete. Change any control to compute again.');
-    byId('cancel').hidden = true;
-    this.abort = null;
-    this.lastComputeKey = '';
-    this.setPhase('done');
-  }
-
-  private fail(message: string): void {
-    this.messages.show('error', message, [], 'model');
-    this.status('Stopped: see the message above.');
-    byId('cancel').hidden = true;
-    this.abort = null;
-    this.setPhase('error');
-  }
-
-  // -------------------------------------------------------------------------------------------
-  // Views: each reads the state and the results' cubes (src/ui/views)
-
-  private renderAll(opts: { light?: boolean } = {}): void {
+  renderAll(opts: { light?: boolean } = {}): void {
     const r = this.results;
     if (!r?.current) return;
     const ctx = presentOf(this.state, r);
@@ -760,7 +528,6 @@ export class App {
       );
     }
     byId('plot-notes').textContent = notes.join(' ');
-    byId('undo-pick').hidden = this.picked.length === 0;
   }
 
   private renderFlags(r: PageResults): void {
@@ -796,12 +563,14 @@ export class App {
       return;
     }
     this.picked.push(c);
+    byId('undo-pick').hidden = false;
     this.messages.clear('edit');
     this.apply({ ...this.state, case: next.value });
   }
 
   private undoPick(): void {
     const previous = this.picked.pop();
+    byId('undo-pick').hidden = this.picked.length === 0;
     if (previous) this.apply({ ...this.state, case: previous });
   }
 
@@ -913,11 +682,8 @@ export class App {
 
   private wireActions(): void {
     byId('cancel').addEventListener('click', () => {
-      if (this.abort) this.abort.abort();
-      const ac = this.abort;
-      if (ac) {
-        // compute() sees the abort as a cancel (it is still the current run).
-      }
+      // computeStages sees the abort as a cancel (it is still the current run).
+      this.computer.cancel();
     });
     byId('pin-baseline').addEventListener('click', () => this.pinBaseline());
     byId('clear-baseline').addEventListener('click', () => {
