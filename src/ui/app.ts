@@ -5,21 +5,12 @@
  * results (headline figures, plots, design map, 3D view, tables), the "On the road" and "Your data"
  * panels (their jobs on their own workers), with link, autosave and files.
  */
-import {
-  type CaseFile,
-  type CaseWheel,
-  caseAirDensity,
-  parseCaseFile,
-  validateCase,
-} from '../compute/caseFile';
-import type { CalibrationResult } from '../compute/compare/index';
+import { type CaseFile, parseCaseFile, validateCase } from '../compute/caseFile';
 import type { ViewField } from '../compute/engine/protocol';
 import type { WorkerPool } from '../compute/engine/workerPool';
 import { FLAG_MESSAGES, viewFieldRequest } from '../compute/study';
-import { kmhToMps } from '../compute/units';
 import {
   type AppState,
-  type CalibrationMark,
   hashToState,
   MAX_LINK_CHARS,
   MAX_PROJECT_BYTES,
@@ -31,8 +22,8 @@ import {
 import { AutosaveStore, type KeptCopy } from './autosave';
 import type { BrowserWorkerHandle } from './browserWorker';
 import { Controls } from './controls';
-import type { PackedResult, ReadOutcome } from './dataJobs';
-import type { DataContext, DataPanel, DataPlotName, DataRunRequest } from './dataPanel';
+import { DataGlue } from './dataGlue';
+import type { DataPlotName } from './dataPanel';
 import { defaultCase } from './defaultCase';
 import { DesignMap } from './designMap';
 import { fmt } from './displayUnits';
@@ -40,12 +31,13 @@ import { downloadBlob, downloadText, safeFileStem } from './download';
 import { type DurableCopy, writeDurable } from './durableAutosave';
 import { crashPoolWorker, hangPoolWorkers, spawnTracked } from './earlyPool';
 import type { Field, FieldValue } from './fields';
-import { JobWorker } from './jobWorker';
 import { LinePlot } from './linePlot';
 import { Messages } from './messages';
 import { type ComputeHost, PageCompute } from './pageCompute';
-import type { RoadContext, RoadPanel, RoadPlotName } from './roadPanel';
-import { defaultRoad, type RoadState, roadToRideRaw, validateRoadFor } from './roadState';
+import type { PageHost } from './pageHost';
+import { RoadGlue } from './roadGlue';
+import type { RoadPlotName } from './roadPanel';
+import { defaultRoad } from './roadState';
 import { view3dLoader, type WheelView } from './view3dSlot';
 import { defaultView, TAB_IDS, type TabId, type ViewState, validateView } from './viewState';
 import { renderCoverPlot } from './views/coverPlot';
@@ -60,7 +52,7 @@ import { type HangReport, onWorkerHang } from './watchdog';
 type MainPlotName = 'dragYaw' | 'sideYaw' | 'dragCover' | 'handling';
 export type PlotName = MainPlotName | RoadPlotName | DataPlotName;
 
-export class App implements ComputeHost {
+export class App implements ComputeHost, PageHost {
   state: AppState;
   private readonly computer: PageCompute;
   private controls!: Controls;
@@ -75,17 +67,10 @@ export class App implements ComputeHost {
   private view3dWorker: BrowserWorkerHandle | null = null;
   private view3dRequest = 0;
   private view3dStarted = false;
-  /** The two panels are built (and their code loaded) when first opened. */
-  private road: RoadPanel | null = null;
-  private data: DataPanel | null = null;
-  private roadLoading: Promise<RoadPanel> | null = null;
-  private dataLoading: Promise<DataPanel> | null = null;
-  private readonly rideWorker = new JobWorker();
-  private readonly dataWorker = new JobWorker();
-  private rideTimer: ReturnType<typeof setTimeout> | null = null;
-  private lastRideKey = '';
+  /** The two panels (built, and their code loaded, when first opened), each with its own worker. */
+  private readonly roadGlue = new RoadGlue(this);
+  private readonly dataGlue = new DataGlue(this);
   private lastCaseKey = '';
-  private roadShown: { road: string; unit: string } = { road: '', unit: '' };
 
   private readonly autosave: AutosaveStore;
   /** Set aside at start-up (an unreadable autosave, or the autosave replaced by a link's design). */
@@ -125,24 +110,9 @@ export class App implements ComputeHost {
 
   private plotSpec(name: PlotName) {
     if (name === 'roadYaw' || name === 'roadSteering' || name === 'roadSegments')
-      return this.road?.plotSpec(name) ?? null;
-    if (name === 'dataForce' || name === 'dataSide') return this.data?.plotSpec(name) ?? null;
+      return this.roadGlue.plotSpec(name);
+    if (name === 'dataForce' || name === 'dataSide') return this.dataGlue.plotSpec(name);
     return this.plots[name].currentSpec();
-  }
-
-  private roadPanel(): Promise<RoadPanel> {
-    this.roadLoading ??= import('./roadPanel').then(({ RoadPanel }) => {
-      const panel = new RoadPanel(byId('panel-road'), {
-        onChange: (road) => this.onRoadChange(road),
-        onPin: () => this.pinBaseline(),
-        onSaveRide: () => this.saveRideFile(),
-      });
-      this.road = panel;
-      this.roadShown = { road: '', unit: '' };
-      this.showRoadInputs(this.state);
-      return panel;
-    });
-    return this.roadLoading;
   }
 
   private validationLoading: Promise<{ shown(): void }> | null = null;
@@ -153,34 +123,6 @@ export class App implements ComputeHost {
       ({ ValidationPanel }) => new ValidationPanel(byId('validation')),
     );
     return this.validationLoading;
-  }
-
-  private dataPanel(): Promise<DataPanel> {
-    this.dataLoading ??= import('./dataPanel').then(({ DataPanel }) => {
-      const panel: DataPanel = new DataPanel(byId('panel-data'), {
-        context: () => this.dataContext(),
-        read: async (ref, context) => {
-          const out = await this.dataWorker.run<ReadOutcome>(
-            (api) => api.readTable(ref, context),
-            readDeadlineMs(ref.source.kind === 'file' ? ref.source.file.size : ref.source.text.length),
-          );
-          if (out.status === 'superseded' || out.status === 'cancelled') return null;
-          if (out.status === 'failed') return { ok: false, errors: [out.error] };
-          return out.value;
-        },
-        onLoadDemo: () => void this.loadDemoData(panel),
-        onRun: (request) => void this.runComparison(panel, request),
-        onCancel: () => {
-          this.dataWorker.cancel();
-          panel.setStatus('done', 'Cancelled; the results shown are from the last finished run.');
-        },
-        onUseCalibrated: (use, calibration, points) => this.useCalibrated(use, calibration, points),
-      });
-      this.data = panel;
-      panel.setCalibratedInUse(Boolean(this.state.calibration));
-      return panel;
-    });
-    return this.dataLoading;
   }
 
   /**
@@ -211,8 +153,8 @@ export class App implements ComputeHost {
     const inspect: Record<string, unknown> = {
       plot: (name: PlotName) => this.plotSpec(name),
       state: () => structuredClone(this.state),
-      ride: () => structuredClone(this.road?.lastResult()?.document ?? null),
-      comparison: () => structuredClone(this.data?.lastReport() ?? null),
+      ride: () => structuredClone(this.roadGlue.lastResult()?.document ?? null),
+      comparison: () => structuredClone(this.dataGlue.lastReport() ?? null),
     };
     if (import.meta.env.MODE === 'e2e') {
       inspect.crashWorker = () => crashPoolWorker();
@@ -390,7 +332,7 @@ export class App implements ComputeHost {
   }
 
   /** Make `next` the state: autosave, URL, controls, then recompute or redraw. */
-  private apply(next: AppState, opts: { replaceUrl: boolean } = { replaceUrl: true }): void {
+  apply(next: AppState, opts: { replaceUrl: boolean } = { replaceUrl: true }): void {
     this.state = next;
     const saved = this.autosave.save(next);
     this.refreshKeptButton();
@@ -416,16 +358,16 @@ export class App implements ComputeHost {
         this.view3d.setLayers(next.view.layers3d);
       }
     }
-    this.showRoadInputs(next);
-    this.showCalibrationBadge(next.calibration ?? null);
+    this.roadGlue.showInputs(next);
+    this.dataGlue.showCalibrationBadge(next.calibration ?? null);
     const caseKey = JSON.stringify(next.case);
     if (caseKey !== this.lastCaseKey) {
-      if (this.lastCaseKey !== '') this.data?.designChanged();
+      if (this.lastCaseKey !== '') this.dataGlue.designChanged();
       this.lastCaseKey = caseKey;
     }
     if (this.computer.needed(next)) this.computer.schedule(150);
     else this.renderAll();
-    if (next.view.tab === 'road') this.scheduleRide(200);
+    if (next.view.tab === 'road') this.roadGlue.schedule(200);
   }
 
   /** Put the state in the address bar, or clear it there (and say so) when too long for a link. */
@@ -837,12 +779,12 @@ export class App implements ComputeHost {
       byId(`panel-${id}`).hidden = !selected;
       if (selected && focus) button.focus();
     }
-    if (tab === 'data') void this.dataPanel().then((panel) => panel.shown());
-    if (tab === 'road') void this.roadPanel();
+    if (tab === 'data') void this.dataGlue.panel().then((panel) => panel.shown());
+    if (tab === 'road') void this.roadGlue.panel();
     if (tab === 'help') void this.validationPanel().then((panel) => panel.shown());
   }
 
-  private pinBaseline(): void {
+  pinBaseline(): void {
     this.apply({ ...this.state, baseline: structuredClone(this.state.case) });
     this.messages.show(
       'info',
@@ -851,246 +793,4 @@ export class App implements ComputeHost {
       'baseline',
     );
   }
-
-  // -------------------------------------------------------------------------------------------
-  // On the road
-
-  /** The ride's baseline wheel: the pinned baseline's, or this wheel without covers. */
-  private rideBaseline(s: AppState): { wheel: CaseWheel; label: string; pinned: boolean } {
-    if (s.baseline) {
-      return {
-        wheel: s.baseline.wheel,
-        label: `the pinned baseline (${s.baseline.name ?? 'unnamed'})`,
-        pinned: true,
-      };
-    }
-    const w = s.case.wheel;
-    const uncovered = w.cover.fraction === 0 && w.cover.placement !== 'explicit';
-    return {
-      wheel: { ...w, cover: { fraction: 0, placement: 'rim', sides: w.cover.sides } },
-      label: uncovered
-        ? 'no baseline is pinned, so this same wheel without covers (identical to the design: pin a baseline, then change the design)'
-        : 'no baseline is pinned, so this same wheel without covers (fully spoked)',
-      pinned: false,
-    };
-  }
-
-  private roadContext(s: AppState): RoadContext {
-    const b = this.rideBaseline(s);
-    return {
-      speedUnit: s.view.speedUnit,
-      referenceSpeedMps: kmhToMps(s.case.conditions.reference_speed_kmh),
-      designLabel: `${s.case.name ?? 'this design'}${s.calibration ? ' (CALIBRATED model)' : ''}`,
-      baselineLabel: b.label,
-      baselinePinned: b.pinned,
-    };
-  }
-
-  private showRoadInputs(s: AppState): void {
-    const road = s.road ?? defaultRoad();
-    const key = JSON.stringify(road);
-    const ctx = this.roadContext(s);
-    const refresh = key !== this.roadShown.road || s.view.speedUnit !== this.roadShown.unit;
-    if (!this.road) return;
-    this.road.setRoad(road, ctx, refresh);
-    if (refresh) this.road.clearErrors();
-    this.roadShown = { road: key, unit: s.view.speedUnit };
-  }
-
-  /** The ride as a ride file (what `coversweep ride` reads), as far as it is valid. */
-  private saveRideFile(): void {
-    const s = this.state;
-    const b = this.rideBaseline(s);
-    const raw = roadToRideRaw(
-      s.road ?? defaultRoad(),
-      s.case,
-      b.wheel,
-      `${s.case.name ?? 'design'} against ${b.pinned ? (s.baseline?.name ?? 'the baseline') : 'the same wheel without covers'}`,
-    );
-    downloadText(
-      `${safeFileStem(s.case.name, 'coversweep')}.ride.json`,
-      `${JSON.stringify(raw, null, 2)}\n`,
-      'application/json',
-    );
-  }
-
-  private onRoadChange(candidate: RoadState): void {
-    const b = this.rideBaseline(this.state);
-    const r = validateRoadFor(candidate, this.state.case, b.wheel);
-    if (!r.ok) {
-      this.road?.showErrors(r.errors, candidate);
-      return;
-    }
-    this.road?.clearErrors();
-    this.apply({ ...this.state, road: candidate });
-  }
-
-  private scheduleRide(delayMs: number): void {
-    if (this.rideTimer) clearTimeout(this.rideTimer);
-    this.rideTimer = setTimeout(() => {
-      this.rideTimer = null;
-      void this.computeRide();
-    }, delayMs);
-  }
-
-  private async computeRide(): Promise<void> {
-    const panel = await this.roadPanel();
-    const s = this.state;
-    const road = s.road ?? defaultRoad();
-    const b = this.rideBaseline(s);
-    const r = validateRoadFor(road, s.case, b.wheel);
-    if (!r.ok) {
-      panel.showErrors(r.errors, road);
-      panel.setStatus('invalid', 'This ride cannot be computed: see the messages above the inputs.');
-      this.lastRideKey = '';
-      return;
-    }
-    const key = JSON.stringify(r.value);
-    if (key === this.lastRideKey) return;
-    this.lastRideKey = key;
-    panel.setStatus(
-      'computing',
-      "Solving both wheels' yaw curves (0–90°) and the ride's wind states in the background…",
-    );
-    const started = performance.now();
-    const out = await this.rideWorker.run((api) => api.ride({ ride: r.value }));
-    if (out.status === 'superseded' || out.status === 'cancelled') return;
-    if (key !== this.lastRideKey) return;
-    if (out.status === 'failed') {
-      this.lastRideKey = '';
-      panel.setStatus('error', `The ride could not be computed: ${out.error}`);
-      return;
-    }
-    const ctx = this.roadContext(this.state);
-    panel.showResult(out.value, ctx);
-    const seconds = fmt((performance.now() - started) / 1000, 2);
-    panel.setStatus(
-      'done',
-      `Computed in ${seconds} s${out.value.curvesReused ? ' (the yaw curves were reused)' : ''}: ${ctx.designLabel} against ${b.pinned ? 'the pinned baseline' : 'this wheel without covers'}.`,
-    );
-  }
-
-  // -------------------------------------------------------------------------------------------
-  // Your data
-
-  private dataContext(): DataContext {
-    const c = this.state.case;
-    const R = c.wheel.outer_radius_m;
-    return {
-      referenceAreaM2: Math.PI * R * R,
-      airspeedMps: c.conditions.airspeed_mps[0]!,
-      rhoKgPerM3: caseAirDensity(c),
-      speedUnit: this.state.view.speedUnit,
-      designName: c.name ?? 'the current design',
-    };
-  }
-
-  private async loadDemoData(panel: DataPanel): Promise<void> {
-    panel.setStatus('computing', 'Loading the demo data…');
-    try {
-      const get = async (path: string) => {
-        const res = await fetch(new URL(path, document.baseURI));
-        if (!res.ok) throw new Error(`${path}: HTTP ${res.status}`);
-        return res.text();
-      };
-      const [caseText, csvText] = await Promise.all([
-        get('demo/demo-case.json'),
-        get('demo/demo-tunnel.csv'),
-      ]);
-      const c = parseCaseFile(caseText);
-      if (!c.ok) throw new Error(`demo-case.json: ${c.errors.join('; ')}`);
-      this.apply({ ...this.state, case: c.value, calibration: null });
-      this.messages.show(
-        'info',
-        'Demo data loaded: invented measurements of the invented wheel “Demo 50 mm half-cover”, now the design. Reset goes back to the demo wheel.',
-        [],
-        'demo',
-      );
-      panel.setDefaultRanges(caseAirDensity(c.value));
-      await panel.readText(csvText, 'demo-tunnel.csv');
-    } catch (error) {
-      panel.setStatus('error', `The demo data could not be loaded: ${(error as Error).message}`);
-    }
-  }
-
-  private async runComparison(panel: DataPanel, req: DataRunRequest): Promise<void> {
-    const caseFile: CaseFile = this.state.case;
-    panel.setDefaultRanges(caseAirDensity(caseFile));
-    const heavy = req.calibrate || req.convergence || req.uncertainty !== null;
-    const out = await this.dataWorker.run<PackedResult>(
-      (api) =>
-        api.compareTable({
-          caseFile,
-          ref: req.ref,
-          map: req.map,
-          dataLabel: req.label,
-          calibrate: req.calibrate ? {} : false,
-          convergence: req.convergence ? {} : false,
-          uncertainty: req.uncertainty ? { ranges: req.uncertainty } : false,
-        }),
-      compareDeadlineMs(req.rowCount, heavy),
-    );
-    if (out.status === 'superseded' || out.status === 'cancelled') return;
-    if (out.status === 'failed') {
-      panel.showErrors('The comparison could not be made:', [out.error]);
-      return;
-    }
-    if (!out.value.ok) {
-      panel.showErrors('The data could not be compared with the model:', out.value.errors);
-      return;
-    }
-    await panel.showReport(out.value.value, req);
-  }
-
-  private useCalibrated(use: boolean, calibration: CalibrationResult | null, points: number): void {
-    const s = this.state;
-    if (use && calibration) {
-      const original = s.calibration?.original ?? {};
-      const values: CalibrationMark['values'] = {};
-      const before: CalibrationMark['original'] = { ...original };
-      for (const p of calibration.parameters) {
-        values[p.name] = p.value;
-        if (before[p.name] === undefined) before[p.name] = s.case.model[p.name];
-      }
-      const r = validateCase({ ...s.case, model: { ...s.case.model, ...values } });
-      if (!r.ok) {
-        this.messages.show('error', 'The calibrated values could not be used:', r.errors, 'calibration');
-        this.data?.setCalibratedInUse(false);
-        return;
-      }
-      this.apply({
-        ...s,
-        case: r.value,
-        calibration: { data: calibration.fitted_to.data, points, values, original: before },
-      });
-    } else if (s.calibration) {
-      const r = validateCase({ ...s.case, model: { ...s.case.model, ...s.calibration.original } });
-      if (r.ok) this.apply({ ...s, case: r.value, calibration: null });
-    }
-  }
-
-  private showCalibrationBadge(mark: CalibrationMark | null): void {
-    const badge = byId('calibrated-badge');
-    badge.hidden = mark === null;
-    badge.textContent = mark
-      ? `CALIBRATED model: fitted to ${mark.data} (${mark.points} points): ${Object.entries(mark.values)
-          .map(([k, v]) => `${k} ${fmt(v, 4)}`)
-          .join(', ')}`
-      : '';
-    this.data?.setCalibratedInUse(mark !== null);
-  }
-}
-
-/**
- * Deadlines of the data panel's background jobs (a worker silent for longer is taken as hung, replaced
- * and the job retried once): generous on purpose, scaled by the job's size. Reading: 60 s plus 10 s per
- * MB (reading runs at tens of MB/s). Comparing: 60 s plus 2 ms per data row, 50 times that for a fit,
- * a convergence study or an uncertainty band (each evaluates the model many times per row).
- */
-function readDeadlineMs(bytes: number): number {
-  return 60_000 + (10_000 * bytes) / 1_048_576;
-}
-
-function compareDeadlineMs(rows: number, heavy: boolean): number {
-  return 60_000 + 2 * rows * (heavy ? 50 : 1);
 }
