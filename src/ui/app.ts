@@ -11,7 +11,6 @@ import type { WorkerPool } from '../compute/engine/workerPool';
 import { FLAG_MESSAGES, viewFieldRequest } from '../compute/study';
 import {
   type AppState,
-  hashToState,
   MAX_LINK_CHARS,
   MAX_PROJECT_BYTES,
   nameErrors,
@@ -19,7 +18,6 @@ import {
   stateToHashOrNull,
   stateToProjectText,
 } from './appState';
-import { AutosaveStore, type KeptCopy } from './autosave';
 import type { BrowserWorkerHandle } from './browserWorker';
 import { Controls } from './controls';
 import { DataGlue } from './dataGlue';
@@ -28,13 +26,14 @@ import { defaultCase } from './defaultCase';
 import { DesignMap } from './designMap';
 import { fmt } from './displayUnits';
 import { downloadBlob, downloadText, safeFileStem } from './download';
-import { type DurableCopy, writeDurable } from './durableAutosave';
+import type { DurableCopy } from './durableAutosave';
 import { crashPoolWorker, hangPoolWorkers, spawnTracked } from './earlyPool';
 import type { Field, FieldValue } from './fields';
 import { LinePlot } from './linePlot';
 import { Messages } from './messages';
 import { type ComputeHost, PageCompute } from './pageCompute';
 import type { PageHost } from './pageHost';
+import { PageStore } from './pageStore';
 import { RoadGlue } from './roadGlue';
 import type { RoadPlotName } from './roadPanel';
 import { defaultRoad } from './roadState';
@@ -72,16 +71,13 @@ export class App implements ComputeHost, PageHost {
   private readonly dataGlue = new DataGlue(this);
   private lastCaseKey = '';
 
-  private readonly autosave: AutosaveStore;
-  /** Set aside at start-up (an unreadable autosave, or the autosave replaced by a link's design). */
-  private startupKept: { copy: KeptCopy | string; what: 'unreadable' | 'link'; errors: string[] } | null =
-    null;
+  private readonly store: PageStore;
 
   /** `durable`: the autosave's durable copy, read before the page starts (main.ts). */
   constructor(pool: WorkerPool, durable: DurableCopy | null = null) {
-    this.autosave = new AutosaveStore(localStorage, durable, writeDurable);
+    this.store = new PageStore(this, durable);
     this.messages = new Messages(byId('messages'));
-    this.state = this.initialState();
+    this.state = this.store.initialState();
     this.computer = new PageCompute(pool, this);
     this.plots = {
       dragYaw: new LinePlot(plotDiv('fig-drag-yaw')),
@@ -141,12 +137,12 @@ export class App implements ComputeHost, PageHost {
     this.wireActions();
     this.wireTabs();
     this.apply(this.state, { replaceUrl: true });
-    window.addEventListener('hashchange', () => this.onHashChange());
+    window.addEventListener('hashchange', () => this.store.onHashChange());
     window.addEventListener('storage', (event) => {
-      if (this.autosave.isOtherTabSave(event)) this.otherTabSaved();
-      this.refreshKeptButton();
+      if (this.store.autosave.isOtherTabSave(event)) this.store.otherTabSaved();
+      this.store.refreshKeptButton();
     });
-    this.reportStartupKept();
+    this.store.reportStartupKept();
     // Inspection for the browser tests and the curious: what each plot shows, the state, the last ride
     // and comparison. The browser tests' build (vite build --mode e2e) adds hooks that crash or hang a
     // sweep worker as a real fault would; the production build leaves them out.
@@ -166,187 +162,10 @@ export class App implements ComputeHost, PageHost {
   // -------------------------------------------------------------------------------------------
   // State
 
-  private initialState(): AppState {
-    const fromHash = hashToState(location.hash);
-    const saved = this.autosave.load();
-    if (saved.kind === 'unreadable') {
-      // Never replaced unseen: keep it, byte for byte, before anything else is saved.
-      const copy = this.autosave.keepAside(
-        saved.text,
-        `the autosave could not be read: ${saved.errors[0] ?? 'unknown fault'}`,
-      );
-      this.startupKept = { copy, what: 'unreadable', errors: saved.errors };
-    }
-    const fallback = saved.kind === 'ok' ? saved.state : null;
-    if (fromHash?.ok) {
-      if (saved.kind === 'ok' && saved.text !== stateToProjectText(fromHash.value)) {
-        const copy = this.autosave.keepAside(
-          saved.text,
-          'your autosaved design, set aside when a link was opened',
-        );
-        this.startupKept = { copy, what: 'link', errors: [] };
-      }
-      return fromHash.value;
-    }
-    if (fromHash && !fromHash.ok) {
-      this.messages.show(
-        'error',
-        `The link's design could not be opened; showing ${fallback ? 'your autosaved design' : 'the demo wheel'} instead.`,
-        fromHash.errors,
-        'link',
-      );
-    }
-    return fallback ?? { case: defaultCase(), view: defaultView(), baseline: null };
-  }
-
-  /** Say what was set aside at start-up, with buttons to restore or download it. */
-  private reportStartupKept(): void {
-    const k = this.startupKept;
-    if (!k) return;
-    if (typeof k.copy === 'string') {
-      this.messages.show(
-        'error',
-        'The autosaved design could not be read, and no copy could be kept; this tab does not autosave until you reload.',
-        [k.copy, ...k.errors],
-        'autosave',
-      );
-      return;
-    }
-    const copy = k.copy;
-    if (k.what === 'unreadable') {
-      this.messages.show(
-        'warning',
-        'The autosaved design could not be read; starting from the demo wheel. The unreadable autosave was kept aside unchanged: download it to repair or report it.',
-        k.errors,
-        'autosave',
-        [this.downloadKeptAction(copy)],
-      );
-    } else {
-      this.messages.show(
-        'info',
-        'Opened the design from the link. Your own autosaved design was kept aside, not overwritten.',
-        [],
-        'autosave',
-        [this.restoreKeptAction(copy), this.downloadKeptAction(copy)],
-      );
-    }
-  }
-
-  private downloadKeptAction(copy: KeptCopy) {
-    return {
-      label: 'Download it',
-      name: 'download-kept',
-      onClick: () =>
-        downloadText(
-          `coversweep-kept-${copy.keptAt.replace(/[:.]/g, '-')}.json`,
-          copy.text,
-          'application/json',
-        ),
-    };
-  }
-
-  private restoreKeptAction(copy: KeptCopy) {
-    return {
-      label: 'Restore it',
-      name: 'restore-kept',
-      onClick: () => {
-        const r = projectTextToState(copy.text, 'kept design');
-        if (!r.ok) {
-          this.messages.show('error', 'The kept design could not be read.', r.errors, 'autosave');
-          return;
-        }
-        // The design shown now is kept aside in its turn, so restoring loses nothing.
-        this.autosave.keepAside(
-          stateToProjectText(this.state),
-          'the design shown before a kept one was restored',
-        );
-        this.messages.clear('autosave');
-        this.apply(r.value);
-        this.messages.show(
-          'info',
-          'Restored the kept design; the one shown before it was kept aside.',
-          [],
-          'autosave',
-        );
-      },
-    };
-  }
-
-  /** Show or hide the "Kept designs" button (shown while copies are kept). */
-  private refreshKeptButton(): void {
-    const n = this.autosave.kept().length;
-    const b = byId('kept-designs');
-    b.hidden = n === 0;
-    b.textContent = `Kept designs (${n})`;
-  }
-
-  /** One notice per kept copy, newest first, each with Restore and Download. */
-  private showKept(): void {
-    const kept = this.autosave.kept();
-    kept.forEach((copy, i) => {
-      this.messages.show(
-        'info',
-        `Kept ${copy.keptAt.replace('T', ' ').slice(0, 19)} UTC: ${copy.reason}.`,
-        [],
-        `kept-${i}`,
-        [this.restoreKeptAction(copy), this.downloadKeptAction(copy)],
-      );
-    });
-  }
-
-  /** Another tab saved its design to the shared autosave. */
-  private otherTabSaved(): void {
-    this.messages.show(
-      'info',
-      'Another tab saved a different design to this browser’s autosave. This tab keeps showing its own; if you change it here, the other tab’s design is kept aside first (not lost), and you can restore it from the notice.',
-      [],
-      'tabs',
-    );
-  }
-
-  private onHashChange(): void {
-    if (location.hash === (stateToHashOrNull(this.state) ?? '')) return;
-    const parsed = hashToState(location.hash);
-    if (parsed === null) return;
-    if (!parsed.ok) {
-      this.messages.show(
-        'error',
-        "The link's design could not be opened; the current design is unchanged.",
-        parsed.errors,
-        'link',
-      );
-      this.showHash(this.state, true);
-      return;
-    }
-    this.messages.clear('link');
-    const before = stateToProjectText(this.state);
-    const keptCopy =
-      before !== stateToProjectText(parsed.value)
-        ? this.autosave.keepAside(before, 'the design shown when a link was opened in its tab')
-        : null;
-    this.apply(parsed.value, { replaceUrl: false });
-    if (keptCopy !== null) {
-      this.startupKept = { copy: keptCopy, what: 'link', errors: [] };
-      this.reportStartupKept();
-    }
-  }
-
   /** Make `next` the state: autosave, URL, controls, then recompute or redraw. */
   apply(next: AppState, opts: { replaceUrl: boolean } = { replaceUrl: true }): void {
     this.state = next;
-    const saved = this.autosave.save(next);
-    this.refreshKeptButton();
-    if (saved.error) this.messages.show('warning', 'Autosave failed', [saved.error], 'autosave');
-    if (saved.kept) {
-      this.messages.show(
-        'warning',
-        'Another tab had autosaved a different design since this tab last saved: it was kept aside before this tab’s change was saved.',
-        [],
-        'tabs',
-        [this.restoreKeptAction(saved.kept), this.downloadKeptAction(saved.kept)],
-      );
-    }
-    this.showHash(next, opts.replaceUrl);
+    this.store.save(next, opts.replaceUrl);
     this.controls.refresh(next);
     byId('clear-baseline').hidden = next.baseline === null;
     this.showTab(next.view.tab, false);
@@ -368,23 +187,6 @@ export class App implements ComputeHost, PageHost {
     if (this.computer.needed(next)) this.computer.schedule(150);
     else this.renderAll();
     if (next.view.tab === 'road') this.roadGlue.schedule(200);
-  }
-
-  /** Put the state in the address bar, or clear it there (and say so) when too long for a link. */
-  private showHash(state: AppState, always: boolean): void {
-    const hash = stateToHashOrNull(state);
-    if (hash === null) {
-      history.replaceState(null, '', `${location.pathname}${location.search}`);
-      this.messages.show(
-        'warning',
-        `This design is too large for a link (more than ${MAX_LINK_CHARS / 1024} kB), so the address no longer holds it; it is still autosaved here. Save a project file to share it.`,
-        [],
-        'link-size',
-      );
-      return;
-    }
-    this.messages.clear('link-size');
-    if (always || location.hash !== hash) history.replaceState(null, '', hash);
   }
 
   private onEdit(field: Field, value: FieldValue): void {
@@ -695,7 +497,7 @@ export class App implements ComputeHost, PageHost {
         return null;
       });
     });
-    byId('kept-designs').addEventListener('click', () => this.showKept());
+    byId('kept-designs').addEventListener('click', () => this.store.showKept());
     byId('reset').addEventListener('click', () => {
       this.apply({
         case: defaultCase(),

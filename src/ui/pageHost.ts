@@ -5,7 +5,7 @@ import type { Messages } from './messages';
 export interface PageHost {
   readonly state: AppState;
   readonly messages: Messages;
-  apply(next: AppState): void;
+  apply(next: AppState, opts?: { replaceUrl: boolean }): void;
   /** Pin the current design as the baseline. */
   pinBaseline(): void;
 }
