@@ -1,57 +1,45 @@
 /**
- * The page: state (a validated case file + view settings + optional baseline + road inputs), the
- * controls, the compute plan run on the worker pool (cancellable, streamed stage by stage: the current
- * design first without its grid-convergence lattices, so its numbers show at once), the views of the
- * results (headline figures, plots, design map, 3D view, tables), the "On the road" and "Your data"
- * panels (their jobs on their own workers), with link, autosave and files.
+ * The page's wiring: the state (a validated case file + view settings + optional baseline + road inputs)
+ * and its one way in (apply: store, controls, tabs, then recompute or redraw), the controls, the figures
+ * and tabs. The parts live beside it: pageStore (link, autosave, kept designs), pageCompute (the studies
+ * on the worker pool, stage by stage), views/ (each figure and table reads the state and the results'
+ * cubes), pageActions (buttons and files), roadGlue and dataGlue (the two panels, each with its own
+ * worker), view3dGlue (the 3D view).
  */
-import { type CaseFile, parseCaseFile, validateCase } from '../compute/caseFile';
-import type { ViewField } from '../compute/engine/protocol';
+import { type CaseFile, validateCase } from '../compute/caseFile';
 import type { WorkerPool } from '../compute/engine/workerPool';
-import { FLAG_MESSAGES, viewFieldRequest } from '../compute/study';
-import {
-  type AppState,
-  MAX_LINK_CHARS,
-  MAX_PROJECT_BYTES,
-  nameErrors,
-  projectTextToState,
-  stateToHashOrNull,
-  stateToProjectText,
-} from './appState';
-import type { BrowserWorkerHandle } from './browserWorker';
+import { FLAG_MESSAGES } from '../compute/study';
+import { type AppState, nameErrors } from './appState';
 import { Controls } from './controls';
 import { DataGlue } from './dataGlue';
 import type { DataPlotName } from './dataPanel';
-import { defaultCase } from './defaultCase';
 import { DesignMap } from './designMap';
-import { fmt } from './displayUnits';
-import { downloadBlob, downloadText, safeFileStem } from './download';
+import { downloadBlob, safeFileStem } from './download';
 import type { DurableCopy } from './durableAutosave';
-import { crashPoolWorker, hangPoolWorkers, spawnTracked } from './earlyPool';
+import { crashPoolWorker, hangPoolWorkers } from './earlyPool';
 import type { Field, FieldValue } from './fields';
 import { LinePlot } from './linePlot';
 import { Messages } from './messages';
+import { type ActionsHost, wirePageActions } from './pageActions';
 import { type ComputeHost, PageCompute } from './pageCompute';
-import type { PageHost } from './pageHost';
 import { PageStore } from './pageStore';
 import { RoadGlue } from './roadGlue';
 import type { RoadPlotName } from './roadPanel';
-import { defaultRoad } from './roadState';
-import { view3dLoader, type WheelView } from './view3dSlot';
-import { defaultView, TAB_IDS, type TabId, type ViewState, validateView } from './viewState';
+import { View3dGlue } from './view3dGlue';
+import { TAB_IDS, type TabId, type ViewState, validateView } from './viewState';
 import { renderCoverPlot } from './views/coverPlot';
 import { renderHeadline } from './views/headline';
 import { renderMap } from './views/mapView';
 import { allPoints, axisOf, type PageResults } from './views/pageResults';
 import { PageTables } from './views/pageTables';
-import { byId, conditionsText, plotDiv, presentOf } from './views/present';
+import { byId, plotDiv, presentOf } from './views/present';
 import { renderYawPlots } from './views/yawPlots';
 import { type HangReport, onWorkerHang } from './watchdog';
 
 type MainPlotName = 'dragYaw' | 'sideYaw' | 'dragCover' | 'handling';
 export type PlotName = MainPlotName | RoadPlotName | DataPlotName;
 
-export class App implements ComputeHost, PageHost {
+export class App implements ComputeHost, ActionsHost {
   state: AppState;
   private readonly computer: PageCompute;
   private controls!: Controls;
@@ -62,10 +50,7 @@ export class App implements ComputeHost, PageHost {
   private tables: PageTables | null = null;
   /** Designs replaced by picking a map cell, most recent last (Undo takes them back). */
   private readonly picked: CaseFile[] = [];
-  private view3d: WheelView | null = null;
-  private view3dWorker: BrowserWorkerHandle | null = null;
-  private view3dRequest = 0;
-  private view3dStarted = false;
+  private readonly view3dGlue = new View3dGlue(this);
   /** The two panels (built, and their code loaded, when first opened), each with its own worker. */
   private readonly roadGlue = new RoadGlue(this);
   private readonly dataGlue = new DataGlue(this);
@@ -134,7 +119,7 @@ export class App implements ComputeHost, PageHost {
     this.designMap.onPick((i, j) => this.pickMapCell(i, j));
     byId('undo-pick').addEventListener('click', () => this.undoPick());
     this.wireFigureActions();
-    this.wireActions();
+    wirePageActions(this);
     this.wireTabs();
     this.apply(this.state, { replaceUrl: true });
     window.addEventListener('hashchange', () => this.store.onHashChange());
@@ -169,14 +154,7 @@ export class App implements ComputeHost, PageHost {
     this.controls.refresh(next);
     byId('clear-baseline').hidden = next.baseline === null;
     this.showTab(next.view.tab, false);
-    if (this.view3d && Object.keys(next.view.layers3d).length > 0) {
-      if (
-        JSON.stringify(this.view3d.layers()) !==
-        JSON.stringify({ ...this.view3d.layers(), ...next.view.layers3d })
-      ) {
-        this.view3d.setLayers(next.view.layers3d);
-      }
-    }
+    this.view3dGlue.applyLayers(next);
     this.roadGlue.showInputs(next);
     this.dataGlue.showCalibrationBadge(next.calibration ?? null);
     const caseKey = JSON.stringify(next.case);
@@ -235,7 +213,7 @@ export class App implements ComputeHost, PageHost {
     }
   }
 
-  private setView(patch: Partial<ViewState>): void {
+  setView(patch: Partial<ViewState>): void {
     const r = validateView({ ...this.state.view, ...patch });
     if (r.ok) this.apply({ ...this.state, view: r.value });
   }
@@ -245,12 +223,7 @@ export class App implements ComputeHost, PageHost {
 
   /** The first numbers are on screen: the 3D view (a large module and a WebGL context) starts now. */
   firstNumbersShown(): void {
-    if (!this.view3dStarted) {
-      this.view3dStarted = true;
-      void this.setUp3d();
-    } else {
-      void this.update3d();
-    }
+    this.view3dGlue.firstNumbersShown();
   }
 
   renderAll(opts: { light?: boolean } = {}): void {
@@ -319,58 +292,6 @@ export class App implements ComputeHost, PageHost {
   }
 
   // -------------------------------------------------------------------------------------------
-  // 3D view
-
-  private async setUp3d(): Promise<void> {
-    const note = byId('view3d-note');
-    const loader = view3dLoader();
-    if (!loader) {
-      note.textContent = 'The 3D view is not part of this build.';
-      return;
-    }
-    try {
-      const mod = await loader();
-      this.view3d = mod.createWheelView(byId('view3d'));
-      if (Object.keys(this.state.view.layers3d).length > 0) this.view3d.setLayers(this.state.view.layers3d);
-      // The view's own layer switches become part of the state (link, autosave, project file).
-      byId('view3d').addEventListener('change', () => {
-        if (!this.view3d) return;
-        const layers = { ...this.view3d.layers() };
-        if (JSON.stringify(layers) !== JSON.stringify(this.state.view.layers3d))
-          this.setView({ layers3d: layers });
-      });
-      note.textContent = '';
-      void this.update3d();
-    } catch (error) {
-      note.textContent = `The 3D view could not start: ${(error as Error).message}`;
-    }
-  }
-
-  private async update3d(): Promise<void> {
-    if (!this.view3d || !this.results?.current) return;
-    const yawDeg = this.state.view.view3dYawDeg;
-    const request = viewFieldRequest(this.state.case, yawDeg);
-    const p0 = request.input.points[0]!;
-    const ticket = ++this.view3dRequest;
-    try {
-      this.view3dWorker ??= spawnTracked();
-      const field = (await Promise.race([
-        this.view3dWorker.api.viewField(request),
-        this.view3dWorker.failed,
-      ])) as ViewField;
-      if (ticket !== this.view3dRequest || !this.view3d) return;
-      this.view3d.update(field);
-      byId('view3d-note').textContent =
-        `Pressure jump on the wheel at ${fmt(yawDeg)}° yaw, ${conditionsText(presentOf(this.state, this.results), p0.airspeedMps, p0.rhoKgPerM3)}; drag to orbit.`;
-    } catch (error) {
-      this.view3dWorker?.terminate();
-      this.view3dWorker = null;
-      byId('view3d-note').textContent =
-        `The 3D view's flow field could not be computed: ${(error as Error).message}`;
-    }
-  }
-
-  // -------------------------------------------------------------------------------------------
   // Buttons, files, tabs
 
   private wireFigureActions(): void {
@@ -380,12 +301,7 @@ export class App implements ComputeHost, PageHost {
       ['fig-drag-cover', () => this.plots.dragCover.toPngBlob(), 'table-cover'],
       ['fig-handling', () => this.plots.handling.toPngBlob(), 'table-current'],
       ['fig-map', () => this.designMap.toPngBlob(), 'table-map'],
-      [
-        'fig-3d',
-        () =>
-          this.view3d ? this.view3d.toPngBlob() : Promise.reject(new Error('the 3D view is not available')),
-        null,
-      ],
+      ['fig-3d', () => this.view3dGlue.toPngBlob(), null],
     ];
     for (const [id, png, tableId] of figures) {
       const cap = byId(id).querySelector('figcaption')!;
@@ -424,134 +340,6 @@ export class App implements ComputeHost, PageHost {
     }
   }
 
-  private wireActions(): void {
-    byId('cancel').addEventListener('click', () => {
-      // computeStages sees the abort as a cancel (it is still the current run).
-      this.computer.cancel();
-    });
-    byId('pin-baseline').addEventListener('click', () => this.pinBaseline());
-    byId('clear-baseline').addEventListener('click', () => {
-      this.apply({ ...this.state, baseline: null, view: { ...this.state.view, difference: 'none' } });
-      this.messages.clear('baseline');
-    });
-    byId('copy-link').addEventListener('click', () => {
-      if (stateToHashOrNull(this.state) === null) {
-        this.messages.show(
-          'error',
-          `No link made: this design is too large for a link (more than ${MAX_LINK_CHARS / 1024} kB). Save a project file to share it.`,
-          [],
-          'link-copy',
-        );
-        return;
-      }
-      const link = location.href;
-      navigator.clipboard?.writeText(link).then(
-        () =>
-          this.messages.show(
-            'info',
-            'Link copied: it reopens this design, view and baseline.',
-            [],
-            'link-copy',
-          ),
-        () =>
-          this.messages.show(
-            'info',
-            'Copy this link (it reopens this design and view):',
-            [link],
-            'link-copy',
-          ),
-      ) ??
-        this.messages.show('info', 'Copy this link (it reopens this design and view):', [link], 'link-copy');
-    });
-    byId('save-project').addEventListener('click', () => {
-      downloadText(
-        `${safeFileStem(this.state.case.name, 'coversweep')}.coversweep-project.json`,
-        stateToProjectText(this.state),
-        'application/json',
-      );
-    });
-    byId('export-case').addEventListener('click', () => {
-      downloadText(
-        `${safeFileStem(this.state.case.name, 'coversweep')}.case.json`,
-        `${JSON.stringify(this.state.case, null, 2)}\n`,
-        'application/json',
-      );
-    });
-    byId<HTMLInputElement>('open-project').addEventListener('change', (event) => {
-      const input = event.target as HTMLInputElement;
-      void this.openFile(input, (text, name) => {
-        const r = projectTextToState(text, name);
-        if (!r.ok) return r.errors;
-        this.apply(r.value);
-        return null;
-      });
-    });
-    byId<HTMLInputElement>('open-case').addEventListener('change', (event) => {
-      const input = event.target as HTMLInputElement;
-      void this.openFile(input, (text, name) => {
-        const r = parseCaseFile(text);
-        if (!r.ok) return r.errors.map((e) => `${name}: ${e}`);
-        const long = nameErrors({ case: r.value }, name);
-        if (long.length > 0) return long;
-        this.apply({ ...this.state, case: r.value });
-        return null;
-      });
-    });
-    byId('kept-designs').addEventListener('click', () => this.store.showKept());
-    byId('reset').addEventListener('click', () => {
-      this.apply({
-        case: defaultCase(),
-        view: defaultView(),
-        baseline: null,
-        road: defaultRoad(),
-        calibration: null,
-      });
-      this.messages.show(
-        'info',
-        'Back to the demo wheel and the default view (the baseline is cleared).',
-        [],
-        'reset',
-      );
-    });
-  }
-
-  private async openFile(
-    input: HTMLInputElement,
-    use: (text: string, name: string) => string[] | null,
-  ): Promise<void> {
-    const file = input.files?.[0];
-    input.value = '';
-    if (!file) return;
-    let text: string;
-    try {
-      if (file.size > MAX_PROJECT_BYTES)
-        throw new Error(
-          `the file is ${Math.round(file.size / 1024)} kB, more than the ${MAX_PROJECT_BYTES / 1024} kB limit; a design file is a few kB`,
-        );
-      text = await file.text();
-    } catch (error) {
-      this.messages.show(
-        'error',
-        `Could not read ${file.name}; nothing changed.`,
-        [(error as Error).message],
-        'file',
-      );
-      return;
-    }
-    const errors = use(text, file.name);
-    if (errors) {
-      this.messages.show(
-        'error',
-        `${file.name} could not be opened; the current design is unchanged.`,
-        errors,
-        'file',
-      );
-    } else {
-      this.messages.clear('file');
-      this.messages.show('info', `Opened ${file.name}.`, [], 'file');
-    }
-  }
-
   private wireTabs(): void {
     const tabs = [...document.querySelectorAll<HTMLButtonElement>('[role="tab"]')];
     for (const tab of tabs) {
@@ -584,6 +372,15 @@ export class App implements ComputeHost, PageHost {
     if (tab === 'data') void this.dataGlue.panel().then((panel) => panel.shown());
     if (tab === 'road') void this.roadGlue.panel();
     if (tab === 'help') void this.validationPanel().then((panel) => panel.shown());
+  }
+
+  cancelCompute(): void {
+    // computeStages sees the abort as a cancel (it is still the current run).
+    this.computer.cancel();
+  }
+
+  showKept(): void {
+    this.store.showKept();
   }
 
   pinBaseline(): void {
