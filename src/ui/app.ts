@@ -6,7 +6,7 @@
  * cubes), pageActions (buttons and files), roadGlue and dataGlue (the two panels, each with its own
  * worker), view3dGlue (the 3D view).
  */
-import { type CaseFile, validateCase } from '../compute/caseFile';
+import { validateCase } from '../compute/caseFile';
 import type { WorkerPool } from '../compute/engine/workerPool';
 import { FLAG_MESSAGES } from '../compute/study';
 import { type AppState, nameErrors } from './appState';
@@ -14,7 +14,6 @@ import { Controls } from './controls';
 import { DataGlue } from './dataGlue';
 import type { DataPlotName } from './dataPanel';
 import { DesignMap } from './designMap';
-import { downloadBlob, safeFileStem } from './download';
 import type { DurableCopy } from './durableAutosave';
 import { crashPoolWorker, hangPoolWorkers } from './earlyPool';
 import type { Field, FieldValue } from './fields';
@@ -23,14 +22,17 @@ import { Messages } from './messages';
 import { type ActionsHost, wirePageActions } from './pageActions';
 import { type ComputeHost, PageCompute } from './pageCompute';
 import { PageStore } from './pageStore';
+import { showTabPanel, wireTabs } from './pageTabs';
 import { RoadGlue } from './roadGlue';
 import type { RoadPlotName } from './roadPanel';
 import { View3dGlue } from './view3dGlue';
-import { TAB_IDS, type TabId, type ViewState, validateView } from './viewState';
+import { type TabId, type ViewState, validateView } from './viewState';
 import { renderCoverPlot } from './views/coverPlot';
+import { wireFigureActions } from './views/figureActions';
 import { renderHeadline } from './views/headline';
+import { MapPick } from './views/mapPick';
 import { renderMap } from './views/mapView';
-import { allPoints, axisOf, type PageResults } from './views/pageResults';
+import { allPoints, type PageResults } from './views/pageResults';
 import { PageTables } from './views/pageTables';
 import { byId, plotDiv, presentOf } from './views/present';
 import { renderYawPlots } from './views/yawPlots';
@@ -48,8 +50,7 @@ export class App implements ComputeHost, ActionsHost {
   private readonly plots: Record<MainPlotName, LinePlot>;
   private readonly designMap: DesignMap;
   private tables: PageTables | null = null;
-  /** Designs replaced by picking a map cell, most recent last (Undo takes them back). */
-  private readonly picked: CaseFile[] = [];
+  private readonly mapPick = new MapPick(this);
   private readonly view3dGlue = new View3dGlue(this);
   /** The two panels (built, and their code loaded, when first opened), each with its own worker. */
   private readonly roadGlue = new RoadGlue(this);
@@ -116,11 +117,11 @@ export class App implements ComputeHost, ActionsHost {
     await new Promise((resolve) => setTimeout(resolve, 0));
     this.controls = new Controls(byId('controls'), this.state, (field, value) => this.onEdit(field, value));
     this.tables = new PageTables(byId('tables'), () => this.state.case.name);
-    this.designMap.onPick((i, j) => this.pickMapCell(i, j));
-    byId('undo-pick').addEventListener('click', () => this.undoPick());
+    this.designMap.onPick((i, j) => this.mapPick.pick(i, j));
+    byId('undo-pick').addEventListener('click', () => this.mapPick.undo());
     this.wireFigureActions();
     wirePageActions(this);
-    this.wireTabs();
+    wireTabs((tab) => this.setView({ tab }));
     this.apply(this.state, { replaceUrl: true });
     window.addEventListener('hashchange', () => this.store.onHashChange());
     window.addEventListener('storage', (event) => {
@@ -262,113 +263,25 @@ export class App implements ComputeHost, ActionsHost {
     );
   }
 
-  /** A map cell picked: its covering fraction and rim depth become the current design (Undo restores). */
-  private pickMapCell(i: number, j: number): void {
-    const r = this.results;
-    if (!r) return;
-    const fraction = axisOf(r.studies.map, 'coverFraction')[i];
-    const depthM = axisOf(r.studies.map, 'rimDepth')[j];
-    if (fraction === undefined || depthM === undefined) return;
-    const c = this.state.case;
-    const placement = c.wheel.cover.placement === 'explicit' ? 'rim' : c.wheel.cover.placement;
-    const next = validateCase({
-      ...c,
-      wheel: { ...c.wheel, rim_depth_m: depthM, cover: { ...c.wheel.cover, fraction, placement } },
-    });
-    if (!next.ok) {
-      this.messages.show('error', 'That map cell cannot be made the current design:', next.errors, 'edit');
-      return;
-    }
-    this.picked.push(c);
-    byId('undo-pick').hidden = false;
-    this.messages.clear('edit');
-    this.apply({ ...this.state, case: next.value });
-  }
-
-  private undoPick(): void {
-    const previous = this.picked.pop();
-    byId('undo-pick').hidden = this.picked.length === 0;
-    if (previous) this.apply({ ...this.state, case: previous });
-  }
-
   // -------------------------------------------------------------------------------------------
   // Buttons, files, tabs
 
   private wireFigureActions(): void {
-    const figures: Array<[string, () => Promise<Blob>, string | null]> = [
-      ['fig-drag-yaw', () => this.plots.dragYaw.toPngBlob(), 'table-family'],
-      ['fig-side-yaw', () => this.plots.sideYaw.toPngBlob(), 'table-family'],
-      ['fig-drag-cover', () => this.plots.dragCover.toPngBlob(), 'table-cover'],
-      ['fig-handling', () => this.plots.handling.toPngBlob(), 'table-current'],
-      ['fig-map', () => this.designMap.toPngBlob(), 'table-map'],
-      ['fig-3d', () => this.view3dGlue.toPngBlob(), null],
-    ];
-    for (const [id, png, tableId] of figures) {
-      const cap = byId(id).querySelector('figcaption')!;
-      const actions = document.createElement('span');
-      actions.className = 'fig-actions';
-      const title = cap.querySelector('.fig-title')?.textContent ?? id;
-      const pngButton = document.createElement('button');
-      pngButton.type = 'button';
-      pngButton.textContent = 'PNG';
-      pngButton.setAttribute('aria-label', `Save as PNG: ${title}`);
-      pngButton.addEventListener('click', () => {
-        png().then(
-          (blob) =>
-            downloadBlob(
-              `${safeFileStem(this.state.case.name, 'coversweep')}-${id.replace('fig-', '')}.png`,
-              blob,
-            ),
-          (error: Error) => this.messages.show('error', 'PNG export failed', [error.message], 'png'),
-        );
-      });
-      actions.append(pngButton);
-      if (tableId) {
-        const tableButton = document.createElement('button');
-        tableButton.type = 'button';
-        tableButton.textContent = 'Table';
-        tableButton.setAttribute('aria-label', `Show the numbers: ${title}`);
-        tableButton.addEventListener('click', () => {
-          this.setView({ tab: 'tables' });
-          const block = document.getElementById(`${tableId}-block`);
-          block?.scrollIntoView({ block: 'start' });
-          block?.querySelector<HTMLElement>('.table-scroll')?.focus();
-        });
-        actions.append(tableButton);
-      }
-      cap.append(actions);
-    }
-  }
-
-  private wireTabs(): void {
-    const tabs = [...document.querySelectorAll<HTMLButtonElement>('[role="tab"]')];
-    for (const tab of tabs) {
-      tab.addEventListener('click', () => this.setView({ tab: tab.dataset.tab as TabId }));
-      tab.addEventListener('keydown', (e) => {
-        const i = tabs.indexOf(tab);
-        let j = -1;
-        if (e.key === 'ArrowRight') j = (i + 1) % tabs.length;
-        else if (e.key === 'ArrowLeft') j = (i - 1 + tabs.length) % tabs.length;
-        else if (e.key === 'Home') j = 0;
-        else if (e.key === 'End') j = tabs.length - 1;
-        if (j >= 0) {
-          e.preventDefault();
-          this.setView({ tab: tabs[j]!.dataset.tab as TabId });
-          tabs[j]!.focus();
-        }
-      });
-    }
+    wireFigureActions(
+      [
+        ['fig-drag-yaw', () => this.plots.dragYaw.toPngBlob(), 'table-family'],
+        ['fig-side-yaw', () => this.plots.sideYaw.toPngBlob(), 'table-family'],
+        ['fig-drag-cover', () => this.plots.dragCover.toPngBlob(), 'table-cover'],
+        ['fig-handling', () => this.plots.handling.toPngBlob(), 'table-current'],
+        ['fig-map', () => this.designMap.toPngBlob(), 'table-map'],
+        ['fig-3d', () => this.view3dGlue.toPngBlob(), null],
+      ],
+      this,
+    );
   }
 
   private showTab(tab: TabId, focus: boolean): void {
-    for (const id of TAB_IDS) {
-      const button = byId(`tab-${id}`);
-      const selected = id === tab;
-      button.setAttribute('aria-selected', String(selected));
-      button.tabIndex = selected ? 0 : -1;
-      byId(`panel-${id}`).hidden = !selected;
-      if (selected && focus) button.focus();
-    }
+    showTabPanel(tab, focus);
     if (tab === 'data') void this.dataGlue.panel().then((panel) => panel.shown());
     if (tab === 'road') void this.roadGlue.panel();
     if (tab === 'help') void this.validationPanel().then((panel) => panel.shown());
