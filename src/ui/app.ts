@@ -8,7 +8,7 @@
  */
 import { validateCase } from '../compute/caseFile';
 import type { WorkerPool } from '../compute/engine/workerPool';
-import { FLAG_MESSAGES } from '../compute/study';
+import { FLAG_MESSAGES } from '../compute/study/modelResults';
 import { type AppState, nameErrors } from './appState';
 import { Controls } from './controls';
 import { DataGlue } from './dataGlue';

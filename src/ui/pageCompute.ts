@@ -8,14 +8,9 @@
 import { caseAirDensity } from '../compute/caseFile';
 import type { SweepProgress } from '../compute/engine/runCases';
 import type { WorkerPool } from '../compute/engine/workerPool';
-import {
-  type PageStudies,
-  pageStudies,
-  type RunStudiesOptions,
-  runStudies,
-  type StudiesOutcome,
-  type StudyPlan,
-} from '../compute/study';
+import { type PageStudies, pageStudies } from '../compute/study/pageStudies';
+import { type RunStudiesOptions, runStudies, type StudiesOutcome } from '../compute/study/runStudies';
+import type { StudyPlan } from '../compute/study/studyPlan';
 import type { AppState } from './appState';
 import { scriptStartMs, workersReadyMs } from './earlyPool';
 import type { Messages } from './messages';

@@ -4,7 +4,7 @@
  * layer switches are part of the state.
  */
 import type { ViewField } from '../compute/engine/protocol';
-import { viewFieldRequest } from '../compute/study';
+import { viewFieldRequest } from '../compute/study/viewFieldRequest';
 import type { AppState } from './appState';
 import type { BrowserWorkerHandle } from './browserWorker';
 import { fmt } from './displayUnits';

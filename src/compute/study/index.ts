@@ -1,5 +1,3 @@
-/** Model result types the page reads (it imports nothing from src/model itself). */
-export { FLAG_MESSAGES, type PointResult, type WheelInput, type WheelSolution } from '../../model/wheel';
 export { AXIS, airspeedAxis, axisNumbers, coverFractionAxis, rimDepthAxis, yawAxis } from './axes';
 export { baselineInput, baselineStudy } from './baselineStudy';
 export { COLUMN_COUNT, COLUMN_NAMES, type ColumnSpec, columnIndex, RESULT_COLUMNS } from './columns';
@@ -15,6 +13,7 @@ export {
   mapDepths,
   SWEEP_FRACTIONS,
 } from './designSpace';
+export { FLAG_MESSAGES, type PointResult, type WheelInput, type WheelSolution } from './modelResults';
 export { type PageStudies, pageStudies } from './pageStudies';
 export { type AxisPick, ResultCube } from './resultCube';
 export {

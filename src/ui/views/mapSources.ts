@@ -4,7 +4,7 @@
  * yaw angle are registered here; a new objective (a ride figure per design, say) is one more
  * registerMapSource call with its own label and cell function.
  */
-import type { PointResult } from '../../compute/study';
+import type { PointResult } from '../../compute/study/modelResults';
 import { MAP_OUTPUT_KEYS, OUTPUTS, type OutputSpec } from '../outputs';
 import type { DifferenceMode } from '../viewState';
 import { axisOf, type PageResults, pointAt } from './pageResults';

@@ -3,15 +3,12 @@
  * each a named-axis cube. Views read points by axis name through the helpers here; a case that has not
  * landed yet, or failed, reads as null.
  */
-import type {
-  AxisPick,
-  PageStudies,
-  PointResult,
-  ResultCube,
-  StudyPlan,
-  StudyResult,
-} from '../../compute/study';
-import { axisNumbers, caseCell } from '../../compute/study';
+import { axisNumbers } from '../../compute/study/axes';
+import type { PointResult } from '../../compute/study/modelResults';
+import type { PageStudies } from '../../compute/study/pageStudies';
+import type { AxisPick, ResultCube } from '../../compute/study/resultCube';
+import { caseCell, type StudyResult } from '../../compute/study/runStudies';
+import type { StudyPlan } from '../../compute/study/studyPlan';
 
 export interface PageResults {
   studies: PageStudies;

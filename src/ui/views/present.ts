@@ -3,7 +3,7 @@
  * axis labels and condition texts. Pure functions of the state; every view uses them alike.
  */
 
-import type { PointResult } from '../../compute/study';
+import type { PointResult } from '../../compute/study/modelResults';
 import { kmhToMps } from '../../compute/units';
 import type { AppState } from '../appState';
 import { type DisplayUnits, fmt, speedFromMps, speedUnitText, toDisplay, unitText } from '../displayUnits';
