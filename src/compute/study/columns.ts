@@ -95,9 +95,16 @@ export const RESULT_COLUMNS: readonly ColumnSpec[] = [
 export const COLUMN_NAMES: readonly string[] = RESULT_COLUMNS.map((c) => c.name);
 export const COLUMN_COUNT = COLUMN_NAMES.length;
 
-const INDEX = new Map(COLUMN_NAMES.map((name, i) => [name, i]));
+/** Columns by their cube name and, where they have one, by their result-document (and CSV) name. */
+const INDEX = new Map<string, number>([
+  ...COLUMN_NAMES.map((name, i): [string, number] => [name, i]),
+  ...RESULT_COLUMNS.flatMap((c, i): Array<[string, number]> => (c.document ? [[c.document, i]] : [])),
+]);
 
-/** Position of a column in a packed row; throws a RangeError naming the column for an unknown name. */
+/**
+ * Position of a column in a packed row, by its cube name (`axialN`) or its document name (`axial_N`);
+ * throws a RangeError naming the column for an unknown name.
+ */
 export function columnIndex(name: string): number {
   const i = INDEX.get(name);
   if (i === undefined) {

@@ -42,6 +42,11 @@ describe('ResultCube', () => {
     expect(row[0]).toBe(at(2, 0, 1, COLUMN_NAMES[0]!));
     expect(row.length).toBe(COLUMN_COUNT);
   });
+  it("reads a column by its result document's name too (axial_N is axialN)", () => {
+    const a = cube.pick({ rimDepth: 2, coverFraction: 1, yaw: 3 });
+    expect(a.column('axial_N').value()).toBe(a.column('axialN').value());
+    expect(a.column('steering_moment_Nm').value()).toBe(at(2, 1, 3, 'steeringMomentNm'));
+  });
   it('finds the nearest axis value', () => {
     expect(cube.nearest('yaw', 6)).toBe(1);
     expect(cube.nearest('yaw', 100)).toBe(3);
