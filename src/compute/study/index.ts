@@ -1,6 +1,6 @@
+export { COLUMN_COUNT, COLUMN_NAMES, type ColumnSpec, columnIndex, RESULT_COLUMNS } from '../engine/columns';
 export { AXIS, airspeedAxis, axisNumbers, coverFractionAxis, rimDepthAxis, yawAxis } from './axes';
 export { baselineInput, baselineStudy } from './baselineStudy';
-export { COLUMN_COUNT, COLUMN_NAMES, type ColumnSpec, columnIndex, RESULT_COLUMNS } from '../engine/columns';
 export { commandLineStudy } from './commandLineStudy';
 export { coverFamilyStudy, sweepPlacement } from './coverFamilyStudy';
 export { coverSweepStudy } from './coverSweepStudy';

@@ -8,8 +8,8 @@
  * Content-Security-Policy (script-src 'self', no 'unsafe-eval') forbids; the layout here is the same.
  */
 import type { PointResult } from '../../model/wheel';
-import { unpackPoints } from '../engine/packPoints';
 import { COLUMN_COUNT, COLUMN_NAMES, columnIndex } from '../engine/columns';
+import { unpackPoints } from '../engine/packPoints';
 import type { StudyAxis } from './studyPlan';
 
 /** Axis name -> index along that axis. */

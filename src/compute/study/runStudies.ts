@@ -5,10 +5,10 @@
  * a family and a baseline of one wheel reuse each other's factorisations.
  */
 import type { SurfaceSummary, WheelInput } from '../../model/wheel';
+import { COLUMN_COUNT } from '../engine/columns';
 import type { JobRunner } from '../engine/jobRunner';
 import type { CaseOutcome } from '../engine/protocol';
 import { runCases, type SweepProgress } from '../engine/runCases';
-import { COLUMN_COUNT } from '../engine/columns';
 import { type AxisPick, ResultCube } from './resultCube';
 import { axesSize, checkStudyPlan, isUnplanned, type StudyPlan } from './studyPlan';
 

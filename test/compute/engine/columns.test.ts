@@ -7,9 +7,9 @@ import {
   solveCase,
   validateCase,
 } from '../../../src/compute/caseFile';
+import { COLUMN_NAMES, columnIndex, RESULT_COLUMNS } from '../../../src/compute/engine/columns';
 import { packPoints } from '../../../src/compute/engine/packPoints';
 import { resultColumnNames } from '../../../src/compute/resultTable';
-import { COLUMN_NAMES, columnIndex, RESULT_COLUMNS } from '../../../src/compute/engine/columns';
 import { solveWheel } from '../../../src/model/wheel/solveWheel';
 
 // The one column table (consistency with the result document and the CSV; no source needed).
