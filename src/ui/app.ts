@@ -511,7 +511,7 @@ export class App {
     if (always || location.hash !== hash) history.replaceState(null, '', hash);
   }
 
-  private onEdit(field: Field, value: FieldValue): void {
+  private onEdit(field: Field, value: FieldValue): readonly string[] | null {
     const ctx = { case: this.state.case, view: this.state.view };
     const raw = structuredClone(
       field.target === 'case' ? this.state.case : this.state.view,
@@ -520,15 +520,14 @@ export class App {
       field.set(raw, value, ctx);
     } catch (error) {
       this.messages.show('error', `Not applied: ${field.label(ctx)}`, [(error as Error).message], 'edit');
-      return;
+      return [(error as Error).message];
     }
     if (field.target === 'case') {
       const r = validateCase(raw);
       const long = r.ok ? nameErrors({ case: r.value }, 'design') : [];
       if (long.length > 0) {
         this.messages.show('error', `Not applied: ${field.label(ctx)}`, long, 'edit');
-        this.controls.revert(field.key, { case: this.state.case, view: this.state.view });
-        return;
+        return long;
       }
       if (!r.ok) {
         this.messages.show(
@@ -537,7 +536,7 @@ export class App {
           r.errors,
           'edit',
         );
-        return;
+        return r.errors;
       }
       this.messages.clear('edit');
       this.apply({ ...this.state, case: r.value });
@@ -550,11 +549,12 @@ export class App {
           r.errors,
           'edit',
         );
-        return;
+        return r.errors;
       }
       this.messages.clear('edit');
       this.apply({ ...this.state, view: r.value });
     }
+    return null;
   }
 
   private setView(patch: Partial<ViewState>): void {
@@ -1001,6 +1001,7 @@ export class App {
       xLabelShort,
       yLabel: this.comparedLabel(OUTPUTS.axial, mode),
       xs: yaws,
+      xIsYawDeg: true,
       series: dragSeries,
     });
     // Side force vs yaw.
@@ -1027,6 +1028,7 @@ export class App {
       xLabelShort,
       yLabel: `Side force, ${unitText('force', u)}`,
       xs: yaws,
+      xIsYawDeg: true,
       series: sideSeries,
     });
     // Centre of pressure and steering moment.
@@ -1071,6 +1073,7 @@ export class App {
       yLabel: 'Centre of pressure, mm',
       y2Label: 'Steering moment, N m',
       xs: yaws,
+      xIsYawDeg: true,
       series: handling,
     });
   }
@@ -1734,6 +1737,7 @@ export class App {
       designLabel: `${s.case.name ?? 'this design'}${s.calibration ? ' (CALIBRATED model)' : ''}`,
       baselineLabel: b.label,
       baselinePinned: b.pinned,
+      hubHeightM: s.case.wheel.outer_radius_m,
     };
   }
 
