@@ -14,7 +14,7 @@ export function hubWindNote(speedMps: (r: RoadState) => number, what: string) {
   return (r: RoadState, ctx: RoadContext | null): string => {
     const zRef = r.wind.reference_height_m;
     const z0 = r.wind.roughness_length_m;
-    const at = `Taken at the station height, ${fix(zRef, 2)} m above the ground`;
+    const at = `Taken at the station height, ${fix(zRef, 2)} m`;
     const hub = ctx?.hubHeightM;
     if (hub === undefined) return `${at}; the ride reduces it to the hub's height by the log wind profile.`;
     let ratio: number;
