@@ -1010,6 +1010,15 @@ describe.skipIf(!haveBrowser && !requireBrowser)('web page in headless Chromium'
       await page.mouse.move(over.x + over.width * 0.3, over.y + over.height / 2);
       expect(await page.locator(`#${fig} .u-over`).getAttribute('title'), fig).toBeNull();
     }
+    // The road form says the wind is taken at a station height and what it is at the hub.
+    await page.click('#tab-road');
+    const windNote = page.locator('#road-wind-speed_mps-note');
+    await windNote.waitFor();
+    expect(await windNote.textContent()).toMatch(
+      /^Taken at the station height, 10 m\. At the hub, 0\.\d+ m up, it is × 0\.\d+ \(log wind profile, roughness 0\.03 m\): a wind of \d+(\.\d+)? m\/s is \d+(\.\d+)? m\/s at the wheel\.$/,
+    );
+    await page.locator('#road-form').screenshot({ path: join(OUT, 'ui-theme-road-form.png') });
+    await page.click('#tab-results');
     // The themed page, looked at in the report.
     await page.locator('.lil-gui .lil-title', { hasText: 'Model options' }).click();
     await page.locator('[data-field="porosityScale"]').scrollIntoViewIfNeeded();

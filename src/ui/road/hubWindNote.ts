@@ -25,8 +25,8 @@ export function hubWindNote(speedMps: (r: RoadState) => number, what: string) {
     }
     const v = speedMps(r);
     const figure = Number.isFinite(v)
-      ? `: ${what} ${fix(v, 2)} m/s there is ${fix(v * ratio, 2)} m/s at the hub`
+      ? `: ${what} ${fix(v, 2)} m/s is ${fix(v * ratio, 2)} m/s at the wheel`
       : '';
-    return `${at}. At the hub, ${fix(hub, 3)} m up, the wind is × ${fix(ratio, 2)} of it (log profile, roughness ${fix(z0, 3)} m)${figure}.`;
+    return `${at}. At the hub, ${fix(hub, 3)} m up, it is × ${fix(ratio, 2)} (log wind profile, roughness ${fix(z0, 3)} m)${figure}.`;
   };
 }
