@@ -138,12 +138,14 @@ export class Controls {
     this.ctx = ctx;
     this.refreshing = true;
     try {
-      for (const { field, controller } of this.controllers.values()) {
+      for (const { field, controller, note } of this.controllers.values()) {
         const focused = controller.domElement.contains(document.activeElement);
         const value = field.get(ctx);
         if (!focused && this.form[field.key] !== value) {
           this.form[field.key] = value;
           controller.updateDisplay();
+          // The design's value changed (another control, a reset, an opened file): an old refusal is moot.
+          note.clear();
         }
         controller.name(field.label(ctx));
         controller.show(field.visible ? field.visible(ctx) : true);
