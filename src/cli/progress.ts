@@ -1,5 +1,8 @@
-import type { SweepProgress } from '../compute/planFile';
+import type { SweepProgress } from '../compute/engine/runCases';
 import { remainingTime } from './remainingTime';
+
+/** What the bar shows: cases and points done of the total. */
+export type SweepCounts = Pick<SweepProgress, 'casesDone' | 'casesTotal' | 'pointsDone' | 'pointsTotal'>;
 
 /**
  * Sweep progress on stderr: a redrawn bar when stderr is a terminal, otherwise a plain line at each
@@ -9,7 +12,7 @@ export function progressReporter(
   write: (text: string) => void,
   isTTY: boolean,
   now: () => number = Date.now,
-): (p: SweepProgress) => void {
+): (p: SweepCounts) => void {
   const start = now();
   let lastDraw = 0;
   let lastStep = -1;

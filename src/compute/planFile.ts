@@ -1,6 +1,6 @@
 /**
- * Plan files and the sweep loop. A plan is a case file in which any leaf value may instead be a list
- * of values or a range {"from": a, "to": b, "step": s}; the plan stands for the Cartesian product of
+ * Plan files (a plan runs as one study: src/compute/study/commandLineStudy.ts). A plan is a case file
+ * in which any leaf value may instead be a list of values or a range {"from": a, "to": b, "step": s}; the plan stands for the Cartesian product of
  * all of them (key paths in document order, the last varying fastest). The lists or ranges given for
  * conditions.yaw_deg and conditions.airspeed_mps stay inside each case: they are the points of one
  * solve, not separate cases.
@@ -11,8 +11,6 @@ import {
   describeValue,
   type Parsed,
   parseJsonText,
-  type ResultDocument,
-  solveCase,
   validateCase,
 } from './caseFile';
 import { migratePlan } from './fileVersion';
@@ -331,66 +329,4 @@ function failureMessages(
   }
   if (omitted > 0) out.push(`... and ${omitted} more error(s)`);
   return out;
-}
-
-// ---------------------------------------------------------------------------------------------
-// The sweep loop
-
-export interface SweepProgress {
-  casesDone: number;
-  casesTotal: number;
-  pointsDone: number;
-  pointsTotal: number;
-}
-
-export interface SweepOptions {
-  /** Called after every case (and once at the start with zero done). */
-  onProgress?: (progress: SweepProgress) => void;
-  /** Called with each case's document, in case order. */
-  onResult?: (expanded: ExpandedCase, document: ResultDocument) => void | Promise<void>;
-  /** The solver of one case (default: the in-process model); a worker pool plugs in here later. */
-  solve?: (caseFile: CaseFile) => ResultDocument | Promise<ResultDocument>;
-  /** Give the event loop a turn at least this often (ms) so signals and output get through. */
-  yieldEveryMs?: number;
-  /**
-   * Called, in case order, for a case whose solve threw; the sweep then goes on. Without it the
-   * first failure ends the sweep (the error is thrown).
-   */
-  onError?: (expanded: ExpandedCase, message: string) => void | Promise<void>;
-}
-
-function casePoints(c: CaseFile): number {
-  return c.conditions.airspeed_mps.length * c.conditions.yaw_deg.length;
-}
-
-/** Run every case of an expanded plan, in order, reporting progress and results. */
-export async function runSweep(cases: readonly ExpandedCase[], options: SweepOptions = {}): Promise<void> {
-  const solve = options.solve ?? solveCase;
-  const yieldEveryMs = options.yieldEveryMs ?? 50;
-  let pointsTotal = 0;
-  for (const c of cases) pointsTotal += casePoints(c.caseFile);
-  const progress: SweepProgress = { casesDone: 0, casesTotal: cases.length, pointsDone: 0, pointsTotal };
-  options.onProgress?.({ ...progress });
-  let lastYield = Date.now();
-  for (const expanded of cases) {
-    let document: ResultDocument;
-    try {
-      document = await solve(expanded.caseFile);
-    } catch (error) {
-      if (!options.onError) throw error;
-      await options.onError(expanded, error instanceof Error ? error.message : String(error));
-      progress.casesDone++;
-      progress.pointsDone += casePoints(expanded.caseFile);
-      options.onProgress?.({ ...progress });
-      continue;
-    }
-    await options.onResult?.(expanded, document);
-    progress.casesDone++;
-    progress.pointsDone += casePoints(expanded.caseFile);
-    options.onProgress?.({ ...progress });
-    if (Date.now() - lastYield >= yieldEveryMs) {
-      await new Promise<void>((resolve) => setTimeout(resolve, 0));
-      lastYield = Date.now();
-    }
-  }
 }

@@ -45,6 +45,8 @@ export class DesignMap {
   readonly canvas: HTMLCanvasElement;
   private data: MapData | null = null;
   private readonly observer: ResizeObserver;
+  /** The plot area of the last drawing (CSS pixels), for turning a click into a grid cell. */
+  private box: { left: number; top: number; pw: number; ph: number } | null = null;
 
   constructor(private readonly container: HTMLElement) {
     this.canvas = document.createElement('canvas');
@@ -85,6 +87,7 @@ export class DesignMap {
     const bottom = 44;
     const pw = width - left - right;
     const ph = height - top - bottom;
+    this.box = { left, top, pw, ph };
     const nx = d.xs.length;
     const ny = d.ys.length;
     const x0 = d.xs[0]!;
@@ -260,6 +263,23 @@ export class DesignMap {
     ctx.font = SMALL;
     ctx.fillText(d.colourLabel, 0, 0);
     ctx.restore();
+  }
+
+  /**
+   * Call `pick(i, j)` with the grid cell nearest a click or Enter/Space press (i along xs, j along ys);
+   * clicks outside the plot area are ignored.
+   */
+  onPick(pick: (i: number, j: number) => void): void {
+    this.canvas.addEventListener('click', (event) => {
+      const d = this.data;
+      const b = this.box;
+      if (!d || !b) return;
+      const rect = this.canvas.getBoundingClientRect();
+      const fx = (event.clientX - rect.left - b.left) / b.pw;
+      const fy = 1 - (event.clientY - rect.top - b.top) / b.ph;
+      if (fx < 0 || fx > 1 || fy < 0 || fy > 1) return;
+      pick(Math.round(fx * (d.xs.length - 1)), Math.round(fy * (d.ys.length - 1)));
+    });
   }
 
   toPngBlob(): Promise<Blob> {

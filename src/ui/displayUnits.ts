@@ -5,7 +5,7 @@
  * line's axial_gf_ref). Drag area in m^2 or cm^2. Lengths of wheel parts in mm. Moments N m, power W.
  */
 
-import type { PointResult } from '../compute/model';
+import type { PointResult } from '../compute/study/modelResults';
 import { kmhToMps, mphToMps, mpsToKmh, mpsToMph, newtonsToGramsForce } from '../compute/units';
 import type { OutputKind } from './outputs';
 import type { AreaUnit, ForceUnit, SpeedUnit } from './viewState';

@@ -2,7 +2,7 @@
  * The outputs the page can plot, map and tabulate, read from the model's PointResult. Each says what
  * kind of quantity it is, so the display units (newtons or grams-force, m^2 or cm^2) apply correctly.
  */
-import type { PointResult } from '../compute/model';
+import type { PointResult } from '../compute/study/modelResults';
 
 export type OutputKind = 'force' | 'moment' | 'power' | 'length' | 'area';
 

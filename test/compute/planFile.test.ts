@@ -1,13 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import type { ResultDocument } from '../../src/compute/caseFile';
 import {
   expandPlan,
   MAX_PLAN_CASES,
   MAX_PLAN_POINTS,
   parsePlanFile,
   rangeValues,
-  runSweep,
-  type SweepProgress,
 } from '../../src/compute/planFile';
 
 const FAST_MODEL = { lattice_span: 8, lattice_chord: 6, grid_convergence: false };
@@ -134,32 +131,5 @@ describe('expandPlan', () => {
     expect(r.ok === false && r.errors[0]).toBe(
       'plan file: invalid JSON at line 1, column 17: trailing comma before "]" (not allowed in JSON), found "]"',
     );
-  });
-});
-
-describe('runSweep', () => {
-  it('solves every case in order and reports progress to the end', async () => {
-    const r = expandPlan({
-      wheel: { cover: { fraction: [0, 1] } },
-      conditions: { airspeed_mps: 10, yaw_deg: [0, 10] },
-      model: FAST_MODEL,
-    });
-    if (!r.ok) throw new Error(r.errors.join('\n'));
-    const seen: number[] = [];
-    const progress: SweepProgress[] = [];
-    const docs: ResultDocument[] = [];
-    await runSweep(r.value.cases, {
-      onProgress: (p) => progress.push(p),
-      onResult: (c, d) => {
-        seen.push(c.index);
-        docs.push(d);
-      },
-    });
-    expect(seen).toEqual([0, 1]);
-    expect(progress[0]).toEqual({ casesDone: 0, casesTotal: 2, pointsDone: 0, pointsTotal: 4 });
-    expect(progress.at(-1)).toEqual({ casesDone: 2, casesTotal: 2, pointsDone: 4, pointsTotal: 4 });
-    expect(docs[1]!.case.wheel.cover.fraction).toBe(1);
-    // A full disc makes more side force at yaw than an open wheel (design notes section 1).
-    expect(docs[1]!.results[1]!.side_N!).toBeGreaterThan(docs[0]!.results[1]!.side_N!);
   });
 });

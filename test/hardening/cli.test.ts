@@ -10,8 +10,10 @@ import { mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'n
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
-import { type CaseFile, solveCase } from '../../src/compute/caseFile';
-import { expandPlan, runSweep } from '../../src/compute/planFile';
+import { writeSweep } from '../../src/cli/main';
+import { InProcessRunner } from '../../src/compute/engine/inProcessRunner';
+import { solveJob } from '../../src/compute/engine/solverApi';
+import { expandPlan } from '../../src/compute/planFile';
 import { parseCsvLine, tableColumns } from '../../src/compute/resultTable';
 
 const BIN = resolve(__dirname, '../../bin/coversweep.mjs');
@@ -93,21 +95,46 @@ describe('nothing lost at the command line', () => {
   it('a case whose solve throws becomes an error row; the cases after it still run (in-process sweep)', async () => {
     const expanded = expandPlan(JSON.parse(plan(3)));
     if (!expanded.ok) throw new Error(expanded.errors.join('; '));
-    const seen: string[] = [];
-    await runSweep(expanded.value.cases, {
-      solve: (c: CaseFile) => {
-        if (c.wheel.rim_depth_m === 0.02005)
-          throw new RangeError('wheel.rimDepthM: a stand-in model failure');
-        return solveCase(c);
-      },
-      onResult: (e) => {
-        seen.push(`ok ${e.index}`);
-      },
-      onError: (e, message) => {
-        seen.push(`error ${e.index}: ${message}`);
-      },
+    // The in-process runner with a solver that fails the second case the way the model fails one.
+    const runner = new InProcessRunner((job) => {
+      const input = job.cases[0]!.input;
+      if (input.wheel.rimDepthM !== 0.02005) return solveJob(job);
+      return {
+        jobId: job.jobId,
+        outcomes: [
+          {
+            caseIndex: job.cases[0]!.caseIndex,
+            ok: false,
+            error: 'wheel.rimDepthM: a stand-in model failure',
+          },
+        ],
+      };
     });
-    expect(seen).toEqual(['ok 0', 'error 1: wheel.rimDepthM: a stand-in model failure', 'ok 2']);
+    let csv = '';
+    const failed = await writeSweep(
+      expanded.value,
+      'csv',
+      (text) => {
+        csv += text;
+      },
+      undefined,
+      runner,
+    );
+    expect(failed).toBe(1);
+    const lines = csv.trimEnd().split('\n');
+    const header = parseCsvLine(lines[0]!);
+    const errorColumn = header.indexOf('error');
+    const seen = lines.slice(1).map((l) => {
+      const row = parseCsvLine(l);
+      return `${row[0]} ${row[errorColumn] || 'ok'}`;
+    });
+    expect(seen).toEqual([
+      '0.02 ok',
+      '0.02 ok',
+      '0.02005 wheel.rimDepthM: a stand-in model failure',
+      '0.0201 ok',
+      '0.0201 ok',
+    ]);
   });
 
   it('refuses case, plan and ride files above 4 MB before reading them (exit 2, nothing on stdout)', async () => {

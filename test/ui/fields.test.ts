@@ -2,8 +2,8 @@
 // unchanged (no drift through unit conversions), and the helper parsers name bad input.
 import { describe, expect, it } from 'vitest';
 import { validateCase } from '../../src/compute/caseFile';
+import { mapDepths, pageStudies } from '../../src/compute/study';
 import { solveWheel } from '../../src/model/wheel/solveWheel';
-import { computePlan, mapDepths } from '../../src/ui/computePlan';
 import { toCsv } from '../../src/ui/csv';
 import { defaultCase } from '../../src/ui/defaultCase';
 import { FIELDS, parseNumberList, type RawJson, yawRange } from '../../src/ui/fields';
@@ -55,19 +55,21 @@ describe('fields', () => {
   });
 });
 
-describe('computePlan', () => {
+describe('pageStudies', () => {
   it('solves the case as given first, and its sweeps contain the same wheel', () => {
     const c = defaultCase();
-    const plan = computePlan(c, defaultView(), null);
-    expect(plan.current.points.length).toBe(41);
-    const current = solveWheel(plan.current).points;
-    const family0 = solveWheel(plan.family.inputs[0]!).points; // cover fraction 0 = the demo wheel
+    const plan = pageStudies(c, defaultView(), null);
+    const currentInput = plan.current.inputs[0] as Parameters<typeof solveWheel>[0];
+    expect(currentInput.points.length).toBe(41);
+    const current = solveWheel(currentInput).points;
+    // cover fraction 0 = the demo wheel
+    const family0 = solveWheel(plan.family.inputs[0] as Parameters<typeof solveWheel>[0]).points;
     for (let i = 0; i < current.length; i++) {
       // Same inputs through the same code: bit-identical (tolerance 0).
       expect(family0[i]!.axialN, `yaw index ${i}`).toBe(current[i]!.axialN);
     }
     expect(plan.map.inputs.length).toBe(11 * 6);
-    expect(plan.cover.inputs[0]!.points.length).toBe(4);
+    expect((plan.cover.inputs[0] as Parameters<typeof solveWheel>[0]).points.length).toBe(4);
     expect(plan.baseline).toBeNull();
   });
   it('keeps the map rim depths inside what the rim model accepts and the wheel fits', () => {

@@ -841,6 +841,39 @@ describe.skipIf(!haveBrowser && !requireBrowser)('web page in headless Chromium'
     expect(consoleErrors).toEqual([]);
   });
 
+  it('makes a clicked design-map cell the current design, and Undo brings the design back', async () => {
+    const context = await browser.newContext({ viewport: { width: 1280, height: 800 } });
+    const page = await open(context);
+    expect(await settled(page)).toBe('done');
+    await page.click('#tab-map');
+    const inspect = () => page.evaluate(() => (window as unknown as Inspect).coversweep.state().case.wheel);
+    const before = await inspect();
+    // The map's plot area (designMap.ts): 58 px from the left, 96 px from the right, 14 + 16 px per
+    // title line (two) from the top, 44 px from the bottom. Cell i = 3 (fraction 0.3), j = 4 of 0..5.
+    const box = (await page.locator('#fig-map canvas').boundingBox())!;
+    const pw = box.width - 58 - 96;
+    const ph = box.height - 46 - 44;
+    await page.mouse.click(box.x + 58 + pw * 0.3, box.y + 46 + ph * (1 - 4 / 5));
+    await page.waitForFunction(
+      () => (window as unknown as Inspect).coversweep.state().case.wheel.cover.fraction === 0.3,
+    );
+    const picked = await inspect();
+    expect(picked.rim_depth_m).not.toBe(before.rim_depth_m);
+    expect(await settled(page)).toBe('done');
+    // The map's rim depths (its table) hold the picked depth.
+    const depthsMm = await column(page, 'table-map', 'Rim depth, mm');
+    expect(depthsMm.map(Number)).toContain(Number((picked.rim_depth_m * 1000).toFixed(1)));
+    await page.click('#undo-pick');
+    await page.waitForFunction(
+      (f) => (window as unknown as Inspect).coversweep.state().case.wheel.cover.fraction === f,
+      before.cover.fraction,
+    );
+    expect(await inspect()).toEqual(before);
+    expect(await page.locator('#undo-pick').isHidden()).toBe(true);
+    await context.close();
+    expect(consoleErrors).toEqual([]);
+  });
+
   it('computes the reference table on Help only when Help opens, with every case, its source and strength, as `validate` does', async () => {
     const context = await browser.newContext({ viewport: { width: 1280, height: 800 } });
     const page = await open(context);

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { caseToModelInput, validateCase } from '../../src/compute/caseFile';
+import { axisNumbers, pageStudies, type WheelInput } from '../../src/compute/study';
 import { PAGE_DESIGN_SPACE } from '../../src/compute/validation/wholeWheelCases';
-import { computePlan } from '../../src/ui/computePlan';
 import { defaultCase } from '../../src/ui/defaultCase';
 import { defaultView } from '../../src/ui/viewState';
 
@@ -9,9 +9,9 @@ import { defaultView } from '../../src/ui/viewState';
 // (which cannot import the page), so this holds its grid to the page's own plan (consistency, no source).
 describe('the design space of the reference set', () => {
   it("is the page's default design map: the same wheels at the same airspeed", () => {
-    const plan = computePlan(defaultCase(), defaultView(), null);
-    expect(plan.map.fractions).toEqual(PAGE_DESIGN_SPACE.fractions);
-    expect(plan.map.depthsM).toEqual(PAGE_DESIGN_SPACE.rimDepthsM);
+    const plan = pageStudies(defaultCase(), defaultView(), null);
+    expect(axisNumbers(plan.map.caseAxes[1]!)).toEqual(PAGE_DESIGN_SPACE.fractions);
+    expect(axisNumbers(plan.map.caseAxes[0]!)).toEqual(PAGE_DESIGN_SPACE.rimDepthsM);
     let k = 0;
     for (const depth of PAGE_DESIGN_SPACE.rimDepthsM) {
       for (const fraction of PAGE_DESIGN_SPACE.fractions) {
@@ -21,7 +21,7 @@ describe('the design space of the reference set', () => {
         });
         if (!parsed.ok) throw new Error(parsed.errors.join('; '));
         const mine = caseToModelInput(parsed.value);
-        const page = plan.map.inputs[k++]!;
+        const page = plan.map.inputs[k++] as WheelInput;
         expect(mine.wheel, `depth ${depth} cover ${fraction}`).toEqual(page.wheel);
         const v = page.points[0]!.airspeedMps;
         expect(Math.abs(v - PAGE_DESIGN_SPACE.airspeedMps), `airspeed ${v}`).toBeLessThanOrEqual(1e-9);

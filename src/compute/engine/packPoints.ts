@@ -5,48 +5,14 @@ import {
   FLAG_MESSAGES,
   type PointResult,
 } from '../../model/wheel';
+import { COLUMN_COUNT, COLUMN_NAMES, COMPONENT_FIELDS, SCALAR_COLUMNS } from './columns';
 
-const SCALAR_COLUMNS = [
-  'yawRad',
-  'airspeedMps',
-  'groundSpeedMps',
-  'rhoKgPerM3',
-  'axialN',
-  'sideN',
-  'verticalN',
-  'windDragN',
-  'windLiftN',
-  'cpXM',
-  'cpZM',
-  'yawMomentNm',
-  'rollMomentNm',
-  'steeringMomentNm',
-  'axleTorqueNm',
-  'powerW',
-  'cdaAxialM2',
-  'uncertaintyAxialN',
-  'uncertaintySideN',
-] as const satisfies ReadonlyArray<keyof PointResult>;
-
-const COMPONENT_FIELDS = [
-  'fxN',
-  'fyN',
-  'fzN',
-  'mxNm',
-  'myNm',
-  'mzNm',
-  'axleTorqueNm',
-] as const satisfies ReadonlyArray<keyof ComponentLoads>;
 /** Flag codes in bit order: a point's flags travel as one number. */
 export const FLAG_CODES: readonly string[] = Object.keys(FLAG_MESSAGES);
 
-/** Columns of a packed point row, in order. */
-export const POINT_COLUMNS: readonly string[] = [
-  ...SCALAR_COLUMNS,
-  'flagBits',
-  ...COMPONENT_NAMES.flatMap((c) => COMPONENT_FIELDS.map((f) => `${c}.${f}`)),
-];
-export const POINT_COLUMN_COUNT = POINT_COLUMNS.length;
+/** Columns of a packed point row, in order: the study's column table (src/compute/engine/columns.ts). */
+export const POINT_COLUMNS: readonly string[] = COLUMN_NAMES;
+export const POINT_COLUMN_COUNT = COLUMN_COUNT;
 
 /** Pack points into one Float64Array (row-major, POINT_COLUMNS), so a worker can transfer its buffer. */
 export function packPoints(points: readonly PointResult[]): Float64Array {

@@ -1,17 +1,9 @@
 import type { WheelInput, WheelSolution } from '../../model/wheel';
+import type { JobRunner } from './jobRunner';
 import { unpackPoints } from './packPoints';
-import { planJobs } from './planJobs';
-import type { WorkerPool } from './workerPool';
+import { runCases, type SweepProgress } from './runCases';
 
-export interface SweepProgress {
-  casesDone: number;
-  casesTotal: number;
-  pointsDone: number;
-  pointsTotal: number;
-  elapsedMs: number;
-  /** Estimated time left (ms), from the rate so far; NaN before the first job finishes. */
-  remainingMs: number;
-}
+export type { SweepProgress };
 
 export interface SweepOutcome {
   /** One entry per case, in the order given: the solution, or null where the case failed, was not run,
@@ -37,70 +29,25 @@ export interface RunSweepOptions {
 }
 
 /**
- * Run a sweep on a worker pool: plan the jobs (planJobs), deal them, and put every result back in its
- * case's place. The numbers do not depend on the number of workers or the order jobs finish in: each
- * case is solved by the same pure code, and results are placed by case index. A cancelled or partly
- * failed sweep keeps every finished case.
+ * Run a list of model inputs of any shapes (runCases) and return each case's solution as model points.
+ * Studies with named axes use runStudies (src/compute/study), which keeps the packed numbers in a cube.
  */
 export async function runSweep(
-  pool: WorkerPool,
+  runner: JobRunner,
   cases: readonly WheelInput[],
   options: RunSweepOptions = {},
 ): Promise<SweepOutcome> {
-  const now = options.now ?? (() => performance.now());
   const keep = options.keepSolutions ?? true;
-  const start = now();
-  const jobs = planJobs(cases, { workers: pool.size, jobsPerWorker: options.jobsPerWorker });
   const solutions: Array<WheelSolution | null> = new Array(cases.length).fill(null);
   const errors: Array<string | null> = new Array(cases.length).fill(null);
-  const pointsTotal = cases.reduce((n, c) => n + c.points.length, 0);
-  let casesDone = 0;
-  let pointsDone = 0;
-  let failedCount = 0;
-  const report = () => {
-    const elapsedMs = now() - start;
-    const remainingMs = pointsDone > 0 ? (elapsedMs * (pointsTotal - pointsDone)) / pointsDone : Number.NaN;
-    options.onProgress?.({
-      casesDone,
-      casesTotal: cases.length,
-      pointsDone,
-      pointsTotal,
-      elapsedMs,
-      remainingMs,
-    });
-  };
-  const summary = await pool.run(jobs, {
-    signal: options.signal,
-    onJobDone: (_job, result) => {
-      for (const o of result.outcomes) {
-        const solution = o.ok ? { surface: o.surface, points: unpackPoints(o.packed, o.pointCount) } : null;
-        if (solution && keep) solutions[o.caseIndex] = solution;
-        if (!o.ok) {
-          errors[o.caseIndex] = o.error;
-          failedCount++;
-        }
-        casesDone++;
-        pointsDone += cases[o.caseIndex]!.points.length;
-        options.onCase?.(o.caseIndex, solution, errors[o.caseIndex]!);
-      }
-      report();
-    },
-    onJobFailed: (job, error) => {
-      for (const { caseIndex } of job.cases) {
-        errors[caseIndex] = `worker failed twice on this case's job: ${error}`;
-        failedCount++;
-        casesDone++;
-        pointsDone += cases[caseIndex]!.points.length;
-        options.onCase?.(caseIndex, null, errors[caseIndex]!);
-      }
-      report();
+  const summary = await runCases(runner, cases, {
+    ...options,
+    onOutcome: (o) => {
+      const solution = o.ok ? { surface: o.surface, points: unpackPoints(o.packed, o.pointCount) } : null;
+      if (solution && keep) solutions[o.caseIndex] = solution;
+      if (!o.ok) errors[o.caseIndex] = o.error;
+      options.onCase?.(o.caseIndex, solution, errors[o.caseIndex]!);
     },
   });
-  return {
-    solutions,
-    errors,
-    cancelled: summary.cancelled,
-    failedCount,
-    workersReplaced: summary.workersReplaced,
-  };
+  return { solutions, errors, ...summary };
 }

@@ -1,4 +1,5 @@
 import type { Remote } from 'comlink';
+import type { JobRunner, PoolRunOptions, PoolRunSummary } from './jobRunner';
 import type { JobResult, SolveJob, SolverApi } from './protocol';
 import { settleFirst } from './settleFirst';
 
@@ -13,19 +14,7 @@ export interface WorkerHandle {
 /** Environment-specific: the page spawns a Web Worker, the command line a worker thread. */
 export type SpawnWorker = () => WorkerHandle;
 
-export interface PoolRunOptions {
-  signal?: AbortSignal;
-  /** Called after each finished job with the job and its result. */
-  onJobDone?: (job: SolveJob, result: JobResult) => void;
-  /** Called when a job's worker failed and the job failed its retry too. */
-  onJobFailed?: (job: SolveJob, error: string) => void;
-}
-
-export interface PoolRunSummary {
-  cancelled: boolean;
-  /** Workers replaced after a crash during this run. */
-  workersReplaced: number;
-}
+export type { PoolRunOptions, PoolRunSummary };
 
 /**
  * A fixed-size pool of solver workers, free of environment code. Jobs are dealt dynamically (a free
@@ -34,7 +23,7 @@ export interface PoolRunSummary {
  * goes on. Cancelling stops dealing and terminates busy workers at once (they are respawned on the next
  * run): every finished job has already been delivered through onJobDone.
  */
-export class WorkerPool {
+export class WorkerPool implements JobRunner {
   private readonly workers: Array<WorkerHandle | null>;
 
   constructor(

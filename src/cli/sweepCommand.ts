@@ -1,0 +1,203 @@
+/** `coversweep sweep PLAN.json`: a plan's cases through the study runner to a CSV or JSON file. */
+import { availableParallelism } from 'node:os';
+import { resolve } from 'node:path';
+import { type ResultDocument, solutionToDocument } from '../compute/caseFile';
+import { InProcessRunner } from '../compute/engine/inProcessRunner';
+import type { JobRunner } from '../compute/engine/jobRunner';
+import type { SweepProgress } from '../compute/engine/runCases';
+import { WorkerPool } from '../compute/engine/workerPool';
+import { type ExpandedCase, type ExpandedPlan, parsePlanFile } from '../compute/planFile';
+import { csvHeader, documentCsvLines, errorCsvLine } from '../compute/resultTable';
+import { commandLineStudy } from '../compute/study/commandLineStudy';
+import { runStudies } from '../compute/study/runStudies';
+import { OUT_OPTIONS, onePositional, openOutput, parseCommandArgs, readJsonFile } from './commandArgs';
+import { HELP, MAX_JOB_POINTS, MIN_CASES_FOR_POOL } from './commandHelp';
+import { CliInputError, type CliIo, EXIT_INPUT, EXIT_OK } from './io';
+import { nodeWorkerSpawner } from './nodeWorker';
+import { checkOutputPath, OutputTakenError } from './outputFile';
+import { progressReporter } from './progress';
+import { refuseRepeatedOptions } from './refuseRepeatedOptions';
+import { SweepSpool } from './sweepSpool';
+
+/** Write a sweep's results as CSV or as a JSON list of documents to `sink`, streaming case by case in
+ * plan order. The plan runs as one study (commandLineStudy) on `runner`: a worker pool, or this thread.
+ * Cases that finish before their turn are rendered at once and held in `spool`
+ * (on disk, see SweepSpool) until then; an interrupted caller can drain the spool so every finished case
+ * is written. Each sink call is one whole case (or the header/footer). Returns how many cases failed. */
+export async function writeSweep(
+  plan: ExpandedPlan,
+  format: 'csv' | 'json',
+  sink: (text: string) => void,
+  onProgress?: (progress: SweepProgress) => void,
+  runner: JobRunner = new InProcessRunner(),
+  spool: SweepSpool = new SweepSpool(),
+): Promise<number> {
+  const keys = plan.variedKeys;
+  if (format === 'csv') {
+    sink(csvHeader(keys));
+  } else {
+    sink(
+      `{\n  "format": "coversweep-sweep",\n  "version": 1,\n  "varied_keys": ${JSON.stringify(keys)},\n  "point_count": ${plan.pointCount},\n  "runs": [`,
+    );
+  }
+  const render = (
+    position: number,
+    expanded: ExpandedCase,
+    document: ResultDocument | null,
+    error: string | null,
+  ): string => {
+    if (format === 'csv') {
+      return document
+        ? documentCsvLines(document, keys, expanded.varied)
+        : errorCsvLine(keys, expanded.varied, error ?? '');
+    }
+    const run = document
+      ? { index: expanded.index, varied: expanded.varied, result: document }
+      : { index: expanded.index, varied: expanded.varied, error };
+    return `${position === 0 ? '\n' : ',\n'}${JSON.stringify(run)}`;
+  };
+  let next = 0;
+  // A sink that fails (a full disk, a closed pipe) stops the run: the runner is cancelled, so no
+  // worker goes on solving, and the error is thrown once it has stopped.
+  const stop = new AbortController();
+  let failure: { error: unknown } | null = null;
+  const outcome = await runStudies(runner, [commandLineStudy(plan)], {
+    keep: false,
+    signal: stop.signal,
+    // Jobs of at most ~MAX_JOB_POINTS points: a job's results are held whole in its worker and in the
+    // main thread until written, so big plans are cut finer than 8 jobs per worker.
+    jobsPerWorker: Math.max(8, Math.ceil(plan.pointCount / (runner.size * MAX_JOB_POINTS))),
+    ...(onProgress ? { onProgress } : {}),
+    // In this thread the bar starts at 0 %; a pool's first line comes with its first finished job.
+    reportStart: runner.inOrder === true,
+    onCase: ({ caseIndex: i, cube, surface, error }) => {
+      if (failure !== null) return;
+      try {
+        const expanded = plan.cases[i]!;
+        const document =
+          cube && surface ? solutionToDocument(expanded.caseFile, { surface, points: cube.points() }) : null;
+        const text = render(i, expanded, document, error);
+        if (i !== next) {
+          spool.put(i, text);
+          return;
+        }
+        sink(text);
+        next++;
+        for (let held = spool.take(next); held !== null; held = spool.take(next)) {
+          sink(held);
+          next++;
+        }
+      } catch (sinkError) {
+        failure = { error: sinkError };
+        stop.abort();
+      }
+    },
+  });
+  if (failure !== null) throw (failure as { error: unknown }).error;
+  if (spool.size > 0) throw new Error(`sweep: ${spool.size} case(s) finished but were never written`);
+  spool.close();
+  if (format === 'json') sink('\n  ]\n}\n');
+  return outcome.failedCount;
+}
+
+/** Open an atomic output file, naming any stale temporary files of a killed run it cleaned up. */
+
+export async function commandSweep(args: string[], io: CliIo): Promise<number> {
+  refuseRepeatedOptions('sweep', args, ['out', 'workers']);
+  const { values, positionals } = parseCommandArgs('sweep', {
+    args,
+    options: { ...OUT_OPTIONS, workers: { type: 'string' } },
+    allowPositionals: true,
+  });
+  if (values.help) {
+    io.stdout(HELP.sweep!);
+    return EXIT_OK;
+  }
+  const path = onePositional('sweep', positionals, 'plan file');
+  const force = values.force === true;
+  const outPath = values.out === undefined ? undefined : resolve(io.cwd, values.out);
+  let format: 'csv' | 'json' = 'csv';
+  if (outPath !== undefined) {
+    const lower = outPath.toLowerCase();
+    if (lower.endsWith('.json')) format = 'json';
+    else if (!lower.endsWith('.csv')) {
+      throw new CliInputError(`--out ${values.out}: must end in .csv (a table) or .json (result documents)`);
+    }
+    checkOutputPath(outPath, force);
+  }
+  let workers: number | undefined;
+  if (values.workers !== undefined) {
+    workers = Number(values.workers);
+    if (!/^\d+$/.test(values.workers) || workers > 64) {
+      throw new CliInputError(`--workers ${values.workers}: must be a whole number from 0 to 64`);
+    }
+  }
+  const parsed = parsePlanFile(readJsonFile(path, io.cwd, 'plan file'));
+  if (!parsed.ok) throw new CliInputError(`invalid plan file ${path}:`, parsed.errors);
+  const plan = parsed.value;
+  const progress = progressReporter(io.stderr, io.stderrIsTTY);
+  workers ??= plan.cases.length < MIN_CASES_FOR_POOL ? 0 : availableParallelism();
+  workers = Math.min(workers, plan.cases.length);
+  io.stderr(
+    `sweep: ${plan.cases.length} case(s), ${plan.pointCount} operating point(s), ${workers > 0 ? `${workers} worker thread(s)` : 'in this process'}\n`,
+  );
+  const pool = workers > 0 ? new WorkerPool(nodeWorkerSpawner(io.workerEntry), workers) : undefined;
+  const finish = (failed: number): number => {
+    if (failed > 0)
+      io.stderr(`sweep: ${failed} of ${plan.cases.length} case(s) failed; see the error column\n`);
+    return failed > 0 && failed === plan.cases.length ? EXIT_INPUT : EXIT_OK;
+  };
+  if (outPath === undefined) {
+    try {
+      return finish(await writeSweep(plan, format, io.stdout, progress, pool));
+    } finally {
+      pool?.close();
+    }
+  }
+  const file = openOutput(outPath, force, io);
+  const spool = new SweepSpool();
+  // Finished rows are never lost: an interrupted or failed sweep leaves every finished case beside the
+  // output, in OUT.partial (never under the output's own name, never over an existing file): first the
+  // cases in plan order up to the first unfinished one, then the others that finished, in plan order.
+  const keepPartial = (): string => {
+    let drained = '';
+    try {
+      const held = spool.drainTo((text) => file.write(text));
+      if (held > 0) drained = ` (${held} case(s) finished out of turn follow the gap)`;
+    } catch {
+      drained = ' (some cases finished out of turn could not be added)';
+    }
+    try {
+      const kept = file.keepPartial();
+      return kept === null ? 'no rows had finished' : `the finished rows are in ${kept}${drained}`;
+    } catch (error) {
+      return `the finished rows could not be kept: ${error instanceof Error ? error.message : String(error)}`;
+    }
+  };
+  const onSignal = () => {
+    io.stderr(`\nsweep: interrupted; ${values.out} not written; ${keepPartial()}\n`);
+    process.exit(130);
+  };
+  process.once('SIGINT', onSignal);
+  process.once('SIGTERM', onSignal);
+  let failed = 0;
+  try {
+    failed = await writeSweep(plan, format, (text) => file.write(text), progress, pool, spool);
+    file.commit();
+  } catch (error) {
+    if (error instanceof OutputTakenError) throw error;
+    const kept = keepPartial();
+    if (error instanceof CliInputError) {
+      throw new CliInputError(`${error.message}; ${values.out} not written; ${kept}`, error.messages);
+    }
+    io.stderr(`sweep: failed; ${values.out} not written; ${kept}\n`);
+    throw error;
+  } finally {
+    spool.close();
+    pool?.close();
+    process.off('SIGINT', onSignal);
+    process.off('SIGTERM', onSignal);
+  }
+  io.stderr(`wrote ${values.out}\n`);
+  return finish(failed);
+}

@@ -1,0 +1,184 @@
+/**
+ * The "Your data" panel's glue: reading and comparing tables in their own background worker (with
+ * deadlines), the demo data, and using (or dropping) the calibrated model values in the state.
+ */
+import { type CaseFile, caseAirDensity, parseCaseFile, validateCase } from '../compute/caseFile';
+import type { CalibrationResult } from '../compute/compare/index';
+import type { CalibrationMark } from './appState';
+import type { PackedResult, ReadOutcome } from './dataJobs';
+import type { DataContext, DataPanel, DataPlotName, DataRunRequest } from './dataPanel';
+import { fmt } from './displayUnits';
+import { JobWorker } from './jobWorker';
+import type { PageHost } from './pageHost';
+import { byId } from './views/present';
+
+export class DataGlue {
+  private data: DataPanel | null = null;
+  private dataLoading: Promise<DataPanel> | null = null;
+  private readonly dataWorker = new JobWorker();
+
+  constructor(private readonly host: PageHost) {}
+
+  plotSpec(name: DataPlotName) {
+    return this.data?.plotSpec(name) ?? null;
+  }
+
+  lastReport() {
+    return this.data?.lastReport() ?? null;
+  }
+
+  /** The design changed: a shown comparison no longer matches it. */
+  designChanged(): void {
+    this.data?.designChanged();
+  }
+
+  /** The panel, built (and its code loaded) when first opened. */
+  panel(): Promise<DataPanel> {
+    this.dataLoading ??= import('./dataPanel').then(({ DataPanel }) => {
+      const panel: DataPanel = new DataPanel(byId('panel-data'), {
+        context: () => this.dataContext(),
+        read: async (ref, context) => {
+          const out = await this.dataWorker.run<ReadOutcome>(
+            (api) => api.readTable(ref, context),
+            readDeadlineMs(ref.source.kind === 'file' ? ref.source.file.size : ref.source.text.length),
+          );
+          if (out.status === 'superseded' || out.status === 'cancelled') return null;
+          if (out.status === 'failed') return { ok: false, errors: [out.error] };
+          return out.value;
+        },
+        onLoadDemo: () => void this.loadDemoData(panel),
+        onRun: (request) => void this.runComparison(panel, request),
+        onCancel: () => {
+          this.dataWorker.cancel();
+          panel.setStatus('done', 'Cancelled; the results shown are from the last finished run.');
+        },
+        onUseCalibrated: (use, calibration, points) => this.useCalibrated(use, calibration, points),
+      });
+      this.data = panel;
+      panel.setCalibratedInUse(Boolean(this.host.state.calibration));
+      return panel;
+    });
+    return this.dataLoading;
+  }
+
+  private dataContext(): DataContext {
+    const c = this.host.state.case;
+    const R = c.wheel.outer_radius_m;
+    return {
+      referenceAreaM2: Math.PI * R * R,
+      airspeedMps: c.conditions.airspeed_mps[0]!,
+      rhoKgPerM3: caseAirDensity(c),
+      speedUnit: this.host.state.view.speedUnit,
+      designName: c.name ?? 'the current design',
+    };
+  }
+
+  private async loadDemoData(panel: DataPanel): Promise<void> {
+    panel.setStatus('computing', 'Loading the demo data…');
+    try {
+      const get = async (path: string) => {
+        const res = await fetch(new URL(path, document.baseURI));
+        if (!res.ok) throw new Error(`${path}: HTTP ${res.status}`);
+        return res.text();
+      };
+      const [caseText, csvText] = await Promise.all([
+        get('demo/demo-case.json'),
+        get('demo/demo-tunnel.csv'),
+      ]);
+      const c = parseCaseFile(caseText);
+      if (!c.ok) throw new Error(`demo-case.json: ${c.errors.join('; ')}`);
+      this.host.apply({ ...this.host.state, case: c.value, calibration: null });
+      this.host.messages.show(
+        'info',
+        'Demo data loaded: invented measurements of the invented wheel “Demo 50 mm half-cover”, now the design. Reset goes back to the demo wheel.',
+        [],
+        'demo',
+      );
+      panel.setDefaultRanges(caseAirDensity(c.value));
+      await panel.readText(csvText, 'demo-tunnel.csv');
+    } catch (error) {
+      panel.setStatus('error', `The demo data could not be loaded: ${(error as Error).message}`);
+    }
+  }
+
+  private async runComparison(panel: DataPanel, req: DataRunRequest): Promise<void> {
+    const caseFile: CaseFile = this.host.state.case;
+    panel.setDefaultRanges(caseAirDensity(caseFile));
+    const heavy = req.calibrate || req.convergence || req.uncertainty !== null;
+    const out = await this.dataWorker.run<PackedResult>(
+      (api) =>
+        api.compareTable({
+          caseFile,
+          ref: req.ref,
+          map: req.map,
+          dataLabel: req.label,
+          calibrate: req.calibrate ? {} : false,
+          convergence: req.convergence ? {} : false,
+          uncertainty: req.uncertainty ? { ranges: req.uncertainty } : false,
+        }),
+      compareDeadlineMs(req.rowCount, heavy),
+    );
+    if (out.status === 'superseded' || out.status === 'cancelled') return;
+    if (out.status === 'failed') {
+      panel.showErrors('The comparison could not be made:', [out.error]);
+      return;
+    }
+    if (!out.value.ok) {
+      panel.showErrors('The data could not be compared with the model:', out.value.errors);
+      return;
+    }
+    await panel.showReport(out.value.value, req);
+  }
+
+  private useCalibrated(use: boolean, calibration: CalibrationResult | null, points: number): void {
+    const s = this.host.state;
+    if (use && calibration) {
+      const original = s.calibration?.original ?? {};
+      const values: CalibrationMark['values'] = {};
+      const before: CalibrationMark['original'] = { ...original };
+      for (const p of calibration.parameters) {
+        values[p.name] = p.value;
+        if (before[p.name] === undefined) before[p.name] = s.case.model[p.name];
+      }
+      const r = validateCase({ ...s.case, model: { ...s.case.model, ...values } });
+      if (!r.ok) {
+        this.host.messages.show('error', 'The calibrated values could not be used:', r.errors, 'calibration');
+        this.data?.setCalibratedInUse(false);
+        return;
+      }
+      this.host.apply({
+        ...s,
+        case: r.value,
+        calibration: { data: calibration.fitted_to.data, points, values, original: before },
+      });
+    } else if (s.calibration) {
+      const r = validateCase({ ...s.case, model: { ...s.case.model, ...s.calibration.original } });
+      if (r.ok) this.host.apply({ ...s, case: r.value, calibration: null });
+    }
+  }
+
+  showCalibrationBadge(mark: CalibrationMark | null): void {
+    const badge = byId('calibrated-badge');
+    badge.hidden = mark === null;
+    badge.textContent = mark
+      ? `CALIBRATED model: fitted to ${mark.data} (${mark.points} points): ${Object.entries(mark.values)
+          .map(([k, v]) => `${k} ${fmt(v, 4)}`)
+          .join(', ')}`
+      : '';
+    this.data?.setCalibratedInUse(mark !== null);
+  }
+}
+
+/**
+ * Deadlines of the data panel's background jobs (a worker silent for longer is taken as hung, replaced
+ * and the job retried once): generous on purpose, scaled by the job's size. Reading: 60 s plus 10 s per
+ * MB (reading runs at tens of MB/s). Comparing: 60 s plus 2 ms per data row, 50 times that for a fit,
+ * a convergence study or an uncertainty band (each evaluates the model many times per row).
+ */
+function readDeadlineMs(bytes: number): number {
+  return 60_000 + (10_000 * bytes) / 1_048_576;
+}
+
+function compareDeadlineMs(rows: number, heavy: boolean): number {
+  return 60_000 + 2 * rows * (heavy ? 50 : 1);
+}

@@ -1,0 +1,147 @@
+/**
+ * The page's buttons outside the figures: cancel, baseline, link, project and case files (read with a
+ * size limit; a bad file changes nothing), kept designs and reset.
+ */
+import { parseCaseFile } from '../compute/caseFile';
+import {
+  MAX_LINK_CHARS,
+  MAX_PROJECT_BYTES,
+  nameErrors,
+  projectTextToState,
+  stateToHashOrNull,
+  stateToProjectText,
+} from './appState';
+import { defaultCase } from './defaultCase';
+import { downloadText, safeFileStem } from './download';
+import type { PageHost } from './pageHost';
+import { defaultRoad } from './roadState';
+import { defaultView } from './viewState';
+import { byId } from './views/present';
+
+export interface ActionsHost extends PageHost {
+  cancelCompute(): void;
+  showKept(): void;
+}
+
+export function wirePageActions(host: ActionsHost): void {
+  byId('cancel').addEventListener('click', () => {
+    // computeStages sees the abort as a cancel (it is still the current run).
+    host.cancelCompute();
+  });
+  byId('pin-baseline').addEventListener('click', () => host.pinBaseline());
+  byId('clear-baseline').addEventListener('click', () => {
+    host.apply({ ...host.state, baseline: null, view: { ...host.state.view, difference: 'none' } });
+    host.messages.clear('baseline');
+  });
+  byId('copy-link').addEventListener('click', () => {
+    if (stateToHashOrNull(host.state) === null) {
+      host.messages.show(
+        'error',
+        `No link made: this design is too large for a link (more than ${MAX_LINK_CHARS / 1024} kB). Save a project file to share it.`,
+        [],
+        'link-copy',
+      );
+      return;
+    }
+    const link = location.href;
+    navigator.clipboard?.writeText(link).then(
+      () =>
+        host.messages.show(
+          'info',
+          'Link copied: it reopens this design, view and baseline.',
+          [],
+          'link-copy',
+        ),
+      () =>
+        host.messages.show('info', 'Copy this link (it reopens this design and view):', [link], 'link-copy'),
+    ) ?? host.messages.show('info', 'Copy this link (it reopens this design and view):', [link], 'link-copy');
+  });
+  byId('save-project').addEventListener('click', () => {
+    downloadText(
+      `${safeFileStem(host.state.case.name, 'coversweep')}.coversweep-project.json`,
+      stateToProjectText(host.state),
+      'application/json',
+    );
+  });
+  byId('export-case').addEventListener('click', () => {
+    downloadText(
+      `${safeFileStem(host.state.case.name, 'coversweep')}.case.json`,
+      `${JSON.stringify(host.state.case, null, 2)}\n`,
+      'application/json',
+    );
+  });
+  byId<HTMLInputElement>('open-project').addEventListener('change', (event) => {
+    const input = event.target as HTMLInputElement;
+    void openFile(host, input, (text, name) => {
+      const r = projectTextToState(text, name);
+      if (!r.ok) return r.errors;
+      host.apply(r.value);
+      return null;
+    });
+  });
+  byId<HTMLInputElement>('open-case').addEventListener('change', (event) => {
+    const input = event.target as HTMLInputElement;
+    void openFile(host, input, (text, name) => {
+      const r = parseCaseFile(text);
+      if (!r.ok) return r.errors.map((e) => `${name}: ${e}`);
+      const long = nameErrors({ case: r.value }, name);
+      if (long.length > 0) return long;
+      host.apply({ ...host.state, case: r.value });
+      return null;
+    });
+  });
+  byId('kept-designs').addEventListener('click', () => host.showKept());
+  byId('reset').addEventListener('click', () => {
+    host.apply({
+      case: defaultCase(),
+      view: defaultView(),
+      baseline: null,
+      road: defaultRoad(),
+      calibration: null,
+    });
+    host.messages.show(
+      'info',
+      'Back to the demo wheel and the default view (the baseline is cleared).',
+      [],
+      'reset',
+    );
+  });
+}
+
+async function openFile(
+  host: PageHost,
+  input: HTMLInputElement,
+  use: (text: string, name: string) => string[] | null,
+): Promise<void> {
+  const file = input.files?.[0];
+  input.value = '';
+  if (!file) return;
+  let text: string;
+  try {
+    if (file.size > MAX_PROJECT_BYTES)
+      throw new Error(
+        `the file is ${Math.round(file.size / 1024)} kB, more than the ${MAX_PROJECT_BYTES / 1024} kB limit; a design file is a few kB`,
+      );
+    text = await file.text();
+  } catch (error) {
+    host.messages.show(
+      'error',
+      `Could not read ${file.name}; nothing changed.`,
+      [(error as Error).message],
+      'file',
+    );
+    return;
+  }
+  const errors = use(text, file.name);
+  if (errors) {
+    host.messages.show(
+      'error',
+      `${file.name} could not be opened; the current design is unchanged.`,
+      errors,
+      'file',
+    );
+  } else {
+    host.messages.clear('file');
+    host.messages.show('info', `Opened ${file.name}.`, [], 'file');
+  }
+}

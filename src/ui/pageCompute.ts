@@ -1,0 +1,280 @@
+/**
+ * The page's computing: for each state, its studies (pageStudies) run on the worker pool in three
+ * stages, cancellable and superseded by any newer state: the current design first without its
+ * grid-convergence lattices (so its numbers show at once), then the family, the cover sweep, the
+ * baseline and the current design with its uncertainty in one run, then the design map. Each stage's
+ * results land in PageResults as named-axis cubes and the host redraws.
+ */
+import { caseAirDensity } from '../compute/caseFile';
+import type { SweepProgress } from '../compute/engine/runCases';
+import type { WorkerPool } from '../compute/engine/workerPool';
+import { type PageStudies, pageStudies } from '../compute/study/pageStudies';
+import { type RunStudiesOptions, runStudies, type StudiesOutcome } from '../compute/study/runStudies';
+import type { StudyPlan } from '../compute/study/studyPlan';
+import type { AppState } from './appState';
+import { scriptStartMs, workersReadyMs } from './earlyPool';
+import type { Messages } from './messages';
+import type { PageResults } from './views/pageResults';
+import { byId } from './views/present';
+
+type Phase = 'computing' | 'done' | 'error';
+
+/** What the computing needs of the page. */
+export interface ComputeHost {
+  readonly state: AppState;
+  readonly messages: Messages;
+  /** The results on screen; each stage replaces them. */
+  results: PageResults | null;
+  renderAll(opts?: { light?: boolean }): void;
+  /** The first numbers of a run are on screen (the 3D view may start). */
+  firstNumbersShown(): void;
+}
+
+/** What a state's results depend on: a change elsewhere (units, tabs, map colours) only redraws. */
+export function computeKey(s: AppState): string {
+  const v = s.view;
+  return JSON.stringify([
+    s.case,
+    s.baseline,
+    v.familyFractions,
+    v.coverPlotYawsDeg,
+    v.coverPlotSpeedsMps,
+    v.mapYawDeg,
+    v.mapMaxRimDepthM,
+  ]);
+}
+
+export class PageCompute {
+  private timer: ReturnType<typeof setTimeout> | null = null;
+  private abort: AbortController | null = null;
+  private poolIdle: Promise<void> = Promise.resolve();
+  private firstResultMs: number | null = null;
+  /** The computeKey of the state computed (or being computed) last. */
+  lastComputeKey = '';
+
+  constructor(
+    private readonly pool: WorkerPool,
+    private readonly host: ComputeHost,
+  ) {}
+
+  /** Whether `state` needs a new computation (else a redraw will do). */
+  needed(state: AppState): boolean {
+    return computeKey(state) !== this.lastComputeKey;
+  }
+
+  /** Stop the run in progress (its finished stages stay on screen). */
+  cancel(): void {
+    this.abort?.abort();
+  }
+
+  /** Compute the current state now (the page's start). */
+  startNow(): void {
+    this.lastComputeKey = computeKey(this.host.state);
+    this.setPhase('computing');
+    void this.compute();
+  }
+
+  setPhase(phase: Phase): void {
+    document.body.dataset.state = phase;
+  }
+
+  /** Compute the current state after `delayMs` (edits in between restart the wait). */
+  schedule(delayMs: number): void {
+    if (this.timer) clearTimeout(this.timer);
+    this.lastComputeKey = computeKey(this.host.state);
+    this.setPhase('computing');
+    this.timer = setTimeout(() => {
+      this.timer = null;
+      void this.compute();
+    }, delayMs);
+  }
+
+  private status(text: string, progress: SweepProgress | null = null): void {
+    byId('status-text').textContent = text;
+    const bar = byId<HTMLProgressElement>('progress');
+    const cancel = byId('cancel');
+    if (progress) {
+      bar.hidden = false;
+      bar.max = Math.max(1, progress.pointsTotal);
+      bar.value = progress.pointsDone;
+      cancel.hidden = false;
+    } else {
+      bar.hidden = true;
+    }
+  }
+
+  /**
+   * runStudies on the pool, one run at a time: WorkerPool.run is not re-entrant (a cancelled run
+   * terminates its busy workers, which a second run may already be waiting on), so each run waits
+   * for the previous one, which ends promptly once its signal is aborted.
+   */
+  private run(plans: readonly StudyPlan[], options: RunStudiesOptions): Promise<StudiesOutcome> {
+    const previous = this.poolIdle;
+    const run = previous.then(() => runStudies(this.pool, plans, options));
+    this.poolIdle = run.then(
+      () => undefined,
+      () => undefined,
+    );
+    return run;
+  }
+
+  /** Compute the current state now. */
+  async compute(): Promise<void> {
+    try {
+      await this.computeStages();
+    } catch (error) {
+      this.fail(`Internal error while computing: ${(error as Error).message}`);
+    }
+  }
+
+  private async computeStages(): Promise<void> {
+    this.abort?.abort();
+    const ac = new AbortController();
+    this.abort = ac;
+    const state = this.host.state;
+    let studies: PageStudies;
+    try {
+      studies = pageStudies(state.case, state.view, state.baseline);
+    } catch (error) {
+      this.fail(`The design could not be prepared for the model: ${(error as Error).message}`);
+      return;
+    }
+    const r: PageResults = {
+      studies,
+      current: null,
+      family: null,
+      cover: null,
+      map: null,
+      baseline: studies.baseline ? { curve: null, cover: null, map: null } : null,
+      rhoKgPerM3: caseAirDensity(state.case),
+    };
+    const superseded = () => this.abort !== ac;
+    byId('cancel').hidden = false;
+    this.status('Solving the current design…');
+    this.stage('current');
+    const started = performance.now();
+
+    // 1. The current design, exactly as its case file says, but first without the grid-convergence
+    //    lattices (the same values, about half the cost): its numbers show at once; the uncertainty
+    //    estimate follows with the next stage.
+    const s1 = await this.run([studies.quick ?? studies.current], { signal: ac.signal });
+    if (superseded()) return;
+    if (s1.cancelled) return this.cancelled(r);
+    const first = s1.results[0]!;
+    if (first.errors[0] !== null || first.landed[0] !== 1) {
+      this.fail(`The model could not solve this design: ${first.errors[0] ?? 'unknown error'}`);
+      return;
+    }
+    r.current = first.cube;
+    this.host.results = r;
+    const t1 = performance.now();
+    this.host.messages.clear('model');
+    // The first numbers: the headline and the plots now; the tables and the map with the next stage.
+    this.host.renderAll({ light: true });
+    if (this.firstResultMs === null) {
+      // On screen: the figures and plots are drawn (the browser paints them at the next frame).
+      this.firstResultMs = performance.now();
+      document.body.dataset.firstResultMs = this.firstResultMs.toFixed(0);
+    }
+    this.host.firstNumbersShown();
+
+    // 2. The current design with its grid-convergence estimate, the family, drag vs cover and the
+    //    baseline, in one run (cases of one surface share their factorisation).
+    this.stage('sweeps');
+    const b = studies.baseline;
+    const plans: StudyPlan[] = [studies.family, studies.cover];
+    if (b) plans.push(b.curve, b.cover, b.map);
+    if (studies.quick) plans.push(studies.current);
+    const gciStudy = studies.quick ? plans.length - 1 : -1;
+    const s2 = await this.run(plans, {
+      signal: ac.signal,
+      onProgress: (p) => this.status(`Cover-fraction sweeps: ${p.casesDone}/${p.casesTotal} cases`, p),
+      onCase: (landed) => {
+        if (landed.study === gciStudy && landed.cube && !superseded()) {
+          r.current = landed.cube;
+          this.host.renderAll();
+        }
+      },
+    });
+    if (superseded()) return;
+    const t2 = performance.now();
+    const [family, cover, ...rest] = s2.results;
+    r.family = family!;
+    r.cover = cover!;
+    if (r.baseline) {
+      r.baseline.curve = rest[0]!;
+      r.baseline.cover = rest[1]!;
+      r.baseline.map = rest[2]!;
+    }
+    const gci = gciStudy >= 0 ? s2.results[gciStudy]! : null;
+    if (gci?.cube && gci.landed[0] === 1 && gci.errors[0] === null) r.current = gci.cube;
+    this.host.renderAll();
+    if (s2.cancelled) return this.cancelled(r);
+
+    // 3. The design map (the longer sweep).
+    this.stage('map');
+    const s3 = await this.run([studies.map], {
+      signal: ac.signal,
+      onProgress: (p) => {
+        const left = Number.isFinite(p.remainingMs)
+          ? `, about ${(p.remainingMs / 1000).toFixed(1)} s left`
+          : '';
+        this.status(`Design map: ${p.casesDone}/${p.casesTotal} designs${left}`, p);
+      },
+    });
+    if (superseded()) return;
+    r.map = s3.results[0]!;
+    this.host.renderAll();
+    if (s3.cancelled) return this.cancelled(r);
+    const failed = s2.failedCount + s3.failedCount;
+    if (failed > 0) {
+      const first = [...s2.results, ...s3.results].flatMap((x) => x.errors).find((e) => e !== null) ?? '';
+      this.host.messages.show(
+        'warning',
+        `${failed} swept design(s) could not be solved and are left blank.`,
+        [first],
+        'sweep',
+      );
+    } else {
+      this.host.messages.clear('sweep');
+    }
+    const t3 = performance.now();
+    document.body.dataset.timings = JSON.stringify({
+      scriptStartMs: Math.round(scriptStartMs),
+      workersReadyMs: Math.round(workersReadyMs),
+      computeStartMs: Math.round(started),
+      firstResultMs: Math.round(this.firstResultMs ?? Number.NaN),
+      currentMs: Math.round(t1 - started),
+      sweepsMs: Math.round(t2 - t1),
+      mapMs: Math.round(t3 - t2),
+    });
+    const seconds = ((t3 - started) / 1000).toFixed(2);
+    this.status(`Done in ${seconds} s on ${this.pool.size} worker${this.pool.size > 1 ? 's' : ''}.`);
+    byId('cancel').hidden = true;
+    this.abort = null;
+    this.stage('done');
+    this.setPhase('done');
+  }
+
+  private stage(name: 'current' | 'sweeps' | 'map' | 'done'): void {
+    document.body.dataset.stage = name;
+  }
+
+  private cancelled(r: PageResults): void {
+    this.host.results = r.current ? r : this.host.results;
+    this.host.renderAll();
+    this.status('Cancelled: the sweeps are incomplete. Change any control to compute again.');
+    byId('cancel').hidden = true;
+    this.abort = null;
+    this.lastComputeKey = '';
+    this.setPhase('done');
+  }
+
+  private fail(message: string): void {
+    this.host.messages.show('error', message, [], 'model');
+    this.status('Stopped: see the message above.');
+    byId('cancel').hidden = true;
+    this.abort = null;
+    this.setPhase('error');
+  }
+}

@@ -1,0 +1,107 @@
+/**
+ * The 3D view's glue: its module and WebGL context load once the first numbers are on screen; its field
+ * (viewFieldRequest) is computed in a solver worker of its own, so it never waits behind a sweep; its
+ * layer switches are part of the state.
+ */
+import type { ViewField } from '../compute/engine/protocol';
+import { viewFieldRequest } from '../compute/study/viewFieldRequest';
+import type { AppState } from './appState';
+import type { BrowserWorkerHandle } from './browserWorker';
+import { fmt } from './displayUnits';
+import { spawnTracked } from './earlyPool';
+import { view3dLoader, type WheelView } from './view3dSlot';
+import type { ViewState } from './viewState';
+import type { PageResults } from './views/pageResults';
+import { byId, conditionsText, presentOf } from './views/present';
+
+export interface View3dHost {
+  readonly state: AppState;
+  readonly results: PageResults | null;
+  setView(patch: Partial<ViewState>): void;
+}
+
+export class View3dGlue {
+  private view: WheelView | null = null;
+  private worker: BrowserWorkerHandle | null = null;
+  private request = 0;
+  private started = false;
+
+  constructor(private readonly host: View3dHost) {}
+
+  /** The first numbers of a run are on screen: start the view, or redraw it. */
+  firstNumbersShown(): void {
+    if (!this.started) {
+      this.started = true;
+      void this.setUp();
+    } else {
+      void this.update();
+    }
+  }
+
+  /** Follow the state's layer switches. */
+  applyLayers(next: AppState): void {
+    if (this.view && Object.keys(next.view.layers3d).length > 0) {
+      if (
+        JSON.stringify(this.view.layers()) !==
+        JSON.stringify({ ...this.view.layers(), ...next.view.layers3d })
+      ) {
+        this.view.setLayers(next.view.layers3d);
+      }
+    }
+  }
+
+  toPngBlob(): Promise<Blob> {
+    return this.view ? this.view.toPngBlob() : Promise.reject(new Error('the 3D view is not available'));
+  }
+
+  private async setUp(): Promise<void> {
+    const note = byId('view3d-note');
+    const loader = view3dLoader();
+    if (!loader) {
+      note.textContent = 'The 3D view is not part of this build.';
+      return;
+    }
+    try {
+      const mod = await loader();
+      this.view = mod.createWheelView(byId('view3d'));
+      if (Object.keys(this.host.state.view.layers3d).length > 0)
+        this.view.setLayers(this.host.state.view.layers3d);
+      // The view's own layer switches become part of the state (link, autosave, project file).
+      byId('view3d').addEventListener('change', () => {
+        if (!this.view) return;
+        const layers = { ...this.view.layers() };
+        if (JSON.stringify(layers) !== JSON.stringify(this.host.state.view.layers3d))
+          this.host.setView({ layers3d: layers });
+      });
+      note.textContent = '';
+      void this.update();
+    } catch (error) {
+      note.textContent = `The 3D view could not start: ${(error as Error).message}`;
+    }
+  }
+
+  /** Draw the current design's field (its own solver worker; the latest request wins). */
+  async update(): Promise<void> {
+    if (!this.view || !this.host.results?.current) return;
+    const yawDeg = this.host.state.view.view3dYawDeg;
+    const request = viewFieldRequest(this.host.state.case, yawDeg);
+    const p0 = request.input.points[0]!;
+    const ticket = ++this.request;
+    try {
+      this.worker ??= spawnTracked();
+      const field = (await Promise.race([
+        this.worker.api.viewField(request),
+        this.worker.failed,
+      ])) as ViewField;
+      if (ticket !== this.request || !this.view) return;
+      this.view.update(field);
+      byId('view3d-note').textContent =
+        `Pressure jump on the wheel at ${fmt(yawDeg)}° yaw, ${conditionsText(presentOf(this.host.state, this.host.results), p0.airspeedMps, p0.rhoKgPerM3)}; drag to orbit.`;
+    } catch (error) {
+      this.worker?.terminate();
+      this.worker = null;
+      byId('view3d-note').textContent =
+        `The 3D view's flow field could not be computed: ${(error as Error).message}`;
+    }
+  }
+}

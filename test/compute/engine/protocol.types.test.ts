@@ -1,0 +1,58 @@
+/**
+ * Type-level checks of the worker protocol (tsc holds them; `npm test` runs tsc): what crosses a worker
+ * boundary is plain data (no functions, which structured cloning cannot carry), the remote API answers
+ * with promises of exactly those types, and every job runner (the pool, this thread) has one shape.
+ */
+import type { Remote } from 'comlink';
+import { describe, expectTypeOf, it } from 'vitest';
+import type { InProcessRunner } from '../../../src/compute/engine/inProcessRunner';
+import type { JobRunner } from '../../../src/compute/engine/jobRunner';
+import type { PageJobsApi, RideRequest } from '../../../src/compute/engine/pageJobs';
+import type {
+  CaseOutcome,
+  JobResult,
+  SolveJob,
+  SolverApi,
+  ViewField,
+  ViewFieldRequest,
+} from '../../../src/compute/engine/protocol';
+import type { WorkerPool } from '../../../src/compute/engine/workerPool';
+import type { ResultCube, StudyPlan } from '../../../src/compute/study';
+
+/** True when no function hides anywhere in T (typed arrays and plain objects only). */
+type PlainData<T> = T extends (...args: never[]) => unknown
+  ? false
+  : T extends ArrayBufferView | ArrayBuffer | string | number | boolean | null | undefined
+    ? true
+    : T extends readonly (infer E)[]
+      ? PlainData<E>
+      : T extends object
+        ? false extends { [K in keyof T]-?: PlainData<T[K]> }[keyof T]
+          ? false
+          : true
+        : true;
+
+describe('the worker protocol (types)', () => {
+  it('carries plain data only', () => {
+    expectTypeOf<PlainData<SolveJob>>().toEqualTypeOf<true>();
+    expectTypeOf<PlainData<JobResult>>().toEqualTypeOf<true>();
+    expectTypeOf<PlainData<CaseOutcome>>().toEqualTypeOf<true>();
+    expectTypeOf<PlainData<ViewFieldRequest>>().toEqualTypeOf<true>();
+    expectTypeOf<PlainData<ViewField>>().toEqualTypeOf<true>();
+    expectTypeOf<PlainData<RideRequest>>().toEqualTypeOf<true>();
+    expectTypeOf<PlainData<StudyPlan>>().toEqualTypeOf<true>();
+    // The check can fail: a cube (methods) must never be sent.
+    expectTypeOf<PlainData<ResultCube>>().toEqualTypeOf<false>();
+  });
+  it('answers remote calls with promises of the same types', () => {
+    expectTypeOf<Remote<SolverApi>['solveJob']>().parameters.toEqualTypeOf<[SolveJob]>();
+    expectTypeOf<ReturnType<Remote<SolverApi>['solveJob']>>().toEqualTypeOf<Promise<JobResult>>();
+    expectTypeOf<ReturnType<Remote<SolverApi>['viewField']>>().toEqualTypeOf<Promise<ViewField>>();
+    expectTypeOf<ReturnType<Remote<PageJobsApi>['ping']>>().toEqualTypeOf<Promise<string>>();
+  });
+  it('gives the pool and the in-thread runner one shape', () => {
+    expectTypeOf<WorkerPool>().toExtend<JobRunner>();
+    expectTypeOf<InProcessRunner>().toExtend<JobRunner>();
+    expectTypeOf<Parameters<JobRunner['run']>[0]>().toEqualTypeOf<readonly SolveJob[]>();
+  });
+});
