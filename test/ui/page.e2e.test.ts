@@ -1055,6 +1055,7 @@ describe.skipIf(!haveBrowser && !requireBrowser)('web page in headless Chromium'
     // The themed page, looked at in the report.
     await page.locator('.lil-gui .lil-title', { hasText: 'Model options' }).click();
     await page.locator('[data-field="porosityScale"]').scrollIntoViewIfNeeded();
+    await page.evaluate(() => window.scrollTo(0, 0));
     await page.screenshot({ path: join(OUT, 'ui-theme-1280x800.png') });
     await page.setViewportSize({ width: 1920, height: 1080 });
     await page.evaluate(() => new Promise((ok) => requestAnimationFrame(() => requestAnimationFrame(ok))));
