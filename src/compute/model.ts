@@ -3,5 +3,6 @@
  * import only src/compute (the layers point ui/cli -> compute -> model; see scripts/checkLayout.mjs).
  */
 export type { FlowConditions, PointResult, WheelSolution } from '../model/wheel/types';
-export { FLAG_MESSAGES } from '../model/wheel/validity';
+export { FLAG_MESSAGES, VALIDITY } from '../model/wheel/validity';
 export type { WheelInput } from '../model/wheel/wheelInput';
+export { logWindProfileRatio } from '../model/wind/logWindProfileRatio';

@@ -168,7 +168,7 @@ export class App implements ComputeHost, ActionsHost {
     if (next.view.tab === 'road') this.roadGlue.schedule(200);
   }
 
-  private onEdit(field: Field, value: FieldValue): void {
+  private onEdit(field: Field, value: FieldValue): readonly string[] | null {
     const ctx = { case: this.state.case, view: this.state.view };
     const raw = structuredClone(
       field.target === 'case' ? this.state.case : this.state.view,
@@ -177,15 +177,14 @@ export class App implements ComputeHost, ActionsHost {
       field.set(raw, value, ctx);
     } catch (error) {
       this.messages.show('error', `Not applied: ${field.label(ctx)}`, [(error as Error).message], 'edit');
-      return;
+      return [(error as Error).message];
     }
     if (field.target === 'case') {
       const r = validateCase(raw);
       const long = r.ok ? nameErrors({ case: r.value }, 'design') : [];
       if (long.length > 0) {
         this.messages.show('error', `Not applied: ${field.label(ctx)}`, long, 'edit');
-        this.controls.revert(field.key, { case: this.state.case, view: this.state.view });
-        return;
+        return long;
       }
       if (!r.ok) {
         this.messages.show(
@@ -194,7 +193,7 @@ export class App implements ComputeHost, ActionsHost {
           r.errors,
           'edit',
         );
-        return;
+        return r.errors;
       }
       this.messages.clear('edit');
       this.apply({ ...this.state, case: r.value });
@@ -207,11 +206,12 @@ export class App implements ComputeHost, ActionsHost {
           r.errors,
           'edit',
         );
-        return;
+        return r.errors;
       }
       this.messages.clear('edit');
       this.apply({ ...this.state, view: r.value });
     }
+    return null;
   }
 
   setView(patch: Partial<ViewState>): void {

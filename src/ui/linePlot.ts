@@ -3,6 +3,7 @@
  * points at the table holding the same numbers, and a PNG export that includes the title and legend.
  */
 import uPlot from 'uplot';
+import { BEYOND_YAW_WHY, beyondYawIntervals } from './yawTrust';
 
 export interface PlotSeries {
   label: string;
@@ -45,7 +46,12 @@ export interface PlotSpec {
   bands?: PlotBand[];
   /** Ticks of the x axis at whole multiples of this (e.g. 1 for segment numbers). */
   xTickStep?: number;
+  /** The x axis is yaw (deg, or |yaw|): shade the range beyond the model's trusted yaw and say why. */
+  xIsYawDeg?: boolean;
 }
+
+const BEYOND_FILL = 'rgba(120, 120, 120, 0.13)';
+const BEYOND_HATCH = 'rgba(90, 90, 90, 0.22)';
 
 const AXIS_FONT = '11px system-ui, -apple-system, "Segoe UI", sans-serif';
 const LABEL_FONT = '12px system-ui, -apple-system, "Segoe UI", sans-serif';
@@ -56,6 +62,8 @@ export class LinePlot {
   private readonly holder: HTMLDivElement;
   private readonly observer: ResizeObserver;
   private lastWidth = 0;
+  /** The note under the plot when part of its yaw range is beyond the trusted range (also in PNGs). */
+  private beyondNote: string | null = null;
 
   constructor(
     private readonly container: HTMLElement,
@@ -132,6 +140,11 @@ export class LinePlot {
       });
     }
     const markerX = spec.markerX;
+    const finiteXs = spec.xs.filter(Number.isFinite);
+    const beyond =
+      spec.xIsYawDeg && finiteXs.length > 0
+        ? beyondYawIntervals(Math.min(...finiteXs), Math.max(...finiteXs))
+        : [];
     const opts: uPlot.Options = {
       width: w,
       height: this.height,
@@ -164,6 +177,16 @@ export class LinePlot {
           }
         : {}),
       hooks: {
+        drawClear: [(u: uPlot) => this.shadeBeyondYaw(u, beyond)],
+        setCursor: [
+          (u: uPlot) => {
+            const left = u.cursor.left ?? -1;
+            const x = left >= 0 ? u.posToVal(left, 'x') : Number.NaN;
+            const inBand = beyond.some(([a, b]) => x >= a && x <= b);
+            if (inBand) u.over.title = BEYOND_YAW_WHY;
+            else u.over.removeAttribute('title');
+          },
+        ],
         draw: [
           (u: uPlot) => {
             const lines: Array<[number, string, number[]]> = [];
@@ -195,6 +218,45 @@ export class LinePlot {
       const row = rows[i + 1];
       if (s.noLegend && row) row.style.display = 'none';
     });
+    this.plot.root.dataset.beyondYaw = beyond.length > 0 ? 'shaded' : 'none';
+    this.beyondNote =
+      beyond.length > 0
+        ? `Shaded: yaw beyond the model's trusted range (${beyond.map(([a, b]) => `${a} to ${b}°`).join(', ')})`
+        : null;
+    if (this.beyondNote) {
+      const note = document.createElement('p');
+      note.className = 'plot-beyond-note';
+      note.title = BEYOND_YAW_WHY;
+      note.textContent = `${this.beyondNote} — hover for why`;
+      this.plot.root.append(note);
+    }
+  }
+
+  /** Fill the plotted yaw range beyond the trusted yaw, with a light hatch, under the curves. */
+  private shadeBeyondYaw(u: uPlot, intervals: Array<[number, number]>): void {
+    if (intervals.length === 0) return;
+    const ctx = u.ctx;
+    const { top, height } = u.bbox;
+    for (const [a, b] of intervals) {
+      ctx.save();
+      const x0 = u.valToPos(a, 'x', true);
+      const x1 = u.valToPos(b, 'x', true);
+      const left = Math.min(x0, x1);
+      const w = Math.abs(x1 - x0);
+      ctx.fillStyle = BEYOND_FILL;
+      ctx.fillRect(left, top, w, height);
+      ctx.beginPath();
+      ctx.rect(left, top, w, height);
+      ctx.clip();
+      ctx.strokeStyle = BEYOND_HATCH;
+      ctx.lineWidth = 1;
+      for (let x = left - height; x < left + w; x += 9) {
+        ctx.moveTo(x, top + height);
+        ctx.lineTo(x + height, top);
+      }
+      ctx.stroke();
+      ctx.restore();
+    }
   }
 
   /** The plot as PNG: title, the chart (axes included) and the legend. */
@@ -207,7 +269,9 @@ export class LinePlot {
     const titleH = 28 * dpr;
     const rowH = 18 * dpr;
     const perRow = 3;
-    const legendH = Math.ceil(spec.series.filter((s) => !s.noLegend).length / perRow) * rowH + 8 * dpr;
+    const noteH = this.beyondNote ? rowH : 0;
+    const legendH =
+      Math.ceil(spec.series.filter((s) => !s.noLegend).length / perRow) * rowH + 8 * dpr + noteH;
     const out = document.createElement('canvas');
     out.width = src.width;
     out.height = src.height + titleH + legendH;
@@ -236,6 +300,10 @@ export class LinePlot {
         ctx.setLineDash([]);
         ctx.fillText(s.label, x + 24 * dpr, y);
       });
+    if (this.beyondNote) {
+      ctx.fillStyle = '#5b6776';
+      ctx.fillText(this.beyondNote, 8 * dpr, out.height - 8 * dpr);
+    }
     return new Promise((resolve, reject) =>
       out.toBlob((b) => (b ? resolve(b) : reject(new Error('PNG export failed'))), 'image/png'),
     );

@@ -76,6 +76,7 @@ export class RoadGlue {
       designLabel: `${s.case.name ?? 'this design'}${s.calibration ? ' (CALIBRATED model)' : ''}`,
       baselineLabel: b.label,
       baselinePinned: b.pinned,
+      hubHeightM: s.case.wheel.outer_radius_m,
     };
   }
 

@@ -103,9 +103,10 @@ export class RoadPanel {
 
   private refreshForm(): void {
     const u = this.speedUnit();
-    for (const { field, row, input, unit } of this.dom.fields) {
+    for (const { field, row, input, unit, note } of this.dom.fields) {
       const visible = field.visible ? field.visible(this.road) : true;
       row.hidden = !visible;
+      if (note && field.kind === 'number' && field.note) note.textContent = field.note(this.road, this.ctx);
       if (document.activeElement === input) continue;
       if (field.kind === 'select') input.value = field.get(this.road);
       else {

@@ -918,4 +918,149 @@ describe.skipIf(!haveBrowser && !requireBrowser)('web page in headless Chromium'
     await context.close();
     expect(consoleErrors).toEqual([]);
   });
+
+  it('refuses an out-of-range or model-refused entry beside its control, keeps the design and shows its value again', async () => {
+    const context = await browser.newContext({ viewport: { width: 1280, height: 800 } });
+    const page = await open(context);
+    expect(await settled(page)).toBe('done');
+    const state = () => page.evaluate(() => (window as unknown as Inspect).coversweep.state());
+    const rule = (field: string) => page.locator(`#rule-${field}`);
+    const shown = (field: string) => page.locator(`[data-field="${field}"] input`).first().inputValue();
+    const before = await state();
+    const rimMm = Math.round(before.case.wheel.rim_depth_m * 1000);
+    // Typing shows the rule before anything is applied.
+    await page.locator('[data-field="rimDepthMm"] input').first().fill('400');
+    expect(await rule('rimDepthMm').getAttribute('data-kind')).toBe('typing');
+    expect(await rule('rimDepthMm').textContent()).toBe('Rim depth: at most 200 mm, got 400');
+    await page.locator('[data-field="rimDepthMm"] input').first().press('Enter');
+    // Out of the control's range: the rule beside it, the design unchanged, the control back to the design.
+    const refusals: Array<[string, string, string, string]> = [
+      ['rimDepthMm', '400', 'Rim depth: at most 200 mm, got 400', `${rimMm}`],
+      ['airspeed', '-10', 'Airspeed: at least 5 km/h, got -10', '50'],
+      ['yawStepDeg', '0', 'Yaw step: at least 0.25 deg, got 0', '0.5'],
+      ['spokeCount', '20.5', 'Spoke count: a whole number, got 20.5', `${before.case.wheel.spokes.count}`],
+      ['tyreWidthMm', 'abc', 'Tyre width: a number is needed, got "abc"', '25'],
+    ];
+    for (const [field, typed, ruleText, value] of refusals) {
+      if (field !== 'rimDepthMm') await setNumberControl(page, field, typed);
+      const note = (await rule(field).textContent()) ?? '';
+      expect(note, `${field} <- ${typed}`).toContain(`Not applied: ${ruleText}.`);
+      expect(await rule(field).getAttribute('data-kind')).toBe('refused');
+      expect(await shown(field), `${field} shows the design's value again`).toBe(value);
+      expect(await state(), `${field} <- ${typed} left the design unchanged`).toEqual(before);
+    }
+    expect(await rule('rimDepthMm').textContent()).toBe(
+      `Not applied: Rim depth: at most 200 mm, got 400. The design keeps ${rimMm} mm.`,
+    );
+    // A value inside the control's range but refused by the case rules (a rim deeper than the wheel).
+    await setNumberControl(page, 'outerRadiusMm', '200');
+    await page.waitForFunction(
+      () => (window as unknown as Inspect).coversweep.state().case.wheel.outer_radius_m === 0.2,
+    );
+    const small = await state();
+    await setNumberControl(page, 'rimDepthMm', '160');
+    const refused = (await rule('rimDepthMm').textContent()) ?? '';
+    expect(refused).toContain(
+      'Not applied: rim depth: rim depth 0.16 m + tyre width 0.025 m must be less than',
+    );
+    expect(refused).toContain(`The design keeps ${rimMm} mm.`);
+    expect(await shown('rimDepthMm')).toBe(`${rimMm}`);
+    expect(await state()).toEqual(small);
+    await page.locator('#controls').screenshot({ path: join(OUT, 'ui-theme-refused.png') });
+    // A value inside the rules is applied exactly as typed (not snapped to the slider's 0.5 mm step),
+    // and the note goes.
+    await setNumberControl(page, 'rimWidthMm', '27.3');
+    await page.waitForFunction(
+      () => (window as unknown as Inspect).coversweep.state().case.wheel.rim_width_m === 0.0273,
+    );
+    await setNumberControl(page, 'rimDepthMm', '60');
+    await page.waitForFunction(
+      () => (window as unknown as Inspect).coversweep.state().case.wheel.rim_depth_m === 0.06,
+    );
+    expect(await rule('rimDepthMm').isHidden()).toBe(true);
+    // The model's terms carry help, and every number control names its unit.
+    expect(await page.locator('[data-field="porosityScale"]').getAttribute('title')).toContain(
+      'porous screen',
+    );
+    expect(await page.locator('[data-field="suctionRecovered"] .cs-hint').textContent()).toContain(
+      'attainable',
+    );
+    const unitless = await page.evaluate(() =>
+      [...document.querySelectorAll('#controls .lil-number .lil-name')]
+        .map((n) => n.textContent ?? '')
+        .filter((t) => !t.includes(', ')),
+    );
+    expect(unitless).toEqual([]);
+    await context.close();
+    expect(consoleErrors).toEqual([]);
+  });
+
+  it('shades the yaw range beyond the trusted yaw on every yaw plot and says why on hover', async () => {
+    const context = await browser.newContext({ viewport: { width: 1280, height: 800 } });
+    const page = await open(context);
+    expect(await settled(page)).toBe('done');
+    // Within the trusted range nothing is shaded.
+    expect(await page.locator('#fig-drag-yaw .uplot').getAttribute('data-beyond-yaw')).toBe('none');
+    await setNumberControl(page, 'yawMaxDeg', '40');
+    await page.waitForFunction(
+      () => Math.max(...(window as unknown as Inspect).coversweep.state().case.conditions.yaw_deg) === 40,
+    );
+    expect(await settled(page)).toBe('done');
+    for (const fig of ['fig-drag-yaw', 'fig-side-yaw', 'fig-handling']) {
+      expect(await page.locator(`#${fig} .uplot`).getAttribute('data-beyond-yaw'), fig).toBe('shaded');
+      const note = page.locator(`#${fig} .plot-beyond-note`);
+      expect(await note.textContent(), fig).toContain('30 to 40°');
+      expect(await note.getAttribute('title'), fig).toContain('outside its trusted range');
+      // The band is drawn: the plot area is darker beyond 30 deg than before it (the band's fill darkens
+      // the white by about 20 levels).
+      const shade = await page.evaluate((fig) => {
+        const over = document.querySelector(`#${fig} .u-over`)!.getBoundingClientRect();
+        const canvas = document.querySelector<HTMLCanvasElement>(`#${fig} canvas`)!;
+        const box = canvas.getBoundingClientRect();
+        const k = canvas.width / box.width;
+        const g = canvas.getContext('2d')!;
+        // The median over the plot area's height: a curve or a grid line covers only a few pixels.
+        const median = (fx: number) => {
+          const levels: number[] = [];
+          for (let py = 2; py < over.height - 2; py += 2) {
+            const x = Math.round((over.left - box.left + over.width * fx) * k);
+            const y = Math.round((over.top - box.top + py) * k);
+            const d = g.getImageData(x, y, 1, 1).data;
+            // Over the card's white (the canvas is transparent where nothing is drawn).
+            const a = d[3]! / 255;
+            levels.push(((d[0]! + d[1]! + d[2]!) / 3) * a + 255 * (1 - a));
+          }
+          levels.sort((p, q) => p - q);
+          return levels[Math.floor(levels.length / 2)]!;
+        };
+        return { inside: median(0.93), outside: median(0.4) };
+      }, fig);
+      expect(shade.outside - shade.inside, `${fig}: ${JSON.stringify(shade)}`).toBeGreaterThan(10);
+      // Hovering the band says why; hovering the trusted range does not.
+      const over = (await page.locator(`#${fig} .u-over`).boundingBox())!;
+      await page.mouse.move(over.x + over.width * 0.93, over.y + over.height / 2);
+      expect(await page.locator(`#${fig} .u-over`).getAttribute('title'), fig).toContain('trusted range');
+      await page.mouse.move(over.x + over.width * 0.3, over.y + over.height / 2);
+      expect(await page.locator(`#${fig} .u-over`).getAttribute('title'), fig).toBeNull();
+    }
+    // The road form says the wind is taken at a station height and what it is at the hub.
+    await page.click('#tab-road');
+    const windNote = page.locator('#road-wind-speed_mps-note');
+    await windNote.waitFor();
+    expect(await windNote.textContent()).toMatch(
+      /^Taken at the station height, 10 m\. At the hub, 0\.\d+ m up, it is × 0\.\d+ \(log wind profile, roughness 0\.03 m\): a wind of \d+(\.\d+)? m\/s is \d+(\.\d+)? m\/s at the wheel\.$/,
+    );
+    await page.locator('#road-form').screenshot({ path: join(OUT, 'ui-theme-road-form.png') });
+    await page.click('#tab-results');
+    // The themed page, looked at in the report.
+    await page.locator('.lil-gui .lil-title', { hasText: 'Model options' }).click();
+    await page.locator('[data-field="porosityScale"]').scrollIntoViewIfNeeded();
+    await page.evaluate(() => window.scrollTo(0, 0));
+    await page.screenshot({ path: join(OUT, 'ui-theme-1280x800.png') });
+    await page.setViewportSize({ width: 1920, height: 1080 });
+    await page.evaluate(() => new Promise((ok) => requestAnimationFrame(() => requestAnimationFrame(ok))));
+    await page.screenshot({ path: join(OUT, 'ui-theme-1920x1080.png') });
+    await context.close();
+    expect(consoleErrors).toEqual([]);
+  });
 });

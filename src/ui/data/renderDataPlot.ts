@@ -148,6 +148,7 @@ export function renderDataPlot(
     title,
     xLabel: `Yaw, deg — model at the data's airspeeds and air density (ρ ${fixed(conv.count > 0 ? conv.air_density_kgpm3[0]! : Number.NaN, 3)} kg/m³)`,
     xLabelShort: 'Yaw, deg',
+    xIsYawDeg: true,
     yLabel: `${label[0]!.toUpperCase()}${label.slice(1)}, ${unit}`,
     xs,
     series,

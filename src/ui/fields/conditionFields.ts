@@ -8,8 +8,10 @@ export const CONDITION_FIELDS: readonly Field[] = [
   // Speed and yaw
   {
     key: 'airspeed',
+    path: 'conditions.airspeed_mps',
     group: 'conditions',
     label: (c) => `Airspeed, ${sp(c)}`,
+    help: "Speed of the air relative to the wheel (the wind tunnel's speed).",
     target: 'case',
     control: 'number',
     min: 5,
@@ -34,6 +36,7 @@ export const CONDITION_FIELDS: readonly Field[] = [
   },
   {
     key: 'groundSpeed',
+    path: 'conditions.ground_speed_mps',
     group: 'conditions',
     label: (c) => `Ground speed, ${sp(c)}`,
     target: 'case',
@@ -53,8 +56,10 @@ export const CONDITION_FIELDS: readonly Field[] = [
   },
   {
     key: 'yawMaxDeg',
+    path: 'conditions.yaw_deg',
     group: 'conditions',
     label: () => 'Largest yaw, deg',
+    help: "Yaw angles are computed from 0 to this, in the step below. Beyond the model's trusted yaw the plots shade the range.",
     target: 'case',
     control: 'number',
     min: 0,
@@ -81,8 +86,10 @@ export const CONDITION_FIELDS: readonly Field[] = [
   },
   {
     key: 'referenceSpeed',
+    path: 'conditions.reference_speed_kmh',
     group: 'units',
     label: (c) => `Reference speed for gf, ${sp(c)}`,
+    help: 'Forces shown in grams-force are the force at this speed divided by standard gravity.',
     target: 'case',
     control: 'number',
     min: 10,
@@ -129,6 +136,7 @@ export const CONDITION_FIELDS: readonly Field[] = [
   },
   {
     key: 'temperatureC',
+    path: 'conditions.temperature_c',
     group: 'air',
     label: () => 'Temperature, °C',
     target: 'case',
@@ -143,6 +151,7 @@ export const CONDITION_FIELDS: readonly Field[] = [
   },
   {
     key: 'pressureHpa',
+    path: 'conditions.pressure_pa',
     group: 'air',
     label: () => 'Pressure, hPa',
     target: 'case',
@@ -158,6 +167,7 @@ export const CONDITION_FIELDS: readonly Field[] = [
   },
   {
     key: 'altitudeM',
+    path: 'conditions.altitude_m',
     group: 'air',
     label: () => 'Altitude, m',
     target: 'case',
@@ -173,6 +183,7 @@ export const CONDITION_FIELDS: readonly Field[] = [
   },
   {
     key: 'humidityPct',
+    path: 'conditions.relative_humidity',
     group: 'air',
     label: () => 'Relative humidity, %',
     target: 'case',
@@ -188,6 +199,7 @@ export const CONDITION_FIELDS: readonly Field[] = [
   },
   {
     key: 'densityKgPerM3',
+    path: 'conditions.air_density_kgpm3',
     group: 'air',
     label: () => 'Air density, kg/m³',
     target: 'case',

@@ -47,6 +47,14 @@ export interface Field {
   max?: number;
   step?: number;
   options?: Record<string, FieldValue>;
+  /** A typed value must be a whole number (counts). */
+  integer?: boolean;
+  /** The case or view key this control edits (e.g. "wheel.rim_depth_m"), to name it in messages. */
+  path?: string;
+  /** What the control means, in a sentence (shown on hover). */
+  help?: string;
+  /** A short line shown under the control (for the model's own terms). */
+  hint?: string;
   get(ctx: FieldContext): FieldValue;
   /** Write the display value into `raw` (a deep copy of the case or of the view). May throw Error. */
   set(raw: RawJson, value: FieldValue, ctx: FieldContext): void;

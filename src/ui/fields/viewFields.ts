@@ -50,8 +50,10 @@ export const VIEW_FIELDS: readonly Field[] = [
   // Plots (view)
   {
     key: 'familyFractions',
+    path: 'familyFractions',
     group: 'plots',
-    label: () => 'Cover fractions on yaw plots',
+    label: () => 'Cover fractions on yaw plots, 0–1',
+    help: 'Covering fractions drawn as a family of thin lines on the yaw plots, e.g. 0, 0.5, 1.',
     target: 'view',
     control: 'text',
     get: (c) => listText(c.view.familyFractions),
@@ -61,6 +63,7 @@ export const VIEW_FIELDS: readonly Field[] = [
   },
   {
     key: 'coverPlotYaws',
+    path: 'coverPlotYawsDeg',
     group: 'plots',
     label: () => 'Yaws for drag vs cover, deg',
     target: 'view',
@@ -72,6 +75,7 @@ export const VIEW_FIELDS: readonly Field[] = [
   },
   {
     key: 'coverPlotSpeeds',
+    path: 'coverPlotSpeedsMps',
     group: 'plots',
     label: (c) => `Extra speeds for drag vs cover, ${sp(c)}`,
     target: 'view',
@@ -86,6 +90,7 @@ export const VIEW_FIELDS: readonly Field[] = [
   },
   {
     key: 'mapYawDeg',
+    path: 'mapYawDeg',
     group: 'plots',
     label: () => 'Design map yaw, deg',
     target: 'view',
@@ -124,6 +129,7 @@ export const VIEW_FIELDS: readonly Field[] = [
   },
   {
     key: 'mapMaxRimDepthMm',
+    path: 'mapMaxRimDepthM',
     group: 'plots',
     label: () => 'Map deepest rim, mm',
     target: 'view',
@@ -138,6 +144,7 @@ export const VIEW_FIELDS: readonly Field[] = [
   },
   {
     key: 'view3dYawDeg',
+    path: 'view3dYawDeg',
     group: 'plots',
     label: () => '3D view yaw, deg',
     target: 'view',

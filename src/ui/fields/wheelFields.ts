@@ -6,6 +6,7 @@ export const WHEEL_FIELDS: readonly Field[] = [
   // Wheel geometry
   {
     key: 'name',
+    path: 'name',
     group: 'wheel',
     label: () => 'Design name',
     target: 'case',
@@ -19,8 +20,10 @@ export const WHEEL_FIELDS: readonly Field[] = [
   },
   {
     key: 'outerRadiusMm',
+    path: 'wheel.outer_radius_m',
     group: 'wheel',
     label: () => 'Outer radius (tyre), mm',
+    help: 'Radius to the outside of the tyre, from the hub centre.',
     target: 'case',
     control: 'number',
     min: 150,
@@ -33,6 +36,7 @@ export const WHEEL_FIELDS: readonly Field[] = [
   },
   {
     key: 'tyreWidthMm',
+    path: 'wheel.tyre_width_m',
     group: 'wheel',
     label: () => 'Tyre width, mm',
     target: 'case',
@@ -47,8 +51,10 @@ export const WHEEL_FIELDS: readonly Field[] = [
   },
   {
     key: 'rimDepthMm',
+    path: 'wheel.rim_depth_m',
     group: 'wheel',
     label: () => 'Rim depth, mm',
+    help: 'Radial depth of the rim section, from the tyre bead to the spoke bed. Rim depth + tyre width must stay below outer radius - hub flange radius.',
     target: 'case',
     control: 'number',
     min: 0,
@@ -61,6 +67,7 @@ export const WHEEL_FIELDS: readonly Field[] = [
   },
   {
     key: 'rimWidthMm',
+    path: 'wheel.rim_width_m',
     group: 'wheel',
     label: () => 'Rim width, mm',
     target: 'case',
@@ -75,8 +82,10 @@ export const WHEEL_FIELDS: readonly Field[] = [
   },
   {
     key: 'hubFlangeRadiusMm',
+    path: 'wheel.hub_flange_radius_m',
     group: 'wheel',
     label: () => 'Hub flange radius, mm',
+    help: 'Radius at which the spokes leave the hub: the inner edge of the spoked annulus.',
     target: 'case',
     control: 'number',
     min: 10,
@@ -89,6 +98,7 @@ export const WHEEL_FIELDS: readonly Field[] = [
   },
   {
     key: 'hubShellDiameterMm',
+    path: 'wheel.hub_shell_diameter_m',
     group: 'wheel',
     label: () => 'Hub shell diameter, mm',
     target: 'case',
@@ -103,6 +113,7 @@ export const WHEEL_FIELDS: readonly Field[] = [
   },
   {
     key: 'hubShellWidthMm',
+    path: 'wheel.hub_shell_width_m',
     group: 'wheel',
     label: () => 'Hub shell width (exposed), mm',
     target: 'case',
@@ -118,8 +129,10 @@ export const WHEEL_FIELDS: readonly Field[] = [
   // Spokes
   {
     key: 'spokeCount',
+    path: 'wheel.spokes.count',
+    integer: true,
     group: 'spokes',
-    label: () => 'Spoke count',
+    label: () => 'Spoke count, spokes',
     target: 'case',
     control: 'number',
     min: 0,
@@ -132,6 +145,7 @@ export const WHEEL_FIELDS: readonly Field[] = [
   },
   {
     key: 'spokeSection',
+    path: 'wheel.spokes.section',
     group: 'spokes',
     label: () => 'Section',
     target: 'case',
@@ -144,6 +158,7 @@ export const WHEEL_FIELDS: readonly Field[] = [
   },
   {
     key: 'spokeDiameterMm',
+    path: 'wheel.spokes.diameter_m',
     group: 'spokes',
     label: () => 'Round spoke diameter, mm',
     target: 'case',
@@ -159,6 +174,7 @@ export const WHEEL_FIELDS: readonly Field[] = [
   },
   {
     key: 'spokeWidthMm',
+    path: 'wheel.spokes.width_m',
     group: 'spokes',
     label: () => 'Blade width (chord), mm',
     target: 'case',
@@ -174,6 +190,7 @@ export const WHEEL_FIELDS: readonly Field[] = [
   },
   {
     key: 'spokeThicknessMm',
+    path: 'wheel.spokes.thickness_m',
     group: 'spokes',
     label: () => 'Blade thickness, mm',
     target: 'case',
@@ -190,8 +207,10 @@ export const WHEEL_FIELDS: readonly Field[] = [
   // Covering
   {
     key: 'coverFraction',
+    path: 'wheel.cover.fraction',
     group: 'cover',
-    label: () => 'Covered fraction of spoked area',
+    label: () => 'Covered fraction of spoked area, 0–1',
+    help: 'Share of the spoked annulus (hub flange to rim bed) closed by a cover, placed as chosen below. 0 is an open spoked wheel, 1 a full disc.',
     target: 'case',
     control: 'number',
     min: 0,
@@ -205,6 +224,7 @@ export const WHEEL_FIELDS: readonly Field[] = [
   },
   {
     key: 'coverPlacement',
+    path: 'wheel.cover.placement',
     group: 'cover',
     label: () => 'Placement',
     target: 'case',
@@ -234,6 +254,7 @@ export const WHEEL_FIELDS: readonly Field[] = [
   },
   {
     key: 'coverInnerMm',
+    path: 'wheel.cover.inner_radius_m',
     group: 'cover',
     label: () => 'Cover inner radius, mm',
     target: 'case',
@@ -249,6 +270,7 @@ export const WHEEL_FIELDS: readonly Field[] = [
   },
   {
     key: 'coverOuterMm',
+    path: 'wheel.cover.outer_radius_m',
     group: 'cover',
     label: () => 'Cover outer radius, mm',
     target: 'case',
@@ -264,6 +286,7 @@ export const WHEEL_FIELDS: readonly Field[] = [
   },
   {
     key: 'coverSides',
+    path: 'wheel.cover.sides',
     group: 'cover',
     label: () => 'Covered sides',
     target: 'case',

@@ -191,13 +191,18 @@ function buildField(field: Field, fields: FieldView[]): HTMLElement {
     });
     unit = el('span', { className: 'unit' });
   }
-  input.setAttribute('aria-describedby', error.id);
+  const note =
+    field.kind === 'number' && field.note
+      ? el('div', { className: 'field-note small', attrs: { id: `${id}-note` } })
+      : null;
+  input.setAttribute('aria-describedby', note ? `${error.id} ${note.id}` : error.id);
   input.dataset.road = field.key;
   const row = el('div', { className: 'field' }, [
     label,
     el('div', { className: 'input' }, [input, unit]),
+    note,
     error,
   ]);
-  fields.push({ field, row, input, unit, error });
+  fields.push({ field, row, input, unit, error, note });
   return row;
 }

@@ -77,6 +77,7 @@ export function renderYawPlot(plot: LinePlot, res: RideResponse, ctx: RoadContex
     title: `Yaw at the wheel (density of riding time) over the axial drag vs yaw at ${v}`,
     xLabel: `|Yaw| at the hub, deg — drag at ${v} (airspeed = ground speed), ρ ${fixed(c.rhoKgPerM3, 3)} kg/m³`,
     xLabelShort: `|Yaw|, deg — drag at ${v}`,
+    xIsYawDeg: true,
     yLabel: 'Axial drag, N',
     y2Label: 'Riding time, % per deg',
     xs,
@@ -104,6 +105,7 @@ export function renderSteering(
     title: 'Steering moment vs yaw (front wheel)',
     xLabel: `Yaw, deg — at ${fmt(s.airspeed_mps ?? Number.NaN, 3)} m/s; dotted: the design's sign changes and jumps`,
     xLabelShort: 'Yaw, deg',
+    xIsYawDeg: true,
     yLabel: 'Steering moment, N m',
     xs: rows.map((r) => r.yaw_deg),
     series: [

@@ -8,4 +8,6 @@ export interface RoadContext {
   designLabel: string;
   baselineLabel: string;
   baselinePinned: boolean;
+  /** Hub height above the road (the design's outer radius), m: where the ride takes the wind. */
+  hubHeightM?: number;
 }

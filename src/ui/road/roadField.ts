@@ -1,6 +1,7 @@
 /** The road form's fields: a number with its unit (which may follow the speed unit) or a choice. */
 import type { RoadState } from '../roadState';
 import type { SpeedUnit } from '../viewState';
+import type { RoadContext } from './roadContext';
 
 export interface NumberField {
   kind: 'number';
@@ -12,6 +13,8 @@ export interface NumberField {
   step: string;
   visible?(r: RoadState): boolean;
   help?: string;
+  /** A line under the field that follows the inputs (e.g. what a wind figure becomes at the hub). */
+  note?(r: RoadState, ctx: RoadContext | null): string;
 }
 
 export interface SelectField {
@@ -37,6 +40,7 @@ export interface FieldView {
   input: HTMLInputElement | HTMLSelectElement;
   unit: HTMLElement | null;
   error: HTMLElement;
+  note: HTMLElement | null;
 }
 
 /** A number shown without binary noise (10 significant digits). */

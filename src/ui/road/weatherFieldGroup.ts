@@ -1,5 +1,6 @@
 /** The road form's group for the air, the wind and the design gust. */
 import type { RoadState } from '../roadState';
+import { hubWindNote } from './hubWindNote';
 import { clean, type FieldGroup, num, same } from './roadField';
 
 export const WEATHER_FIELD_GROUPS: FieldGroup[] = [
@@ -66,28 +67,34 @@ export const WEATHER_FIELD_GROUPS: FieldGroup[] = [
           r.wind.kind = v as RoadState['wind']['kind'];
         },
       },
-      num(
-        'wind.speed_mps',
-        'Wind speed at the reference height',
-        'm/s',
-        (r) => r.wind.speed_mps,
-        (r, v) => {
-          r.wind.speed_mps = v;
-        },
-        '0.5',
-        (r) => r.wind.kind === 'fixed',
-      ),
-      num(
-        'wind.mean_mps',
-        'Mean wind speed',
-        'm/s',
-        (r) => r.wind.mean_mps,
-        (r, v) => {
-          r.wind.mean_mps = v;
-        },
-        '0.5',
-        (r) => r.wind.kind === 'rayleigh',
-      ),
+      {
+        ...num(
+          'wind.speed_mps',
+          'Wind speed at the station height',
+          'm/s',
+          (r) => r.wind.speed_mps,
+          (r, v) => {
+            r.wind.speed_mps = v;
+          },
+          '0.5',
+          (r) => r.wind.kind === 'fixed',
+        ),
+        note: hubWindNote((r) => r.wind.speed_mps, 'a wind of'),
+      },
+      {
+        ...num(
+          'wind.mean_mps',
+          'Mean wind speed at the station height',
+          'm/s',
+          (r) => r.wind.mean_mps,
+          (r, v) => {
+            r.wind.mean_mps = v;
+          },
+          '0.5',
+          (r) => r.wind.kind === 'rayleigh',
+        ),
+        note: hubWindNote((r) => r.wind.mean_mps, 'a mean of'),
+      },
       num(
         'wind.shape',
         'Weibull shape',
@@ -99,17 +106,20 @@ export const WEATHER_FIELD_GROUPS: FieldGroup[] = [
         '0.1',
         (r) => r.wind.kind === 'weibull',
       ),
-      num(
-        'wind.scale_mps',
-        'Weibull scale',
-        'm/s',
-        (r) => r.wind.scale_mps,
-        (r, v) => {
-          r.wind.scale_mps = v;
-        },
-        '0.5',
-        (r) => r.wind.kind === 'weibull',
-      ),
+      {
+        ...num(
+          'wind.scale_mps',
+          'Weibull scale at the station height',
+          'm/s',
+          (r) => r.wind.scale_mps,
+          (r, v) => {
+            r.wind.scale_mps = v;
+          },
+          '0.5',
+          (r) => r.wind.kind === 'weibull',
+        ),
+        note: hubWindNote((r) => r.wind.scale_mps, 'a scale of'),
+      },
       {
         kind: 'select',
         key: 'wind.direction',
@@ -136,7 +146,7 @@ export const WEATHER_FIELD_GROUPS: FieldGroup[] = [
       ),
       num(
         'wind.reference_height_m',
-        'Height of the wind figure',
+        'Station height of the wind figures',
         'm',
         (r) => r.wind.reference_height_m,
         (r, v) => {

@@ -82,6 +82,7 @@ export function renderYawPlots(plots: YawPlots, ctx: Present, r: PageResults): v
     xLabelShort,
     yLabel: comparedLabel(ctx, OUTPUTS.axial, mode),
     xs: yaws,
+    xIsYawDeg: true,
     series: dragSeries,
   });
   // Side force vs yaw.
@@ -108,6 +109,7 @@ export function renderYawPlots(plots: YawPlots, ctx: Present, r: PageResults): v
     xLabelShort,
     yLabel: `Side force, ${unitText('force', u)}`,
     xs: yaws,
+    xIsYawDeg: true,
     series: sideSeries,
   });
   // Centre of pressure and steering moment.
@@ -152,6 +154,7 @@ export function renderYawPlots(plots: YawPlots, ctx: Present, r: PageResults): v
     yLabel: 'Centre of pressure, mm',
     y2Label: 'Steering moment, N m',
     xs: yaws,
+    xIsYawDeg: true,
     series: handling,
   });
 }
