@@ -25,6 +25,7 @@ import { PageStore } from './pageStore';
 import { showTabPanel, wireTabs } from './pageTabs';
 import { RoadGlue } from './roadGlue';
 import type { RoadPlotName } from './roadPanel';
+import { StudyGlue, type StudyHost } from './studyGlue';
 import { View3dGlue } from './view3dGlue';
 import { type TabId, type ViewState, validateView } from './viewState';
 import { renderCoverPlot } from './views/coverPlot';
@@ -41,7 +42,7 @@ import { type HangReport, onWorkerHang } from './watchdog';
 type MainPlotName = 'dragYaw' | 'sideYaw' | 'dragCover' | 'handling';
 export type PlotName = MainPlotName | RoadPlotName | DataPlotName;
 
-export class App implements ComputeHost, ActionsHost {
+export class App implements ComputeHost, ActionsHost, StudyHost {
   state: AppState;
   private readonly computer: PageCompute;
   private controls!: Controls;
@@ -55,6 +56,8 @@ export class App implements ComputeHost, ActionsHost {
   /** The two panels (built, and their code loaded, when first opened), each with its own worker. */
   private readonly roadGlue = new RoadGlue(this);
   private readonly dataGlue = new DataGlue(this);
+  /** The design study tab (built when first opened), with its own worker. */
+  private readonly studyGlue = new StudyGlue(this);
   private lastCaseKey = '';
 
   private readonly store: PageStore;
@@ -137,6 +140,7 @@ export class App implements ComputeHost, ActionsHost {
       state: () => structuredClone(this.state),
       ride: () => structuredClone(this.roadGlue.lastResult()?.document ?? null),
       comparison: () => structuredClone(this.dataGlue.lastReport() ?? null),
+      study: () => structuredClone(this.studyGlue.lastDocument()),
     };
     if (import.meta.env.MODE === 'e2e') {
       inspect.crashWorker = () => crashPoolWorker();
@@ -157,6 +161,7 @@ export class App implements ComputeHost, ActionsHost {
     this.showTab(next.view.tab, false);
     this.view3dGlue.applyLayers(next);
     this.roadGlue.showInputs(next);
+    this.studyGlue.showInputs(next);
     this.dataGlue.showCalibrationBadge(next.calibration ?? null);
     const caseKey = JSON.stringify(next.case);
     if (caseKey !== this.lastCaseKey) {
@@ -284,7 +289,21 @@ export class App implements ComputeHost, ActionsHost {
     showTabPanel(tab, focus);
     if (tab === 'data') void this.dataGlue.panel().then((panel) => panel.shown());
     if (tab === 'road') void this.roadGlue.panel();
+    if (tab === 'study') void this.studyGlue.panel();
     if (tab === 'help') void this.validationPanel().then((panel) => panel.shown());
+  }
+
+  // The design study's host: the ride, and a chosen design made current through the map's pick path.
+  rideFor(s: AppState) {
+    return this.roadGlue.rideFor(s);
+  }
+
+  chooseDesign(fraction: number, depthM: number, what: string): void {
+    this.mapPick.choose(fraction, depthM, what);
+  }
+
+  undoChoice(): void {
+    this.mapPick.undo();
   }
 
   cancelCompute(): void {

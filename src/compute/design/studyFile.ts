@@ -250,7 +250,11 @@ export function validateStudy(given: unknown): Parsed<DesignStudy> {
         method: method as 'nelder-mead' | 'grid',
         gridPoints,
         gridCounts,
-        starts, maxEvaluations, xTolerance: tolerance, ...(lattice ? { lattice } : {}) },
+        starts,
+        maxEvaluations,
+        xTolerance: tolerance,
+        ...(lattice ? { lattice } : {}),
+      },
       front: { handling: handling as string, limitSteps },
     },
   };
