@@ -98,13 +98,13 @@ export class StudyGlue {
     const w = s.case.wheel;
     const r = ride.ok ? ride.value : null;
     const what = r
-      ? `${r.position} wheel, ${r.ride.power_W !== undefined ? `${fmt(r.ride.power_W, 0)} W` : `${fmt((r.ride.speed_mps ?? 0) * 3.6, 1)} km/h`}${r.course ? ` over a course of ${r.course.length} segments` : ` over ${fmt((r.ride.distance_m ?? 0) / 1000, 1)} km`}`
+      ? `${r.position} wheel, ${r.ride.power_W !== undefined ? `${fmt(r.ride.power_W)} W` : `${fmt((r.ride.speed_mps ?? 0) * 3.6, 3)} km/h`}${r.course ? ` over a course of ${r.course.length} segments` : ` over ${fmt((r.ride.distance_m ?? 0) / 1000, 3)} km`}`
       : 'no valid ride';
     v.setContext(
       `The ride is the one “On the road” defines (${what}); the design space's base is the current wheel, its cover fraction and rim depth varied. Savings are against the ride's baseline.`,
       w.cover.placement === 'explicit'
         ? 'Current design: an explicit cover list (a study sets a cover fraction at the rim instead).'
-        : `Current design: cover fraction ${fmt(w.cover.fraction, 3)}, rim depth ${fmt(w.rim_depth_m * 1000, 1)} mm.`,
+        : `Current design: cover fraction ${fmt(w.cover.fraction, 3)}, rim depth ${fmt(w.rim_depth_m * 1000, 3)} mm.`,
     );
     v.setSelected(this.currentIndex(s));
     if (!this.running && this.doc) {

@@ -75,8 +75,8 @@ export class StudyPanel {
     host.replaceChildren();
     const f = this.fields;
     this.method = el('select', { attrs: { id: 'study-method', name: 'method' } }, [
-      el('option', { text: 'every grid design (brute force)', attrs: { value: 'grid' } }),
-      el('option', { text: 'optimiser (Nelder-Mead from the grid)', attrs: { value: 'nelder-mead' } }),
+      el('option', { text: 'Grid: every design', attrs: { value: 'grid' } }),
+      el('option', { text: 'Optimiser (Nelder-Mead)', attrs: { value: 'nelder-mead' } }),
     ]);
     this.pickerSlot = el('div', { className: 'field study-objective' });
     this.picker = this.makePicker([], 'time_s');
@@ -87,7 +87,7 @@ export class StudyPanel {
       [
         this.formErrors,
         el('fieldset', {}, [
-          el('legend', { text: 'Design space (the current wheel, these two varied)' }),
+          el('legend', { text: 'Design space' }),
           el('div', { className: 'field' }, [
             el('label', { text: 'Search', attrs: { for: 'study-method' } }),
             el('div', { className: 'input' }, [this.method]),
