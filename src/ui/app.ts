@@ -32,6 +32,7 @@ import { renderCoverPlot } from './views/coverPlot';
 import { wireFigureActions } from './views/figureActions';
 import { renderHeadline } from './views/headline';
 import { MapPick } from './views/mapPick';
+import { MapRide } from './views/mapRide';
 import { renderMap } from './views/mapView';
 import { allPoints, type PageResults } from './views/pageResults';
 import { PageTables } from './views/pageTables';
@@ -52,6 +53,7 @@ export class App implements ComputeHost, ActionsHost, StudyHost {
   private readonly designMap: DesignMap;
   private tables: PageTables | null = null;
   private readonly mapPick = new MapPick(this);
+  private readonly mapRide = new MapRide(this);
   private readonly view3dGlue = new View3dGlue(this);
   /** The two panels (built, and their code loaded, when first opened), each with its own worker. */
   private readonly roadGlue = new RoadGlue(this);
@@ -121,6 +123,7 @@ export class App implements ComputeHost, ActionsHost, StudyHost {
     this.controls = new Controls(byId('controls'), this.state, (field, value) => this.onEdit(field, value));
     this.tables = new PageTables(byId('tables'), () => this.state.case.name);
     this.designMap.onPick((i, j) => this.mapPick.pick(i, j));
+    this.mapRide.mount();
     byId('undo-pick').addEventListener('click', () => this.mapPick.undo());
     this.wireFigureActions();
     wirePageActions(this);
@@ -241,6 +244,7 @@ export class App implements ComputeHost, ActionsHost, StudyHost {
     renderYawPlots(this.plots, ctx, r);
     renderCoverPlot(this.plots.dragCover, ctx, r);
     if (!opts.light) {
+      this.mapRide.update(this.state);
       renderMap(this.designMap, ctx, r);
       this.tables?.render(ctx, r);
     }

@@ -9,7 +9,7 @@
  */
 import { z } from 'zod';
 import { keyPathText, type Parsed } from '../../compute/caseFile';
-import { STUDY_DEFAULTS, STUDY_FORMAT, STUDY_VERSION } from '../../compute/design/index';
+import { OBJECTIVES, STUDY_DEFAULTS, STUDY_FORMAT, STUDY_VERSION } from '../../compute/design/index';
 import type { RideFile } from '../../compute/ride/index';
 
 /** The handling figures a limit may be put on (objective ids of kind 'handling'). */
@@ -32,6 +32,9 @@ export interface StudyInputs {
   /** Rim depth in millimetres (the page's unit; the study file takes metres). */
   rimDepthMm: StudyRange;
   lattice: { span: number; chord: number };
+  /** Colour and lines of the design map by a ride objective (absent or null: the view's own outputs). */
+  mapColour?: string | null;
+  mapContour?: string | null;
 }
 
 /** The defaults: a 6 x 4 grid over the whole cover range and 30-90 mm rims, time over the ride, no limits. */
@@ -66,6 +69,14 @@ const schema = z.strictObject({
     span: z.number().int().min(4).max(200),
     chord: z.number().int().min(2).max(200),
   }),
+  mapColour: z
+    .enum(OBJECTIVES.map((o) => o.id) as [string, ...string[]])
+    .nullable()
+    .optional(),
+  mapContour: z
+    .enum(OBJECTIVES.map((o) => o.id) as [string, ...string[]])
+    .nullable()
+    .optional(),
 });
 
 /** Check the shape of stored study inputs (the values' ranges are the study file's rules). Never throws. */
