@@ -19,11 +19,17 @@ export function renderMap(map: DesignMap, ctx: Present, r: PageResults): void {
   const rideColour = keys.colour.startsWith('ride:');
   const colourLabel = colour.label(ctx, keys.colour.startsWith('ride:') ? 'none' : mode);
   const contourLabel = contour.label(ctx, 'none');
+  const rideOnly = rideColour && keys.contour.startsWith('ride:');
   const title = [
     `Colour: ${colourLabel}.  Lines: ${contourLabel}.`,
-    `At ${fmt(yawDeg)}° yaw, ${conditionsText(ctx, c.conditions.airspeed_mps[0]!, r.rhoKgPerM3)}.`,
+    rideOnly
+      ? 'Each design on the ride “On the road” defines (its speeds, wind and gusts).'
+      : `${rideColour || keys.contour.startsWith('ride:') ? 'Model output a' : 'A'}t ${fmt(yawDeg)}° yaw, ${conditionsText(ctx, c.conditions.airspeed_mps[0]!, r.rhoKgPerM3)}.`,
   ];
-  setFigTitle('fig-map', `Design map: covered fraction × rim depth at ${fmt(yawDeg)}° yaw`);
+  setFigTitle(
+    'fig-map',
+    `Design map: covered fraction × rim depth${rideOnly ? ', ride objectives' : ` at ${fmt(yawDeg)}° yaw`}`,
+  );
   const explicit = c.wheel.cover.placement === 'explicit';
   const b = ctx.state.baseline;
   const cells = mapCells(r);
