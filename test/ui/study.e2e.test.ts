@@ -4,7 +4,8 @@
  * limit) is run from the page, and its optimum is held against an independent brute force over the same
  * grid in Node (evaluateDesign on each cell of the ride the page used, the feasibility order written
  * out). Clicking a row makes that design the current design; Undo brings the earlier one back; the
- * study's inputs survive a reload (the link), its result is recomputed. The page is built once (vite
+ * study's inputs survive a reload (the link), its result is recomputed; the design map can be coloured by
+ * a ride objective. The page is built once (vite
  * build --mode e2e into its own folder) and served by `vite preview`. The time from Run to the result is
  * printed, and only held to a generous bound.
  */
@@ -185,6 +186,19 @@ describe.skipIf(!haveBrowser && !requireBrowser)('design study tab in headless C
       w0.cover.fraction,
     );
     expect((await state(page)).case.wheel.rim_depth_m).toBe(w0.rim_depth_m);
+
+    await page.locator('#panel-study').screenshot({ path: join(OUT, 'ui-study-panel-1280.png') });
+
+    // The design map coloured by a ride objective, computed in the background over the map's cells.
+    await page.click('#tab-map');
+    await page.selectOption('#map-ride select >> nth=0', 'time_s');
+    await page.waitForFunction(
+      () => (document.getElementById('map-ride-status')?.textContent ?? '').startsWith('Each cell'),
+      null,
+      { timeout: 120_000 },
+    );
+    expect((await state(page)).study?.mapColour).toBe('time_s');
+    await page.locator('#fig-map').screenshot({ path: join(OUT, 'ui-study-map.png') });
 
     // The study's inputs travel in the link; its result is recomputed, not stored.
     const url = page.url();
