@@ -26,7 +26,7 @@ export function optimumLines(doc: StudyDocument): string[] {
   ];
   for (const l of doc.limits) {
     lines.push(
-      `${headerText(l.label, l.unit)}: ${cellText(o.objectives[l.id] ?? null)}${unc(l.id)}, limit ${cellText(l.max)} (${l.source})`,
+      `${headerText(l.label, l.unit)}: ${cellText(o.objectives[l.id] ?? null)}${unc(l.id)}, limit ${cellText(l.max)}: ${l.source}`,
     );
   }
   if (doc.limits.length === 0) lines.push('No handling limits were set.');

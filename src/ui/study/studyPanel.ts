@@ -257,7 +257,7 @@ export class StudyPanel {
       return;
     }
     const select = (i: number) => this.actions.select(i);
-    this.plot = tradeOffPlot(doc, select, 520, 240);
+    this.plot = tradeOffPlot(doc, select, 540, 300);
     this.table = designTable(doc, select);
     this.table.setSelected(selected);
     this.results.replaceChildren(

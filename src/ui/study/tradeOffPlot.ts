@@ -58,6 +58,8 @@ export function tradeOffPlot(
       width,
       height,
       cursor: { drag: { x: false, y: false } },
+      // The legend names the series; the numbers are in the designs table.
+      legend: { live: false },
       scales: { x: { time: false } },
       axes: [{ label: xLabel }, { label: yLabel, size: 60 }],
       series: [

@@ -112,7 +112,7 @@ describe('optimum summary lines', () => {
     expect(optimumLines(d as unknown as StudyDocument)).toEqual([
       'Optimum: cover fraction 0.3',
       'Time over the ride (s): 95 ± 1.2 (lattice); saved against the baseline: 5',
-      'Steering moment (N m): 1.5, limit 2.5 (the study file (no default))',
+      'Steering moment (N m): 1.5, limit 2.5: the study file (no default)',
       '4 designs evaluated on a 12 x 6 lattice',
     ]);
   });
