@@ -121,6 +121,7 @@ export function studyToRaw(inputs: StudyInputs, ride: RideFile, name?: string): 
  */
 export function studyMessageInput(message: string): string | null {
   const rules: [RegExp, string][] = [
+    [/^study\.((?:coverFraction|rimDepthMm|lattice|limits)\.\w+)/, '$1'],
     [/^variables\.cover_fraction\.(min|max)/, 'coverFraction.$1'],
     [/^variables\.rim_depth_m\.(min|max)/, 'rimDepthMm.$1'],
     [/^search\.grid_points\.cover_fraction/, 'coverFraction.points'],
