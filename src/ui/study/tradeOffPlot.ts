@@ -98,7 +98,7 @@ export function tradeOffPlot(
   });
   const caption = el('figcaption', {}, [
     el('span', { className: 'fig-title', text: 'Trade-off: saving against handling' }),
-    limit === null ? '' : ` (dashed: the limit ${limit} ${doc.front.handling.unit})`,
+    ` (grey: every design; red: the front; green: the optimum${limit === null ? '' : `; dashed: the limit ${limit} ${doc.front.handling.unit}`}; click a point to make it the current design)`,
   ]);
   const element = el('figure', { className: 'plot-card' }, [caption, holder, studyCautions(doc.cautions)]);
   return { element, dispose: () => plot.destroy() };
