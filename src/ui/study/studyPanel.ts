@@ -257,7 +257,9 @@ export class StudyPanel {
       return;
     }
     const select = (i: number) => this.actions.select(i);
-    this.plot = tradeOffPlot(doc, select, 540, 300);
+    // As wide as the column allows (one column on a narrow screen), at most 540 px.
+    const width = Math.max(260, Math.min(540, (this.results.clientWidth || 564) - 24));
+    this.plot = tradeOffPlot(doc, select, width, 300);
     this.table = designTable(doc, select);
     this.table.setSelected(selected);
     this.results.replaceChildren(
