@@ -45,7 +45,7 @@ async function studyStatus(page: Page, states: string[]): Promise<string> {
   await page.waitForFunction(
     (states) => states.includes(document.getElementById('study-status')?.dataset.state ?? ''),
     states,
-    { timeout: 120_000 },
+    { timeout: 240_000 },
   );
   return page.evaluate(() => document.getElementById('study-status')?.dataset.state ?? '');
 }
@@ -195,7 +195,7 @@ describe.skipIf(!haveBrowser && !requireBrowser)('design study tab in headless C
     await page.waitForFunction(
       () => (document.getElementById('map-ride-status')?.textContent ?? '').startsWith('Each cell'),
       null,
-      { timeout: 120_000 },
+      { timeout: 240_000 },
     );
     expect((await state(page)).study?.mapColour).toBe('time_s');
     await page.locator('#fig-map').screenshot({ path: join(OUT, 'ui-study-map.png') });
@@ -209,5 +209,5 @@ describe.skipIf(!haveBrowser && !requireBrowser)('design study tab in headless C
     expect(await studyDoc(again)).toBeNull();
     await context.close();
     expect(errors).toEqual([]);
-  }, 300_000);
+  }, 600_000);
 });
