@@ -30,6 +30,8 @@ Study file (JSON): {"format": "coversweep-study", "version": 1, "ride": {a ride 
   "search": {"grid_points": 5, "starts": 3, "max_evaluations": 200, "tolerance": 0.002,
              "lattice_span": 12, "lattice_chord": 6},
   "front": {"handling": "steering_gust_Nm", "limit_steps": 3}}
+  search.method "grid" evaluates the grid alone (brute force; grid_points may be per variable,
+  {"cover_fraction": 6, "rim_depth_m": 4}); "nelder-mead" (the default) searches on from it.
 An example: coversweep optimise --example (also public/examples/study.json).
 
 Options:

@@ -25,12 +25,14 @@ import { PageStore } from './pageStore';
 import { showTabPanel, wireTabs } from './pageTabs';
 import { RoadGlue } from './roadGlue';
 import type { RoadPlotName } from './roadPanel';
+import { StudyGlue, type StudyHost } from './studyGlue';
 import { View3dGlue } from './view3dGlue';
 import { type TabId, type ViewState, validateView } from './viewState';
 import { renderCoverPlot } from './views/coverPlot';
 import { wireFigureActions } from './views/figureActions';
 import { renderHeadline } from './views/headline';
 import { MapPick } from './views/mapPick';
+import { MapRide } from './views/mapRide';
 import { renderMap } from './views/mapView';
 import { allPoints, type PageResults } from './views/pageResults';
 import { PageTables } from './views/pageTables';
@@ -41,7 +43,7 @@ import { type HangReport, onWorkerHang } from './watchdog';
 type MainPlotName = 'dragYaw' | 'sideYaw' | 'dragCover' | 'handling';
 export type PlotName = MainPlotName | RoadPlotName | DataPlotName;
 
-export class App implements ComputeHost, ActionsHost {
+export class App implements ComputeHost, ActionsHost, StudyHost {
   state: AppState;
   private readonly computer: PageCompute;
   private controls!: Controls;
@@ -51,10 +53,13 @@ export class App implements ComputeHost, ActionsHost {
   private readonly designMap: DesignMap;
   private tables: PageTables | null = null;
   private readonly mapPick = new MapPick(this);
+  private readonly mapRide = new MapRide(this);
   private readonly view3dGlue = new View3dGlue(this);
   /** The two panels (built, and their code loaded, when first opened), each with its own worker. */
   private readonly roadGlue = new RoadGlue(this);
   private readonly dataGlue = new DataGlue(this);
+  /** The design study tab (built when first opened), with its own worker. */
+  private readonly studyGlue = new StudyGlue(this);
   private lastCaseKey = '';
 
   private readonly store: PageStore;
@@ -118,6 +123,7 @@ export class App implements ComputeHost, ActionsHost {
     this.controls = new Controls(byId('controls'), this.state, (field, value) => this.onEdit(field, value));
     this.tables = new PageTables(byId('tables'), () => this.state.case.name);
     this.designMap.onPick((i, j) => this.mapPick.pick(i, j));
+    this.mapRide.mount();
     byId('undo-pick').addEventListener('click', () => this.mapPick.undo());
     this.wireFigureActions();
     wirePageActions(this);
@@ -137,6 +143,7 @@ export class App implements ComputeHost, ActionsHost {
       state: () => structuredClone(this.state),
       ride: () => structuredClone(this.roadGlue.lastResult()?.document ?? null),
       comparison: () => structuredClone(this.dataGlue.lastReport() ?? null),
+      study: () => structuredClone(this.studyGlue.lastDocument()),
     };
     if (import.meta.env.MODE === 'e2e') {
       inspect.crashWorker = () => crashPoolWorker();
@@ -157,6 +164,7 @@ export class App implements ComputeHost, ActionsHost {
     this.showTab(next.view.tab, false);
     this.view3dGlue.applyLayers(next);
     this.roadGlue.showInputs(next);
+    this.studyGlue.showInputs(next);
     this.dataGlue.showCalibrationBadge(next.calibration ?? null);
     const caseKey = JSON.stringify(next.case);
     if (caseKey !== this.lastCaseKey) {
@@ -236,6 +244,7 @@ export class App implements ComputeHost, ActionsHost {
     renderYawPlots(this.plots, ctx, r);
     renderCoverPlot(this.plots.dragCover, ctx, r);
     if (!opts.light) {
+      this.mapRide.update(this.state);
       renderMap(this.designMap, ctx, r);
       this.tables?.render(ctx, r);
     }
@@ -284,7 +293,21 @@ export class App implements ComputeHost, ActionsHost {
     showTabPanel(tab, focus);
     if (tab === 'data') void this.dataGlue.panel().then((panel) => panel.shown());
     if (tab === 'road') void this.roadGlue.panel();
+    if (tab === 'study') void this.studyGlue.panel();
     if (tab === 'help') void this.validationPanel().then((panel) => panel.shown());
+  }
+
+  // The design study's host: the ride, and a chosen design made current through the map's pick path.
+  rideFor(s: AppState) {
+    return this.roadGlue.rideFor(s);
+  }
+
+  chooseDesign(fraction: number, depthM: number, what: string): void {
+    this.mapPick.choose(fraction, depthM, what);
+  }
+
+  undoChoice(): void {
+    this.mapPick.undo();
   }
 
   cancelCompute(): void {

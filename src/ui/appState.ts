@@ -19,6 +19,7 @@ import {
 import { CALIBRATABLE, type Calibratable } from '../compute/compare/index';
 import { base64UrlToText, textToBase64Url } from './base64url';
 import { type RoadState, validateRoadFor, validateRoadShape } from './roadState';
+import { type StudyInputs, validateStudyInputs } from './study/studyState';
 import { type ViewState, validateView } from './viewState';
 
 /** The design's model options were replaced by values fitted to a data file ("Use calibrated model"). */
@@ -39,6 +40,8 @@ export interface AppState {
   road?: RoadState;
   /** Present while a calibrated model is in use. */
   calibration?: CalibrationMark | null;
+  /** The design study's inputs (absent: the defaults); its result is recomputed, never stored. */
+  study?: StudyInputs;
 }
 
 const paramRecord = z.partialRecord(
@@ -92,7 +95,14 @@ export function nameErrors(parts: { case?: unknown; baseline?: unknown }, label:
 
 /** Validate the parts of a state object; `label` prefixes every message. */
 export function validateStateParts(
-  parts: { case: unknown; view: unknown; baseline: unknown; road?: unknown; calibration?: unknown },
+  parts: {
+    case: unknown;
+    view: unknown;
+    baseline: unknown;
+    road?: unknown;
+    calibration?: unknown;
+    study?: unknown;
+  },
   label: string,
 ): Parsed<AppState> {
   const errors: string[] = nameErrors(parts, label);
@@ -126,10 +136,17 @@ export function validateStateParts(
   } else if (parts.calibration === null) {
     calibration = null;
   }
+  let study: StudyInputs | undefined;
+  if (parts.study !== undefined) {
+    const st = validateStudyInputs(parts.study);
+    if (!st.ok) errors.push(...st.errors.map((e) => `${label}: ${e}`));
+    else study = st.value;
+  }
   if (errors.length > 0 || !c.ok || !v.ok) return { ok: false, errors };
   const value: AppState = { case: c.value, view: v.value, baseline };
   if (road !== undefined) value.road = road;
   if (calibration !== undefined) value.calibration = calibration;
+  if (study !== undefined) value.study = study;
   return { ok: true, value };
 }
 
@@ -138,6 +155,7 @@ function optionalParts(state: AppState): Record<string, unknown> {
   const out: Record<string, unknown> = {};
   if (state.road !== undefined) out.road = state.road;
   if (state.calibration) out.calibration = state.calibration;
+  if (state.study !== undefined) out.study = state.study;
   return out;
 }
 
@@ -204,6 +222,7 @@ export function hashToState(hash: string): Parsed<AppState> | null {
       baseline: raw.baseline,
       road: raw.road,
       calibration: raw.calibration,
+      study: raw.study,
     },
     'link',
   );
@@ -267,12 +286,13 @@ export function projectTextToState(text: string, label = 'project file'): Parsed
       baseline: raw.baseline,
       road: raw.road,
       calibration: raw.calibration,
+      study: raw.study,
     },
     label,
   );
 }
 
-const PROJECT_KEYS = ['format', 'version', 'case', 'view', 'baseline', 'road', 'calibration'];
+const PROJECT_KEYS = ['format', 'version', 'case', 'view', 'baseline', 'road', 'calibration', 'study'];
 
 // ---------------------------------------------------------------------------------------------
 // Autosave (same document as the project file)

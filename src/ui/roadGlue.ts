@@ -3,7 +3,8 @@
  * this wheel without covers), computed in its own background worker (JobWorker) when the road tab shows,
  * and the ride file saved for `coversweep ride`.
  */
-import type { CaseWheel } from '../compute/caseFile';
+import type { CaseWheel, Parsed } from '../compute/caseFile';
+import type { RideFile } from '../compute/ride/index';
 import { kmhToMps } from '../compute/units';
 import type { AppState } from './appState';
 import { fmt } from './displayUnits';
@@ -46,6 +47,11 @@ export class RoadGlue {
       return panel;
     });
     return this.roadLoading;
+  }
+
+  /** The ride the road inputs define for a state (as the panel computes it), validated. */
+  rideFor(s: AppState): Parsed<RideFile> {
+    return validateRoadFor(s.road ?? defaultRoad(), s.case, this.rideBaseline(s).wheel);
   }
 
   /** The ride's baseline wheel: the pinned baseline's, or this wheel without covers. */

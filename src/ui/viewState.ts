@@ -11,7 +11,7 @@ export type SpeedUnit = 'kmh' | 'mph';
 export type ForceUnit = 'N' | 'gf';
 export type AreaUnit = 'm2' | 'cm2';
 export type DifferenceMode = 'none' | 'force' | 'power' | 'percent';
-export const TAB_IDS = ['results', 'map', 'tables', 'road', 'data', 'help'] as const;
+export const TAB_IDS = ['results', 'map', 'tables', 'road', 'study', 'data', 'help'] as const;
 export type TabId = (typeof TAB_IDS)[number];
 
 export interface ViewState {

@@ -56,7 +56,10 @@ export function optimiseStudy(study: DesignStudy, onProgress?: StudyProgress): S
   const points: StudyPoint[] = [];
   const where = new Map<number, { combo: Combo; u: Float64Array }>();
   const cache = new Map<string, StudyPoint>();
-  const budget = search.maxEvaluations;
+  const gridSize =
+    combos.length * continuous.reduce((a, v) => a * (search.gridCounts[v.id] ?? search.gridPoints), 1);
+  // Progress counts against the budget (a grid study evaluates its grid and nothing else).
+  const budget = search.method === 'grid' ? gridSize : search.maxEvaluations;
   let runs = 0;
   let convergedRuns = 0;
 
@@ -110,9 +113,11 @@ export function optimiseStudy(study: DesignStudy, onProgress?: StudyProgress): S
   };
 
   // 1. The coarse grid of every discrete combination.
-  const g = search.gridPoints;
   const gridUs = cartesian(
-    continuous.map(() => Array.from({ length: g }, (_, k) => (g === 1 ? 0.5 : k / (g - 1)))),
+    continuous.map((v) => {
+      const g = search.gridCounts[v.id] ?? search.gridPoints;
+      return Array.from({ length: g }, (_, k) => (g === 1 ? 0.5 : k / (g - 1)));
+    }),
   );
   const gridOf = new Map<Combo, StudyPoint[]>();
   for (const combo of combos) {
@@ -121,12 +126,13 @@ export function optimiseStudy(study: DesignStudy, onProgress?: StudyProgress): S
       gridUs.map((u) => evaluateAt(combo, Float64Array.from(u as number[]))),
     );
   }
-  // 2. Nelder-Mead from the best grid points of each combination.
+  // 2. Nelder-Mead from the best grid points of each combination (none in a grid study).
+  const searching = search.method === 'nelder-mead';
   const left = Math.max(0, budget - points.length);
-  const sweepBudget = front.limitSteps > 0 ? Math.floor(left * SWEEP_SHARE) : 0;
+  const sweepBudget = searching && front.limitSteps > 0 ? Math.floor(left * SWEEP_SHARE) : 0;
   const perRun = Math.floor((left - sweepBudget) / Math.max(1, combos.length * search.starts));
   const better = orderBy(limits);
-  for (const combo of combos) {
+  for (const combo of searching ? combos : []) {
     const ranked = [...gridOf.get(combo)!].sort((a, b) =>
       better(a, b) ? -1 : better(b, a) ? 1 : a.index - b.index,
     );
@@ -146,7 +152,7 @@ export function optimiseStudy(study: DesignStudy, onProgress?: StudyProgress): S
   };
   const limitSweep: { limit: number; best: number }[] = [];
   const first = frontOf();
-  if (first.length >= 2 && front.limitSteps > 0) {
+  if (searching && first.length >= 2 && front.limitSteps > 0) {
     const lo = points[first[0]!]!.objectives[h]!;
     const hi = points[first[first.length - 1]!]!.objectives[h]!;
     const perStep = Math.floor(sweepBudget / front.limitSteps);

@@ -18,7 +18,7 @@ export const STUDY_NOTES: readonly string[] = [
   'every objective is minimised; savings are baseline - design (positive: the design is better)',
   "handling limits have no defaults: no published or trade figure for a largest steering moment, lean or side force was found to support one; the limits here are the study file's own",
   "the optimum is the best evaluated design by Deb's (2000) feasibility order: a design meeting every limit beats one that does not; among those meeting them, the smaller objective wins",
-  'search: the coarse grid of every discrete combination, then Nelder-Mead (Lagarias et al. 1998) from its best points with bounds by projection; deterministic',
+  'search: the coarse grid of every discrete combination, then (method "nelder-mead") Nelder-Mead (Lagarias et al. 1998) from its best points with bounds by projection, or (method "grid") nothing more: the grid is the whole study; deterministic',
   "uncertainty: each figure of the optimum on the evaluations' lattice and two coarser ones (counts / 1.5 and / 2.25), grid convergence index of Celik et al. (2008), or 3 x the largest change where the three do not converge monotonically (Roache 1994)",
   "the front: the designs meeting every other limit that no other design beats in both the objective and the handling figure, widened by re-optimising with the handling figure's limit swept across it",
 ];
@@ -105,7 +105,9 @@ export function studyDocument(o: StudyOutcome) {
       uncertainty_curve_solves: o.uncertaintyEvaluations,
       nelder_mead_runs: o.runs,
       converged_runs: o.convergedRuns,
+      method: s.search.method,
       grid_points: s.search.gridPoints,
+      grid_counts: s.search.gridCounts,
       starts: s.search.starts,
       max_evaluations: s.search.maxEvaluations,
       tolerance: s.search.xTolerance,

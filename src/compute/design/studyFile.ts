@@ -8,7 +8,9 @@
  *              cover_placement, spoke_count, spoke_section); the rest stay as the ride's design has them,
  *   objective  the ride objective to minimise (an id of OBJECTIVES),
  *   limits     largest allowed values of objectives, e.g. {"steering_gust_Nm": 1.5} (none by default),
- *   search     optional: grid_points, starts, max_evaluations, tolerance, lattice_span + lattice_chord,
+ *   search     optional: method ("nelder-mead", the default, or "grid": the grid alone, brute force),
+ *              grid_points (one count for every continuous variable, or {"variable id": count, ...}),
+ *              starts, max_evaluations, tolerance, lattice_span + lattice_chord,
  *   front      optional: handling (the figure the trade-off front is drawn against), limit_steps.
  * Parsing never throws: every problem is a message naming the key path, the value and the rule.
  */
@@ -139,20 +141,22 @@ export function validateStudy(given: unknown): Parsed<DesignStudy> {
     errors.push(`search: must be an object, got ${describeValue(raw.search)}`);
   unknownKeys(
     search,
-    ['grid_points', 'starts', 'max_evaluations', 'tolerance', 'lattice_span', 'lattice_chord'],
+    ['method', 'grid_points', 'starts', 'max_evaluations', 'tolerance', 'lattice_span', 'lattice_chord'],
     'search.',
     errors,
   );
   const L = STUDY_LIMITS;
-  const gridPoints = integerAt(
-    search,
-    'grid_points',
-    'search.',
-    1,
-    L.maxGridPoints,
-    STUDY_DEFAULTS.grid_points,
-    errors,
-  );
+  const method = search.method ?? 'nelder-mead';
+  if (method !== 'nelder-mead' && method !== 'grid')
+    errors.push(`search.method: must be "nelder-mead" or "grid", got ${describeValue(search.method)}`);
+  const perVariable = isObject(search.grid_points) ? search.grid_points : null;
+  const gridPoints = perVariable
+    ? STUDY_DEFAULTS.grid_points
+    : integerAt(search, 'grid_points', 'search.', 1, L.maxGridPoints, STUDY_DEFAULTS.grid_points, errors);
+  const gridCounts: Record<string, number> = {};
+  for (const id of Object.keys(perVariable ?? {})) {
+    gridCounts[id] = integerAt(perVariable!, id, 'search.grid_points.', 1, L.maxGridPoints, 1, errors);
+  }
   const starts = integerAt(search, 'starts', 'search.', 1, L.maxStarts, STUDY_DEFAULTS.starts, errors);
   const maxEvaluations = integerAt(
     search,
@@ -214,14 +218,21 @@ export function validateStudy(given: unknown): Parsed<DesignStudy> {
   const vars = r === null ? null : checkVariables(raw.variables, r.design, errors);
   if (vars !== null) {
     const combos = vars.discrete.reduce((a, v) => a * v.choices.length, 1);
-    const grid = combos * gridPoints ** vars.continuous.length;
+    for (const id of Object.keys(gridCounts)) {
+      if (!vars.continuous.some((v) => v.id === id))
+        errors.push(
+          `search.grid_points.${id}: not a freed continuous variable (freed: ${vars.continuous.map((v) => v.id).join(', ') || 'none'})`,
+        );
+    }
+    const counts = vars.continuous.map((v) => gridCounts[v.id] ?? gridPoints);
+    const grid = combos * counts.reduce((a, n) => a * n, 1);
     if (combos > L.maxCombinations) {
       errors.push(
         `variables: the discrete choices make ${combos} combinations, more than ${L.maxCombinations}; free fewer`,
       );
     } else if (grid > maxEvaluations) {
       errors.push(
-        `search.max_evaluations: must be at least the start grid's ${grid} designs (${combos} combinations x ${gridPoints}^${vars.continuous.length}), got ${maxEvaluations}`,
+        `search.max_evaluations: must be at least the start grid's ${grid} designs (${combos} combinations x ${counts.join(' x ') || 1}), got ${maxEvaluations}`,
       );
     }
   }
@@ -235,7 +246,15 @@ export function validateStudy(given: unknown): Parsed<DesignStudy> {
       discrete: vars.discrete,
       objective: objective as string,
       limits,
-      search: { gridPoints, starts, maxEvaluations, xTolerance: tolerance, ...(lattice ? { lattice } : {}) },
+      search: {
+        method: method as 'nelder-mead' | 'grid',
+        gridPoints,
+        gridCounts,
+        starts,
+        maxEvaluations,
+        xTolerance: tolerance,
+        ...(lattice ? { lattice } : {}),
+      },
       front: { handling: handling as string, limitSteps },
     },
   };

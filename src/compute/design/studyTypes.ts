@@ -15,8 +15,16 @@ export interface DiscreteChoices {
 }
 
 export interface StudySearch {
+  /**
+   * 'nelder-mead' (the default): the coarse grid, then Nelder-Mead from its best points and the front's
+   * limit sweep. 'grid': the grid alone (every design of it evaluated, nothing else), the optimum the best
+   * grid design by the feasibility order: a brute-force study at the grid's resolution.
+   */
+  method: 'nelder-mead' | 'grid';
   /** Points per continuous variable of the coarse start grid. */
   gridPoints: number;
+  /** Points of the grid per continuous variable where they differ from gridPoints (by variable id). */
+  gridCounts: Record<string, number>;
   /** Nelder-Mead runs per discrete combination, from the best grid points. */
   starts: number;
   /** Evaluations the whole search may use (the start grids, the runs and the limit sweep). */

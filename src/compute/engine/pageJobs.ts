@@ -5,7 +5,8 @@
  *    rider, wind or course change) and then the ride's evaluation;
  *  - a comparison with data: conversion, slips, residuals, the model band and, on request, the
  *    calibration, the convergence study and the input-uncertainty band (src/compute/compare).
- *  - the reference set of the Help tab (src/compute/validation), as `coversweep validate` runs it.
+ *  - the reference set of the Help tab (src/compute/validation), as `coversweep validate` runs it;
+ *  - a design study and the ride objectives over the design map (studyJobs.ts), as `coversweep optimise`.
  * Nothing here is new physics: each calls the same functions as the command line's `ride`, `compare`
  * and `validate`.
  */
@@ -22,6 +23,13 @@ import {
 import { runValidation } from '../validation/runValidation';
 import type { ValidationReport } from '../validation/types';
 import { BoundedCache } from './boundedCache';
+import {
+  type MapObjectivesRequest,
+  mapObjectivesJob,
+  type StudyJobProgress,
+  type StudyJobResult,
+  studyJob,
+} from './studyJobs';
 
 export interface RideRequest {
   /** A validated ride (validateRide's value). */
@@ -70,6 +78,10 @@ export interface PageJobsApi {
   ride(request: RideRequest): RideResponse;
   compare(request: CompareRequest): CompareResult;
   validate(): ValidationReport;
+  /** A design study (a study file's object) with progress (studyJobs.ts). */
+  study(raw: unknown, onProgress?: StudyJobProgress): StudyJobResult;
+  /** Ride objectives of the design map's cells (studyJobs.ts). */
+  mapObjectives(request: MapObjectivesRequest, onProgress?: StudyJobProgress): Record<string, number>[];
   ping(): string;
 }
 
@@ -77,5 +89,7 @@ export const pageJobsApi: PageJobsApi = {
   ride: (request) => solveRideJob(request),
   compare: (request) => compareJob(request),
   validate: () => runValidation(),
+  study: (raw, onProgress) => studyJob(raw, onProgress),
+  mapObjectives: (request, onProgress) => mapObjectivesJob(request, onProgress),
   ping: () => 'ready',
 };

@@ -3,7 +3,7 @@
  * saving against the baseline, each limit with the optimum's value and where the limit came from, and
  * the cautions. `onSelect` (a button) makes the optimum the current design.
  */
-import type { StudyDocument } from '../../compute/design/index';
+import { designVariable, type StudyDocument } from '../../compute/design/index';
 import { button, el } from '../dom';
 import { studyCautions } from './studyCautions';
 import { cellText, headerText } from './studyRows';
@@ -19,14 +19,14 @@ export function optimumLines(doc: StudyDocument): string[] {
     `${doc.feasible ? 'Optimum' : 'No design met every limit; the least violating'}: ${doc.variables
       .map(
         (v) =>
-          `${v.id} ${cellText(o.design[v.id] ?? null)}${v.unit === '1' || v.unit === '' ? '' : ` ${v.unit}`}`,
+          `${designVariable(v.id)?.label.toLowerCase() ?? v.id} ${cellText(o.design[v.id] ?? null)}${v.unit === '1' || v.unit === '' ? '' : ` ${v.unit}`}`,
       )
       .join(', ')}`,
     `${headerText(doc.objective.label, doc.objective.unit)}: ${cellText(o.objectives[doc.objective.id] ?? null)}${unc(doc.objective.id)}; saved against the baseline: ${cellText(o.saved_vs_baseline[doc.objective.id] ?? null)}`,
   ];
   for (const l of doc.limits) {
     lines.push(
-      `${headerText(l.label, l.unit)}: ${cellText(o.objectives[l.id] ?? null)}${unc(l.id)}, limit ${cellText(l.max)} (${l.source})`,
+      `${headerText(l.label, l.unit)}: ${cellText(o.objectives[l.id] ?? null)}${unc(l.id)}, limit ${cellText(l.max)}: ${l.source}`,
     );
   }
   if (doc.limits.length === 0) lines.push('No handling limits were set.');

@@ -58,6 +58,8 @@ export function tradeOffPlot(
       width,
       height,
       cursor: { drag: { x: false, y: false } },
+      // The legend names the series; the numbers are in the designs table.
+      legend: { live: false },
       scales: { x: { time: false } },
       axes: [{ label: xLabel }, { label: yLabel, size: 60 }],
       series: [
@@ -96,7 +98,7 @@ export function tradeOffPlot(
   });
   const caption = el('figcaption', {}, [
     el('span', { className: 'fig-title', text: 'Trade-off: saving against handling' }),
-    limit === null ? '' : ` (dashed: the limit ${limit} ${doc.front.handling.unit})`,
+    ` (grey: every design; red: the front; green: the optimum${limit === null ? '' : `; dashed: the limit ${limit} ${doc.front.handling.unit}`}; click a point to make it the current design)`,
   ]);
   const element = el('figure', { className: 'plot-card' }, [caption, holder, studyCautions(doc.cautions)]);
   return { element, dispose: () => plot.destroy() };

@@ -1,11 +1,11 @@
 /**
- * Picking a design on the map: a clicked cell's covering fraction and rim depth become the current
- * design; "Undo map pick" brings back the designs it replaced, most recent first.
+ * Picking a design on the map or in the design study: a clicked cell's (or a study design's) covering
+ * fraction and rim depth become the current design; "Undo" brings back the designs it replaced, most
+ * recent first.
  */
 import { type CaseFile, validateCase } from '../../compute/caseFile';
 import type { PageHost } from '../pageHost';
 import { axisOf, type PageResults } from './pageResults';
-import { byId } from './present';
 
 export interface MapPickHost extends PageHost {
   readonly results: PageResults | null;
@@ -24,6 +24,14 @@ export class MapPick {
     const fraction = axisOf(r.studies.map, 'coverFraction')[i];
     const depthM = axisOf(r.studies.map, 'rimDepth')[j];
     if (fraction === undefined || depthM === undefined) return;
+    this.choose(fraction, depthM, 'That map cell');
+  }
+
+  /**
+   * A design chosen by its covering fraction and rim depth (a map cell, a study's row or front point)
+   * becomes the current design; `what` names it in a message. Undo restores the design it replaced.
+   */
+  choose(fraction: number, depthM: number, what: string): void {
     const c = this.host.state.case;
     const placement = c.wheel.cover.placement === 'explicit' ? 'rim' : c.wheel.cover.placement;
     const next = validateCase({
@@ -31,23 +39,23 @@ export class MapPick {
       wheel: { ...c.wheel, rim_depth_m: depthM, cover: { ...c.wheel.cover, fraction, placement } },
     });
     if (!next.ok) {
-      this.host.messages.show(
-        'error',
-        'That map cell cannot be made the current design:',
-        next.errors,
-        'edit',
-      );
+      this.host.messages.show('error', `${what} cannot be made the current design:`, next.errors, 'edit');
       return;
     }
     this.picked.push(c);
-    byId('undo-pick').hidden = false;
+    this.showUndo();
     this.host.messages.clear('edit');
     this.host.apply({ ...this.host.state, case: next.value });
   }
 
+  /** Every "Undo" button of picking (the map's and the design study's) shows while there is one to undo. */
+  private showUndo(): void {
+    for (const b of document.querySelectorAll<HTMLElement>('.undo-pick')) b.hidden = this.picked.length === 0;
+  }
+
   undo(): void {
     const previous = this.picked.pop();
-    byId('undo-pick').hidden = this.picked.length === 0;
+    this.showUndo();
     if (previous) this.host.apply({ ...this.host.state, case: previous });
   }
 }

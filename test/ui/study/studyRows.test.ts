@@ -110,9 +110,9 @@ describe('optimum summary lines', () => {
     d.search = { evaluations: 4, lattice_span: 12, lattice_chord: 6 };
     (d.limits as Record<string, unknown>[])[0]!.source = 'the study file (no default)';
     expect(optimumLines(d as unknown as StudyDocument)).toEqual([
-      'Optimum: cover_fraction 0.3',
+      'Optimum: cover fraction 0.3',
       'Time over the ride (s): 95 ± 1.2 (lattice); saved against the baseline: 5',
-      'Steering moment (N m): 1.5, limit 2.5 (the study file (no default))',
+      'Steering moment (N m): 1.5, limit 2.5: the study file (no default)',
       '4 designs evaluated on a 12 x 6 lattice',
     ]);
   });
