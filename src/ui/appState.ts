@@ -18,6 +18,8 @@ import {
 } from '../compute/caseFile';
 import { CALIBRATABLE, type Calibratable } from '../compute/compare/index';
 import { base64UrlToText, textToBase64Url } from './base64url';
+import { pinnedBaselines } from './baselines/pinnedBaselines';
+import { validateBaselines } from './baselines/validateBaselines';
 import { type RoadState, validateRoadFor, validateRoadShape } from './roadState';
 import { type ViewState, validateView } from './viewState';
 
@@ -34,7 +36,11 @@ export interface CalibrationMark {
 export interface AppState {
   case: CaseFile;
   view: ViewState;
+  /** The reference baseline (differences, the map and the road panel use it), or none pinned. */
   baseline: CaseFile | null;
+  /** Every pinned baseline in pinning order, the reference among them (absent: just `baseline`);
+   * see baselines/pinnedBaselines. */
+  baselines?: CaseFile[];
   /** The "On the road" inputs (absent: the defaults). */
   road?: RoadState;
   /** Present while a calibrated model is in use. */
@@ -92,7 +98,14 @@ export function nameErrors(parts: { case?: unknown; baseline?: unknown }, label:
 
 /** Validate the parts of a state object; `label` prefixes every message. */
 export function validateStateParts(
-  parts: { case: unknown; view: unknown; baseline: unknown; road?: unknown; calibration?: unknown },
+  parts: {
+    case: unknown;
+    view: unknown;
+    baseline: unknown;
+    baselines?: unknown;
+    road?: unknown;
+    calibration?: unknown;
+  },
   label: string,
 ): Parsed<AppState> {
   const errors: string[] = nameErrors(parts, label);
@@ -106,6 +119,8 @@ export function validateStateParts(
     if (!b.ok) errors.push(...b.errors.map((e) => `${label}: baseline.${e}`));
     else baseline = b.value;
   }
+  const pinned = validateBaselines(parts.baselines, baseline, label);
+  if (!pinned.ok) errors.push(...pinned.errors);
   let road: RoadState | undefined;
   if (parts.road !== undefined) {
     const r = validateRoadShape(parts.road);
@@ -128,6 +143,7 @@ export function validateStateParts(
   }
   if (errors.length > 0 || !c.ok || !v.ok) return { ok: false, errors };
   const value: AppState = { case: c.value, view: v.value, baseline };
+  if (pinned.ok && pinned.value && pinned.value.length > 1) value.baselines = pinned.value;
   if (road !== undefined) value.road = road;
   if (calibration !== undefined) value.calibration = calibration;
   return { ok: true, value };
@@ -136,6 +152,8 @@ export function validateStateParts(
 /** The optional sections of a state, for writing (absent ones are left out). */
 function optionalParts(state: AppState): Record<string, unknown> {
   const out: Record<string, unknown> = {};
+  const pinned = pinnedBaselines(state);
+  if (pinned.length > 1) out.baselines = pinned;
   if (state.road !== undefined) out.road = state.road;
   if (state.calibration) out.calibration = state.calibration;
   return out;
@@ -202,6 +220,7 @@ export function hashToState(hash: string): Parsed<AppState> | null {
       case: raw.case,
       view: raw.view,
       baseline: raw.baseline,
+      baselines: raw.baselines,
       road: raw.road,
       calibration: raw.calibration,
     },
@@ -265,6 +284,7 @@ export function projectTextToState(text: string, label = 'project file'): Parsed
       case: raw.case,
       view: raw.view,
       baseline: raw.baseline,
+      baselines: raw.baselines,
       road: raw.road,
       calibration: raw.calibration,
     },
@@ -272,7 +292,7 @@ export function projectTextToState(text: string, label = 'project file'): Parsed
   );
 }
 
-const PROJECT_KEYS = ['format', 'version', 'case', 'view', 'baseline', 'road', 'calibration'];
+const PROJECT_KEYS = ['format', 'version', 'case', 'view', 'baseline', 'baselines', 'road', 'calibration'];
 
 // ---------------------------------------------------------------------------------------------
 // Autosave (same document as the project file)
