@@ -49,7 +49,7 @@ export function dataOverlay(
   if (differingKeys(src.caseFile, design, ['wheel', 'steering']).length > 0) {
     return {
       points: [],
-      note: `${name} is not drawn: it was compared with another wheel (${caseDifferences(src.caseFile, design, 3, ['wheel', 'steering'])}). It is drawn on the yaw plots when the wheel and steering match the current design key for key.`,
+      note: `${name} is not drawn: it was compared with another wheel (that wheel: ${caseDifferences(src.caseFile, design, 3, ['wheel', 'steering'])}). It is drawn on the yaw plots when the wheel and steering match the current design key for key.`,
     };
   }
   const lo = Math.min(...yawsDeg);
