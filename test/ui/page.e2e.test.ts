@@ -924,6 +924,12 @@ describe.skipIf(!haveBrowser && !requireBrowser)('web page in headless Chromium'
     const spec = (page: Page, name: PlotName) =>
       page.evaluate((n) => (window as unknown as Inspect).coversweep.plot(n), name) as Promise<PlotSpec>;
     const baselineSeries = (s: PlotSpec) => s.series.filter((x) => x.label.startsWith('baseline '));
+    /** Choose an option of a select control, opening its folder of controls first if it is closed. */
+    async function choose(page: Page, field: string, folder: string, option: string | { label: string }) {
+      const select = page.locator(`[data-field="${field}"] select`);
+      if (!(await select.isVisible())) await page.locator('.lil-gui .lil-title', { hasText: folder }).click();
+      await select.selectOption(option);
+    }
     /** Set the covering fraction and wait for its results. */
     async function coverTo(page: Page, fraction: number): Promise<void> {
       await setNumberControl(page, 'coverFraction', String(fraction));
@@ -962,7 +968,7 @@ describe.skipIf(!haveBrowser && !requireBrowser)('web page in headless Chromium'
 
       // The fully covered wheel as the reference: its axial drag crosses zero at yaw; percent stays finite.
       await page.locator('#baseline-list li[data-baseline="1"] input[type="radio"]').check();
-      await page.locator('[data-field="difference"] select').selectOption({ label: 'drag difference, %' });
+      await choose(page, 'difference', 'Plots and design map', { label: 'drag difference, %' });
       await page.waitForFunction(
         () => (window as unknown as Inspect).coversweep.state().view.difference === 'percent',
       );
@@ -1056,7 +1062,7 @@ describe.skipIf(!haveBrowser && !requireBrowser)('web page in headless Chromium'
         new RegExp(`Your data \\(demo-tunnel\\.csv\\): ${expected.length} of 30 points drawn as markers`),
       );
       // In grams-force the markers follow the plots' unit (scaled to the reference speed like the lines).
-      await page.locator('[data-field="forceUnit"] select').selectOption('gf');
+      await choose(page, 'forceUnit', 'Units', 'gf');
       await page.waitForFunction(
         () => (window as unknown as Inspect).coversweep.state().view.forceUnit === 'gf',
       );
