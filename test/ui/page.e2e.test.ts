@@ -927,7 +927,11 @@ describe.skipIf(!haveBrowser && !requireBrowser)('web page in headless Chromium'
     /** Choose an option of a select control, opening its folder of controls first if it is closed. */
     async function choose(page: Page, field: string, folder: string, option: string | { label: string }) {
       const select = page.locator(`[data-field="${field}"] select`);
-      if (!(await select.isVisible())) await page.locator('.lil-gui .lil-title', { hasText: folder }).click();
+      if (!(await select.isVisible()))
+        await page
+          .locator('#controls .lil-title')
+          .filter({ hasText: new RegExp(`^${folder}$`) })
+          .click();
       await select.selectOption(option);
     }
     /** Set the covering fraction and wait for its results. */
@@ -1062,7 +1066,7 @@ describe.skipIf(!haveBrowser && !requireBrowser)('web page in headless Chromium'
         new RegExp(`Your data \\(demo-tunnel\\.csv\\): ${expected.length} of 30 points drawn as markers`),
       );
       // In grams-force the markers follow the plots' unit (scaled to the reference speed like the lines).
-      await choose(page, 'forceUnit', 'Units', 'gf');
+      await choose(page, 'forceUnit', 'Units', { label: 'grams-force at the reference speed' });
       await page.waitForFunction(
         () => (window as unknown as Inspect).coversweep.state().view.forceUnit === 'gf',
       );
