@@ -54,7 +54,7 @@ export function renderBaselineList(
     radio.title = 'Take differences against this baseline';
     radio.addEventListener('change', () => apply(chooseReference(state, k)));
     const text = document.createElement('span');
-    text.textContent = baselineLabel(b, state.case, k, false);
+    text.textContent = baselineLabel(b, state.case, k, k === ref);
     label.append(radio, text);
     const remove = document.createElement('button');
     remove.type = 'button';
