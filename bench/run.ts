@@ -7,22 +7,14 @@ import { spawnSync } from 'node:child_process';
 import { mkdtempSync, symlinkSync } from 'node:fs';
 import { availableParallelism, cpus, tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
-import { buildWheelLattice } from '../src/model/lattice';
 import { luFactor } from '../src/model/numeric';
-import {
-  DEFAULT_MODEL_OPTIONS,
-  DEFAULT_STEERING,
-  DEMO_WHEEL,
-  type FlowConditions,
-  solveWheel,
-  type WheelInput,
-} from '../src/model/wheel';
+import { luKernel } from '../src/model/numeric/luKernel';
 import { buildNodeWorker } from './buildNodeWorker';
+import { lapackLu } from './lapackLu';
 import { benchWholeProcess } from './wholeProcess';
 
 const cores = availableParallelism();
 const machine = { cores, cpu: cpus()[0]?.model ?? 'unknown', node: process.version };
-const deg = Math.PI / 180;
 
 function print(name: string, figures: Record<string, unknown>): void {
   console.log(JSON.stringify({ bench: name, ...figures, machine }));
@@ -44,76 +36,78 @@ function timeIt(repeats: number, fn: () => number): { medianMs: number; checksum
   return { medianMs: median(times), checksum };
 }
 
-// --- Dense LU factorisation at n = 1000 -------------------------------------------------------
+// --- Dense LU factorisation: n = 1000, and the model's lattice sizes 648 and 288 ----------------------
+// Beside it, LAPACK's LU (dgetrf through python3 + scipy, one BLAS thread) on the same matrices in the
+// same run, when python3 has numpy and scipy; the ratio is printed, never asserted.
 {
-  const n = 1000;
-  const source = new Float64Array(n * n);
-  let seed = 12345;
-  for (let i = 0; i < source.length; i++) {
-    seed = (seed * 1103515245 + 12345) % 2147483648;
-    source[i] = seed / 2147483648 - 0.5;
+  const sizes = [
+    { n: 1000, repeats: 5 },
+    { n: 648, repeats: 15 },
+    { n: 288, repeats: 31 },
+  ];
+  const ours: Record<
+    string,
+    Record<'auto' | 'typescript', { medianMs: number; gflops: number; checksum: number }>
+  > = {};
+  for (const { n, repeats } of sizes) {
+    const source = new Float64Array(n * n);
+    let seed = 12345;
+    for (let i = 0; i < source.length; i++) {
+      seed = (seed * 1103515245 + 12345) % 2147483648;
+      source[i] = seed / 2147483648 - 0.5;
+    }
+    for (let i = 0; i < n; i++) source[i * n + i]! += n;
+    const work = new Float64Array(n * n);
+    const pivots = new Int32Array(n);
+    const figures = (path: 'auto' | 'typescript') => {
+      const r = timeIt(repeats, () => {
+        work.set(source);
+        luFactor(work, n, pivots, path);
+        return work[n * n - 1]!;
+      });
+      const gflops = ((2 / 3) * n ** 3) / (r.medianMs * 1e-3) / 1e9;
+      return { medianMs: +r.medianMs.toFixed(2), gflops: +gflops.toFixed(2), checksum: r.checksum };
+    };
+    ours[n] = { auto: figures('auto'), typescript: figures('typescript') };
   }
-  for (let i = 0; i < n; i++) source[i * n + i]! += n;
-  const work = new Float64Array(n * n);
-  const pivots = new Int32Array(n);
-  const r = timeIt(3, () => {
-    work.set(source);
-    luFactor(work, n, pivots);
-    return work[n * n - 1]!;
-  });
-  const gflops = ((2 / 3) * n ** 3) / (r.medianMs * 1e-3) / 1e9;
-  print('lu_factor', {
-    n,
-    medianMs: +r.medianMs.toFixed(1),
-    gflops: +gflops.toFixed(2),
-    checksum: r.checksum,
-  });
+  const lapack = lapackLu(sizes);
+  const path =
+    luKernel() === null ? 'typescript (no WebAssembly SIMD here)' : 'wasm-simd updates (panel in TypeScript)';
+  for (const { n } of sizes) {
+    const mine = ours[n]!.auto;
+    const plain = ours[n]!.typescript;
+    const ref = 'skipped' in lapack ? undefined : lapack.figures[n];
+    print('lu_factor', {
+      n,
+      path,
+      medianMs: mine.medianMs,
+      gflops: mine.gflops,
+      checksum: mine.checksum,
+      typescriptMedianMs: plain.medianMs,
+      typescriptGflops: plain.gflops,
+      typescriptChecksum: plain.checksum,
+      lapackGflops: ref?.gflops ?? null,
+      lapackMedianMs: ref?.medianMs ?? null,
+      ratioToLapack: ref ? +(mine.gflops / ref.gflops).toFixed(3) : null,
+      typescriptRatioToLapack: ref ? +(plain.gflops / ref.gflops).toFixed(3) : null,
+      lapack: 'skipped' in lapack ? `not measured: ${lapack.skipped}` : lapack.info,
+    });
+  }
 }
 
-// --- Lattice build and one design's yaw curve ------------------------------------------------------
-const yawCurve = (speed: number): FlowConditions[] =>
-  Array.from({ length: 41 }, (_, k) => ({
-    airspeedMps: speed,
-    yawRad: k * 0.5 * deg,
-    groundSpeedMps: speed,
-    rhoKgPerM3: 1.225,
-    muPaS: 1.7894e-5,
-  }));
-{
-  const options = DEFAULT_MODEL_OPTIONS;
-  const build = timeIt(3, () => {
-    const l = buildWheelLattice({
-      radiusM: DEMO_WHEEL.outerRadiusM,
-      spanCount: options.latticeSpanCount,
-      chordCount: options.latticeChordCount,
-      ground: options.ground,
-      openAnnuliM: [[0, 0.2]],
-    });
-    return l.influence[0]!;
+// --- Lattice build and one design's yaw curve (bench/yawCurve.ts, in its own process per tree) --------
+function yawCurveIn(root: string, label: string): void {
+  const child = spawnSync('npx', ['tsx', 'bench/yawCurve.ts', resolve(root)], {
+    encoding: 'utf8',
+    stdio: ['ignore', 'pipe', 'inherit'],
   });
-  print('lattice_build', {
-    panels: options.latticeSpanCount * options.latticeChordCount,
-    medianMs: +build.medianMs.toFixed(1),
-    checksum: build.checksum,
-  });
-  // Warm: lattice cached (same wheel size), a new cover each time, so the surface is solved afresh,
-  // as when a user changes the cover and the page recomputes.
-  let k = 0;
-  const input = (gci: boolean): WheelInput => ({
-    wheel: { ...DEMO_WHEEL, coverFraction: ((k++ % 20) + 0.5) / 21 },
-    options: { ...options, gridConvergence: gci },
-    steering: DEFAULT_STEERING,
-    points: yawCurve(13.41),
-  });
-  solveWheel(input(true));
-  const withGci = timeIt(9, () => solveWheel(input(true)).points[40]!.axialN);
-  const withoutGci = timeIt(9, () => solveWheel(input(false)).points[40]!.axialN);
-  print('yaw_curve_41', {
-    panels: options.latticeSpanCount * options.latticeChordCount,
-    warmMsWithConvergence: +withGci.medianMs.toFixed(1),
-    warmMsFinestOnly: +withoutGci.medianMs.toFixed(1),
-    checksum: withGci.checksum + withoutGci.checksum,
-  });
+  if (child.status !== 0) throw new Error(`yaw curve (${label}) failed`);
+  const { latticeBuild, yawCurve } = JSON.parse(child.stdout.trim().split('\n').pop()!) as Record<
+    string,
+    Record<string, unknown>
+  >;
+  print('lattice_build', { ...latticeBuild, tree: label });
+  print('yaw_curve_41', { ...yawCurve, tree: label });
 }
 
 // --- The standard sweep, each worker count in a fresh process so its peak memory is its own -------
@@ -145,6 +139,10 @@ function sweepIn(dir: string, workers: number, entry: string, label: string): vo
     baseline = { dir, entry: buildNodeWorker(dir) };
   }
   try {
+    for (let round = 0; round < (baseline ? 2 : 1); round++) {
+      yawCurveIn('.', 'current');
+      if (baseline) yawCurveIn(baseline.dir, `baseline ${baselineRef}`);
+    }
     for (const workers of [...new Set([1, cores])]) {
       sweepIn('.', workers, entry, 'current');
       if (baseline) sweepIn(baseline.dir, workers, baseline.entry, `baseline ${baselineRef}`);

@@ -1,10 +1,13 @@
 import { Worker } from 'node:worker_threads';
-import { wrap } from 'comlink';
+import { releaseProxy, wrap } from 'comlink';
 import nodeEndpoint from 'comlink/dist/esm/node-adapter.mjs';
 import type { SolverApi } from '../compute/engine/protocol';
 import type { SpawnWorker, WorkerHandle } from '../compute/engine/workerPool';
 
 const sourceEntry = new URL('../../workers/solver.node.ts', import.meta.url).href;
+
+/** How long an idle worker asked to end may take to end by itself before it is terminated. */
+const RETIRE_GRACE_MS = 2000;
 
 /**
  * A spawn function for solver worker threads. By default the TypeScript entry runs through tsx,
@@ -12,6 +15,17 @@ const sourceEntry = new URL('../../workers/solver.node.ts', import.meta.url).hre
  * always the current source. `compiledEntry` (a path to an .mjs built from workers/solver.node.ts: the
  * compiled command line's dist-cli/workers/solver.node.mjs, or the benchmark's own build) starts in
  * ~0.1 s.
+ *
+ * `terminate()` kills a busy worker at once. An idle one (no call in flight: a pool closing after its
+ * runs) is asked to end by itself instead: its API is released, its port loses its last listener and
+ * the thread leaves its event loop like a finished script (terminated after RETIRE_GRACE_MS if not).
+ * Node 20 can abort the whole process when `worker.terminate()` tears a thread down while V8 is still
+ * optimising its code on a background thread (a concurrent TurboFan job asks for the foreground task
+ * runner of an isolate the platform has already unregistered: "Assertion failed: (data.first) !=
+ * nullptr" in NodePlatform::ForIsolate, from IncrementalMarkingJob::ScheduleTask); a thread that has
+ * just finished a job is the likely case (measured: 1 abort in 60 such terminations, none in 120 self
+ * exits; see DEVELOPERS.md). Upstream, the isolate is now unregistered after it is disposed
+ * (v8/node#208, 2025).
  */
 export function nodeWorkerSpawner(compiledEntry?: string): SpawnWorker {
   return (): WorkerHandle => {
@@ -27,11 +41,41 @@ export function nodeWorkerSpawner(compiledEntry?: string): SpawnWorker {
       worker.once('error', (err) => reject(err instanceof Error ? err : new Error(String(err))));
       worker.once('exit', (code) => reject(new Error(`solver worker exited (code ${code})`)));
     });
+    const remote = wrap<SolverApi>(nodeEndpoint(worker));
+    let inFlight = 0;
+    const settle = () => {
+      inFlight--;
+    };
+    // Counts the calls in flight (solveJob, ping, viewField), so terminate() knows an idle worker.
+    const api = new Proxy(remote, {
+      get(target, prop, receiver) {
+        const member: unknown = Reflect.get(target, prop, receiver);
+        if (typeof prop !== 'string' || typeof member !== 'function') return member;
+        return (...args: unknown[]) => {
+          const pending = (member as (...a: unknown[]) => Promise<unknown>)(...args);
+          inFlight++;
+          pending.then(settle, settle);
+          return pending;
+        };
+      },
+    });
+    let ended = false;
+    worker.once('exit', () => {
+      ended = true;
+    });
     return {
-      api: wrap<SolverApi>(nodeEndpoint(worker)),
+      api,
       failed,
       terminate: () => {
-        void worker.terminate();
+        if (ended) return;
+        if (inFlight > 0) {
+          void worker.terminate();
+          return;
+        }
+        const timer = setTimeout(() => void worker.terminate(), RETIRE_GRACE_MS);
+        worker.once('exit', () => clearTimeout(timer));
+        ended = true;
+        remote[releaseProxy]();
       },
     };
   };

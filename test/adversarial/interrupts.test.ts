@@ -26,14 +26,15 @@ afterAll(() => {
 });
 
 // 72 cases (cover fraction x rim depth: the pool's jobs run in lattice order, not plan order) of 4
-// points each.
+// points each, on a lattice fine enough (44 x 18) that the sweep outlasts the longest seeded delay
+// (1.5 s) with the faster LU, so the signals land mid-sweep rather than after the output is written.
 const plan = {
   wheel: {
     rim_depth_m: [0.02, 0.03, 0.04, 0.05, 0.06, 0.07, 0.08, 0.09],
     cover: { fraction: [0, 0.125, 0.25, 0.375, 0.5, 0.625, 0.75, 0.875, 1] },
   },
   conditions: { airspeed_mps: [10, 14], yaw_deg: [0, 10] },
-  model: { lattice_span: 24, lattice_chord: 12, grid_convergence: false },
+  model: { lattice_span: 44, lattice_chord: 18, grid_convergence: false },
 };
 
 interface Interrupted {

@@ -43,4 +43,27 @@ describe('solver pool on Node worker threads', () => {
     expect(b.failedCount).toBe(0);
     expect(b.solutions).toEqual(a.solutions);
   }, 120_000);
+
+  it('ends an idle worker by itself (exit code 0) and a busy one at once (code 1)', async () => {
+    // Node 20 can abort the process when worker.terminate() tears down a thread that V8 is still
+    // optimising code for (see nodeWorker.ts): an idle worker leaves its event loop on its own instead.
+    const spawn = nodeWorkerSpawner();
+    const idle = spawn();
+    await idle.api.ping();
+    idle.terminate();
+    const idleExit = await idle.failed.catch((err: Error) => err.message);
+    expect(idleExit, 'idle worker: got this exit, expected code 0').toMatch(/code 0/);
+
+    const busy = spawn();
+    await busy.api.ping();
+    const [heavy] = smallSweep([0], [0.04]).map((c) => ({
+      ...c,
+      options: { ...c.options, latticeSpanCount: 48, latticeChordCount: 20 },
+    }));
+    const job = busy.api.solveJob({ jobId: 1, cases: [{ caseIndex: 0, input: heavy! }] });
+    job.catch(() => undefined);
+    busy.terminate();
+    const busyExit = await busy.failed.catch((err: Error) => err.message);
+    expect(busyExit, 'busy worker: got this exit, expected code 1 (terminated)').toMatch(/code 1/);
+  }, 60_000);
 });

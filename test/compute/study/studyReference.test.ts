@@ -4,7 +4,11 @@
  * before the runner existed (`coversweep sweep PLAN --workers 0 --out F`, and for the page the script
  * test/compute/study/makePageReference.ts of commit 1df3d46, which solved the old computePlan's inputs
  * one by one and stored them in the old per-role lists: family[k], cover[k] with point index
- * speed * yaws + yaw, map[depth * fractions + fraction]). Here the page's studies run through the
+ * speed * yaws + yaw, map[depth * fractions + fraction]). They were rewritten the same way at commit
+ * 2c6f200 (the code before the runner, with the spoke-cage swirl model change that landed beside it), so
+ * the comparison is with the old code on today's model; and again at commit 27980eb (that code with
+ * issue 13's re-blocked LU and influence build, whose last bits differ: at most 2.6e-13 of a column's
+ * largest value, in the grid-convergence columns). Here the page's studies run through the
  * study runner on a worker pool and are read back from the cubes by axis name.
  * CSV and JSON print each float64 in its shortest round-trip form, so equal text is equal bits; the
  * page's results are compared as Float64Array bytes. No tolerance: any change of a bit fails.

@@ -8,6 +8,8 @@ import {
 } from '../../../src/compute/validation/referenceValues';
 import { buildDiscLattice } from '../../../src/model/lattice/buildDiscLattice';
 import { DEFAULT_CHORD_COUNT, DEFAULT_SPAN_COUNT } from '../../../src/model/lattice/defaults';
+import { factorLattice } from '../../../src/model/lattice/factorLattice';
+import { solveFactored } from '../../../src/model/lattice/solveFactored';
 import { solveLattice } from '../../../src/model/lattice/solveLattice';
 import type { LatticeSolution } from '../../../src/model/lattice/types';
 
@@ -159,5 +161,25 @@ describe('solveLattice: porous panels', () => {
     expect(sol.porousDragSlope).toBeGreaterThan(0);
     expect(sol.normalSlope).toBeGreaterThan(0);
     expect(sol.normalSlope).toBeLessThan(solid(12, 6, true).normalSlope);
+  });
+
+  it('gives factorLattice + solveFactored bit for bit while reusing its buffer across sizes (tolerance 0)', () => {
+    // Invariant: the same operations on a reused buffer. A larger lattice first grows the buffer, so the
+    // smaller solve after it runs on a buffer longer than n * n with stale entries beyond.
+    const big = buildDiscLattice({ radiusM: R, spanCount: 16, chordCount: 8, ground: true });
+    solveLattice(big, new Float64Array(big.panelCount).fill(0.3));
+    const o = new Float64Array(n);
+    for (let i = 0; i < n; i++) o[i] = (i % 5) / 5;
+    const reused = solveLattice(lattice, o);
+    const fresh = solveFactored(factorLattice(lattice, o));
+    for (let i = 0; i < n; i++) {
+      expect(
+        Object.is(reused.gamma[i], fresh.gamma[i]),
+        `gamma[${i}] got=${reused.gamma[i]} expected=${fresh.gamma[i]} tol=0`,
+      ).toBe(true);
+    }
+    expect(reused.normalSlope, 'normalSlope').toBe(fresh.normalSlope);
+    expect(reused.porousDragSlope, 'porousDragSlope').toBe(fresh.porousDragSlope);
+    expect(reused.inducedDragFactor, 'inducedDragFactor').toBe(fresh.inducedDragFactor);
   });
 });

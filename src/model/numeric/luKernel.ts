@@ -1,0 +1,34 @@
+/**
+ * The WebAssembly SIMD trailing update and block-row solve of `luFactor` (source: luKernel.wat, bytes: luKernelWasm.ts),
+ * instantiated once per thread on first use. Returns null where WebAssembly or its SIMD is missing, or
+ * where the page's Content-Security-Policy forbids compiling it: `luFactor` then runs the plain
+ * TypeScript path, which gives the same bits.
+ */
+import { LU_KERNEL_WASM_BASE64 } from './luKernelWasm';
+
+export interface LuKernel {
+  memory: WebAssembly.Memory;
+  /** A22 -= L21 U12 on the matrix at byte 0 (see luKernel.wat for the rows, columns and p covered). */
+  update: (n: number, k0: number, kEnd: number, c1: number) => void;
+  /** Row i of the block-row solve: groups of four p from p0, columns j0.. in pairs (see luKernel.wat). */
+  updateRow: (n: number, i: number, p0: number, p1: number, j0: number, j1: number) => void;
+}
+
+let kernel: LuKernel | null | undefined;
+
+export function luKernel(): LuKernel | null {
+  if (kernel !== undefined) return kernel;
+  kernel = null;
+  try {
+    if (typeof WebAssembly !== 'object' || typeof atob !== 'function') return kernel;
+    const binary = atob(LU_KERNEL_WASM_BASE64);
+    const bytes = new Uint8Array(binary.length);
+    for (let i = 0; i < binary.length; i++) bytes[i] = binary.charCodeAt(i);
+    const instance = new WebAssembly.Instance(new WebAssembly.Module(bytes), {});
+    const { memory, update, updateRow } = instance.exports as unknown as LuKernel;
+    kernel = { memory, update, updateRow };
+  } catch {
+    kernel = null; // no SIMD, or compiling forbidden (CSP without 'wasm-unsafe-eval')
+  }
+  return kernel;
+}
