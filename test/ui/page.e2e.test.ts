@@ -978,7 +978,7 @@ describe.skipIf(!haveBrowser && !requireBrowser)('web page in headless Chromium'
       );
       expect(await settled(page)).toBe('done');
       const percent = await spec(page, 'dragYaw');
-      expect(percent.yLabel).toBe('Axial drag vs reference baseline, %');
+      expect(percent.yLabel).toBe('Axial drag vs reference, %');
       const values = percent.series.flatMap((x) => x.values);
       for (const v of values) expect(v === null || Number.isFinite(v), `percent value ${v}`).toBe(true);
       const reference = (
@@ -990,6 +990,8 @@ describe.skipIf(!haveBrowser && !requireBrowser)('web page in headless Chromium'
         return s.baseline?.wheel.cover.fraction;
       });
       expect(drag).toBe(1);
+      await page.locator('#fig-drag-yaw').scrollIntoViewIfNeeded();
+      await page.screenshot({ path: join(OUT, 'ui-baselines-percent-1280x800.png') });
       const notes = (await page.locator('#plot-notes').textContent()) ?? '';
       if (values.some((v) => v === null))
         expect(notes).toMatch(/Percent differences are left empty at \d+ yaw angles?, where/);

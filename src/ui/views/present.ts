@@ -77,9 +77,9 @@ export function compared(
 export function comparedLabel(ctx: Present, spec: OutputSpec, mode: DifferenceMode): string {
   const unit = unitText(spec.kind, ctx.units);
   const name = spec.short ?? spec.label;
-  if (mode === 'force') return `${name} − reference baseline, ${unit}`;
-  if (mode === 'power') return 'Power − reference baseline, W';
-  if (mode === 'percent') return `${name} vs reference baseline, %`;
+  if (mode === 'force') return `${name} − reference, ${unit}`;
+  if (mode === 'power') return 'Power − reference, W';
+  if (mode === 'percent') return `${name} vs reference, %`;
   return `${spec.label}, ${unit}`;
 }
 

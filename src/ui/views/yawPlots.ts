@@ -96,14 +96,15 @@ export function renderYawPlots(
   if (overlay) notes.push(overlay.note);
   const xs = mergedYaws(yaws, overlay);
   const legend = data ? dataLegend(ctx, data) : '';
-  /** Every pinned baseline's line: absolute, or (drag in a difference mode) against the reference. */
+  /** Every pinned baseline's line: absolute, or (drag in a difference mode, as the plot's title says)
+   * against the reference, which is then the zero line and left out. */
   const baselineLines = (spec: OutputSpec, m: DifferenceMode, pick?: (p: PointResult) => number) =>
     pinned.flatMap((b): PlotSeries[] => {
       if (m !== 'none' && b.reference) return [];
       const style = BASELINE_STYLES[b.index % BASELINE_STYLES.length]!;
       return [
         {
-          label: m === 'none' ? b.label : `${b.label} (against the reference)`,
+          label: b.label,
           stroke: style.stroke,
           dash: style.dash,
           width: 1.8,
