@@ -10,6 +10,7 @@ import { validateCase } from '../compute/caseFile';
 import type { WorkerPool } from '../compute/engine/workerPool';
 import { FLAG_MESSAGES } from '../compute/study/modelResults';
 import { type AppState, nameErrors } from './appState';
+import { pinCurrent } from './baselines/pinnedBaselines';
 import { Controls } from './controls';
 import { DataGlue } from './dataGlue';
 import type { DataPlotName } from './dataPanel';
@@ -28,6 +29,7 @@ import type { RoadPlotName } from './roadPanel';
 import { StudyGlue, type StudyHost } from './studyGlue';
 import { View3dGlue } from './view3dGlue';
 import { type TabId, type ViewState, validateView } from './viewState';
+import { renderBaselineList } from './views/baselineList';
 import { renderCoverPlot } from './views/coverPlot';
 import { wireFigureActions } from './views/figureActions';
 import { renderHeadline } from './views/headline';
@@ -161,6 +163,7 @@ export class App implements ComputeHost, ActionsHost, StudyHost {
     this.store.save(next, opts.replaceUrl);
     this.controls.refresh(next);
     byId('clear-baseline').hidden = next.baseline === null;
+    renderBaselineList(byId('baseline-list'), next, (s) => this.apply(s));
     this.showTab(next.view.tab, false);
     this.view3dGlue.applyLayers(next);
     this.roadGlue.showInputs(next);
@@ -241,14 +244,14 @@ export class App implements ComputeHost, ActionsHost, StudyHost {
     const ctx = presentOf(this.state, r);
     this.renderFlags(r);
     renderHeadline(byId('headline'), ctx, r);
-    renderYawPlots(this.plots, ctx, r);
+    const yawNotes = renderYawPlots(this.plots, ctx, r, this.dataGlue.overlaySource());
     renderCoverPlot(this.plots.dragCover, ctx, r);
     if (!opts.light) {
       this.mapRide.update(this.state);
       renderMap(this.designMap, ctx, r);
       this.tables?.render(ctx, r);
     }
-    const notes = [...r.studies.notes];
+    const notes = [...r.studies.notes, ...yawNotes];
     if (this.state.case.conditions.airspeed_mps.length > 1) {
       notes.push(
         `This design lists ${this.state.case.conditions.airspeed_mps.length} airspeeds; the plots show the first, the “current design” table lists all.`,
@@ -320,12 +323,8 @@ export class App implements ComputeHost, ActionsHost, StudyHost {
   }
 
   pinBaseline(): void {
-    this.apply({ ...this.state, baseline: structuredClone(this.state.case) });
-    this.messages.show(
-      'info',
-      'Baseline pinned: the current wheel. Change the design to compare against it.',
-      [],
-      'baseline',
-    );
+    const pinned = pinCurrent(this.state);
+    if (pinned.ok) this.apply(pinned.state);
+    this.messages.show(pinned.ok ? 'info' : 'warning', pinned.message, [], 'baseline');
   }
 }

@@ -18,6 +18,8 @@ import {
 } from '../compute/caseFile';
 import { CALIBRATABLE, type Calibratable } from '../compute/compare/index';
 import { base64UrlToText, textToBase64Url } from './base64url';
+import { pinnedBaselines } from './baselines/pinnedBaselines';
+import { validateBaselines } from './baselines/validateBaselines';
 import { type RoadState, validateRoadFor, validateRoadShape } from './roadState';
 import { type StudyInputs, validateStudyInputs } from './study/studyState';
 import { type ViewState, validateView } from './viewState';
@@ -35,7 +37,11 @@ export interface CalibrationMark {
 export interface AppState {
   case: CaseFile;
   view: ViewState;
+  /** The reference baseline (differences, the map and the road panel use it), or none pinned. */
   baseline: CaseFile | null;
+  /** Every pinned baseline in pinning order, the reference among them (absent: just `baseline`);
+   * see baselines/pinnedBaselines. */
+  baselines?: CaseFile[];
   /** The "On the road" inputs (absent: the defaults). */
   road?: RoadState;
   /** Present while a calibrated model is in use. */
@@ -99,6 +105,7 @@ export function validateStateParts(
     case: unknown;
     view: unknown;
     baseline: unknown;
+    baselines?: unknown;
     road?: unknown;
     calibration?: unknown;
     study?: unknown;
@@ -116,6 +123,8 @@ export function validateStateParts(
     if (!b.ok) errors.push(...b.errors.map((e) => `${label}: baseline.${e}`));
     else baseline = b.value;
   }
+  const pinned = validateBaselines(parts.baselines, baseline, label);
+  if (!pinned.ok) errors.push(...pinned.errors);
   let road: RoadState | undefined;
   if (parts.road !== undefined) {
     const r = validateRoadShape(parts.road);
@@ -144,6 +153,7 @@ export function validateStateParts(
   }
   if (errors.length > 0 || !c.ok || !v.ok) return { ok: false, errors };
   const value: AppState = { case: c.value, view: v.value, baseline };
+  if (pinned.ok && pinned.value && pinned.value.length > 1) value.baselines = pinned.value;
   if (road !== undefined) value.road = road;
   if (calibration !== undefined) value.calibration = calibration;
   if (study !== undefined) value.study = study;
@@ -153,6 +163,8 @@ export function validateStateParts(
 /** The optional sections of a state, for writing (absent ones are left out). */
 function optionalParts(state: AppState): Record<string, unknown> {
   const out: Record<string, unknown> = {};
+  const pinned = pinnedBaselines(state);
+  if (pinned.length > 1) out.baselines = pinned;
   if (state.road !== undefined) out.road = state.road;
   if (state.calibration) out.calibration = state.calibration;
   if (state.study !== undefined) out.study = state.study;
@@ -220,6 +232,7 @@ export function hashToState(hash: string): Parsed<AppState> | null {
       case: raw.case,
       view: raw.view,
       baseline: raw.baseline,
+      baselines: raw.baselines,
       road: raw.road,
       calibration: raw.calibration,
       study: raw.study,
@@ -284,6 +297,7 @@ export function projectTextToState(text: string, label = 'project file'): Parsed
       case: raw.case,
       view: raw.view,
       baseline: raw.baseline,
+      baselines: raw.baselines,
       road: raw.road,
       calibration: raw.calibration,
       study: raw.study,
@@ -292,7 +306,17 @@ export function projectTextToState(text: string, label = 'project file'): Parsed
   );
 }
 
-const PROJECT_KEYS = ['format', 'version', 'case', 'view', 'baseline', 'road', 'calibration', 'study'];
+const PROJECT_KEYS = [
+  'format',
+  'version',
+  'case',
+  'view',
+  'baseline',
+  'baselines',
+  'road',
+  'calibration',
+  'study',
+];
 
 // ---------------------------------------------------------------------------------------------
 // Autosave (same document as the project file)

@@ -10,17 +10,25 @@ import type { DataContext, DataPanel, DataPlotName, DataRunRequest } from './dat
 import { fmt } from './displayUnits';
 import { JobWorker } from './jobWorker';
 import type { PageHost } from './pageHost';
+import type { DataOverlaySource } from './views/dataOverlay';
 import { byId } from './views/present';
 
 export class DataGlue {
   private data: DataPanel | null = null;
   private dataLoading: Promise<DataPanel> | null = null;
   private readonly dataWorker = new JobWorker();
+  /** The last finished comparison, for the yaw plots' overlay (views/dataOverlay). */
+  private compared: DataOverlaySource | null = null;
 
   constructor(private readonly host: PageHost) {}
 
   plotSpec(name: DataPlotName) {
     return this.data?.plotSpec(name) ?? null;
+  }
+
+  /** The last comparison's design and converted points, or null before any. */
+  overlaySource(): DataOverlaySource | null {
+    return this.compared;
   }
 
   lastReport() {
@@ -127,7 +135,9 @@ export class DataGlue {
       panel.showErrors('The data could not be compared with the model:', out.value.errors);
       return;
     }
+    this.compared = { caseFile, converted: out.value.value.converted, label: req.label };
     await panel.showReport(out.value.value, req);
+    this.host.renderAll();
   }
 
   private useCalibrated(use: boolean, calibration: CalibrationResult | null, points: number): void {

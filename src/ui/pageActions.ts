@@ -30,7 +30,8 @@ export function wirePageActions(host: ActionsHost): void {
   });
   byId('pin-baseline').addEventListener('click', () => host.pinBaseline());
   byId('clear-baseline').addEventListener('click', () => {
-    host.apply({ ...host.state, baseline: null, view: { ...host.state.view, difference: 'none' } });
+    const { baselines: _all, ...rest } = host.state;
+    host.apply({ ...rest, baseline: null, view: { ...host.state.view, difference: 'none' } });
     host.messages.clear('baseline');
   });
   byId('copy-link').addEventListener('click', () => {

@@ -8,13 +8,15 @@
 import { caseAirDensity } from '../compute/caseFile';
 import type { SweepProgress } from '../compute/engine/runCases';
 import type { WorkerPool } from '../compute/engine/workerPool';
+import { baselineInput, baselineStudy } from '../compute/study/baselineStudy';
 import { type PageStudies, pageStudies } from '../compute/study/pageStudies';
 import { type RunStudiesOptions, runStudies, type StudiesOutcome } from '../compute/study/runStudies';
 import type { StudyPlan } from '../compute/study/studyPlan';
 import type { AppState } from './appState';
+import { pinnedBaselines, referenceIndex } from './baselines/pinnedBaselines';
 import { scriptStartMs, workersReadyMs } from './earlyPool';
 import type { Messages } from './messages';
-import type { PageResults } from './views/pageResults';
+import type { OtherBaseline, PageResults } from './views/pageResults';
 import { byId } from './views/present';
 
 type Phase = 'computing' | 'done' | 'error';
@@ -36,12 +38,37 @@ export function computeKey(s: AppState): string {
   return JSON.stringify([
     s.case,
     s.baseline,
+    s.baselines ?? null,
     v.familyFractions,
     v.coverPlotYawsDeg,
     v.coverPlotSpeedsMps,
     v.mapYawDeg,
     v.mapMaxRimDepthM,
   ]);
+}
+
+/** The yaw curves of the pinned baselines other than the reference (whose curve pageStudies plans). */
+function otherBaselineCurves(state: AppState): OtherBaseline[] {
+  const c = state.case;
+  const ref = referenceIndex(state);
+  return pinnedBaselines(state).flatMap((b, index) =>
+    index === ref
+      ? []
+      : [
+          {
+            index,
+            case: b,
+            plan: baselineStudy(
+              `yaw curves ${index + 1}`,
+              baselineInput(b, c),
+              c,
+              [c.conditions.airspeed_mps[0]!],
+              c.conditions.yaw_deg,
+            ),
+            curve: null,
+          },
+        ],
+  );
 }
 
 export class PageCompute {
@@ -133,8 +160,10 @@ export class PageCompute {
     this.abort = ac;
     const state = this.host.state;
     let studies: PageStudies;
+    let others: OtherBaseline[];
     try {
       studies = pageStudies(state.case, state.view, state.baseline);
+      others = otherBaselineCurves(state);
     } catch (error) {
       this.fail(`The design could not be prepared for the model: ${(error as Error).message}`);
       return;
@@ -146,6 +175,7 @@ export class PageCompute {
       cover: null,
       map: null,
       baseline: studies.baseline ? { curve: null, cover: null, map: null } : null,
+      otherBaselines: others,
       rhoKgPerM3: caseAirDensity(state.case),
     };
     const superseded = () => this.abort !== ac;
@@ -184,6 +214,8 @@ export class PageCompute {
     const b = studies.baseline;
     const plans: StudyPlan[] = [studies.family, studies.cover];
     if (b) plans.push(b.curve, b.cover, b.map);
+    const firstOther = plans.length;
+    plans.push(...others.map((o) => o.plan));
     if (studies.quick) plans.push(studies.current);
     const gciStudy = studies.quick ? plans.length - 1 : -1;
     const s2 = await this.run(plans, {
@@ -206,6 +238,9 @@ export class PageCompute {
       r.baseline.cover = rest[1]!;
       r.baseline.map = rest[2]!;
     }
+    others.forEach((o, k) => {
+      o.curve = s2.results[firstOther + k]!;
+    });
     const gci = gciStudy >= 0 ? s2.results[gciStudy]! : null;
     if (gci?.cube && gci.landed[0] === 1 && gci.errors[0] === null) r.current = gci.cube;
     this.host.renderAll();

@@ -8,4 +8,6 @@ export interface PageHost {
   apply(next: AppState, opts?: { replaceUrl: boolean }): void;
   /** Pin the current design as the baseline. */
   pinBaseline(): void;
+  /** Redraw the views from the results on screen (e.g. new imported data to overlay). */
+  renderAll(): void;
 }

@@ -18,6 +18,7 @@ import { formatNumber } from '../../src/compute/validation/bandText';
 import { runValidation } from '../../src/compute/validation/runValidation';
 import type { PlotName } from '../../src/ui/app';
 import type { AppState } from '../../src/ui/appState';
+import { textToBase64Url } from '../../src/ui/base64url';
 import type { PlotSeries, PlotSpec } from '../../src/ui/linePlot';
 
 /** The page's inspection object (src/ui/app.ts). */
@@ -1062,5 +1063,183 @@ describe.skipIf(!haveBrowser && !requireBrowser)('web page in headless Chromium'
     await page.screenshot({ path: join(OUT, 'ui-theme-1920x1080.png') });
     await context.close();
     expect(consoleErrors).toEqual([]);
+  });
+
+  // Several baselines, imported data on the yaw plots and the percent difference (issue 11 item 6).
+  describe('pinned baselines and imported data on the yaw plots', () => {
+    const spec = (page: Page, name: PlotName) =>
+      page.evaluate((n) => (window as unknown as Inspect).coversweep.plot(n), name) as Promise<PlotSpec>;
+    const baselineSeries = (s: PlotSpec) => s.series.filter((x) => x.label.startsWith('baseline '));
+    /** Choose an option of a select control, opening its folder of controls first if it is closed. */
+    async function choose(page: Page, field: string, folder: string, option: string | { label: string }) {
+      const select = page.locator(`[data-field="${field}"] select`);
+      if (!(await select.isVisible()))
+        await page
+          .locator('#controls .lil-title')
+          .filter({ hasText: new RegExp(`^${folder}$`) })
+          .click();
+      await select.selectOption(option);
+    }
+    /** Set the covering fraction and wait for its results. */
+    async function coverTo(page: Page, fraction: number): Promise<void> {
+      await setNumberControl(page, 'coverFraction', String(fraction));
+      await page.waitForFunction(
+        (f) => (window as unknown as Inspect).coversweep.state().case.wheel.cover.fraction === f,
+        fraction,
+      );
+      expect(await settled(page)).toBe('done');
+    }
+
+    it('draws two pinned baselines as two more series, keeps them over a reload, and the percent plot stays finite', async () => {
+      const context = await browser.newContext({ viewport: { width: 1280, height: 800 } });
+      const page = await open(context);
+      expect(await settled(page)).toBe('done');
+      await page.click('#pin-baseline');
+      await coverTo(page, 1);
+      await page.click('#pin-baseline');
+      await coverTo(page, 0.5);
+      expect(await page.locator('#baseline-list li').count()).toBe(2);
+      for (const name of ['dragYaw', 'sideYaw'] as const) {
+        const lines = baselineSeries(await spec(page, name));
+        expect(lines.map((x) => x.label)).toEqual([
+          'baseline 1 (reference): Demo wheel (invented) — cover 0 at the rim',
+          'baseline 2: Demo wheel (invented) — cover 1 at the rim',
+        ]);
+        for (const line of lines)
+          expect(line.values.every((v) => typeof v === 'number' && Number.isFinite(v))).toBe(true);
+        expect(lines[0]!.stroke).not.toBe(lines[1]!.stroke);
+      }
+      // Over a reload (the autosave and the link both carry the list).
+      await page.reload();
+      expect(await settled(page)).toBe('done');
+      const state = await page.evaluate(() => (window as unknown as Inspect).coversweep.state());
+      expect(state.baselines?.map((b) => b.wheel.cover.fraction)).toEqual([0, 1]);
+      expect(baselineSeries(await spec(page, 'dragYaw'))).toHaveLength(2);
+
+      // The fully covered wheel as the reference: its axial drag crosses zero at yaw; percent stays finite.
+      await page.locator('#baseline-list li[data-baseline="1"] input[type="radio"]').check();
+      await choose(page, 'difference', 'Plots and design map', { label: 'drag difference, %' });
+      await page.waitForFunction(
+        () => (window as unknown as Inspect).coversweep.state().view.difference === 'percent',
+      );
+      expect(await settled(page)).toBe('done');
+      const percent = await spec(page, 'dragYaw');
+      expect(percent.yLabel).toBe('Axial drag vs reference, %');
+      const values = percent.series.flatMap((x) => x.values);
+      for (const v of values) expect(v === null || Number.isFinite(v), `percent value ${v}`).toBe(true);
+      const reference = (
+        await page.evaluate(() => (window as unknown as Inspect).coversweep.plot('sideYaw'))
+      )?.series.find((x) => x.label.startsWith('baseline 2 (reference)'));
+      expect(reference).toBeDefined();
+      const drag = await page.evaluate(() => {
+        const s = (window as unknown as Inspect).coversweep.state();
+        return s.baseline?.wheel.cover.fraction;
+      });
+      expect(drag).toBe(1);
+      await page.locator('#fig-drag-yaw').scrollIntoViewIfNeeded();
+      await page.screenshot({ path: join(OUT, 'ui-baselines-percent-1280x800.png') });
+      const notes = (await page.locator('#plot-notes').textContent()) ?? '';
+      if (values.some((v) => v === null))
+        expect(notes).toMatch(/Percent differences are left empty at \d+ yaw angles?, where/);
+      for (const v of values) if (v !== null) expect(Math.abs(v), `percent ${v}`).toBeLessThan(5000);
+      // Removing one leaves the other (now the reference).
+      await page.locator('#baseline-list li[data-baseline="1"] .baseline-remove').click();
+      expect(await settled(page)).toBe('done');
+      expect(await page.locator('#baseline-list li').count()).toBe(1);
+      await context.close();
+    });
+
+    it('opens an old link with one baseline (no "baselines" key)', async () => {
+      const context = await browser.newContext({ viewport: { width: 1280, height: 800 } });
+      const first = await open(context);
+      expect(await settled(first)).toBe('done');
+      const now = await first.evaluate(() => (window as unknown as Inspect).coversweep.state());
+      const old = {
+        v: 1,
+        case: {
+          ...now.case,
+          wheel: { ...now.case.wheel, cover: { ...now.case.wheel.cover, fraction: 0.75 } },
+        },
+        view: now.view,
+        baseline: now.case,
+      };
+      const page = await open(context, `${base}#s=${textToBase64Url(JSON.stringify(old))}`);
+      expect(await settled(page)).toBe('done');
+      const state = await page.evaluate(() => (window as unknown as Inspect).coversweep.state());
+      expect(state.case.wheel.cover.fraction).toBe(0.75);
+      expect(state.baseline?.wheel.cover.fraction).toBe(now.case.wheel.cover.fraction);
+      expect(baselineSeries(await spec(page, 'dragYaw')).map((x) => x.label)).toEqual([
+        'baseline 1 (reference): Demo wheel (invented) — cover 0 at the rim',
+      ]);
+      expect(await page.locator('#baseline-list li').count()).toBe(1);
+      await context.close();
+    });
+
+    it('draws the demo data as markers on the matching demo case, in the plots’ units, and says when it does not match', async () => {
+      const context = await browser.newContext({ viewport: { width: 1280, height: 800 } });
+      const page = await open(context);
+      expect(await settled(page)).toBe('done');
+      await page.click('#tab-data');
+      await page.click('#data-demo');
+      expect(await panelState(page, 'panel-data', ['mapping', 'error'])).toBe('mapping');
+      await page.click('#data-apply');
+      expect(await panelState(page, 'panel-data', ['done', 'error'])).toBe('done');
+      const report = (await page.evaluate(() => (window as unknown as Inspect).coversweep.comparison()))!;
+      // Two baselines of the same wheel (no cover, full cover), then back to the demo design.
+      await coverTo(page, 0);
+      await page.click('#pin-baseline');
+      await coverTo(page, 1);
+      await page.click('#pin-baseline');
+      await coverTo(page, 0.5);
+      await page.click('#tab-results');
+      const c = await page.evaluate(() => (window as unknown as Inspect).coversweep.state().case);
+      const v0 = c.conditions.airspeed_mps[0]!;
+      // The data points at the plots' airspeed (30 km/h) and inside their yaw range.
+      const expected = report.converted.filter(
+        (r) => Math.abs(r.airspeed_mps - v0) <= 0.01 * v0 && r.yaw_deg >= 0 && r.yaw_deg <= 20,
+      );
+      expect(expected.length).toBeGreaterThan(3);
+      const drag = await spec(page, 'dragYaw');
+      const markers = drag.series.filter((x) => x.pointsOnly);
+      expect(markers[0]!.label).toBe('your data');
+      for (const r of expected) {
+        const k = drag.xs.indexOf(r.yaw_deg);
+        const got = markers.map((m) => m.values[k]).filter((x) => x !== null);
+        expect(got, `data at yaw ${r.yaw_deg}`).toContain(r.axial_N);
+      }
+      const side = await spec(page, 'sideYaw');
+      expect(side.series.filter((x) => x.pointsOnly)[0]!.label).toBe('your data');
+      expect(baselineSeries(drag)).toHaveLength(2);
+      expect(await page.locator('#plot-notes').textContent()).toMatch(
+        new RegExp(`Your data \\(demo-tunnel\\.csv\\): ${expected.length} of 30 points drawn as markers`),
+      );
+      // In grams-force the markers follow the plots' unit (scaled to the reference speed like the lines).
+      await choose(page, 'forceUnit', 'Units', { label: 'grams-force at the reference speed' });
+      await page.waitForFunction(
+        () => (window as unknown as Inspect).coversweep.state().view.forceUnit === 'gf',
+      );
+      const grams = (await spec(page, 'dragYaw')).series.find((x) => x.pointsOnly)!;
+      const r0 = expected.find((r) => r.yaw_deg === 0)!;
+      const ref = c.conditions.reference_speed_kmh / 3.6;
+      const g = (r0.axial_N! * (ref * ref)) / (r0.airspeed_mps * r0.airspeed_mps) / 9.80665e-3;
+      const k0 = (await spec(page, 'dragYaw')).xs.indexOf(0);
+      expect(
+        Math.abs(grams.values[k0]! - g),
+        `grams at yaw 0: got ${grams.values[k0]}, expected ${g} +- 1e-6`,
+      ).toBeLessThan(1e-6);
+      await page.locator('#fig-drag-yaw').scrollIntoViewIfNeeded();
+      await page.screenshot({ path: join(OUT, 'ui-baselines-data-1280x800.png') });
+      // Another rim: the data no longer matches; the note says why and nothing is drawn.
+      await setNumberControl(page, 'rimDepthMm', '60');
+      await page.waitForFunction(
+        () => (window as unknown as Inspect).coversweep.state().case.wheel.rim_depth_m === 0.06,
+      );
+      expect(await settled(page)).toBe('done');
+      expect((await spec(page, 'dragYaw')).series.some((x) => x.pointsOnly)).toBe(false);
+      expect(await page.locator('#plot-notes').textContent()).toMatch(
+        /Your data \(demo-tunnel\.csv\) is not drawn: it was compared with another wheel \(that wheel: rim 50 mm\)/,
+      );
+      await context.close();
+    });
   });
 });

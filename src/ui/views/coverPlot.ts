@@ -34,7 +34,7 @@ export function renderCoverPlot(plot: LinePlot, ctx: Present, r: PageResults): v
   const title =
     mode === 'none'
       ? 'Axial drag (along travel) vs covered fraction'
-      : 'Axial drag vs covered fraction, as a difference from the baseline';
+      : 'Axial drag vs covered fraction, as a difference from the reference baseline';
   setFigTitle('fig-drag-cover', title);
   const placement = c.wheel.cover.placement === 'explicit' ? 'rim' : c.wheel.cover.placement;
   plot.render({

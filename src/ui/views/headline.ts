@@ -73,7 +73,7 @@ export function renderHeadline(box: HTMLElement, ctx: Present, r: PageResults): 
       if (Number.isFinite(pct)) parts.push(`${pct >= 0 ? '+' : ''}${fixed(pct, 1)} %`);
       if (c.spec.key === 'axial')
         parts.push(`${p.powerW - b.powerW >= 0 ? '+' : ''}${fixed(p.powerW - b.powerW, 2)} W`);
-      delta.textContent = `vs baseline: ${parts.join(', ')}`;
+      delta.textContent = `vs ${ctx.state.baselines ? 'reference ' : ''}baseline: ${parts.join(', ')}`;
       card.append(delta);
     }
     frag.append(card);

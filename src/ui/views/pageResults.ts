@@ -3,12 +3,21 @@
  * each a named-axis cube. Views read points by axis name through the helpers here; a case that has not
  * landed yet, or failed, reads as null.
  */
+import type { CaseFile } from '../../compute/caseFile';
 import { axisNumbers } from '../../compute/study/axes';
 import type { PointResult } from '../../compute/study/modelResults';
 import type { PageStudies } from '../../compute/study/pageStudies';
 import type { AxisPick, ResultCube } from '../../compute/study/resultCube';
 import { caseCell, type StudyResult } from '../../compute/study/runStudies';
 import type { StudyPlan } from '../../compute/study/studyPlan';
+
+export interface OtherBaseline {
+  /** Place in pinnedBaselines (its colour and number). */
+  index: number;
+  case: CaseFile;
+  plan: StudyPlan;
+  curve: StudyResult | null;
+}
 
 export interface PageResults {
   studies: PageStudies;
@@ -18,6 +27,8 @@ export interface PageResults {
   cover: StudyResult | null;
   map: StudyResult | null;
   baseline: { curve: StudyResult | null; cover: StudyResult | null; map: StudyResult | null } | null;
+  /** The other pinned baselines' yaw curves (not the reference), by their place among the pinned. */
+  otherBaselines?: OtherBaseline[];
   rhoKgPerM3: number;
 }
 
