@@ -25,6 +25,8 @@ export class View3dGlue {
   private worker: BrowserWorkerHandle | null = null;
   private request = 0;
   private started = false;
+  /** The yaw of the field last asked for (null before the first draw). */
+  private drawnYawDeg: number | null = null;
 
   constructor(private readonly host: View3dHost) {}
 
@@ -38,8 +40,10 @@ export class View3dGlue {
     }
   }
 
-  /** Follow the state's layer switches. */
+  /** Follow the state's layer switches and its view yaw (a yaw change redraws the field now). */
   applyLayers(next: AppState): void {
+    if (this.view && this.drawnYawDeg !== null && next.view.view3dYawDeg !== this.drawnYawDeg)
+      void this.update();
     if (this.view && Object.keys(next.view.layers3d).length > 0) {
       if (
         JSON.stringify(this.view.layers()) !==
@@ -84,6 +88,7 @@ export class View3dGlue {
   async update(): Promise<void> {
     if (!this.view || !this.host.results?.current) return;
     const yawDeg = this.host.state.view.view3dYawDeg;
+    this.drawnYawDeg = yawDeg;
     const request = viewFieldRequest(this.host.state.case, yawDeg);
     const p0 = request.input.points[0]!;
     const ticket = ++this.request;
