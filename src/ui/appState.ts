@@ -213,7 +213,12 @@ export function hashToState(hash: string): Parsed<AppState> | null {
   try {
     text = base64UrlToText(encoded);
   } catch (error) {
-    return { ok: false, errors: [`link: cannot decode the state: ${(error as Error).message}`] };
+    return {
+      ok: false,
+      errors: [
+        `link: the design data after "#s=" must be base64url-encoded UTF-8 JSON written by this page; ${(error as Error).message}. Copy the whole link again from where it was made.`,
+      ],
+    };
   }
   const json = parseJsonText(text, 'link');
   if (!json.ok) return json;

@@ -18,8 +18,18 @@ export function base64UrlToText(encoded: string): string {
   }
   if (encoded.length % 4 === 1) throw new Error('the link data has an impossible length (truncated?)');
   const padded = encoded.replace(/-/g, '+').replace(/_/g, '/') + '='.repeat((4 - (encoded.length % 4)) % 4);
-  const binary = atob(padded);
+  let binary: string;
+  try {
+    binary = atob(padded);
+  } catch {
+    // The browser's own wording (an InvalidCharacterError) is replaced by the rule broken.
+    throw new Error('the link data is not valid base64url (damaged or cut short?)');
+  }
   const bytes = new Uint8Array(binary.length);
   for (let i = 0; i < binary.length; i++) bytes[i] = binary.charCodeAt(i);
-  return new TextDecoder('utf-8', { fatal: true }).decode(bytes);
+  try {
+    return new TextDecoder('utf-8', { fatal: true }).decode(bytes);
+  } catch {
+    throw new Error('the link data does not decode to UTF-8 text (damaged or cut short?)');
+  }
 }

@@ -64,7 +64,15 @@ describe('URL fragment', () => {
       'link: v: unsupported link version 2; this page reads version 1',
     );
     const junk = hashToState('#s=e30K{');
-    expect(junk && !junk.ok && junk.errors[0]).toMatch(/^link: cannot decode the state/);
+    expect(junk && !junk.ok && junk.errors[0]).toMatch(
+      /^link: the design data after "#s=" must be base64url-encoded UTF-8 JSON .*not base64url/,
+    );
+    // Bytes that are no UTF-8 text (0xff 0xef 0xbe): the rule is named, not the browser's decoder wording.
+    const notText = hashToState('#s=__--');
+    expect(notText && !notText.ok && notText.errors[0]).toMatch(
+      /^link: the design data .* does not decode to UTF-8 text \(damaged or cut short\?\)/,
+    );
+    expect(notText && !notText.ok && notText.errors[0]).not.toMatch(/encoded data was not valid/);
     const empty = hashToState(`#s=${textToBase64Url('{"v":1,"case":{}}')}`);
     expect(empty && !empty.ok && empty.errors[0]).toMatch(/^link: case\.conditions: is required/);
   });
