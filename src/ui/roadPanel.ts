@@ -10,7 +10,13 @@ import type { RideResponse } from '../compute/engine/pageJobs';
 import type { RideDocument } from '../compute/ride/index';
 import { button, el } from './dom';
 import type { PlotSpec } from './linePlot';
-import { buildRoadPanelDom, type RoadPanelDom, type RoadPlotName } from './road/buildRoadPanelDom';
+import {
+  buildRoadPanelDom,
+  ROAD_FIELD_GROUPS,
+  type RoadPanelDom,
+  type RoadPlotName,
+} from './road/buildRoadPanelDom';
+import { labelRideMessage } from './road/labelRideMessage';
 import { renderRoadCards } from './road/renderRoadCards';
 import { renderSegmentPlot, renderSteering, renderYawPlot } from './road/renderRoadPlots';
 import { renderBreakdown, renderSegmentTable } from './road/renderRoadTables';
@@ -169,13 +175,14 @@ export class RoadPanel {
     this.dom.courseError.textContent = '';
     const general: string[] = [];
     const course: string[] = [];
-    for (const m of messages) {
-      const key = rideMessageField(m, candidate);
+    for (const message of messages) {
+      const key = rideMessageField(message, candidate);
+      const m = labelRideMessage(message, candidate, ROAD_FIELD_GROUPS);
       const f = key === null ? undefined : this.dom.fields.find((x) => x.field.key === key);
       if (f && !f.row.hidden) {
         f.error.textContent = f.error.textContent ? `${f.error.textContent} ${m}` : m;
         f.input.setAttribute('aria-invalid', 'true');
-      } else if (key?.startsWith('course')) course.push(this.courseText(m));
+      } else if (key?.startsWith('course')) course.push(this.courseText(message));
       else general.push(m);
     }
     this.dom.courseError.textContent = course.join(' ');

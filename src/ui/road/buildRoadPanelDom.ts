@@ -7,6 +7,9 @@ import { RIDE_FIELD_GROUPS } from './rideFieldGroups';
 import type { Field, FieldView } from './roadField';
 import { WEATHER_FIELD_GROUPS } from './weatherFieldGroup';
 
+/** Every field of the road form, in the form's order. */
+export const ROAD_FIELD_GROUPS = [...RIDE_FIELD_GROUPS, ...WEATHER_FIELD_GROUPS];
+
 export type RoadPlotName = 'roadYaw' | 'roadSteering' | 'roadSegments';
 
 /** What the panel's controls ask for (the panel's own methods). */
@@ -60,7 +63,7 @@ export function buildRoadPanelDom(host: HTMLElement, actions: RoadPanelActions):
   form.addEventListener('submit', (e) => e.preventDefault());
   const formErrors = el('div', { className: 'field-error form-errors', attrs: { 'aria-live': 'polite' } });
   form.append(formErrors);
-  for (const group of [...RIDE_FIELD_GROUPS, ...WEATHER_FIELD_GROUPS]) {
+  for (const group of ROAD_FIELD_GROUPS) {
     const fs = el('fieldset', {}, [el('legend', { text: group.title })]);
     for (const field of group.fields) fs.append(buildField(field, fields));
     form.append(fs);
