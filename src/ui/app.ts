@@ -14,6 +14,7 @@ import { pinCurrent } from './baselines/pinnedBaselines';
 import { Controls } from './controls';
 import { DataGlue } from './dataGlue';
 import type { DataPlotName } from './dataPanel';
+import { designFileStem } from './designFileStem';
 import { DesignMap } from './designMap';
 import type { DurableCopy } from './durableAutosave';
 import { crashPoolWorker, hangPoolWorkers } from './earlyPool';
@@ -123,7 +124,7 @@ export class App implements ComputeHost, ActionsHost, StudyHost {
     this.computer.startNow();
     await new Promise((resolve) => setTimeout(resolve, 0));
     this.controls = new Controls(byId('controls'), this.state, (field, value) => this.onEdit(field, value));
-    this.tables = new PageTables(byId('tables'), () => this.state.case.name);
+    this.tables = new PageTables(byId('tables'), () => designFileStem(this.state.case));
     this.designMap.onPick((i, j) => this.mapPick.pick(i, j));
     this.mapRide.mount();
     byId('undo-pick').addEventListener('click', () => this.mapPick.undo());

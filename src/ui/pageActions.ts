@@ -12,7 +12,8 @@ import {
   stateToProjectText,
 } from './appState';
 import { defaultCase } from './defaultCase';
-import { downloadText, safeFileStem } from './download';
+import { designFileStem } from './designFileStem';
+import { downloadText } from './download';
 import type { PageHost } from './pageHost';
 import { defaultRoad } from './roadState';
 import { defaultView } from './viewState';
@@ -59,14 +60,14 @@ export function wirePageActions(host: ActionsHost): void {
   });
   byId('save-project').addEventListener('click', () => {
     downloadText(
-      `${safeFileStem(host.state.case.name, 'coversweep')}.coversweep-project.json`,
+      `${designFileStem(host.state.case)}.coversweep-project.json`,
       stateToProjectText(host.state),
       'application/json',
     );
   });
   byId('export-case').addEventListener('click', () => {
     downloadText(
-      `${safeFileStem(host.state.case.name, 'coversweep')}.case.json`,
+      `${designFileStem(host.state.case)}.case.json`,
       `${JSON.stringify(host.state.case, null, 2)}\n`,
       'application/json',
     );

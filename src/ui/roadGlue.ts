@@ -7,8 +7,9 @@ import type { CaseWheel, Parsed } from '../compute/caseFile';
 import type { RideFile } from '../compute/ride/index';
 import { kmhToMps } from '../compute/units';
 import type { AppState } from './appState';
+import { designFileStem } from './designFileStem';
 import { fmt } from './displayUnits';
-import { downloadText, safeFileStem } from './download';
+import { downloadText } from './download';
 import { JobWorker } from './jobWorker';
 import type { PageHost } from './pageHost';
 import type { RoadContext, RoadPanel, RoadPlotName } from './roadPanel';
@@ -109,7 +110,7 @@ export class RoadGlue {
       `${s.case.name ?? 'design'} against ${b.pinned ? (s.baseline?.name ?? 'the baseline') : 'the same wheel without covers'}`,
     );
     downloadText(
-      `${safeFileStem(s.case.name, 'coversweep')}.ride.json`,
+      `${designFileStem(s.case)}.ride.json`,
       `${JSON.stringify(raw, null, 2)}\n`,
       'application/json',
     );

@@ -11,8 +11,9 @@ import { type StudyDocument, validateStudy } from '../compute/design/index';
 import type { StudyJobResult } from '../compute/engine/studyJobs';
 import type { RideFile } from '../compute/ride/index';
 import type { AppState } from './appState';
+import { designFileStem } from './designFileStem';
 import { fmt } from './displayUnits';
-import { downloadText, safeFileStem } from './download';
+import { downloadText } from './download';
 import { JobWorker } from './jobWorker';
 import type { PageHost } from './pageHost';
 import type { StudyPanel } from './study/studyPanel';
@@ -234,7 +235,7 @@ export class StudyGlue {
       return;
     }
     downloadText(
-      `${safeFileStem(s.case.name, 'coversweep')}.study.json`,
+      `${designFileStem(s.case)}.study.json`,
       `${JSON.stringify(raw.value, null, 2)}\n`,
       'application/json',
     );

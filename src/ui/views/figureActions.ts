@@ -1,6 +1,7 @@
 /** Each figure's caption buttons: save as PNG, and show its numbers in the Tables tab. */
 import type { AppState } from '../appState';
-import { downloadBlob, safeFileStem } from '../download';
+import { designFileStem } from '../designFileStem';
+import { downloadBlob } from '../download';
 import type { Messages } from '../messages';
 import type { ViewState } from '../viewState';
 import { byId } from './present';
@@ -26,11 +27,7 @@ export function wireFigureActions(figures: readonly FigureAction[], host: Figure
     pngButton.setAttribute('aria-label', `Save as PNG: ${title}`);
     pngButton.addEventListener('click', () => {
       png().then(
-        (blob) =>
-          downloadBlob(
-            `${safeFileStem(host.state.case.name, 'coversweep')}-${id.replace('fig-', '')}.png`,
-            blob,
-          ),
+        (blob) => downloadBlob(`${designFileStem(host.state.case)}-${id.replace('fig-', '')}.png`, blob),
         (error: Error) => host.messages.show('error', 'PNG export failed', [error.message], 'png'),
       );
     });

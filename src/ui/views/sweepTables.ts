@@ -98,7 +98,13 @@ export function renderSweepTables(tables: Tables, ctx: Present, r: PageResults):
               ? ad
               : 2,
     })),
+    // The conditions the grid was computed at, on every row, so an exported CSV says them itself.
+    { header: 'Yaw, deg', decimals: 2 },
+    { header: 'Airspeed, m/s', decimals: 3 },
+    { header: 'Air density, kg/m³', decimals: 4 },
   ];
+  const mapYawDeg = axisOf(r.studies.map, 'yaw')[0]!;
+  const mapSpeedMps = c.conditions.airspeed_mps[0]!;
   const mapRows: Cell[][] = [];
   for (const cell of mapCells(r)) {
     const p = cell.point;
@@ -107,11 +113,14 @@ export function renderSweepTables(tables: Tables, ctx: Present, r: PageResults):
       cell.coverFraction,
       cell.rimDepthM * 1000,
       ...mapKeys.map((key) => display(ctx, OUTPUTS[key], p)),
+      mapYawDeg,
+      mapSpeedMps,
+      r.rhoKgPerM3,
     ]);
   }
   const mapTable = tables.get('table-map')!;
   mapTable.setCaption(
-    `Design map grid at ${fmt(axisOf(r.studies.map, 'yaw')[0]!)}° yaw, ${conditionsText(ctx, c.conditions.airspeed_mps[0]!, r.rhoKgPerM3)}`,
+    `Design map grid at ${fmt(mapYawDeg)}° yaw, ${conditionsText(ctx, mapSpeedMps, r.rhoKgPerM3)}`,
   );
   mapTable.setData(mapColumns, mapRows);
 }
