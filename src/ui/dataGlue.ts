@@ -5,6 +5,7 @@
 import { type CaseFile, caseAirDensity, parseCaseFile, validateCase } from '../compute/caseFile';
 import type { CalibrationResult } from '../compute/compare/index';
 import type { CalibrationMark } from './appState';
+import { DATA_SLIP_LABELS } from './data/dataLabels';
 import type { PackedResult, ReadOutcome } from './dataJobs';
 import type { DataContext, DataPanel, DataPlotName, DataRunRequest } from './dataPanel';
 import { fmt } from './displayUnits';
@@ -120,6 +121,7 @@ export class DataGlue {
           ref: req.ref,
           map: req.map,
           dataLabel: req.label,
+          slipLabels: DATA_SLIP_LABELS,
           calibrate: req.calibrate ? {} : false,
           convergence: req.convergence ? {} : false,
           uncertainty: req.uncertainty ? { ranges: req.uncertainty } : false,

@@ -2,6 +2,7 @@
 import { MAX_DATA_BYTES } from '../../compute/compare/index';
 import { button, el } from '../dom';
 import { buildDataResultsDom } from './buildDataResultsDom';
+import { MAPPING_LABELS } from './dataLabels';
 import type { DataPanelActions, DataPanelDom } from './dataPanelTypes';
 
 /** Build the panel into `host` (emptied first) and return its elements. */
@@ -84,10 +85,10 @@ export function buildDataPanelDom(host: HTMLElement, actions: DataPanelActions):
   const preview = el('div', { className: 'table-scroll preview' });
   const sideSign = el('select', { attrs: { id: 'data-side-sign' } }, [
     el('option', {
-      text: '+ to the rider’s left (this tool’s axes)',
+      text: MAPPING_LABELS.sideForceLeft,
       attrs: { value: '1' },
     }),
-    el('option', { text: '+ to the rider’s right (mirrored)', attrs: { value: '-1' } }),
+    el('option', { text: MAPPING_LABELS.sideForceRight, attrs: { value: '-1' } }),
   ]);
   const speedInput = el('input', {
     attrs: { id: 'data-speed', type: 'number', step: 'any', inputmode: 'decimal' },
@@ -115,8 +116,8 @@ export function buildDataPanelDom(host: HTMLElement, actions: DataPanelActions):
           el('tr', {}, [
             el('th', { text: 'Column', attrs: { scope: 'col' } }),
             el('th', { text: 'Holds', attrs: { scope: 'col' } }),
-            el('th', { text: 'Unit', attrs: { scope: 'col' } }),
-            el('th', { text: 'Reference area, m²', attrs: { scope: 'col' } }),
+            el('th', { text: MAPPING_LABELS.unit, attrs: { scope: 'col' } }),
+            el('th', { text: MAPPING_LABELS.referenceArea, attrs: { scope: 'col' } }),
             el('th', { text: '', attrs: { scope: 'col' } }),
           ]),
         ]),
@@ -125,7 +126,7 @@ export function buildDataPanelDom(host: HTMLElement, actions: DataPanelActions):
     ]),
     el('div', { className: 'data-globals' }, [
       el('div', { className: 'field' }, [
-        el('label', { text: 'Side force sign', attrs: { for: 'data-side-sign' } }),
+        el('label', { text: MAPPING_LABELS.sideForceSign, attrs: { for: 'data-side-sign' } }),
         el('div', { className: 'input' }, [sideSign]),
       ]),
       el('div', { className: 'field' }, [
