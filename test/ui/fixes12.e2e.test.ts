@@ -1,19 +1,9 @@
-/**
- * Small page fixes in headless Chromium (playwright-core, the system's /usr/bin/chromium), on a build
- * of their own (vite build --mode e2e) served by `vite preview`:
- * - the 3D view's yaw control redraws the view at once (its note names the new yaw, no other change);
- * - after the demo design is edited, its exports are no longer named after the demo, and the design
- *   map's CSV carries the yaw, airspeed and air density it was computed at (checked against the state);
- * - a damaged link is refused with a message naming the link and its rule (not the browser's decoder
- *   wording), and the design the user had stays.
- */
-import { type ChildProcess, execFileSync, spawn } from 'node:child_process';
 import { existsSync, mkdirSync, readFileSync } from 'node:fs';
 import { join, resolve } from 'node:path';
-import { type Browser, chromium, type Page } from 'playwright-core';
+import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { AppState } from '../../src/ui/appState';
-import { freePort, waitForServer } from './e2eServer';
+import { type E2ePage, startE2ePage } from './e2eServer';
 
 interface Inspect {
   coversweep: { state(): AppState };
@@ -23,7 +13,6 @@ const ROOT = resolve(__dirname, '../..');
 const CHROMIUM = '/usr/bin/chromium';
 const OUT = join(ROOT, 'test-results');
 const DIST = join(OUT, 'ui-dist-fixes12');
-const VITE = join(ROOT, 'node_modules/vite/bin/vite.js');
 const haveBrowser = existsSync(CHROMIUM);
 const requireBrowser = process.env.COVERSWEEP_REQUIRE_BROWSER === '1';
 
@@ -48,42 +37,19 @@ async function setNumberControl(page: Page, field: string, value: string): Promi
 }
 
 describe.skipIf(!haveBrowser && !requireBrowser)('page fixes in headless Chromium', () => {
-  let server: ChildProcess | null = null;
-  let serverLog = '';
   let browser: Browser;
   let base = '';
+  let served: E2ePage | null = null;
 
   beforeAll(async () => {
     if (!haveBrowser) throw new Error(`${CHROMIUM} is missing and COVERSWEEP_REQUIRE_BROWSER=1`);
     mkdirSync(OUT, { recursive: true });
-    execFileSync(
-      process.execPath,
-      [VITE, 'build', '--mode', 'e2e', '--outDir', DIST, '--emptyOutDir', '--logLevel', 'warn'],
-      { cwd: ROOT, stdio: 'pipe' },
-    );
-    const port = await freePort();
-    server = spawn(
-      process.execPath,
-      [VITE, 'preview', '--outDir', DIST, '--host', '127.0.0.1', '--port', String(port), '--strictPort'],
-      { cwd: ROOT, stdio: ['ignore', 'pipe', 'pipe'] },
-    );
-    server.stdout?.on('data', (d) => {
-      serverLog += String(d);
-    });
-    server.stderr?.on('data', (d) => {
-      serverLog += String(d);
-    });
-    base = `http://127.0.0.1:${port}/`;
-    await waitForServer(base, server, () => serverLog);
-    browser = await chromium.launch({
-      executablePath: CHROMIUM,
-      args: ['--headless', '--no-sandbox', '--disable-gpu', '--no-first-run', '--enable-unsafe-swiftshader'],
-    });
+    served = await startE2ePage(ROOT, DIST, CHROMIUM);
+    ({ base, browser } = served);
   }, 300_000);
 
   afterAll(async () => {
-    await browser?.close();
-    if (server && server.exitCode === null) server.kill('SIGTERM');
+    await served?.close();
   });
 
   it('the 3D yaw control redraws the view; exports follow the edited design; the map CSV names its conditions; a damaged link keeps the design', async () => {

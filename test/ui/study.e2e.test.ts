@@ -1,18 +1,6 @@
-/**
- * The design study tab in headless Chromium (playwright-core, the system's /usr/bin/chromium): the
- * 6 x 4 grid study (cover fraction 6 values x rim depth 4 values, time over the ride, a steering-moment
- * limit) is run from the page, and its optimum is held against an independent brute force over the same
- * grid in Node (evaluateDesign on each cell of the ride the page used, the feasibility order written
- * out). Clicking a row makes that design the current design; Undo brings the earlier one back; the
- * study's inputs survive a reload (the link), its result is recomputed; the design map can be coloured by
- * a ride objective. The page is built once (vite
- * build --mode e2e into its own folder) and served by `vite preview`. The time from Run to the result is
- * printed, and only held to a generous bound.
- */
-import { type ChildProcess, execFileSync, spawn } from 'node:child_process';
 import { existsSync, mkdirSync } from 'node:fs';
 import { join, resolve } from 'node:path';
-import { type Browser, chromium, type Page } from 'playwright-core';
+import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { designContext } from '../../src/compute/design/designContext';
 import { applyDesign } from '../../src/compute/design/designVariables';
@@ -20,7 +8,7 @@ import { evaluateDesign } from '../../src/compute/design/evaluateDesign';
 import type { StudyDocument } from '../../src/compute/design/index';
 import type { RideFile } from '../../src/compute/ride/index';
 import type { AppState } from '../../src/ui/appState';
-import { freePort, waitForServer } from './e2eServer';
+import { type E2ePage, startE2ePage } from './e2eServer';
 
 interface Inspect {
   coversweep: { state(): AppState; study(): StudyDocument | null };
@@ -30,7 +18,6 @@ const ROOT = resolve(__dirname, '../..');
 const CHROMIUM = '/usr/bin/chromium';
 const OUT = join(ROOT, 'test-results');
 const DIST = join(OUT, 'ui-dist-study');
-const VITE = join(ROOT, 'node_modules/vite/bin/vite.js');
 const haveBrowser = existsSync(CHROMIUM);
 const requireBrowser = process.env.COVERSWEEP_REQUIRE_BROWSER === '1';
 
@@ -51,43 +38,20 @@ async function studyStatus(page: Page, states: string[]): Promise<string> {
 }
 
 describe.skipIf(!haveBrowser && !requireBrowser)('design study tab in headless Chromium', () => {
-  let server: ChildProcess | null = null;
-  let serverLog = '';
   let browser: Browser;
   let base = '';
+  let served: E2ePage | null = null;
   const errors: string[] = [];
 
   beforeAll(async () => {
     if (!haveBrowser) throw new Error(`${CHROMIUM} is missing and COVERSWEEP_REQUIRE_BROWSER=1`);
     mkdirSync(OUT, { recursive: true });
-    execFileSync(
-      process.execPath,
-      [VITE, 'build', '--mode', 'e2e', '--outDir', DIST, '--emptyOutDir', '--logLevel', 'warn'],
-      { cwd: ROOT, stdio: 'pipe' },
-    );
-    const port = await freePort();
-    server = spawn(
-      process.execPath,
-      [VITE, 'preview', '--outDir', DIST, '--host', '127.0.0.1', '--port', String(port), '--strictPort'],
-      { cwd: ROOT, stdio: ['ignore', 'pipe', 'pipe'] },
-    );
-    server.stdout?.on('data', (d) => {
-      serverLog += String(d);
-    });
-    server.stderr?.on('data', (d) => {
-      serverLog += String(d);
-    });
-    base = `http://127.0.0.1:${port}/`;
-    await waitForServer(base, server, () => serverLog);
-    browser = await chromium.launch({
-      executablePath: CHROMIUM,
-      args: ['--headless', '--no-sandbox', '--disable-gpu', '--no-first-run', '--enable-unsafe-swiftshader'],
-    });
+    served = await startE2ePage(ROOT, DIST, CHROMIUM);
+    ({ base, browser } = served);
   }, 300_000);
 
   afterAll(async () => {
-    await browser?.close();
-    if (server && server.exitCode === null) server.kill('SIGTERM');
+    await served?.close();
   });
 
   it('runs the 6 x 4 grid study; its optimum is the brute-force best cell; a row becomes the current design, with undo', async () => {
