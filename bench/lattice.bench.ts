@@ -6,11 +6,7 @@ import { DEFAULT_CHORD_COUNT, DEFAULT_SPAN_COUNT } from '../src/model/lattice/de
 import { factorLattice } from '../src/model/lattice/factorLattice';
 import { solveFactored } from '../src/model/lattice/solveFactored';
 import { luFactor } from '../src/model/numeric/luFactor';
-
-function median(xs: number[]): number {
-  const s = [...xs].sort((a, b) => a - b);
-  return s[Math.floor(s.length / 2)]!;
-}
+import { median } from './timing';
 
 /** Deterministic filler (a linear congruential generator), diagonally dominated. */
 function randomMatrix(n: number, seed: number): Float64Array {

@@ -17,6 +17,7 @@ import { createServer } from 'node:net';
 import { availableParallelism, cpus, tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { chromium } from 'playwright-core';
+import { median } from './timing';
 
 const ROOT = resolve(import.meta.dirname, '..');
 const CHROMIUM = '/usr/bin/chromium';
@@ -26,11 +27,6 @@ const machine = { cores: availableParallelism(), cpu: cpus()[0]?.model ?? 'unkno
 
 function print(name: string, figures: Record<string, unknown>): void {
   console.log(JSON.stringify({ bench: name, ...figures, machine }));
-}
-
-function median(values: readonly number[]): number {
-  const s = [...values].sort((a, b) => a - b);
-  return s[Math.floor(s.length / 2)] ?? Number.NaN;
 }
 
 function freePort(): Promise<number> {

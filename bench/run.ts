@@ -11,6 +11,7 @@ import { luFactor } from '../src/model/numeric';
 import { luKernel } from '../src/model/numeric/luKernel';
 import { buildNodeWorker } from './buildNodeWorker';
 import { lapackLu } from './lapackLu';
+import { timeIt } from './timing';
 import { benchWholeProcess } from './wholeProcess';
 
 const cores = availableParallelism();
@@ -18,22 +19,6 @@ const machine = { cores, cpu: cpus()[0]?.model ?? 'unknown', node: process.versi
 
 function print(name: string, figures: Record<string, unknown>): void {
   console.log(JSON.stringify({ bench: name, ...figures, machine }));
-}
-
-function median(values: number[]): number {
-  const s = [...values].sort((a, b) => a - b);
-  return s[Math.floor(s.length / 2)]!;
-}
-
-function timeIt(repeats: number, fn: () => number): { medianMs: number; checksum: number } {
-  let checksum = 0;
-  const times: number[] = [];
-  for (let i = 0; i < repeats; i++) {
-    const t0 = performance.now();
-    checksum += fn();
-    times.push(performance.now() - t0);
-  }
-  return { medianMs: median(times), checksum };
 }
 
 // --- Dense LU factorisation: n = 1000, and the model's lattice sizes 648 and 288 ----------------------

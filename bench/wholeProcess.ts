@@ -10,6 +10,7 @@ import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { builtCli, sourceFingerprint } from '../bin/builtCli.mjs';
+import { median } from './timing';
 
 type Print = (name: string, figures: Record<string, unknown>) => void;
 
@@ -30,11 +31,6 @@ const STANDARD_PLAN = {
     air_density_kgpm3: 1.225,
   },
 };
-
-function median(values: number[]): number {
-  const s = [...values].sort((a, b) => a - b);
-  return s[Math.floor(s.length / 2)]!;
-}
 
 /** Wall time of one process (ms); throws on a non-zero exit. */
 function timeProcess(command: string, args: string[], cwd: string, fromSource: boolean): number {

@@ -6,27 +6,13 @@
  */
 import { resolve } from 'node:path';
 import { pathToFileURL } from 'node:url';
+import { timeIt } from './timing';
 
 const root = resolve(process.argv[2] ?? '.');
 const load = (path: string) => import(pathToFileURL(resolve(root, path)).href);
 const wheel = await load('src/model/wheel/index.ts');
 const lattice = await load('src/model/lattice/index.ts');
 const deg = Math.PI / 180;
-
-function median(values: number[]): number {
-  const s = [...values].sort((a, b) => a - b);
-  return s[Math.floor(s.length / 2)]!;
-}
-function timeIt(repeats: number, fn: () => number): { medianMs: number; checksum: number } {
-  let checksum = 0;
-  const times: number[] = [];
-  for (let i = 0; i < repeats; i++) {
-    const t0 = performance.now();
-    checksum += fn();
-    times.push(performance.now() - t0);
-  }
-  return { medianMs: median(times), checksum };
-}
 
 const options = wheel.DEFAULT_MODEL_OPTIONS;
 const buildOnce = () => {
