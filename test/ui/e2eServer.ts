@@ -1,34 +1,10 @@
-/** Helpers of the browser tests: a free local port, and waiting for `vite preview` to answer. */
-import { type ChildProcess, execFileSync, spawn } from 'node:child_process';
-import { createServer } from 'node:net';
+/** Helpers of the browser tests: the page built, served and opened (port and server helpers from the adversarial harness). */
+import { execFileSync, spawn } from 'node:child_process';
 import { join } from 'node:path';
 import { type Browser, chromium } from 'playwright-core';
+import { freePort, waitForServer } from '../adversarial/pageHarness';
 
-export function freePort(): Promise<number> {
-  return new Promise((ok, fail) => {
-    const srv = createServer();
-    srv.once('error', fail);
-    srv.listen(0, '127.0.0.1', () => {
-      const address = srv.address();
-      const port = typeof address === 'object' && address ? address.port : 0;
-      srv.close(() => ok(port));
-    });
-  });
-}
-
-export async function waitForServer(url: string, child: ChildProcess, log: () => string): Promise<void> {
-  for (let i = 0; i < 300; i++) {
-    if (child.exitCode !== null) throw new Error(`vite preview exited early:\n${log()}`);
-    try {
-      const r = await fetch(url);
-      if (r.ok) return;
-    } catch {
-      // not up yet
-    }
-    await new Promise((ok) => setTimeout(ok, 100));
-  }
-  throw new Error(`vite preview did not answer at ${url}:\n${log()}`);
-}
+export { freePort, waitForServer };
 
 /** A page built with `vite build --mode e2e` into `dist`, served by `vite preview`, and a headless Chromium. */
 export interface E2ePage {

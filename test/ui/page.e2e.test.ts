@@ -8,7 +8,6 @@
  */
 import { type ChildProcess, execFile, execFileSync, spawn } from 'node:child_process';
 import { existsSync, mkdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
-import { createServer } from 'node:net';
 import { join, resolve } from 'node:path';
 import { type Browser, type BrowserContext, chromium, type Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -20,6 +19,7 @@ import type { PlotName } from '../../src/ui/app';
 import type { AppState } from '../../src/ui/appState';
 import { textToBase64Url } from '../../src/ui/base64url';
 import type { PlotSeries, PlotSpec } from '../../src/ui/linePlot';
+import { freePort, waitForServer } from './e2eServer';
 
 /** The page's inspection object (src/ui/app.ts). */
 interface Inspect {
@@ -47,32 +47,6 @@ if (!haveBrowser && !requireBrowser) {
     `\n!!! test/ui/page.e2e.test.ts SKIPPED: ${CHROMIUM} is missing (apt-get install -y chromium). ` +
       'Set COVERSWEEP_REQUIRE_BROWSER=1 to make this a failure.\n\n',
   );
-}
-
-function freePort(): Promise<number> {
-  return new Promise((ok, fail) => {
-    const srv = createServer();
-    srv.once('error', fail);
-    srv.listen(0, '127.0.0.1', () => {
-      const address = srv.address();
-      const port = typeof address === 'object' && address ? address.port : 0;
-      srv.close(() => ok(port));
-    });
-  });
-}
-
-async function waitForServer(url: string, child: ChildProcess, log: () => string): Promise<void> {
-  for (let i = 0; i < 300; i++) {
-    if (child.exitCode !== null) throw new Error(`vite preview exited early:\n${log()}`);
-    try {
-      const r = await fetch(url);
-      if (r.ok) return;
-    } catch {
-      // not up yet
-    }
-    await new Promise((ok) => setTimeout(ok, 100));
-  }
-  throw new Error(`vite preview did not answer at ${url}:\n${log()}`);
 }
 
 /** Wait until the page has finished computing (or failed); returns the final state. */
