@@ -156,11 +156,22 @@ describe.skipIf(!haveBrowser && !requireBrowser)('design study tab in headless C
     // The design map coloured by a ride objective, computed in the background over the map's cells.
     await page.click('#tab-map');
     await page.selectOption('#map-ride select >> nth=0', 'time_s');
-    await page.waitForFunction(
-      () => (document.getElementById('map-ride-status')?.textContent ?? '').startsWith('Each cell'),
-      null,
-      { timeout: 240_000 },
-    );
+    const mapDone = await page
+      .waitForFunction(
+        () => (document.getElementById('map-ride-status')?.textContent ?? '').startsWith('Each cell'),
+        null,
+        { timeout: 240_000 },
+      )
+      .then(() => true)
+      .catch(() => false);
+    const mapStatus = await page.evaluate(() => ({
+      text: document.getElementById('map-ride-status')?.textContent ?? '(none)',
+      page: document.body.dataset.state ?? '',
+    }));
+    expect(
+      mapDone,
+      `map ride objectives never finished; status "${mapStatus.text}", page ${mapStatus.page}`,
+    ).toBe(true);
     expect((await state(page)).study?.mapColour).toBe('time_s');
     await page.locator('#fig-map').screenshot({ path: join(OUT, 'ui-study-map.png') });
 
