@@ -133,7 +133,13 @@ export class MapRide {
       if (key === this.key) this.say(`Evaluating the designs on the ride: ${done} of ${n}…`);
     });
     const out = await this.worker.run((api) => api.mapObjectives(request, progress));
-    if (key !== this.key || out.status === 'superseded' || out.status === 'cancelled') return;
+    if (key !== this.key) return;
+    if (out.status === 'superseded' || out.status === 'cancelled') {
+      // The run for the objectives still wanted was dropped: ask again rather than stay "Evaluating".
+      this.key = '';
+      this.update(this.host.state);
+      return;
+    }
     if (out.status === 'failed') {
       this.key = '';
       this.say(`The ride objectives could not be computed: ${out.error}`);
