@@ -1,5 +1,5 @@
 /**
- * The data panel's heavy work, run in the page-jobs worker so that a large table never blocks the page:
+ * The data panel's heavy work, run in the data panel's own worker (dataJobs.worker.ts) so that a large table never blocks the page:
  * reading the CSV (a dropped file is handed over as a File and read there), guessing the columns, and
  * the comparison. The parsed table stays in the worker (keyed by the panel's reference); the page only
  * ever holds a summary (headers, row count, a few rows, the guessed map). A fresh worker (after a

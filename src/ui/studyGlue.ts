@@ -1,20 +1,19 @@
 /**
  * The "Design study" tab's glue: the study built from the state (its inputs, the ride the road inputs
- * define, the current wheel as the design space's base), checked by the study file's rules, run in its
- * own background worker (JobWorker: progress, cancel) and shown; a design chosen in the result becomes
+ * define, the current wheel as the design space's base), checked by the study file's rules, run as a
+ * task on the pool's task workers (a TaskChannel: progress, cancel) and shown; a design chosen in the result becomes
  * the current design through the map's pick path (with undo). Only the inputs live in the state: the
  * result is kept here, and marked out of date when the inputs, the ride or the base wheel change.
  */
-import { proxy } from 'comlink';
 import type { Parsed } from '../compute/caseFile';
 import { type StudyDocument, validateStudy } from '../compute/design/index';
-import type { StudyJobResult } from '../compute/engine/studyJobs';
+import { TaskChannel } from '../compute/engine/taskChannel';
 import type { RideFile } from '../compute/ride/index';
 import type { AppState } from './appState';
 import { designFileStem } from './designFileStem';
 import { fmt } from './displayUnits';
 import { downloadText } from './download';
-import { JobWorker } from './jobWorker';
+import { pool } from './earlyPool';
 import type { PageHost } from './pageHost';
 import type { StudyPanel } from './study/studyPanel';
 import {
@@ -40,7 +39,7 @@ const keyOf = (raw: unknown) => JSON.stringify(raw);
 export class StudyGlue {
   private view: StudyPanel | null = null;
   private loading: Promise<StudyPanel> | null = null;
-  private readonly worker = new JobWorker();
+  private readonly tasks = new TaskChannel(pool);
   private doc: StudyDocument | null = null;
   private docKey = '';
   private running = false;
@@ -183,11 +182,9 @@ export class StudyGlue {
     this.running = true;
     view.setStatus('running', 'Starting the study in the background…');
     const started = performance.now();
-    const progress = proxy((done: number, budget: number) => {
-      if (this.running) view.setProgress(done, budget);
-    });
-    const out = await this.worker.run<StudyJobResult>(
-      (api) => api.study(raw.value, progress) as Promise<StudyJobResult>,
+    const out = await this.tasks.run(
+      { kind: 'study', raw: raw.value },
+      { onProgress: (done, budget) => view.setProgress(done, budget) },
     );
     this.running = false;
     if (out.status === 'superseded') return;
@@ -214,7 +211,7 @@ export class StudyGlue {
   }
 
   cancel(): void {
-    this.worker.cancel();
+    this.tasks.cancel();
   }
 
   private select(index: number): void {

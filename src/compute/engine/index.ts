@@ -4,7 +4,10 @@ export { type PlanJobsOptions, planJobs } from './planJobs';
 export type * from './protocol';
 export { type RunSweepOptions, runSweep, type SweepOutcome, type SweepProgress } from './runSweep';
 export { solveJob, solverApi, transferablesOf } from './solverApi';
+export { type ChannelOutcome, type ChannelRunOptions, TaskChannel, type TaskRunner } from './taskChannel';
+export { type TaskOutcome, type TaskRunOptions, TaskWorkers } from './taskWorkers';
 export {
+  type PoolOptions,
   type PoolRunOptions,
   type PoolRunSummary,
   type SpawnWorker,

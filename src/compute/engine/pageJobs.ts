@@ -1,9 +1,10 @@
 /**
- * The page's heavier jobs besides sweeps, run in their own worker (src/ui/pageJobs.worker.ts; kept
- * out of the sweep workers, whose small bundle starts fast) so the page stays responsive:
+ * The page's heavier tasks besides sweeps (tasks.ts), run on the pool's task workers (runTask.ts loads
+ * this module on a task's first use, so the sweep workers' first bundle stays small):
  *  - a ride: both wheels' yaw curves (the lattice solves; kept per worker and reused while only the
  *    rider, wind or course change) and then the ride's evaluation;
- *  - a comparison with data: conversion, slips, residuals, the model band and, on request, the
+ *  - a comparison with data (compareJob; the data panel runs it with its tables in its own worker,
+ *    src/ui/dataJobs.ts): conversion, slips, residuals, the model band and, on request, the
  *    calibration, the convergence study and the input-uncertainty band (src/compute/compare).
  *  - the reference set of the Help tab (src/compute/validation), as `coversweep validate` runs it;
  *  - a design study and the ride objectives over the design map (studyJobs.ts), as `coversweep optimise`.
@@ -20,16 +21,10 @@ import {
   rideCurves,
   rideReferenceSpeed,
 } from '../ride/index';
-import { runValidation } from '../validation/runValidation';
-import type { ValidationReport } from '../validation/types';
 import { BoundedCache } from './boundedCache';
-import {
-  type MapObjectivesRequest,
-  mapObjectivesJob,
-  type StudyJobProgress,
-  type StudyJobResult,
-  studyJob,
-} from './studyJobs';
+
+export { runValidation } from '../validation/runValidation';
+export { mapObjectivesJob, studyJob } from './studyJobs';
 
 export interface RideRequest {
   /** A validated ride (validateRide's value). */
@@ -72,24 +67,3 @@ export function compareJob(request: CompareRequest): CompareResult {
     return { ok: false, errors: [error instanceof Error ? error.message : String(error)] };
   }
 }
-
-/** What the page-jobs worker offers. */
-export interface PageJobsApi {
-  ride(request: RideRequest): RideResponse;
-  compare(request: CompareRequest): CompareResult;
-  validate(): ValidationReport;
-  /** A design study (a study file's object) with progress (studyJobs.ts). */
-  study(raw: unknown, onProgress?: StudyJobProgress): StudyJobResult;
-  /** Ride objectives of the design map's cells (studyJobs.ts). */
-  mapObjectives(request: MapObjectivesRequest, onProgress?: StudyJobProgress): Record<string, number>[];
-  ping(): string;
-}
-
-export const pageJobsApi: PageJobsApi = {
-  ride: (request) => solveRideJob(request),
-  compare: (request) => compareJob(request),
-  validate: () => runValidation(),
-  study: (raw, onProgress) => studyJob(raw, onProgress),
-  mapObjectives: (request, onProgress) => mapObjectivesJob(request, onProgress),
-  ping: () => 'ready',
-};

@@ -3,7 +3,7 @@ import { type SurfaceCoefficients, solveWheel } from '../../model/wheel';
 import { BoundedCache } from './boundedCache';
 import { packPoints } from './packPoints';
 import type { CaseOutcome, JobResult, SolveJob, SolverApi } from './protocol';
-import { viewField, viewFieldTransferables } from './viewField';
+import { runTask } from './runTask';
 
 /** Surface solutions kept per worker: a sweep sorted by surface key reuses each one across its cases. */
 const surfaceCache = new BoundedCache<string, SurfaceCoefficients>(64);
@@ -44,8 +44,5 @@ export const solverApi: SolverApi = {
     return transfer(result, transferablesOf(result));
   },
   ping: () => 'ready',
-  viewField: (request) => {
-    const field = viewField(request, surfaceCache);
-    return transfer(field, viewFieldTransferables(field));
-  },
+  runTask: (task, onProgress) => runTask(task, onProgress, surfaceCache),
 };

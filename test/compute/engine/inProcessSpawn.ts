@@ -27,6 +27,7 @@ export function inProcessSpawner(sabotage: (jobNumber: number, jobId: number) =>
     });
     const api = {
       ping: () => remote.ping(),
+      runTask: (...args: Parameters<SolverApi['runTask']>) => remote.runTask(...args),
       solveJob: (job: Parameters<SolverApi['solveJob']>[0]) => {
         jobs++;
         if (sabotage(jobs, job.jobId)) {
