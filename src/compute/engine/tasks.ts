@@ -2,12 +2,24 @@
  * The tasks of the one protocol (protocol.ts): besides the sweeps' solve jobs, a solver worker runs one
  * task at a time, a plain object naming its kind. Each kind's result is plain data (typed arrays
  * transferred). The pool deals tasks to its task workers (workerPool.ts), a TaskChannel keeps the
- * latest of one client's tasks (taskChannel.ts); runTask.ts runs them in the worker.
+ * latest of one client's tasks (taskChannel.ts); compute/worker/runTask.ts runs them in the worker.
  */
+import type { RideCurves, RideDocument, RideFile } from '../ride/index';
 import type { ValidationReport } from '../validation/types';
-import type { RideRequest, RideResponse } from './pageJobs';
 import type { MapObjectivesRequest, StudyJobResult } from './studyJobs';
 import type { ViewField, ViewFieldRequest } from './viewFieldTypes';
+
+export interface RideRequest {
+  /** A validated ride (validateRide's value). */
+  ride: RideFile;
+}
+
+export interface RideResponse {
+  document: RideDocument;
+  curves: RideCurves;
+  /** True when the yaw curves came from this worker's cache (no lattice solve). */
+  curvesReused: boolean;
+}
 
 export type TaskRequest =
   /** The 3D view's data at one operating point (request.input.points[0]). */

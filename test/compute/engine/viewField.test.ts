@@ -3,8 +3,8 @@ import { expose, wrap } from 'comlink';
 import nodeEndpoint from 'comlink/dist/esm/node-adapter.mjs';
 import { describe, expect, it } from 'vitest';
 import type { SolverApi, ViewField } from '../../../src/compute/engine/protocol';
-import { solverApi } from '../../../src/compute/engine/solverApi';
 import { viewField } from '../../../src/compute/engine/viewField';
+import { solverApi } from '../../../src/compute/worker/solverApi';
 import {
   DEFAULT_MODEL_OPTIONS,
   DEFAULT_STEERING,

@@ -1,12 +1,12 @@
 import { transfer } from 'comlink';
 import type { SurfaceCoefficients } from '../../model/wheel';
-import type { BoundedCache } from './boundedCache';
-import type { TaskProgress, TaskRequest, TaskResult } from './tasks';
-import { viewField, viewFieldTransferables } from './viewField';
+import type { BoundedCache } from '../engine/boundedCache';
+import type { TaskProgress, TaskRequest, TaskResult } from '../engine/tasks';
+import { viewField, viewFieldTransferables } from '../engine/viewField';
 
 /**
  * Run one task in a solver worker (tasks.ts). The 3D view's field shares the sweeps' surface cache; the
- * other kinds load their code (pageJobs.ts: rides, studies, the reference set) on first use, so the
+ * other kinds load their code (pageTasks.ts: rides, studies, the reference set) on first use, so the
  * worker that starts the page's first sweep stays small. Typed arrays go back transferred.
  */
 export async function runTask(
@@ -18,7 +18,7 @@ export async function runTask(
     const field = viewField(task.request, surfaceCache);
     return transfer(field, viewFieldTransferables(field));
   }
-  const jobs = await import('./pageJobs');
+  const jobs = await import('./pageTasks');
   switch (task.kind) {
     case 'ride':
       return jobs.solveRideJob(task.request);
