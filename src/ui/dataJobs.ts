@@ -25,6 +25,7 @@ import {
   runComparison,
 } from '../compute/compare/index';
 import { BoundedCache } from '../compute/engine/boundedCache';
+import { modelAtDataHere } from '../compute/study/dataComparisonStudy';
 
 /** Where a table comes from: a file the user chose, or text (pasted, or the demo file). */
 export type TableSource = { kind: 'file'; file: File } | { kind: 'text'; text: string };
@@ -254,7 +255,7 @@ export const dataJobsApi: DataJobsApi = {
     if (!t.ok) return t;
     let result: ReturnType<typeof runComparison>;
     try {
-      result = runComparison({ ...rest, table: t.value });
+      result = runComparison({ ...rest, table: t.value }, modelAtDataHere);
     } catch (error) {
       return { ok: false, errors: [error instanceof Error ? error.message : String(error)] };
     }

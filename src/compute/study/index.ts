@@ -5,6 +5,7 @@ export { commandLineStudy } from './commandLineStudy';
 export { coverFamilyStudy, sweepPlacement } from './coverFamilyStudy';
 export { coverSweepStudy } from './coverSweepStudy';
 export { currentDesignStudy } from './currentDesignStudy';
+export { dataComparisonStudy, modelAtDataHere, modelAtDataOf } from './dataComparisonStudy';
 export { designMapStudy } from './designMapStudy';
 export {
   coverPlotSpeeds,
