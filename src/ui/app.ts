@@ -306,8 +306,13 @@ export class App implements ComputeHost, ActionsHost, StudyHost {
     return this.roadGlue.rideFor(s);
   }
 
-  chooseDesign(fraction: number, depthM: number, what: string): void {
-    this.mapPick.choose(fraction, depthM, what);
+  chooseDesign(
+    fraction: number,
+    depthM: number,
+    what: string,
+    values?: Record<string, number | string>,
+  ): void {
+    this.mapPick.choose(fraction, depthM, what, values);
   }
 
   undoChoice(): void {
