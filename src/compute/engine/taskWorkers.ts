@@ -22,6 +22,21 @@ type Interrupt = 'hung' | 'stopped' | { crashed: string };
 
 const messageOf = (error: unknown) => (error instanceof Error ? error.message : String(error));
 
+/** Each worker's failure as a value, made once per worker (not once per task: `failed` lives as long
+ * as the worker, and every reaction attached to it stays until it settles). */
+const crashes = new WeakMap<WorkerHandle, Promise<{ crashed: string }>>();
+function crashedOf(w: WorkerHandle): Promise<{ crashed: string }> {
+  let p = crashes.get(w);
+  if (!p) {
+    p = w.failed.then(
+      () => ({ crashed: 'the background worker stopped' }),
+      (error: unknown) => ({ crashed: messageOf(error) }),
+    );
+    crashes.set(w, p);
+  }
+  return p;
+}
+
 interface Queued {
   task: TaskOf<TaskKind>;
   options: TaskRunOptions;
@@ -140,10 +155,7 @@ export class TaskWorkers {
       const stopped = new Promise<'stopped'>((resolve) => {
         q.stop = () => resolve('stopped');
       });
-      const crashed = w.failed.then(
-        () => ({ crashed: 'the background worker stopped' }),
-        (error: unknown) => ({ crashed: messageOf(error) }),
-      );
+      const crashed = crashedOf(w);
       const answer = w.api.runTask(q.task, progress).then(
         (value) => ({ value }),
         (error: unknown) => ({ error: messageOf(error) }),
