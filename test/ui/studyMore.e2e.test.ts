@@ -64,8 +64,11 @@ describe.skipIf(!haveBrowser && !requireBrowser)('more design variables in the s
       () => (window as unknown as Inspect).coversweep.state().study?.spokeCount === undefined,
     );
 
-    // Both covered sides: twice the default grid's 24 designs.
+    // Both covered sides: twice the default grid's 24 designs. (The tyre width is ticked only for a look.)
+    await page.check('#study-free-tyreWidthMm');
     await page.check('#study-free-coverSides');
+    await page.locator('.study-more').screenshot({ path: join(OUT, 'ui-study-more.png') });
+    await page.uncheck('#study-free-tyreWidthMm');
     await page.waitForFunction(
       () => JSON.stringify((window as unknown as Inspect).coversweep.state().study?.coverSides) === '[1,2]',
     );

@@ -147,8 +147,8 @@ export function extraVariablesForm(): ExtraVariablesForm {
       text: 'Tick a variable to vary it too; unticked, the current wheel’s value holds. Every combination of the chosen values is one more grid of cover fraction x rim depth.',
     }),
     ...rows.map((r) => {
-      return el('div', { className: 'field study-free' }, [
-        el('div', { className: 'input' }, [
+      return el('div', { className: 'study-free' }, [
+        el('div', { className: 'study-free-head' }, [
           r.free,
           el('label', { text: ` Vary the ${r.label.toLowerCase()}`, attrs: { for: r.free.id } }),
         ]),
