@@ -318,8 +318,12 @@ export class App implements ComputeHost, ActionsHost, StudyHost, ReportHost {
     return this.validationPanel().then((panel) => panel.report());
   }
 
-  computing(): boolean {
-    return document.body.dataset.state === 'computing';
+  computePhase() {
+    const phase = document.body.dataset.state;
+    if (phase === 'computing') return 'computing' as const;
+    return phase === 'done' && !this.computer.needed(this.state)
+      ? ('ready' as const)
+      : ('incomplete' as const);
   }
 
   // The design study's host: the ride, and a chosen design made current through the map's pick path.

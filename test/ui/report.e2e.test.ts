@@ -11,6 +11,7 @@ import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { RideDocument } from '../../src/compute/ride/index';
 import { type AppState, stateToHash } from '../../src/ui/appState';
+import { PRINTABLE_HEIGHT_MM } from '../../src/ui/report/fitToPage';
 import { type E2ePage, startE2ePage } from './e2eServer';
 import { pdfPageCount } from './pdfPageCount';
 
@@ -199,6 +200,44 @@ describe.skipIf(!haveBrowser && !requireBrowser)('printable report in headless C
     expect(errors).toEqual([]);
     await context.close();
   }, 400_000);
+
+  it('stays on one page with three pinned baselines in the legends and a ride (scaled to fit when taller)', async () => {
+    const context = await browser.newContext({ viewport: { width: 1280, height: 800 } });
+    const page = await context.newPage();
+    await page.goto(base);
+    await settled(page);
+    for (const [k, fraction] of ['0.5', '1', '0.25'].entries()) {
+      await page.click('#pin-baseline');
+      await page.waitForFunction((n) => {
+        const s = (window as unknown as Inspect).coversweep.state();
+        return (s.baselines?.length ?? (s.baseline ? 1 : 0)) === n;
+      }, k + 1);
+      await setNumberControl(page, 'coverFraction', fraction);
+      await page.waitForFunction(
+        (f) => (window as unknown as Inspect).coversweep.state().case.wheel.cover.fraction === f,
+        Number(fraction),
+      );
+      await settled(page);
+    }
+    await page.click('#tab-road');
+    await page.waitForFunction(() => document.getElementById('panel-road')?.dataset.state === 'done', null, {
+      timeout: 120_000,
+    });
+    await printReport(page);
+    await page.emulateMedia({ media: 'print' });
+    const legend = await page.locator('#report [data-figure="drag-yaw"] .report-legend li').allTextContents();
+    expect(legend.filter((t) => t.startsWith('baseline ')).length).toBe(3);
+    const fit = await page.locator('#report .report-page').evaluate((e: HTMLElement) => ({ ...e.dataset }));
+    console.log(`report height with 3 baselines ${fit.heightMm} mm at 190 mm wide, fit ${fit.fit}`);
+    // The factor brings the height to the printable height (Letter less margins and a spare), or is 1.
+    expect(Number(fit.fit)).toBe(
+      Math.min(1, Math.floor((1000 * PRINTABLE_HEIGHT_MM) / Number(fit.heightMm)) / 1000),
+    );
+    for (const format of ['A4', 'Letter'] as const) {
+      expect(pdfPageCount(await page.pdf({ format, printBackground: true })), `${format} pages`).toBe(1);
+    }
+    await context.close();
+  }, 300_000);
 
   it('marks a calibrated model CALIBRATED in the header and the calibration section', async () => {
     const context = await browser.newContext({ viewport: { width: 1280, height: 800 } });

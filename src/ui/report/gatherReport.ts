@@ -50,7 +50,11 @@ const PLOTS: Array<[ReportPlotName, string]> = [
 export async function gatherReport(host: ReportHost): Promise<ReportData> {
   const state = host.state;
   const r = host.results;
-  if (!r?.current) throw new Error('the current design has not been solved yet');
+  if (host.computePhase() !== 'ready' || !r?.current) {
+    throw new Error(
+      'the page has no complete results for this design (its computation was cancelled or stopped); change a control or press Reset to compute again',
+    );
+  }
   const points = mainPoints(r);
   const referenceSpeedMps = kmhToMps(state.case.conditions.reference_speed_kmh);
   const speedUnit = state.view.speedUnit;

@@ -1,6 +1,6 @@
 /**
  * "Print report": build the report of the current design in #report, show it in place of the page (a
- * toolbar offers "Print" again and "Back to the page"), then open the browser's print dialog. The
+ * toolbar offers "Print" again and "Back to the page", as does Escape), then open the browser's print dialog. The
  * print stylesheet (report.css) prints the report alone on one A4 or Letter page. #report's
  * data-state says building, ready or failed.
  */
@@ -23,6 +23,9 @@ function closeReport(root: HTMLElement): void {
 }
 
 function toolbar(root: HTMLElement, print: () => void): HTMLElement {
+  root.onkeydown = (e) => {
+    if (e.key === 'Escape') closeReport(root);
+  };
   return el('div', { className: 'report-toolbar', attrs: { role: 'toolbar', 'aria-label': 'Report' } }, [
     button('Print', print, { id: 'report-print' }),
     button('Back to the page', () => closeReport(root), { id: 'report-close' }),
@@ -39,11 +42,12 @@ export async function openReport(host: ReportHost, print: () => void): Promise<v
   root.dataset.state = 'building';
   root.hidden = false;
   document.body.classList.add('report-open');
-  status.textContent = host.computing()
-    ? 'Waiting for the page to finish computing this design…'
-    : 'Building the report (the validation cases are computed once)…';
+  status.textContent =
+    host.computePhase() === 'computing'
+      ? 'Waiting for the page to finish computing this design…'
+      : 'Building the report (the validation cases are computed once)…';
   try {
-    await waitForPage(() => host.computing());
+    await waitForPage(() => host.computePhase() === 'computing');
     status.textContent = 'Building the report (the validation cases are computed once)…';
     const data = await gatherReport(host);
     const page = buildReport(data, { version, date: reportDateText(new Date()) });

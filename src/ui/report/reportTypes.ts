@@ -22,8 +22,9 @@ export interface ReportHost {
   rideFor(s: AppState): Parsed<RideFile>;
   /** The Help tab's validation table (computed once, shared with Help). */
   validationReport(): Promise<ValidationReport>;
-  /** The page's computation state (body data-state): the report waits for 'done'. */
-  computing(): boolean;
+  /** Whether the page's results are this state's: still computing (the report waits), ready, or
+   * incomplete (the run was cancelled or failed: the report is refused rather than mixing designs). */
+  computePhase(): 'computing' | 'ready' | 'incomplete';
 }
 
 /** A labelled value: "Rim depth" / "80 mm". */

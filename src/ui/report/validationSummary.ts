@@ -16,7 +16,7 @@ export interface ValidationSummary {
 }
 
 /** A documented reason cut to its first sentence (at most `max` characters, at a word), marked when cut. */
-export function abridged(text: string, max = 320): string {
+export function abridged(text: string, max = 480): string {
   const end = text.indexOf('. ');
   let cut = end >= 0 && end < max ? text.slice(0, end + 1) : text;
   if (cut.length > max) cut = `${cut.slice(0, cut.lastIndexOf(' ', max)).replace(/[,;:]$/, '')} …`;
