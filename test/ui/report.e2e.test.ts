@@ -87,6 +87,16 @@ describe.skipIf(!haveBrowser && !requireBrowser)('printable report in headless C
     });
     await page.goto(base);
     await settled(page);
+    // The page printed without the report (Ctrl+P) leaves out the controls, tabs, buttons and 3D view.
+    await page.emulateMedia({ media: 'print' });
+    for (const selector of ['#controls', '.tabs', '#print-report', '#pin-baseline', '#fig-3d']) {
+      expect(
+        await page.locator(selector).first().isVisible(),
+        `${selector} hidden when the page prints`,
+      ).toBe(false);
+    }
+    expect(await page.locator('#fig-drag-yaw').isVisible()).toBe(true);
+    await page.emulateMedia({ media: 'screen' });
 
     // Change the design: rim depth 80 mm.
     await setNumberControl(page, 'rimDepthMm', '80');

@@ -2,7 +2,7 @@
  * The report's headline figures of the current design at its first airspeed (the plots' conditions),
  * at the design's yaw angles nearest 0, 10 and 20 degrees: axial drag in N and in grams-force at the
  * reference speed, drag area, side force, centre of pressure, steering moment, the rotational power
- * and the whole aerodynamic power of the wheel, with the lattice's uncertainty.
+ * and the whole aerodynamic power of the wheel, with the lattice's uncertainty of axial and side force.
  *
  * Grams at the reference speed scale the force by the dynamic pressure at the same density,
  * F (V_ref / V)^2 / g0 (the command line's axial_gf_ref; g0 = 9.80665 m/s^2, CGPM 1901). The rotational
@@ -47,19 +47,21 @@ export function headlineTable(
     newtonsToGramsForce((p.axialN * referenceSpeedMps ** 2) / p.airspeedMps ** 2);
   const p0 = cols[0]!;
   return {
+    // Name over unit (two lines: the report's table spans the page in 13 columns).
     head: [
       'Yaw',
-      'Axial drag, N',
-      `Axial drag, g at ${ref}`,
-      'CdA, cm²',
-      'CdA, m²',
-      'Lattice ±, N',
-      'Side force, N',
-      'CP ahead, mm',
-      'CP above, mm',
-      'Steering moment, N m',
-      'Rotation power (T ω), W',
-      'Aero power, W',
+      'Axial drag\nN',
+      `Axial drag\ng at ${ref}`,
+      'CdA\ncm²',
+      'CdA\nm²',
+      '± axial\nN',
+      'Side force\nN',
+      '± side\nN',
+      'CP ahead\nmm',
+      'CP above\nmm',
+      'Steering\nmoment, N m',
+      'Rotation\npower, W',
+      'Aero\npower, W',
     ],
     rows: cols.map((p) => [
       q((p.yawRad * 180) / Math.PI, 1, '°'),
@@ -69,6 +71,7 @@ export function headlineTable(
       q(p.cdaAxialM2, 5, ''),
       q(p.uncertaintyAxialN, 3, ''),
       q(p.sideN, 3, ''),
+      q(p.uncertaintySideN, 3, ''),
       q(p.cpXM * 1000, 1, ''),
       q(p.cpZM * 1000, 1, ''),
       q(p.steeringMomentNm, 4, ''),
@@ -76,7 +79,7 @@ export function headlineTable(
       q(p.powerW, 2, ''),
     ]),
     notes: [
-      `One wheel at ${q(speedFromMps(p0.airspeedMps, speedUnit), 1, speedUnitText(speedUnit))} airspeed (${q(p0.airspeedMps, 2, 'm/s')}), ground speed ${q(p0.groundSpeedMps, 2, 'm/s')}, ρ ${q(p0.rhoKgPerM3, 3, 'kg/m³')}. Axial drag acts along the travel (not wind-axis drag; it can be negative at yaw). CP: centre of pressure of the side force. Lattice ±: grid-convergence index. n/a: not defined (no side force) or not computed.`,
+      `One wheel at ${q(speedFromMps(p0.airspeedMps, speedUnit), 1, speedUnitText(speedUnit))} (${q(p0.airspeedMps, 2, 'm/s')}), ground speed ${q(p0.groundSpeedMps, 2, 'm/s')}, ρ ${q(p0.rhoKgPerM3, 3, 'kg/m³')}. Axial drag: along the travel, not wind-axis (it can be negative at yaw). CP: centre of pressure of the side force. Rotation power: axle torque × ω. ±: lattice grid-convergence index. n/a: not defined (no side force) or not computed.`,
     ],
   };
 }

@@ -74,5 +74,5 @@ export function rideTable(d: RideDocument, speedUnit: SpeedUnit, referenceSpeedM
   ];
   if (s === null) notes.push('Rear wheel: no steering moment.');
   for (const f of d.flags) notes.push(`Flag: ${f}`);
-  return { head: ['Ride figure', 'design', 'baseline', 'design − baseline'], rows, notes };
+  return { head: ['Ride figure', 'design', 'baseline', 'design −\nbaseline'], rows, notes };
 }

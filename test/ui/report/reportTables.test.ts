@@ -60,9 +60,9 @@ describe('headlineTable', () => {
   it('gives grams-force at the reference speed: F (Vref/V)^2 / g0', () => {
     // 1 N at 10 m/s is (13.8889/10)^2 N = 1.92901 N at 50 km/h; / 9.80665 m/s^2 (CGPM 1901) = 196.70 gf.
     const t = headlineTable(pts, 50 / 3.6, 'kmh');
-    expect(at(t, '0.0°', /^Axial drag, g at 50\.0 km\/h$/)).toBe('197');
+    expect(at(t, '0.0°', /^Axial drag\ng at 50\.0 km\/h$/)).toBe('197');
     // At the reference speed itself, 1 N is 1000 / 9.80665 = 101.97 gf.
-    expect(at(headlineTable(pts, 10, 'kmh'), '0.0°', /, g at/)).toBe('102');
+    expect(at(headlineTable(pts, 10, 'kmh'), '0.0°', /\ng at/)).toBe('102');
   });
 
   it('reads the rotational power as P - F_x V_ground, which is T omega when P = F_x V + T V / R', () => {
@@ -74,17 +74,21 @@ describe('headlineTable', () => {
       powerW: 1.5 * 12 + (0.04 * 12) / R,
     });
     const t = headlineTable([p], 10, 'kmh');
-    expect(at(t, '0.0°', /^Rotation power \(T ω\), W$/)).toBe(((0.04 * 12) / R).toFixed(2));
-    expect(at(t, '0.0°', /^Aero power, W$/)).toBe((18 + (0.04 * 12) / R).toFixed(2));
+    expect(at(t, '0.0°', /^Rotation\npower, W$/)).toBe(((0.04 * 12) / R).toFixed(2));
+    expect(at(t, '0.0°', /^Aero\npower, W$/)).toBe((18 + (0.04 * 12) / R).toFixed(2));
   });
 
   it('gives drag area in cm² and m², centre of pressure in mm, n/a where undefined', () => {
     const t = headlineTable(pts, 10, 'kmh');
-    expect(at(t, '0.0°', /^CdA, cm²$/)).toBe('166.7');
-    expect(at(t, '0.0°', /^CdA, m²$/)).toBe('0.01667');
-    expect(at(t, '0.0°', /^CP ahead, mm$/)).toBe('n/a');
-    expect(at(t, '9.0°', /^CP ahead, mm$/)).toBe('50.0');
-    expect(at(t, '9.0°', /^Steering moment, N m$/)).toBe('0.0123');
+    expect(at(t, '0.0°', /^CdA\ncm²$/)).toBe('166.7');
+    expect(at(t, '0.0°', /^CdA\nm²$/)).toBe('0.01667');
+    expect(at(t, '0.0°', /^CP ahead\nmm$/)).toBe('n/a');
+    expect(at(t, '9.0°', /^CP ahead\nmm$/)).toBe('50.0');
+    expect(at(t, '9.0°', /^Steering\nmoment, N m$/)).toBe('0.0123');
+    expect(at(t, '9.0°', /^± side\nN$/)).toBe('n/a');
+    expect(
+      at(headlineTable([point(10, { uncertaintySideN: 0.1214 })], 10, 'kmh'), '10.0°', /^± side\nN$/),
+    ).toBe('0.121');
     expect(() => headlineTable([], 10, 'kmh')).toThrow(/points must not be empty/);
     expect(() => headlineTable(pts, 0, 'kmh')).toThrow(/referenceSpeedMps must be > 0/);
   });
