@@ -2,9 +2,9 @@
  * uPlot options that draw a page plot's PlotSpec (the same series, bands, markers and trusted-yaw
  * shading the page shows) for print: the canvas gets `scale` pixels per CSS pixel of the printed image
  * whatever the screen's pixel ratio, with every size (fonts, axes, lines, markers, hatching) scaled
- * alike, so text stays the printed size and lines stay sharp at 3x (about 290 dpi at the report's
- * column width). uPlot multiplies CSS sizes by its pixel ratio (taken from the screen when it loads);
- * dividing by it first gives the wanted density. Legend and cursor are off: the report prints the
+ * alike, so a 330 CSS px plot becomes 990 pixels, about 400 dpi in the report's 61 mm column. uPlot
+ * multiplies CSS sizes by its pixel ratio (taken from the screen when it loads); dividing by it first
+ * gives the wanted density. Legend and cursor are off: the report prints the
  * legend and the full axis titles as text beside the image.
  */
 import uPlot from 'uplot';
