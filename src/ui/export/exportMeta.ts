@@ -41,10 +41,11 @@ const num = (x: number, digits = 4): string => String(Number(x.toPrecision(digit
 const mm = (m: number): string => `${num(m * 1000, 6)} mm`;
 
 function listed(values: readonly number[], unit: string): string {
-  if (values.length <= 6) return `${values.map((v) => num(v)).join(', ')} ${unit}`;
+  const u = unit === '°' ? unit : ` ${unit}`;
+  if (values.length <= 6) return `${values.map((v) => num(v)).join(', ')}${u}`;
   const lo = Math.min(...values);
   const hi = Math.max(...values);
-  return `${num(lo)} to ${num(hi)} ${unit} (${values.length} values)`;
+  return `${num(lo)} to ${num(hi)}${u} (${values.length} values)`;
 }
 
 function designSummary(c: CaseFile): string {
