@@ -6,7 +6,7 @@
  */
 import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { join, resolve } from 'node:path';
-import type { Browser, Download, Page } from 'playwright-core';
+import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { AppState } from '../../src/ui/appState';
 import { type E2ePage, startE2ePage } from './e2eServer';
@@ -44,7 +44,7 @@ async function download(
   selector: string,
   text: string,
 ): Promise<{ name: string; bytes: Buffer }> {
-  const [d]: [Download, void] = await Promise.all([
+  const [d] = await Promise.all([
     page.waitForEvent('download', { timeout: 60_000 }),
     page
       .locator(selector)
