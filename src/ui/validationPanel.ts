@@ -7,7 +7,7 @@
 import { formatNumber, withUnit } from '../compute/validation/bandText';
 import type { ValidationReport, ValidationRow } from '../compute/validation/types';
 import { el } from './dom';
-import { tableExportButtons } from './export/exportButtons';
+import { tableExportButtons } from './export/tableExportButtons';
 import { JobWorker } from './jobWorker';
 
 function referenceText(row: ValidationRow): string {

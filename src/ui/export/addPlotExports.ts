@@ -3,8 +3,8 @@
  * missing). Both are drawn from what the plot shows now (LinePlot.currentSpec) with the caption block.
  */
 import type { LinePlot } from '../linePlot';
-import { figureExportButtons } from './exportButtons';
 import type { ExportMeta } from './exportMeta';
+import { figureExportButtons } from './figureExportButtons';
 import { plotSvg } from './plotSvg';
 
 export function addPlotExports(

@@ -3,8 +3,8 @@
  * files carry the header block (design, conditions, model, CALIBRATED, units, version, date).
  */
 import type { DataTable } from '../dataTable';
-import { tableExportButtons } from './exportButtons';
 import type { ExportMeta } from './exportMeta';
+import { tableExportButtons } from './tableExportButtons';
 
 export function exportableTable(
   scroll: HTMLElement,

@@ -8,7 +8,7 @@
  */
 import { designVariable, type StudyDocument } from '../../compute/design/index';
 import { el } from '../dom';
-import { tableExportButtons } from '../export/exportButtons';
+import { tableExportButtons } from '../export/tableExportButtons';
 import { studyCaptionLine } from './studyCaptionLine';
 import { studyCautions } from './studyCautions';
 import {

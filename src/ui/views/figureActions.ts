@@ -4,9 +4,10 @@
  * view); and show its numbers in the Tables tab. Files are named after the current design.
  */
 
-import { figureExportButtons, rasterExportButton } from '../export/exportButtons';
 import type { ExportMeta } from '../export/exportMeta';
+import { figureExportButtons } from '../export/figureExportButtons';
 import type { SvgFigure } from '../export/plotSvg';
+import { rasterExportButton } from '../export/rasterExportButton';
 import type { ViewState } from '../viewState';
 import { byId } from './present';
 

@@ -1,6 +1,6 @@
 /** The Tables tab: one DataTable per view of the results, each with CSV and JSON buttons (self-describing). */
 import { DataTable } from '../dataTable';
-import { tableExportButtons } from '../export/exportButtons';
+import { tableExportButtons } from '../export/tableExportButtons';
 import { renderCurrentTables } from './currentTables';
 import type { PageResults } from './pageResults';
 import type { Present } from './present';
