@@ -316,7 +316,8 @@ export class App implements ComputeHost, ActionsHost, StudyHost {
           id: 'fig-3d',
           png: async (caption) => pngWithCaption(await this.view3dGlue.toPngBlob(1800), caption),
           tableId: null,
-          extra: () => [byId('view3d-note').textContent ?? ''],
+          // The view's note without its on-screen hint.
+          extra: () => [(byId('view3d-note').textContent ?? '').replace(/;?\s*drag to orbit\.?/, '.')],
         },
       ],
       this,
