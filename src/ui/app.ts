@@ -28,9 +28,12 @@ import { type ActionsHost, wirePageActions } from './pageActions';
 import { type ComputeHost, PageCompute } from './pageCompute';
 import { PageStore } from './pageStore';
 import { showTabPanel, wireTabs } from './pageTabs';
+import type { ReportHost, ReportPlotName } from './report/reportTypes';
+import { wireReport } from './report/wireReport';
 import { RoadGlue } from './roadGlue';
 import type { RoadPlotName } from './roadPanel';
 import { StudyGlue, type StudyHost } from './studyGlue';
+import type { ValidationPanel } from './validationPanel';
 import { View3dGlue } from './view3dGlue';
 import { type TabId, type ViewState, validateView } from './viewState';
 import { renderBaselineList } from './views/baselineList';
@@ -49,7 +52,7 @@ import { type HangReport, onWorkerHang } from './watchdog';
 type MainPlotName = 'dragYaw' | 'sideYaw' | 'dragCover' | 'handling';
 export type PlotName = MainPlotName | RoadPlotName | DataPlotName;
 
-export class App implements ComputeHost, ActionsHost, StudyHost {
+export class App implements ComputeHost, ActionsHost, StudyHost, ReportHost {
   state: AppState;
   private readonly computer: PageCompute;
   private controls!: Controls;
@@ -108,10 +111,10 @@ export class App implements ComputeHost, ActionsHost, StudyHost {
     return this.plots[name].currentSpec();
   }
 
-  private validationLoading: Promise<{ shown(): void }> | null = null;
+  private validationLoading: Promise<ValidationPanel> | null = null;
 
-  /** The Help tab's reference table, loaded and computed only when Help is opened. */
-  private validationPanel(): Promise<{ shown(): void }> {
+  /** The Help tab's reference table, loaded and computed only when Help is opened (or a report asks). */
+  private validationPanel(): Promise<ValidationPanel> {
     this.validationLoading ??= import('./validationPanel').then(
       ({ ValidationPanel }) => new ValidationPanel(byId('validation')),
     );
@@ -144,6 +147,7 @@ export class App implements ComputeHost, ActionsHost, StudyHost {
     byId('undo-pick').addEventListener('click', () => this.mapPick.undo());
     this.wireFigureActions();
     wirePageActions(this);
+    wireReport(this);
     wireTabs((tab) => this.setView({ tab }));
     this.apply(this.state, { replaceUrl: true });
     window.addEventListener('hashchange', () => this.store.onHashChange());
@@ -330,6 +334,27 @@ export class App implements ComputeHost, ActionsHost, StudyHost {
     if (tab === 'road') void this.roadGlue.panel();
     if (tab === 'study') void this.studyGlue.panel();
     if (tab === 'help') void this.validationPanel().then((panel) => panel.shown());
+  }
+
+  // The printable report's host (src/ui/report).
+  reportPlotSpec(name: ReportPlotName) {
+    return this.plots[name].currentSpec();
+  }
+
+  lastRide() {
+    return this.roadGlue.lastResult();
+  }
+
+  validationReport() {
+    return this.validationPanel().then((panel) => panel.report());
+  }
+
+  computePhase() {
+    const phase = document.body.dataset.state;
+    if (phase === 'computing') return 'computing' as const;
+    return phase === 'done' && !this.computer.needed(this.state)
+      ? ('ready' as const)
+      : ('incomplete' as const);
   }
 
   // The design study's host: the ride, and a chosen design made current through the map's pick path.

@@ -48,7 +48,11 @@ export class DesignMap {
   /** The plot area of the last drawing (CSS pixels), for turning a click into a grid cell. */
   private box: { left: number; top: number; pw: number; ph: number } | null = null;
 
-  constructor(private readonly container: HTMLElement) {
+  /** `pixelRatio`: canvas pixels per CSS pixel (default: the screen's; the printable report asks for more). */
+  constructor(
+    private readonly container: HTMLElement,
+    private readonly pixelRatio: number | null = null,
+  ) {
     this.canvas = document.createElement('canvas');
     this.canvas.setAttribute('role', 'img');
     this.canvas.className = 'map-canvas';
@@ -74,7 +78,7 @@ export class DesignMap {
   draw(): void {
     const width = Math.max(320, Math.floor(this.container.clientWidth));
     const height = Math.max(260, Math.min(480, Math.round(width * 0.8)));
-    const dpr = window.devicePixelRatio || 1;
+    const dpr = this.pixelRatio ?? (window.devicePixelRatio || 1);
     this.canvas.width = Math.round(width * dpr);
     this.canvas.height = Math.round(height * dpr);
     this.canvas.style.width = `${width}px`;

@@ -111,9 +111,17 @@ function reportTable(report: ValidationReport): HTMLElement {
 export class ValidationPanel {
   private started = false;
   private readonly worker = new JobWorker();
+  /** The computed report, shared with the printable report (src/ui/report). */
+  private computed: Promise<ValidationReport> | null = null;
 
   constructor(private readonly host: HTMLElement) {
     host.dataset.state = 'idle';
+  }
+
+  /** The report (computing it, and filling Help's table, if it has not been). */
+  report(): Promise<ValidationReport> {
+    this.shown();
+    return this.computed!;
   }
 
   shown(): void {
@@ -121,20 +129,22 @@ export class ValidationPanel {
     this.started = true;
     this.host.dataset.state = 'computing';
     this.host.replaceChildren(el('p', { className: 'small', text: 'Computing the reference cases…' }));
-    void this.worker
+    this.computed = this.worker
       .run((api) => api.validate())
       .then((outcome) => {
         if (outcome.status === 'done') {
           this.host.replaceChildren(reportTable(outcome.value));
           this.host.dataset.state = 'done';
-        } else {
-          const why = outcome.status === 'failed' ? outcome.error : outcome.status;
-          this.host.replaceChildren(
-            el('p', { className: 'field-error', text: `The reference cases could not be computed: ${why}` }),
-          );
-          this.host.dataset.state = 'failed';
-          this.started = false;
+          return outcome.value;
         }
+        const why = outcome.status === 'failed' ? outcome.error : outcome.status;
+        this.host.replaceChildren(
+          el('p', { className: 'field-error', text: `The reference cases could not be computed: ${why}` }),
+        );
+        this.host.dataset.state = 'failed';
+        this.started = false;
+        throw new Error(why);
       });
+    this.computed.catch(() => {});
   }
 }
