@@ -4,8 +4,9 @@
  * print stylesheet (report.css) prints the report alone on one A4 or Letter page. #report's
  * data-state says building, ready or failed.
  */
-import { version } from '../../../package.json';
+
 import { button, el } from '../dom';
+import { TOOL_VERSION } from '../export/toolVersion';
 import { byId } from '../views/present';
 import { buildReport } from './buildReport';
 import { fitToPage } from './fitToPage';
@@ -50,7 +51,7 @@ export async function openReport(host: ReportHost, print: () => void): Promise<v
     await waitForPage(() => host.computePhase() === 'computing');
     status.textContent = 'Building the report (the validation cases are computed once)…';
     const data = await gatherReport(host);
-    const page = buildReport(data, { version, date: reportDateText(new Date()) });
+    const page = buildReport(data, { version: TOOL_VERSION, date: reportDateText(new Date()) });
     root.replaceChildren(bar, page);
     await Promise.all([...page.querySelectorAll('img')].map((img) => img.decode()));
     fitToPage(page);
