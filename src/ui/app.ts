@@ -14,10 +14,13 @@ import { pinCurrent } from './baselines/pinnedBaselines';
 import { Controls } from './controls';
 import { DataGlue } from './dataGlue';
 import type { DataPlotName } from './dataPanel';
-import { designFileStem } from './designFileStem';
 import { DesignMap } from './designMap';
 import type { DurableCopy } from './durableAutosave';
 import { crashPoolWorker, hangPoolWorkers } from './earlyPool';
+import { setExportSource } from './export/exportContext';
+import { mapSvg } from './export/mapSvg';
+import { plotSvg } from './export/plotSvg';
+import { pngWithCaption } from './export/pngWithCaption';
 import type { Field, FieldValue } from './fields';
 import { LinePlot } from './linePlot';
 import { Messages } from './messages';
@@ -25,9 +28,12 @@ import { type ActionsHost, wirePageActions } from './pageActions';
 import { type ComputeHost, PageCompute } from './pageCompute';
 import { PageStore } from './pageStore';
 import { showTabPanel, wireTabs } from './pageTabs';
+import type { ReportHost, ReportPlotName } from './report/reportTypes';
+import { wireReport } from './report/wireReport';
 import { RoadGlue } from './roadGlue';
 import type { RoadPlotName } from './roadPanel';
 import { StudyGlue, type StudyHost } from './studyGlue';
+import type { ValidationPanel } from './validationPanel';
 import { View3dGlue } from './view3dGlue';
 import { type TabId, type ViewState, validateView } from './viewState';
 import { renderBaselineList } from './views/baselineList';
@@ -46,7 +52,7 @@ import { type HangReport, onWorkerHang } from './watchdog';
 type MainPlotName = 'dragYaw' | 'sideYaw' | 'dragCover' | 'handling';
 export type PlotName = MainPlotName | RoadPlotName | DataPlotName;
 
-export class App implements ComputeHost, ActionsHost, StudyHost {
+export class App implements ComputeHost, ActionsHost, StudyHost, ReportHost {
   state: AppState;
   private readonly computer: PageCompute;
   private controls!: Controls;
@@ -105,10 +111,10 @@ export class App implements ComputeHost, ActionsHost, StudyHost {
     return this.plots[name].currentSpec();
   }
 
-  private validationLoading: Promise<{ shown(): void }> | null = null;
+  private validationLoading: Promise<ValidationPanel> | null = null;
 
-  /** The Help tab's reference table, loaded and computed only when Help is opened. */
-  private validationPanel(): Promise<{ shown(): void }> {
+  /** The Help tab's reference table, loaded and computed only when Help is opened (or a report asks). */
+  private validationPanel(): Promise<ValidationPanel> {
     this.validationLoading ??= import('./validationPanel').then(
       ({ ValidationPanel }) => new ValidationPanel(byId('validation')),
     );
@@ -124,12 +130,24 @@ export class App implements ComputeHost, ActionsHost, StudyHost {
     this.computer.startNow();
     await new Promise((resolve) => setTimeout(resolve, 0));
     this.controls = new Controls(byId('controls'), this.state, (field, value) => this.onEdit(field, value));
-    this.tables = new PageTables(byId('tables'), () => designFileStem(this.state.case));
+    setExportSource(
+      () => ({
+        case: this.state.case,
+        calibration: this.state.calibration ?? null,
+        speedUnit: this.state.view.speedUnit,
+        ...(this.state.road ? { road: this.state.road } : {}),
+      }),
+      (what, error) => this.messages.show('error', what, [error.message], 'export'),
+    );
+    this.tables = new PageTables(byId('tables'), (id) =>
+      id === 'table-map' ? (this.designMap.currentData()?.title ?? []) : [],
+    );
     this.designMap.onPick((i, j) => this.mapPick.pick(i, j));
     this.mapRide.mount();
     byId('undo-pick').addEventListener('click', () => this.mapPick.undo());
     this.wireFigureActions();
     wirePageActions(this);
+    wireReport(this);
     wireTabs((tab) => this.setView({ tab }));
     this.apply(this.state, { replaceUrl: true });
     window.addEventListener('hashchange', () => this.store.onHashChange());
@@ -280,14 +298,31 @@ export class App implements ComputeHost, ActionsHost, StudyHost {
   // Buttons, files, tabs
 
   private wireFigureActions(): void {
+    const plot = (p: LinePlot) => (caption: string[]) => {
+      const spec = p.currentSpec();
+      return spec ? plotSvg(spec, caption) : null;
+    };
     wireFigureActions(
       [
-        ['fig-drag-yaw', () => this.plots.dragYaw.toPngBlob(), 'table-family'],
-        ['fig-side-yaw', () => this.plots.sideYaw.toPngBlob(), 'table-family'],
-        ['fig-drag-cover', () => this.plots.dragCover.toPngBlob(), 'table-cover'],
-        ['fig-handling', () => this.plots.handling.toPngBlob(), 'table-current'],
-        ['fig-map', () => this.designMap.toPngBlob(), 'table-map'],
-        ['fig-3d', () => this.view3dGlue.toPngBlob(), null],
+        { id: 'fig-drag-yaw', svg: plot(this.plots.dragYaw), tableId: 'table-family' },
+        { id: 'fig-side-yaw', svg: plot(this.plots.sideYaw), tableId: 'table-family' },
+        { id: 'fig-drag-cover', svg: plot(this.plots.dragCover), tableId: 'table-cover' },
+        { id: 'fig-handling', svg: plot(this.plots.handling), tableId: 'table-current' },
+        {
+          id: 'fig-map',
+          svg: (caption) => {
+            const d = this.designMap.currentData();
+            return d ? mapSvg(d, caption) : null;
+          },
+          tableId: 'table-map',
+        },
+        {
+          id: 'fig-3d',
+          png: async (caption) => pngWithCaption(await this.view3dGlue.toPngBlob(1800), caption),
+          tableId: null,
+          // The view's note without its on-screen hint.
+          extra: () => [(byId('view3d-note').textContent ?? '').replace(/;?\s*drag to orbit\.?/, '.')],
+        },
       ],
       this,
     );
@@ -299,6 +334,27 @@ export class App implements ComputeHost, ActionsHost, StudyHost {
     if (tab === 'road') void this.roadGlue.panel();
     if (tab === 'study') void this.studyGlue.panel();
     if (tab === 'help') void this.validationPanel().then((panel) => panel.shown());
+  }
+
+  // The printable report's host (src/ui/report).
+  reportPlotSpec(name: ReportPlotName) {
+    return this.plots[name].currentSpec();
+  }
+
+  lastRide() {
+    return this.roadGlue.lastResult();
+  }
+
+  validationReport() {
+    return this.validationPanel().then((panel) => panel.report());
+  }
+
+  computePhase() {
+    const phase = document.body.dataset.state;
+    if (phase === 'computing') return 'computing' as const;
+    return phase === 'done' && !this.computer.needed(this.state)
+      ? ('ready' as const)
+      : ('incomplete' as const);
   }
 
   // The design study's host: the ride, and a chosen design made current through the map's pick path.

@@ -48,7 +48,11 @@ export class DesignMap {
   /** The plot area of the last drawing (CSS pixels), for turning a click into a grid cell. */
   private box: { left: number; top: number; pw: number; ph: number } | null = null;
 
-  constructor(private readonly container: HTMLElement) {
+  /** `pixelRatio`: canvas pixels per CSS pixel (default: the screen's; the printable report asks for more). */
+  constructor(
+    private readonly container: HTMLElement,
+    private readonly pixelRatio: number | null = null,
+  ) {
     this.canvas = document.createElement('canvas');
     this.canvas.setAttribute('role', 'img');
     this.canvas.className = 'map-canvas';
@@ -66,10 +70,15 @@ export class DesignMap {
     this.draw();
   }
 
+  /** What the map shows now (null before the first results). */
+  currentData(): MapData | null {
+    return this.data;
+  }
+
   draw(): void {
     const width = Math.max(320, Math.floor(this.container.clientWidth));
     const height = Math.max(260, Math.min(480, Math.round(width * 0.8)));
-    const dpr = window.devicePixelRatio || 1;
+    const dpr = this.pixelRatio ?? (window.devicePixelRatio || 1);
     this.canvas.width = Math.round(width * dpr);
     this.canvas.height = Math.round(height * dpr);
     this.canvas.style.width = `${width}px`;
@@ -280,15 +289,6 @@ export class DesignMap {
       if (fx < 0 || fx > 1 || fy < 0 || fy > 1) return;
       pick(Math.round(fx * (d.xs.length - 1)), Math.round(fy * (d.ys.length - 1)));
     });
-  }
-
-  toPngBlob(): Promise<Blob> {
-    return new Promise((resolve, reject) =>
-      this.canvas.toBlob(
-        (b) => (b ? resolve(b) : reject(new Error('the map could not be drawn to PNG'))),
-        'image/png',
-      ),
-    );
   }
 
   dispose(): void {

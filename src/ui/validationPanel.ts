@@ -8,6 +8,7 @@ import { formatNumber, withUnit } from '../compute/validation/bandText';
 import type { ValidationReport, ValidationRow } from '../compute/validation/types';
 import { el } from './dom';
 import { pool } from './earlyPool';
+import { tableExportButtons } from './export/tableExportButtons';
 
 function referenceText(row: ValidationRow): string {
   const nominal = row.reference === null ? '' : `${formatNumber(row.reference)}; `;
@@ -41,9 +42,51 @@ function tableRow(row: ValidationRow): HTMLTableRowElement {
   ]);
 }
 
+/** The report as an export: one row per reference case, numbers at full precision. */
+function reportData(report: ValidationReport) {
+  return {
+    headers: [
+      'Id',
+      'Group',
+      'Quantity',
+      'Unit',
+      'Case',
+      'Source',
+      'Strength',
+      'Reference',
+      'Band',
+      'Model',
+      'Result',
+      'Known disagreement',
+    ],
+    rows: report.rows.map((r) => [
+      r.id,
+      r.group,
+      r.quantity,
+      r.unit,
+      r.description,
+      r.source,
+      r.strength,
+      r.reference,
+      r.band_text,
+      r.model,
+      r.pass ? 'pass' : r.model === null ? `not computed: ${r.error ?? 'no value'}` : 'FAIL',
+      r.known_disagreement,
+    ]),
+  };
+}
+
 function reportTable(report: ValidationReport): HTMLElement {
   const head = ['Case', 'Source', 'Strength', 'Reference and band', 'Model', 'Result'];
-  return el('div', { className: 'table-scroll validation-scroll' }, [
+  const exportHead = el('div', { className: 'table-head' });
+  exportHead.append(
+    ...tableExportButtons({
+      title: () => 'The model against its built-in reference cases (coversweep validate)',
+      suffix: 'validation',
+      data: () => reportData(report),
+    }),
+  );
+  const scroll = el('div', { className: 'table-scroll validation-scroll' }, [
     el('table', { className: 'data-table validation-table', attrs: { id: 'validation-table' } }, [
       el('caption', {
         text: `${report.passed} of ${report.rows.length} reference cases pass; ${report.failed} fail (${report.known} of them known, documented disagreements)`,
@@ -58,14 +101,26 @@ function reportTable(report: ValidationReport): HTMLElement {
       el('tbody', {}, report.rows.map(tableRow)),
     ]),
   ]);
+  return el('div', { className: 'table-block', attrs: { id: 'validation-table-block' } }, [
+    exportHead,
+    scroll,
+  ]);
 }
 
 /** Compute the reference set as a task on the pool and show it in `host` (once; later calls do nothing). */
 export class ValidationPanel {
   private started = false;
+  /** The computed report, shared with the printable report (src/ui/report). */
+  private computed: Promise<ValidationReport> | null = null;
 
   constructor(private readonly host: HTMLElement) {
     host.dataset.state = 'idle';
+  }
+
+  /** The report (computing it, and filling Help's table, if it has not been). */
+  report(): Promise<ValidationReport> {
+    this.shown();
+    return this.computed!;
   }
 
   shown(): void {
@@ -73,18 +128,20 @@ export class ValidationPanel {
     this.started = true;
     this.host.dataset.state = 'computing';
     this.host.replaceChildren(el('p', { className: 'small', text: 'Computing the reference cases…' }));
-    void pool.runTask({ kind: 'validate' }).then((outcome) => {
+    this.computed = pool.runTask({ kind: 'validate' }).then((outcome) => {
       if (outcome.status === 'done') {
         this.host.replaceChildren(reportTable(outcome.value));
         this.host.dataset.state = 'done';
-      } else {
-        const why = outcome.status === 'failed' ? outcome.error : outcome.status;
-        this.host.replaceChildren(
-          el('p', { className: 'field-error', text: `The reference cases could not be computed: ${why}` }),
-        );
-        this.host.dataset.state = 'failed';
-        this.started = false;
+        return outcome.value;
       }
+      const why = outcome.status === 'failed' ? outcome.error : outcome.status;
+      this.host.replaceChildren(
+        el('p', { className: 'field-error', text: `The reference cases could not be computed: ${why}` }),
+      );
+      this.host.dataset.state = 'failed';
+      this.started = false;
+      throw new Error(why);
     });
+    this.computed.catch(() => {});
   }
 }
