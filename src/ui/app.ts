@@ -60,7 +60,7 @@ export class App implements ComputeHost, ActionsHost, StudyHost {
   private readonly view3dGlue = new View3dGlue(this);
   /** The two panels (built, and their code loaded, when first opened), each with its own worker. */
   private readonly roadGlue = new RoadGlue(this);
-  private readonly dataGlue = new DataGlue(this);
+  private readonly dataGlue = new DataGlue(this, (hash) => this.store.autosave.dataFor(hash));
   /** The design study tab (built when first opened), with its own worker. */
   private readonly studyGlue = new StudyGlue(this);
   private lastCaseKey = '';
@@ -170,6 +170,7 @@ export class App implements ComputeHost, ActionsHost, StudyHost {
     this.roadGlue.showInputs(next);
     this.studyGlue.showInputs(next);
     this.dataGlue.showCalibrationBadge(next.calibration ?? null);
+    this.dataGlue.showData(next);
     const caseKey = JSON.stringify(next.case);
     if (caseKey !== this.lastCaseKey) {
       if (this.lastCaseKey !== '') this.dataGlue.designChanged();

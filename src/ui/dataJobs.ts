@@ -25,6 +25,7 @@ import {
   runComparison,
 } from '../compute/compare/index';
 import { BoundedCache } from '../compute/engine/boundedCache';
+import { sha256Hex } from '../compute/sha256';
 
 /** Where a table comes from: a file the user chose, or text (pasted, or the demo file). */
 export type TableSource = { kind: 'file'; file: File } | { kind: 'text'; text: string };
@@ -44,6 +45,9 @@ export interface TableSummary {
   rowCount: number;
   preview: string[][];
   guess: MapGuess;
+  /** The table's text as read (kept with the page's state) and its SHA-256, which names it in a link. */
+  text: string;
+  hash: string;
 }
 
 export type ReadOutcome = { ok: true; summary: TableSummary } | { ok: false; errors: string[] };
@@ -238,6 +242,12 @@ export const dataJobsApi: DataJobsApi = {
     const r = await tableFor(ref);
     if (!r.ok) return r;
     const t = r.value;
+    let text: string;
+    try {
+      text = ref.source.kind === 'text' ? ref.source.text : await ref.source.file.text();
+    } catch (error) {
+      return { ok: false, errors: [`could not read the file: ${(error as Error).message}`] };
+    }
     return {
       ok: true,
       summary: {
@@ -245,6 +255,8 @@ export const dataJobsApi: DataJobsApi = {
         rowCount: t.rows.length,
         preview: t.rows.slice(0, PREVIEW_ROWS),
         guess: guessMap(t.headers, t, context),
+        text,
+        hash: sha256Hex(text),
       },
     };
   },
