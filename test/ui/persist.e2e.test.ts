@@ -4,12 +4,12 @@
 // a reload brings them back from the autosave; the link, opened where the data is not, says the data
 // must be imported again and, once the same file is, restores its mapping and fit.
 // Waits on the page's own state marks (data-state), never on timers.
-import { existsSync, mkdirSync, readFileSync } from 'node:fs';
+import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import type { Browser, BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { CompareReport } from '../../src/compute/compare/index';
-import type { AppState } from '../../src/ui/appState';
+import { type AppState, stateToProjectText } from '../../src/ui/appState';
 import { type E2ePage, startE2ePage } from './e2eServer';
 
 interface Inspect {
@@ -54,7 +54,7 @@ function mappingShown(page: Page) {
   });
 }
 
-const fitTable = (page: Page) => page.locator('#table-data-fit tbody').innerText();
+const fitTable = (page: Page) => page.locator('#table-data-fit tbody').textContent();
 
 describe.skipIf(!haveBrowser && !requireBrowser)('imported data kept, in headless Chromium', () => {
   let browser: Browser;
@@ -117,6 +117,7 @@ describe.skipIf(!haveBrowser && !requireBrowser)('imported data kept, in headles
     const mapping = await mappingShown(page);
     expect(mapping.columns).toContain('Yaw moment [N m]: ignore 1');
     const fit = await fitTable(page);
+    expect(fit).toMatch(/porosity_scale.*suction_recovered.*profile_drag_factor/);
     const badgeText = await badge.textContent();
     expect(badgeText).toMatch(/^CALIBRATED model: fitted to demo-tunnel\.csv/);
     expect(before.data?.hash).toMatch(/^[0-9a-f]{64}$/);
@@ -181,5 +182,50 @@ describe.skipIf(!haveBrowser && !requireBrowser)('imported data kept, in headles
     expect(await fitTable(linked)).toBe(fit);
     await note.waitFor({ state: 'detached' });
     expect((await state(linked)).data).toEqual(before.data);
+  }, 600_000);
+
+  it('data too large for the browser storage: the page says so, and after a reload asks for the file again; a malformed data entry in a project file changes nothing', async () => {
+    const page = await freshPage();
+    await page.click('#tab-data');
+    // 60,000 invented rows, about 2.4 million characters: more than the autosave keeps.
+    let csv = 'Yaw [deg],Speed [km/h],Drag [g],Side force [lbf]\n';
+    for (let i = 0; i < 60_000; i++) {
+      const yaw = -10 + (i % 41) * 0.5;
+      csv += `${yaw.toFixed(6)},${(30 + (i % 3) * 10).toFixed(6)},${(75 + i * 1e-4).toFixed(6)},${(yaw * 0.12).toFixed(6)}\n`;
+    }
+    await page.setInputFiles('#data-file', {
+      name: 'big.csv',
+      mimeType: 'text/csv',
+      buffer: Buffer.from(csv),
+    });
+    expect(await dataPanel(page, ['mapping', 'error'])).toBe('mapping');
+    const warning = page.locator('.message[data-id="autosave-data"]');
+    await warning.waitFor();
+    expect(await warning.textContent()).toMatch(
+      /your data “big\.csv” \(60000 rows\) is not in the autosave: 2\.\d million characters, more than the 2 million/,
+    );
+    const before = await state(page);
+    expect(before.data?.rows).toBe(60_000);
+    await page.reload();
+    await settled(page);
+    const note = page.locator('.message[data-id="data-ref"]');
+    await note.waitFor();
+    expect(await note.textContent()).toMatch(
+      /refers to data “big\.csv” \(60000 rows, SHA-256 [0-9a-f]{12}…\) whose rows are not in this browser/,
+    );
+
+    // A project file whose data hash is malformed: named with its rule; the design and data stay.
+    const shown = await state(page);
+    const doc = JSON.parse(stateToProjectText({ ...shown, case: { ...shown.case, name: 'Other design' } }));
+    doc.data.hash = 'not-a-hash';
+    const bad = join(OUT, 'persist-bad-hash.coversweep-project.json');
+    writeFileSync(bad, JSON.stringify(doc));
+    await page.setInputFiles('#open-project', bad);
+    const error = page.locator('.message.error[data-id="file"]');
+    await error.waitFor();
+    expect(await error.textContent()).toContain(
+      'persist-bad-hash.coversweep-project.json: data.hash: must be the data\'s SHA-256 as 64 lower-case hex digits, got "not-a-hash"',
+    );
+    expect(await state(page)).toEqual(shown);
   }, 600_000);
 });
