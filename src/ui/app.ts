@@ -160,8 +160,10 @@ export class App implements ComputeHost, ActionsHost, StudyHost {
 
   /** Make `next` the state: autosave, URL, controls, then recompute or redraw. */
   apply(next: AppState, opts: { replaceUrl: boolean } = { replaceUrl: true }): void {
+    const onlyData = onlyDataChanged(this.state, next);
     this.state = next;
     this.store.save(next, opts.replaceUrl);
+    if (onlyData) return this.dataGlue.showData(next); // the imported data: kept, nothing to redraw
     this.controls.refresh(next);
     byId('clear-baseline').hidden = next.baseline === null;
     renderBaselineList(byId('baseline-list'), next, (s) => this.apply(s));
@@ -329,4 +331,12 @@ export class App implements ComputeHost, ActionsHost, StudyHost {
     if (pinned.ok) this.apply(pinned.state);
     this.messages.show(pinned.ok ? 'info' : 'warning', pinned.message, [], 'baseline');
   }
+}
+
+/** Whether `next` differs from `prev` only in its imported data (the other parts are the same objects). */
+function onlyDataChanged(prev: AppState, next: AppState): boolean {
+  if (prev === next || prev.data === next.data) return false;
+  const keys = new Set([...Object.keys(prev), ...Object.keys(next)]);
+  for (const k of keys) if (k !== 'data' && prev[k as keyof AppState] !== next[k as keyof AppState]) return false;
+  return true;
 }

@@ -118,6 +118,8 @@ export class AutosaveStore {
   private serial = 0;
   /** The data hash whose CSV the storage could not take, with the reason (not retried on every save). */
   private dataFailed: { hash: string; note: string } | null = null;
+  /** The data hash this tab last wrote or found under DATA_KEY (saves in between skip reading it). */
+  private dataKept: string | null = null;
 
   constructor(
     private readonly storage: StorageLike,
@@ -230,13 +232,18 @@ export class AutosaveStore {
   private saveData(data: SavedData): string | null {
     if (data.csv === undefined) return null; // a reference only: whatever is stored stays
     if (this.dataFailed?.hash === data.hash) return this.dataFailed.note;
+    if (this.dataKept === data.hash) return null;
     try {
-      if (this.storedHash() === data.hash) return null;
+      if (this.storedHash() === data.hash) {
+        this.dataKept = data.hash;
+        return null;
+      }
       if (data.csv.length > MAX_AUTOSAVED_DATA_CHARS)
         throw new Error(
           `${(data.csv.length / 1e6).toFixed(1)} million characters, more than the ${MAX_AUTOSAVED_DATA_CHARS / 1e6} million the page keeps in this browser's storage`,
         );
       this.storage.setItem(DATA_KEY, JSON.stringify({ hash: data.hash, name: data.name, csv: data.csv }));
+      this.dataKept = data.hash;
       this.dataFailed = null;
       return null;
     } catch (error) {

@@ -2,7 +2,8 @@
  * The data panel's heavy work, run in the page-jobs worker so that a large table never blocks the page:
  * reading the CSV (a dropped file is handed over as a File and read there), guessing the columns, and
  * the comparison. The parsed table stays in the worker (keyed by the panel's reference); the page only
- * ever holds a summary (headers, row count, a few rows, the guessed map). A fresh worker (after a
+ * ever holds a summary (headers, row count, a few rows, the guessed map) and the text as read with its
+ * SHA-256 (to keep with the page state). A fresh worker (after a
  * cancel or a crash) reads the source again. The comparison's per-point results travel back as
  * columns of typed arrays (buffers transferred, no per-row objects to copy), and the page reads rows
  * from them on demand. No DOM here: this module runs in the worker and in the page.
