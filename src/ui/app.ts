@@ -158,6 +158,10 @@ export class App implements ComputeHost, ActionsHost, StudyHost {
   // -------------------------------------------------------------------------------------------
   // State
 
+  withDataText(state: AppState): Promise<AppState> {
+    return this.dataGlue.withText(state);
+  }
+
   /** Make `next` the state: autosave, URL, controls, then recompute or redraw. */
   apply(next: AppState, opts: { replaceUrl: boolean } = { replaceUrl: true }): void {
     const onlyData = onlyDataChanged(this.state, next);
@@ -337,6 +341,7 @@ export class App implements ComputeHost, ActionsHost, StudyHost {
 function onlyDataChanged(prev: AppState, next: AppState): boolean {
   if (prev === next || prev.data === next.data) return false;
   const keys = new Set([...Object.keys(prev), ...Object.keys(next)]);
-  for (const k of keys) if (k !== 'data' && prev[k as keyof AppState] !== next[k as keyof AppState]) return false;
+  for (const k of keys)
+    if (k !== 'data' && prev[k as keyof AppState] !== next[k as keyof AppState]) return false;
   return true;
 }

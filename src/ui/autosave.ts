@@ -230,17 +230,19 @@ export class AutosaveStore {
 
   /** Keep the data's CSV under DATA_KEY (once per data); a note when it cannot be kept, else null. */
   private saveData(data: SavedData): string | null {
-    if (data.csv === undefined) return null; // a reference only: whatever is stored stays
     if (this.dataFailed?.hash === data.hash) return this.dataFailed.note;
     if (this.dataKept === data.hash) return null;
+    const chars = data.csv?.length ?? data.chars ?? 0;
+    // A reference only (a link, or rows held back in the data worker): whatever is stored stays.
+    if (data.csv === undefined && chars <= MAX_AUTOSAVED_DATA_CHARS) return null;
     try {
       if (this.storedHash() === data.hash) {
         this.dataKept = data.hash;
         return null;
       }
-      if (data.csv.length > MAX_AUTOSAVED_DATA_CHARS)
+      if (data.csv === undefined || chars > MAX_AUTOSAVED_DATA_CHARS)
         throw new Error(
-          `${(data.csv.length / 1e6).toFixed(1)} million characters, more than the ${MAX_AUTOSAVED_DATA_CHARS / 1e6} million the page keeps in this browser's storage`,
+          `${(chars / 1e6).toFixed(1)} million characters, more than the ${MAX_AUTOSAVED_DATA_CHARS / 1e6} million the page keeps in this browser's storage`,
         );
       this.storage.setItem(DATA_KEY, JSON.stringify({ hash: data.hash, name: data.name, csv: data.csv }));
       this.dataKept = data.hash;

@@ -10,7 +10,7 @@ import type { CalibrationResult } from '../compute/compare/index';
 import type { AppState, CalibrationMark } from './appState';
 import { DATA_SLIP_LABELS } from './data/dataLabels';
 import { pendingText, type SavedData } from './data/savedData';
-import type { PackedResult, ReadOutcome } from './dataJobs';
+import type { PackedResult, ReadOutcome, TableRef, TextOutcome } from './dataJobs';
 import type { DataContext, DataPanel, DataPlotName, DataRunRequest } from './dataPanel';
 import { fmt } from './displayUnits';
 import { JobWorker } from './jobWorker';
@@ -68,10 +68,30 @@ export class DataGlue {
     void this.panel().then((panel) => panel.restore(shown));
   }
 
+  /**
+   * `state` with its data's CSV text, for a project file: a table too large to hold in the page is
+   * read again in a worker of its own (the data worker's running job is never displaced).
+   */
+  async withText(state: AppState): Promise<AppState> {
+    const d = state.data;
+    if (!d || d.csv !== undefined || !this.data) return state;
+    const held = await this.data.dataWithText();
+    return held?.hash === d.hash && held.csv !== undefined
+      ? { ...state, data: { ...d, csv: held.csv } }
+      : state;
+  }
+
+  private async tableText(ref: TableRef): Promise<string | null> {
+    const worker = new JobWorker();
+    const size = ref.source.kind === 'file' ? ref.source.file.size : ref.source.text.length;
+    const out = await worker.run<TextOutcome>((api) => api.tableText(ref), readDeadlineMs(size));
+    worker.cancel();
+    return out.status === 'done' && out.value.ok ? out.value.text : null;
+  }
+
   /** Keep the panel's data in the state (autosave, link, project file). */
-  private putData(data: SavedData): void {
-    if (data.csv !== undefined && this.host.state.data?.csv === undefined)
-      this.host.messages.clear('data-ref');
+  private putData(data: SavedData, fromPanel = false): void {
+    if (fromPanel) this.host.messages.clear('data-ref');
     this.shownKey = dataKey(data);
     this.shownData = data;
     this.host.apply({ ...this.host.state, data });
@@ -116,7 +136,8 @@ export class DataGlue {
           panel.setStatus('done', 'Cancelled; the results shown are from the last finished run.');
         },
         onUseCalibrated: (use, calibration, points) => this.useCalibrated(use, calibration, points),
-        onData: (data) => this.putData(data),
+        onData: (data) => this.putData(data, true),
+        text: (ref) => this.tableText(ref),
       });
       this.data = panel;
       panel.setCalibratedInUse(Boolean(this.host.state.calibration));

@@ -46,10 +46,20 @@ export interface TableSummary {
   rowCount: number;
   preview: string[][];
   guess: MapGuess;
-  /** The table's text as read (kept with the page's state) and its SHA-256, which names it in a link. */
-  text: string;
+  /**
+   * The table's text as read (kept with the page's state), or null when longer than MAX_INLINE_CHARS: a
+   * large text stays here until a project file asks for it (tableText), so reading never moves tens
+   * of MB to the page. Its length in characters, and its SHA-256, which names it in a link.
+   */
+  text: string | null;
+  chars: number;
   hash: string;
 }
+
+/** Longest table text handed to the page with its summary (characters): what the autosave can keep. */
+export const MAX_INLINE_CHARS = 2_000_000;
+
+export type TextOutcome = { ok: true; text: string } | { ok: false; errors: string[] };
 
 export type ReadOutcome = { ok: true; summary: TableSummary } | { ok: false; errors: string[] };
 
@@ -92,6 +102,8 @@ export interface TableCompareRequest extends Omit<CompareRequest, 'table'> {
 
 export interface DataJobsApi {
   readTable(ref: TableRef, context: GuessContext): Promise<ReadOutcome>;
+  /** The table's text as read (a large one, held back by readTable), or an error. */
+  tableText(ref: TableRef): Promise<TextOutcome>;
   compareTable(request: TableCompareRequest): Promise<PackedResult>;
 }
 
@@ -230,6 +242,14 @@ async function readSource(source: TableSource): Promise<CsvResult> {
   }
 }
 
+async function textOf(source: TableSource): Promise<TextOutcome> {
+  try {
+    return { ok: true, text: source.kind === 'text' ? source.text : await source.file.text() };
+  } catch (error) {
+    return { ok: false, errors: [`could not read the file: ${(error as Error).message}`] };
+  }
+}
+
 async function tableFor(ref: TableRef): Promise<CsvResult> {
   const kept = tables.get(ref.id);
   if (kept) return { ok: true, value: kept };
@@ -243,12 +263,9 @@ export const dataJobsApi: DataJobsApi = {
     const r = await tableFor(ref);
     if (!r.ok) return r;
     const t = r.value;
-    let text: string;
-    try {
-      text = ref.source.kind === 'text' ? ref.source.text : await ref.source.file.text();
-    } catch (error) {
-      return { ok: false, errors: [`could not read the file: ${(error as Error).message}`] };
-    }
+    const read = await textOf(ref.source);
+    if (!read.ok) return read;
+    const text = read.text;
     return {
       ok: true,
       summary: {
@@ -256,11 +273,13 @@ export const dataJobsApi: DataJobsApi = {
         rowCount: t.rows.length,
         preview: t.rows.slice(0, PREVIEW_ROWS),
         guess: guessMap(t.headers, t, context),
-        text,
+        text: text.length <= MAX_INLINE_CHARS ? text : null,
+        chars: text.length,
         hash: sha256Hex(text),
       },
     };
   },
+  tableText: (ref) => textOf(ref.source),
   async compareTable(request) {
     const { ref, ...rest } = request;
     const t = await tableFor(ref);

@@ -27,7 +27,7 @@ import type {
 import { fillMappingForm, type MapRow, mapFromForm } from './data/mappingForm';
 import { overlayOutput, renderDataPlot } from './data/renderDataPlot';
 import { renderConvergence, renderFit, renderResiduals, renderUncertainty } from './data/renderDataTables';
-import { errorBlock, renderSummary } from './data/renderFlags';
+import { errorBlock, renderSummary, runText } from './data/renderFlags';
 import {
   FIT_RESTORED_NOTE,
   fitResult,
@@ -78,6 +78,8 @@ export class DataPanel {
       onUseCalibrated(use: boolean, calibration: CalibrationResult | null, points: number): void;
       /** The data, its applied mapping or its fit changed (to keep in the page's state). */
       onData(data: SavedData): void;
+      /** A table's text, read in the background (null when it cannot be read). */
+      text(ref: TableRef): Promise<string | null>;
     },
   ) {
     this.dom = buildDataPanelDom(host, {
@@ -151,7 +153,8 @@ export class DataPanel {
       this.restoreFor?.id === ref.id ? this.restoreFor.data : pending?.hash === sum.hash ? pending : null;
     this.pending = null;
     delete this.host.dataset.pending;
-    this.data = { name: label, hash: sum.hash, rows: sum.rowCount, csv: sum.text };
+    this.data = { name: label, hash: sum.hash, rows: sum.rowCount, chars: sum.chars };
+    if (sum.text !== null) this.data.csv = sum.text;
     this.table = result.summary;
     this.ref = ref;
     this.label = label;
@@ -180,7 +183,7 @@ export class DataPanel {
   private restoreMapping(kept: SavedData, ref: TableRef): void {
     const data = this.data!;
     // Data named by a reference and now imported again: its rows go back into the page's state.
-    if (kept.csv === undefined) this.handlers.onData({ ...kept, name: data.name, csv: data.csv });
+    if (kept.csv === undefined) this.handlers.onData({ ...kept, ...data });
     this.data = { ...data, ...(kept.map ? { map: kept.map } : {}), ...(kept.fit ? { fit: kept.fit } : {}) };
     this.fillMapping(kept.map);
     if (!kept.map) {
@@ -236,14 +239,7 @@ export class DataPanel {
 
   private run(extra: { calibrate?: boolean; convergence?: boolean; uncertainty?: UncertainRange[] }): void {
     if (!this.applied) return;
-    const what = extra.calibrate
-      ? 'Fitting the model’s parameters to the data (a few seconds)…'
-      : extra.convergence
-        ? 'Convergence study: the model on three lattices…'
-        : extra.uncertainty
-          ? 'Input-uncertainty band: sampling the model…'
-          : 'Comparing the data with the model…';
-    this.setStatus('computing', what);
+    this.setStatus('computing', runText(extra, 'running'));
     this.handlers.onRun({
       ...this.applied,
       calibrate: extra.calibrate ?? false,
@@ -284,6 +280,14 @@ export class DataPanel {
     this.dom.status.textContent = text;
     this.dom.cancelButton.hidden = state !== 'computing';
     for (const b of this.dom.actionButtons) b.disabled = state === 'computing';
+  }
+
+  /** The data shown, with its CSV text (fetched from the worker when too large to hold here), or null. */
+  async dataWithText(): Promise<SavedData | null> {
+    const data = this.data;
+    if (!data || data.csv !== undefined || !this.ref) return data;
+    const csv = await this.handlers.text(this.ref);
+    return csv === null ? data : { ...data, csv };
   }
 
   setCalibratedInUse(on: boolean): void {
@@ -372,16 +376,7 @@ export class DataPanel {
       step();
     }
     this.report = report;
-    this.setStatus(
-      'done',
-      request.calibrate
-        ? 'Fit done.'
-        : request.convergence
-          ? 'Convergence study done.'
-          : request.uncertainty
-            ? 'Input-uncertainty band done.'
-            : 'Comparison done.',
-    );
+    this.setStatus('done', runText(request, 'done'));
   }
 
   private renderOverlay(report: CompareReport, which: DataPlotName): void {

@@ -4,6 +4,7 @@
  */
 import { parseCaseFile } from '../compute/caseFile';
 import {
+  type AppState,
   MAX_CASE_FILE_BYTES,
   MAX_LINK_CHARS,
   MAX_PROJECT_BYTES,
@@ -23,6 +24,8 @@ import { byId } from './views/present';
 export interface ActionsHost extends PageHost {
   cancelCompute(): void;
   showKept(): void;
+  /** The state with its imported data's CSV text (held back in a worker when large). */
+  withDataText(state: AppState): Promise<AppState>;
 }
 
 export function wirePageActions(host: ActionsHost): void {
@@ -59,10 +62,18 @@ export function wirePageActions(host: ActionsHost): void {
         host.messages.show('info', 'Copy this link (it reopens this design and view):', [link], 'link-copy'),
     ) ?? host.messages.show('info', 'Copy this link (it reopens this design and view):', [link], 'link-copy');
   });
-  byId('save-project').addEventListener('click', () => {
+  byId('save-project').addEventListener('click', async () => {
+    const state = await host.withDataText(host.state);
+    if (state.data && state.data.csv === undefined)
+      host.messages.show(
+        'warning',
+        `The project file keeps a reference to your data “${state.data.name}”, not its rows: they could not be read again. Import the file again before saving to keep them.`,
+        [],
+        'file',
+      );
     downloadText(
-      `${designFileStem(host.state.case)}.coversweep-project.json`,
-      stateToProjectText(host.state),
+      `${designFileStem(state.case)}.coversweep-project.json`,
+      stateToProjectText(state),
       'application/json',
     );
   });

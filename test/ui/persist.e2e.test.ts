@@ -206,6 +206,15 @@ describe.skipIf(!haveBrowser && !requireBrowser)('imported data kept, in headles
     );
     const before = await state(page);
     expect(before.data?.rows).toBe(60_000);
+    // Its rows stay in the data worker (not handed to the page), and a project file still gets them.
+    expect(before.data?.csv).toBeUndefined();
+    expect(before.data?.chars).toBe(csv.length);
+    const [download] = await Promise.all([page.waitForEvent('download'), page.click('#save-project')]);
+    const doc = JSON.parse(readFileSync((await download.path())!, 'utf8'));
+    expect(doc.data.csv === csv, `project file's data.csv: ${String(doc.data.csv).length} characters`).toBe(
+      true,
+    );
+    expect(doc.data.hash).toBe(before.data!.hash);
     await page.reload();
     await settled(page);
     const note = page.locator('.message[data-id="data-ref"]');
@@ -216,10 +225,12 @@ describe.skipIf(!haveBrowser && !requireBrowser)('imported data kept, in headles
 
     // A project file whose data hash is malformed: named with its rule; the design and data stay.
     const shown = await state(page);
-    const doc = JSON.parse(stateToProjectText({ ...shown, case: { ...shown.case, name: 'Other design' } }));
-    doc.data.hash = 'not-a-hash';
+    const badDoc = JSON.parse(
+      stateToProjectText({ ...shown, case: { ...shown.case, name: 'Other design' } }),
+    );
+    badDoc.data.hash = 'not-a-hash';
     const bad = join(OUT, 'persist-bad-hash.coversweep-project.json');
-    writeFileSync(bad, JSON.stringify(doc));
+    writeFileSync(bad, JSON.stringify(badDoc));
     await page.setInputFiles('#open-project', bad);
     const error = page.locator('.message.error[data-id="file"]');
     await error.waitFor();

@@ -150,9 +150,12 @@ describe('the data section of a project file', () => {
       'p.json: data.fit.parameters[0].name: must be one of porosity_scale, suction_recovered, profile_drag_factor, got "spoke_count"',
     ]);
     expect(errorsOf(withData((d) => (d.rowz = 3)))).toEqual([
-      'p.json: data: unknown key rowz (allowed: name, hash, rows, csv, map, fit)',
+      'p.json: data: unknown key rowz (allowed: name, hash, rows, chars, csv, map, fit)',
     ]);
     expect(errorsOf(withData((d) => (d.name = '')))).toEqual(['p.json: data.name: must not be empty']);
+    expect(errorsOf(withData((d) => (d.chars = 12)))).toEqual([
+      `p.json: data.chars: must be the length of data.csv (${csv.length}), got 12`,
+    ]);
     expect(errorsOf(withData(() => undefined, 3))[0]).toBe(
       'p.json: version: unsupported project version 3: newer than this program reads (version 2); update CoverSweep to open it',
     );
@@ -209,6 +212,13 @@ describe('the data in the autosave', () => {
     const loaded = new AutosaveStore(s).load();
     const { csv: _c, ...ref } = bigData;
     expect(loaded.kind === 'ok' && loaded.state.data).toEqual(ref);
+    // Rows held back in the data worker (too large to hand to the page): said the same way.
+    const { csv: _held, ...heldBack } = bigData;
+    const held = new AutosaveStore(new MemoryStorage()).save({
+      ...state,
+      data: { ...heldBack, chars: big.length },
+    });
+    expect(held.dataNote).toMatch(/is not in the autosave: 2\.0 million characters, more than the 2 million/);
     // A storage that refuses the write: the same, with the storage's reason.
     const full = new MemoryStorage();
     full.full.add(DATA_KEY);

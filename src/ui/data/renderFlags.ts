@@ -1,4 +1,4 @@
-/** The data panel's text blocks: the comparison's summary line and slip notices, and lists of errors. */
+/** The data panel's text blocks: the comparison's summary line and slip notices, lists of errors, status words. */
 import type { CompareReport } from '../../compute/compare/index';
 import { el } from '../dom';
 import type { DataPanelDom } from './dataPanelTypes';
@@ -38,4 +38,19 @@ export function renderSummary(
           ]),
         ]),
   );
+}
+
+/** The panel's status while a run of this kind goes on, or once it is done. */
+export function runText(
+  run: { calibrate?: boolean; convergence?: boolean; uncertainty?: unknown },
+  phase: 'running' | 'done',
+): string {
+  const [running, done] = run.calibrate
+    ? ['Fitting the model’s parameters to the data (a few seconds)…', 'Fit done.']
+    : run.convergence
+      ? ['Convergence study: the model on three lattices…', 'Convergence study done.']
+      : run.uncertainty
+        ? ['Input-uncertainty band: sampling the model…', 'Input-uncertainty band done.']
+        : ['Comparing the data with the model…', 'Comparison done.'];
+  return phase === 'running' ? running : done;
 }

@@ -33,6 +33,8 @@ export interface SavedData {
   hash: string;
   /** Data rows in the table. */
   rows: number;
+  /** The CSV's length in characters (absent in files written before it was kept). */
+  chars?: number;
   /** The table's text as read; absent in a link, or where it could not be kept. */
   csv?: string;
   /** The mapping that was applied (absent while the columns are still being mapped). */
@@ -121,6 +123,7 @@ const dataSchema = z.strictObject(
     rows: count(`a whole number of data rows from 1 to ${MAX_DATA_ROWS}`, MAX_DATA_ROWS).min(1, {
       error: `must be a whole number of data rows from 1 to ${MAX_DATA_ROWS}`,
     }),
+    chars: count(`a whole number of characters from 0 to ${MAX_DATA_BYTES}`, MAX_DATA_BYTES).optional(),
     csv: z
       .string({ error: (iss) => `must be the data's CSV text, got ${describeValue(iss.input)}` })
       .max(MAX_DATA_BYTES, { error: `must be at most ${MAX_DATA_BYTES} characters (the data file limit)` })
@@ -131,7 +134,7 @@ const dataSchema = z.strictObject(
   {
     error: (iss) =>
       iss.code === 'unrecognized_keys'
-        ? `unknown key ${iss.keys.join(', ')} (allowed: name, hash, rows, csv, map, fit)`
+        ? `unknown key ${iss.keys.join(', ')} (allowed: name, hash, rows, chars, csv, map, fit)`
         : `must be an object {"name", "hash", "rows", ...}, got ${describeValue(iss.input)}`,
   },
 );
@@ -153,7 +156,10 @@ export function validateSavedData(raw: unknown, label: string, verifyHash = true
   const d = shape.data;
   const errors: string[] = [];
   const value: SavedData = { name: d.name, hash: d.hash, rows: d.rows };
-  if (d.csv !== undefined) {
+  if (d.chars !== undefined) value.chars = d.chars;
+  if (d.csv !== undefined && d.chars !== undefined && d.chars !== d.csv.length) {
+    errors.push(`${label}: data.chars: must be the length of data.csv (${d.csv.length}), got ${d.chars}`);
+  } else if (d.csv !== undefined) {
     const got = verifyHash ? sha256Hex(d.csv) : d.hash;
     if (got !== d.hash) {
       errors.push(
