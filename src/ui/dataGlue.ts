@@ -136,7 +136,8 @@ export class DataGlue {
           panel.setStatus('done', 'Cancelled; the results shown are from the last finished run.');
         },
         onUseCalibrated: (use, calibration, points) => this.useCalibrated(use, calibration, points),
-        onData: (data) => this.putData(data, true),
+        // In a task of its own: the autosave and its notice do not lengthen the panel's drawing task.
+        onData: (data) => setTimeout(() => this.putData(data, true), 0),
         text: (ref) => this.tableText(ref),
       });
       this.data = panel;
