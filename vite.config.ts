@@ -1,5 +1,11 @@
 /// <reference types="vitest/config" />
+import { readFileSync } from 'node:fs';
 import { defineConfig } from 'vite';
+
+/** The tool's version (package.json), put into the page at build time: exports carry it in their captions. */
+const TOOL_VERSION = (
+  JSON.parse(readFileSync(new URL('./package.json', import.meta.url), 'utf8')) as { version: string }
+).version;
 
 /**
  * Headers the dev and preview servers send with every response. The page's own Content-Security-Policy
@@ -20,6 +26,7 @@ export const SECURITY_HEADERS: Record<string, string> = {
 export default defineConfig({
   root: '.',
   publicDir: 'public',
+  define: { __COVERSWEEP_VERSION__: JSON.stringify(TOOL_VERSION) },
   worker: { format: 'es' },
   server: { headers: SECURITY_HEADERS },
   preview: { headers: SECURITY_HEADERS },

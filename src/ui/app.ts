@@ -14,10 +14,13 @@ import { pinCurrent } from './baselines/pinnedBaselines';
 import { Controls } from './controls';
 import { DataGlue } from './dataGlue';
 import type { DataPlotName } from './dataPanel';
-import { designFileStem } from './designFileStem';
 import { DesignMap } from './designMap';
 import type { DurableCopy } from './durableAutosave';
 import { crashPoolWorker, hangPoolWorkers } from './earlyPool';
+import { setExportSource } from './export/exportContext';
+import { mapSvg } from './export/mapSvg';
+import { plotSvg } from './export/plotSvg';
+import { pngWithCaption } from './export/pngWithCaption';
 import type { Field, FieldValue } from './fields';
 import { LinePlot } from './linePlot';
 import { Messages } from './messages';
@@ -124,7 +127,18 @@ export class App implements ComputeHost, ActionsHost, StudyHost {
     this.computer.startNow();
     await new Promise((resolve) => setTimeout(resolve, 0));
     this.controls = new Controls(byId('controls'), this.state, (field, value) => this.onEdit(field, value));
-    this.tables = new PageTables(byId('tables'), () => designFileStem(this.state.case));
+    setExportSource(
+      () => ({
+        case: this.state.case,
+        calibration: this.state.calibration ?? null,
+        speedUnit: this.state.view.speedUnit,
+        ...(this.state.road ? { road: this.state.road } : {}),
+      }),
+      (what, error) => this.messages.show('error', what, [error.message], 'export'),
+    );
+    this.tables = new PageTables(byId('tables'), (id) =>
+      id === 'table-map' ? (this.designMap.currentData()?.title ?? []) : [],
+    );
     this.designMap.onPick((i, j) => this.mapPick.pick(i, j));
     this.mapRide.mount();
     byId('undo-pick').addEventListener('click', () => this.mapPick.undo());
@@ -287,14 +301,31 @@ export class App implements ComputeHost, ActionsHost, StudyHost {
   // Buttons, files, tabs
 
   private wireFigureActions(): void {
+    const plot = (p: LinePlot) => (caption: string[]) => {
+      const spec = p.currentSpec();
+      return spec ? plotSvg(spec, caption) : null;
+    };
     wireFigureActions(
       [
-        ['fig-drag-yaw', () => this.plots.dragYaw.toPngBlob(), 'table-family'],
-        ['fig-side-yaw', () => this.plots.sideYaw.toPngBlob(), 'table-family'],
-        ['fig-drag-cover', () => this.plots.dragCover.toPngBlob(), 'table-cover'],
-        ['fig-handling', () => this.plots.handling.toPngBlob(), 'table-current'],
-        ['fig-map', () => this.designMap.toPngBlob(), 'table-map'],
-        ['fig-3d', () => this.view3dGlue.toPngBlob(), null],
+        { id: 'fig-drag-yaw', svg: plot(this.plots.dragYaw), tableId: 'table-family' },
+        { id: 'fig-side-yaw', svg: plot(this.plots.sideYaw), tableId: 'table-family' },
+        { id: 'fig-drag-cover', svg: plot(this.plots.dragCover), tableId: 'table-cover' },
+        { id: 'fig-handling', svg: plot(this.plots.handling), tableId: 'table-current' },
+        {
+          id: 'fig-map',
+          svg: (caption) => {
+            const d = this.designMap.currentData();
+            return d ? mapSvg(d, caption) : null;
+          },
+          tableId: 'table-map',
+        },
+        {
+          id: 'fig-3d',
+          png: async (caption) => pngWithCaption(await this.view3dGlue.toPngBlob(1800), caption),
+          tableId: null,
+          // The view's note without its on-screen hint.
+          extra: () => [(byId('view3d-note').textContent ?? '').replace(/;?\s*drag to orbit\.?/, '.')],
+        },
       ],
       this,
     );

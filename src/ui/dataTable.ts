@@ -195,8 +195,13 @@ export class DataTable {
     );
   }
 
-  /** The table as CSV (units in the header names), full precision, in the current sort order. */
-  toCsv(): string {
+  /** The table's caption (what it shows). */
+  caption(): string {
+    return this.element.caption?.textContent ?? this.id;
+  }
+
+  /** Headers (units in the names) and every row at full precision, in the current sort order. */
+  exportData(): { headers: string[]; rows: Cell[][] } {
     const rows: Cell[][] = [];
     for (let i = 0; i < this.source.count; i++) {
       const r = this.rowAt(i);
@@ -207,9 +212,12 @@ export class DataTable {
         }),
       );
     }
-    return toCsv(
-      this.columns.map((c) => c.header),
-      rows,
-    );
+    return { headers: this.columns.map((c) => c.header), rows };
+  }
+
+  /** The table as CSV (units in the header names), full precision, in the current sort order. */
+  toCsv(): string {
+    const { headers, rows } = this.exportData();
+    return toCsv(headers, rows);
   }
 }

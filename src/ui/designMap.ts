@@ -66,6 +66,11 @@ export class DesignMap {
     this.draw();
   }
 
+  /** What the map shows now (null before the first results). */
+  currentData(): MapData | null {
+    return this.data;
+  }
+
   draw(): void {
     const width = Math.max(320, Math.floor(this.container.clientWidth));
     const height = Math.max(260, Math.min(480, Math.round(width * 0.8)));
@@ -280,15 +285,6 @@ export class DesignMap {
       if (fx < 0 || fx > 1 || fy < 0 || fy > 1) return;
       pick(Math.round(fx * (d.xs.length - 1)), Math.round(fy * (d.ys.length - 1)));
     });
-  }
-
-  toPngBlob(): Promise<Blob> {
-    return new Promise((resolve, reject) =>
-      this.canvas.toBlob(
-        (b) => (b ? resolve(b) : reject(new Error('the map could not be drawn to PNG'))),
-        'image/png',
-      ),
-    );
   }
 
   dispose(): void {

@@ -1,6 +1,7 @@
 /**
  * A line plot (uPlot) in a figure with a title, sized to its container, with an accessible label that
- * points at the table holding the same numbers, and a PNG export that includes the title and legend.
+ * points at the table holding the same numbers. Its PNG and SVG exports are drawn from `currentSpec()`
+ * (src/ui/export/plotSvg.ts), at high resolution with the full legend and a caption block.
  */
 import uPlot from 'uplot';
 import { BEYOND_YAW_WHY, beyondYawIntervals } from './yawTrust';
@@ -257,56 +258,6 @@ export class LinePlot {
       ctx.stroke();
       ctx.restore();
     }
-  }
-
-  /** The plot as PNG: title, the chart (axes included) and the legend. */
-  toPngBlob(): Promise<Blob> {
-    const plot = this.plot;
-    const spec = this.spec;
-    if (!plot || !spec) return Promise.reject(new Error('the plot has not been drawn yet'));
-    const src = plot.ctx.canvas;
-    const dpr = src.width / plot.width || 1;
-    const titleH = 28 * dpr;
-    const rowH = 18 * dpr;
-    const perRow = 3;
-    const noteH = this.beyondNote ? rowH : 0;
-    const legendH =
-      Math.ceil(spec.series.filter((s) => !s.noLegend).length / perRow) * rowH + 8 * dpr + noteH;
-    const out = document.createElement('canvas');
-    out.width = src.width;
-    out.height = src.height + titleH + legendH;
-    const ctx = out.getContext('2d');
-    if (!ctx) return Promise.reject(new Error('no 2D canvas'));
-    ctx.fillStyle = '#fff';
-    ctx.fillRect(0, 0, out.width, out.height);
-    ctx.fillStyle = '#1b2430';
-    ctx.font = `${13 * dpr}px system-ui, sans-serif`;
-    ctx.fillText(spec.title, 8 * dpr, 19 * dpr);
-    ctx.drawImage(src, 0, titleH);
-    ctx.font = `${11 * dpr}px system-ui, sans-serif`;
-    const colW = out.width / perRow;
-    spec.series
-      .filter((s) => !s.noLegend)
-      .forEach((s, k) => {
-        const x = (k % perRow) * colW + 8 * dpr;
-        const y = titleH + src.height + Math.floor(k / perRow) * rowH + 12 * dpr;
-        ctx.strokeStyle = s.stroke;
-        ctx.lineWidth = (s.width ?? 1.5) * dpr;
-        ctx.setLineDash((s.dash ?? []).map((d) => d * dpr));
-        ctx.beginPath();
-        ctx.moveTo(x, y - 4 * dpr);
-        ctx.lineTo(x + 18 * dpr, y - 4 * dpr);
-        ctx.stroke();
-        ctx.setLineDash([]);
-        ctx.fillText(s.label, x + 24 * dpr, y);
-      });
-    if (this.beyondNote) {
-      ctx.fillStyle = '#5b6776';
-      ctx.fillText(this.beyondNote, 8 * dpr, out.height - 8 * dpr);
-    }
-    return new Promise((resolve, reject) =>
-      out.toBlob((b) => (b ? resolve(b) : reject(new Error('PNG export failed'))), 'image/png'),
-    );
   }
 
   dispose(): void {

@@ -7,6 +7,7 @@
 import { formatNumber, withUnit } from '../compute/validation/bandText';
 import type { ValidationReport, ValidationRow } from '../compute/validation/types';
 import { el } from './dom';
+import { tableExportButtons } from './export/tableExportButtons';
 import { JobWorker } from './jobWorker';
 
 function referenceText(row: ValidationRow): string {
@@ -41,9 +42,51 @@ function tableRow(row: ValidationRow): HTMLTableRowElement {
   ]);
 }
 
+/** The report as an export: one row per reference case, numbers at full precision. */
+function reportData(report: ValidationReport) {
+  return {
+    headers: [
+      'Id',
+      'Group',
+      'Quantity',
+      'Unit',
+      'Case',
+      'Source',
+      'Strength',
+      'Reference',
+      'Band',
+      'Model',
+      'Result',
+      'Known disagreement',
+    ],
+    rows: report.rows.map((r) => [
+      r.id,
+      r.group,
+      r.quantity,
+      r.unit,
+      r.description,
+      r.source,
+      r.strength,
+      r.reference,
+      r.band_text,
+      r.model,
+      r.pass ? 'pass' : r.model === null ? `not computed: ${r.error ?? 'no value'}` : 'FAIL',
+      r.known_disagreement,
+    ]),
+  };
+}
+
 function reportTable(report: ValidationReport): HTMLElement {
   const head = ['Case', 'Source', 'Strength', 'Reference and band', 'Model', 'Result'];
-  return el('div', { className: 'table-scroll validation-scroll' }, [
+  const exportHead = el('div', { className: 'table-head' });
+  exportHead.append(
+    ...tableExportButtons({
+      title: () => 'The model against its built-in reference cases (coversweep validate)',
+      suffix: 'validation',
+      data: () => reportData(report),
+    }),
+  );
+  const scroll = el('div', { className: 'table-scroll validation-scroll' }, [
     el('table', { className: 'data-table validation-table', attrs: { id: 'validation-table' } }, [
       el('caption', {
         text: `${report.passed} of ${report.rows.length} reference cases pass; ${report.failed} fail (${report.known} of them known, documented disagreements)`,
@@ -57,6 +100,10 @@ function reportTable(report: ValidationReport): HTMLElement {
       ]),
       el('tbody', {}, report.rows.map(tableRow)),
     ]),
+  ]);
+  return el('div', { className: 'table-block', attrs: { id: 'validation-table-block' } }, [
+    exportHead,
+    scroll,
   ]);
 }
 

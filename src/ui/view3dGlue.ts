@@ -54,8 +54,10 @@ export class View3dGlue {
     }
   }
 
-  toPngBlob(): Promise<Blob> {
-    return this.view ? this.view.toPngBlob() : Promise.reject(new Error('the 3D view is not available'));
+  toPngBlob(minWidthPx?: number): Promise<Blob> {
+    return this.view
+      ? this.view.toPngBlob(minWidthPx)
+      : Promise.reject(new Error('the 3D view is not available'));
   }
 
   private async setUp(): Promise<void> {

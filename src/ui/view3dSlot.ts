@@ -11,7 +11,7 @@ export interface WheelView {
   update(field: ViewField): void;
   setLayers(layers: Partial<ViewLayers>): void;
   layers(): ViewLayers;
-  toPngBlob(): Promise<Blob>;
+  toPngBlob(minWidthPx?: number): Promise<Blob>;
   dispose(): void;
 }
 

@@ -93,9 +93,11 @@ describe.skipIf(!haveBrowser && !requireBrowser)('page fixes in headless Chromiu
       page.locator('#table-map-block button', { hasText: 'CSV' }).click(),
     ]);
     expect(csvDownload.suggestedFilename()).toBe(`design-rim-80mm-cover-${coverPct}pct-map.csv`);
+    // The header block's '# key: value' lines come first (every export describes itself).
     const lines = readFileSync((await csvDownload.path())!, 'utf8')
       .trim()
-      .split(/\r\n/);
+      .split(/\r\n/)
+      .filter((l) => !l.startsWith('#'));
     // RFC 4180 fields: split at commas outside quotes, then unquote.
     const fields = (line: string) =>
       line.split(/,(?=(?:[^"]*"[^"]*")*[^"]*$)/).map((f) => f.replace(/^"|"$/g, '').replace(/""/g, '"'));

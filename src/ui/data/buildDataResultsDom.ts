@@ -2,6 +2,8 @@
 import { UNCERTAIN_INPUTS, type UncertainInput } from '../../compute/compare/index';
 import { DataTable } from '../dataTable';
 import { button, el, plotFigure } from '../dom';
+import { addPlotExports } from '../export/addPlotExports';
+import { exportableTable } from '../export/exportableTable';
 import { LinePlot } from '../linePlot';
 import type { DataPanelActions, DataPanelDom } from './dataPanelTypes';
 
@@ -45,6 +47,10 @@ export function buildDataResultsDom(actions: DataPanelActions): DataResultsDom {
   const f2 = plotFigure('fig-data-side', 'Side force vs yaw: data over the model');
   const plots = { dataForce: new LinePlot(f1.plot, 240), dataSide: new LinePlot(f2.plot, 240) };
   const plotTitles = { dataForce: f1.title, dataSide: f2.title };
+  // Exports carry the comparison's summary (data file, points, conversions) in their captions.
+  const dataLines = () => [summary.textContent ?? ''];
+  addPlotExports(f1.figure, plots.dataForce, 'data-force', dataLines);
+  addPlotExports(f2.figure, plots.dataSide, 'data-side', dataLines);
   const resScroll = el('div', { className: 'table-scroll' });
   const residuals = new DataTable(
     resScroll,
@@ -61,7 +67,7 @@ export function buildDataResultsDom(actions: DataPanelActions): DataResultsDom {
   useCalibrated.disabled = true;
   useCalibrated.addEventListener('change', () => actions.useCalibratedChanged(useCalibrated.checked));
   const fitBlock = el('div', { className: 'table-block', attrs: { id: 'data-fit' } }, [
-    fitScroll,
+    exportableTable(fitScroll, fitTable, 'data-fit', dataLines),
     fitText,
     el('label', { className: 'toggle', attrs: { for: 'data-use-calibrated' } }, [
       useCalibrated,
@@ -71,11 +77,11 @@ export function buildDataResultsDom(actions: DataPanelActions): DataResultsDom {
   fitBlock.hidden = true;
   const convScroll = el('div', { className: 'table-scroll' });
   const convergenceTable = new DataTable(convScroll, 'table-data-convergence', 'Lattice convergence study');
-  const convergenceBlock = el('div', { className: 'table-block' }, [convScroll]);
+  const convergenceBlock = exportableTable(convScroll, convergenceTable, 'data-convergence', dataLines);
   convergenceBlock.hidden = true;
   const uncScroll = el('div', { className: 'table-scroll' });
   const uncertaintyTable = new DataTable(uncScroll, 'table-data-uncertainty', 'Input-uncertainty band');
-  const uncertaintyBlock = el('div', { className: 'table-block' }, [uncScroll]);
+  const uncertaintyBlock = exportableTable(uncScroll, uncertaintyTable, 'data-uncertainty', dataLines);
   uncertaintyBlock.hidden = true;
   const ranges = el('div', { className: 'ranges' });
   for (const name of UNCERTAIN_INPUTS) {
@@ -112,8 +118,8 @@ export function buildDataResultsDom(actions: DataPanelActions): DataResultsDom {
     summary,
     flags,
     el('div', { className: 'plot-grid' }, [f1.figure, f2.figure]),
-    el('div', { className: 'table-block' }, [sumScroll]),
-    el('div', { className: 'table-block' }, [resScroll]),
+    exportableTable(sumScroll, residualSummary, 'data-summary', dataLines),
+    exportableTable(resScroll, residuals, 'data-residuals', dataLines),
     el('h3', { text: 'Calibrate and check the model' }),
     el('p', {
       className: 'small',

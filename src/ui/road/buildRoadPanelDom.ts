@@ -2,6 +2,8 @@
 import { RIDE_CAUTIONS } from '../../compute/ride/index';
 import { DataTable } from '../dataTable';
 import { button, el, plotFigure } from '../dom';
+import { addPlotExports } from '../export/addPlotExports';
+import { exportableTable } from '../export/exportableTable';
 import { LinePlot } from '../linePlot';
 import { RIDE_FIELD_GROUPS } from './rideFieldGroups';
 import type { Field, FieldView } from './roadField';
@@ -125,6 +127,11 @@ export function buildRoadPanelDom(host: HTMLElement, actions: RoadPanelActions):
     roadSteering: new LinePlot(steer.plot, 220),
     roadSegments: new LinePlot(seg.plot, 220),
   };
+  // Exports carry the design-against-baseline line and the ride's inputs in their captions.
+  const rideLines = (meta: { ride: string }) => [contextEl.textContent ?? '', meta.ride];
+  addPlotExports(yaw.figure, plots.roadYaw, 'road-yaw', rideLines);
+  addPlotExports(steer.figure, plots.roadSteering, 'road-steering', rideLines);
+  addPlotExports(seg.figure, plots.roadSegments, 'road-segments', rideLines);
   const breakdownScroll = el('div', { className: 'table-scroll' });
   const breakdown = new DataTable(
     breakdownScroll,
@@ -133,7 +140,7 @@ export function buildRoadPanelDom(host: HTMLElement, actions: RoadPanelActions):
   );
   const segScroll = el('div', { className: 'table-scroll' });
   const segments = new DataTable(segScroll, 'table-road-segments', 'Course segments');
-  const segmentsBlock = el('div', { className: 'table-block' }, [segScroll]);
+  const segmentsBlock = exportableTable(segScroll, segments, 'road-segments', rideLines);
   const flagsEl = el('ul', { className: 'road-flags', attrs: { id: 'road-flags' } });
   const notesEl = el('ul', { className: 'small' });
   const results = el('div', { className: 'road-results' }, [
@@ -143,7 +150,7 @@ export function buildRoadPanelDom(host: HTMLElement, actions: RoadPanelActions):
     el('div', { className: 'plot-grid road-plots' }, [yaw.figure, steer.figure, seg.figure]),
     el('h3', { text: 'Flags' }),
     flagsEl,
-    el('div', { className: 'table-block' }, [breakdownScroll]),
+    exportableTable(breakdownScroll, breakdown, 'road-power', rideLines),
     segmentsBlock,
     el('details', {}, [el('summary', { text: 'How these figures are computed' }), notesEl]),
   ]);

@@ -1,11 +1,15 @@
 /**
- * The designs of a study as a sortable table: one row per evaluated design, the study's variables and
- * the chosen objective columns with units; each header sorts by its column (aria-sort says which); a
- * click on a row (or Enter on it) calls `onSelect` with the design's index. The optimum and the
- * front's designs are marked, the selected row highlighted, and the cautions stand under the table.
+ * The designs of a study as a sortable table: one row per evaluated design, the study's variables (lengths
+ * in mm, as the page's inputs) and the chosen objective columns, a unit in every numeric header ("–" for a
+ * ratio); each header sorts by its column (aria-sort says which); a click on a row (or Enter on it) calls
+ * `onSelect` with the design's index. The optimum and the front's designs are marked, the selected row
+ * highlighted, and the cautions stand under the table. CSV and JSON buttons save every row at full
+ * precision with the export header (design, conditions, the study's objective and limits, the ride).
  */
 import { designVariable, type StudyDocument } from '../../compute/design/index';
 import { el } from '../dom';
+import { tableExportButtons } from '../export/tableExportButtons';
+import { studyCaptionLine } from './studyCaptionLine';
 import { studyCautions } from './studyCautions';
 import {
   cellText,
@@ -27,10 +31,11 @@ export interface DesignTable {
 export function designColumns(doc: StudyDocument): StudyColumn[] {
   const objectives = [doc.objective, ...doc.limits, doc.front.handling];
   const seen = new Set<string>();
+  // Lengths in mm, as the page's inputs give them (the study result holds SI metres).
   const cols: StudyColumn[] = doc.variables.map((v) => ({
     key: v.id,
     label: designVariable(v.id)?.label ?? v.id,
-    unit: v.unit,
+    ...(v.unit === 'm' ? { unit: 'mm', factor: 1000 } : { unit: v.unit }),
     from: 'design',
   }));
   for (const o of objectives) {
@@ -45,6 +50,22 @@ export function designColumns(doc: StudyDocument): StudyColumn[] {
     from: 'saved',
   });
   return cols;
+}
+
+/** A column's header: its label and unit; a dimensionless ratio says "–", a text column has no unit. */
+export function columnHeader(c: StudyColumn): string {
+  return c.unit === '1' ? `${c.label} (–)` : headerText(c.label, c.unit);
+}
+
+/** The table as an export: '#', the design's role, then every column, rows in evaluation order. */
+export function designTableData(
+  doc: StudyDocument,
+  columns: StudyColumn[],
+): { headers: string[]; rows: Array<Array<number | string | null>> } {
+  return {
+    headers: ['Design #', 'Role', ...columns.map(columnHeader)],
+    rows: studyRows(doc).map((r) => [r.index, r.role, ...columns.map((c) => cellValue(r, c))]),
+  };
 }
 
 export function designTable(
@@ -101,7 +122,7 @@ export function designTable(
       ...columns.map((c, k) => {
         const button = el('button', {
           className: 'sort',
-          text: headerText(c.label, c.unit),
+          text: columnHeader(c),
           attrs: { type: 'button' },
         });
         button.addEventListener('click', () => {
@@ -121,7 +142,17 @@ export function designTable(
   };
   drawHead();
   drawBody();
-  const element = el('div', { className: 'table-block' }, [
+  const exportHead = el('div', { className: 'table-head' });
+  exportHead.append(
+    ...tableExportButtons({
+      title: () => 'Designs evaluated by the design study',
+      suffix: 'study-designs',
+      data: () => designTableData(doc, columns),
+      extra: (meta) => [studyCaptionLine(doc), meta.ride],
+    }),
+  );
+  const element = el('div', { className: 'table-block', attrs: { id: 'table-study-designs-block' } }, [
+    exportHead,
     el('div', { className: 'table-scroll' }, [table]),
     studyCautions(doc.cautions),
   ]);

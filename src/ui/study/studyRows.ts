@@ -22,6 +22,8 @@ export interface StudyColumn {
   unit: string;
   /** Where the value is read: the design's variables, its objectives, or its savings. */
   from: 'design' | 'objectives' | 'saved';
+  /** Shown as the value times this (a length in m shown in mm, as the page's inputs); 1 when absent. */
+  factor?: number;
 }
 
 export function studyRows(doc: StudyDocument): StudyRow[] {
@@ -39,7 +41,8 @@ export function studyRows(doc: StudyDocument): StudyRow[] {
 export function cellValue(row: StudyRow, column: StudyColumn): number | string | null {
   const source =
     column.from === 'design' ? row.design : column.from === 'objectives' ? row.objectives : row.saved;
-  return source[column.key] ?? null;
+  const v = source[column.key] ?? null;
+  return typeof v === 'number' && column.factor !== undefined ? v * column.factor : v;
 }
 
 /**

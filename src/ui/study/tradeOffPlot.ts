@@ -7,6 +7,9 @@
 import uPlot from 'uplot';
 import type { StudyDocument } from '../../compute/design/index';
 import { el } from '../dom';
+import { addPlotExports } from '../export/addPlotExports';
+import type { PlotSpec } from '../linePlot';
+import { studyCaptionLine } from './studyCaptionLine';
 import { studyCautions } from './studyCautions';
 import { headerText, nearestPoint, studyRows } from './studyRows';
 
@@ -26,6 +29,24 @@ export function tradeOffData(doc: StudyDocument): {
   const optimum = rows.map((r) => (r.role === 'optimum' ? r.saved[o]! : null));
   const limit = doc.limits.find((l) => l.id === h)?.max ?? null;
   return { indices: rows.map((r) => r.index), data: [xs, all, front, optimum], limit };
+}
+
+/** The plot as the page's PlotSpec (for its PNG and SVG exports): the same series, the limit as a marker. */
+export function tradeOffSpec(doc: StudyDocument): PlotSpec {
+  const { data, limit } = tradeOffData(doc);
+  const values = (k: number) => Array.from(data[k] as ArrayLike<number | null>);
+  return {
+    title: 'Trade-off: saving against handling',
+    xLabel: headerText(doc.front.handling.label, doc.front.handling.unit),
+    yLabel: headerText(`${doc.objective.label} saved`, doc.objective.unit),
+    xs: values(0) as number[],
+    series: [
+      { label: 'every design', stroke: 'rgba(27, 36, 48, 0.45)', values: values(1), pointsOnly: true },
+      { label: 'the front', stroke: '#c0392b', values: values(2), spanGaps: true },
+      { label: 'the optimum', stroke: '#1a7f37', values: values(3), pointsOnly: true },
+    ],
+    ...(limit === null ? {} : { markersX: { xs: [limit], colour: 'rgba(20, 20, 20, 0.6)' } }),
+  };
 }
 
 export interface TradeOffPlot {
@@ -100,6 +121,15 @@ export function tradeOffPlot(
     el('span', { className: 'fig-title', text: 'Trade-off: saving against handling' }),
     ` (grey: every design; red: the front; green: the optimum${limit === null ? '' : `; dashed: the limit ${limit} ${doc.front.handling.unit}`}; click a point to make it the current design)`,
   ]);
-  const element = el('figure', { className: 'plot-card' }, [caption, holder, studyCautions(doc.cautions)]);
+  const element = el('figure', { className: 'plot-card', attrs: { id: 'fig-study-tradeoff' } }, [
+    caption,
+    holder,
+    studyCautions(doc.cautions),
+  ]);
+  const spec = tradeOffSpec(doc);
+  addPlotExports(element, { currentSpec: () => spec }, 'study-tradeoff', (meta) => [
+    studyCaptionLine(doc),
+    meta.ride,
+  ]);
   return { element, dispose: () => plot.destroy() };
 }

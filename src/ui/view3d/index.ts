@@ -167,9 +167,20 @@ export function createWheelView(container: HTMLElement, initialLayers: Partial<V
     requestRender();
   }
 
-  function toPngBlob(): Promise<Blob> {
+  /** The view as a PNG at least `minWidthPx` device pixels wide (rendered again at a higher pixel ratio). */
+  function toPngBlob(minWidthPx = 0): Promise<Blob> {
+    const ratio = renderer.getPixelRatio();
+    const cssWidth = Math.max(1, container.clientWidth);
+    const wanted = Math.min(4, Math.max(ratio, minWidthPx / cssWidth));
+    if (wanted !== ratio) renderer.setPixelRatio(wanted);
     renderNow();
-    return viewToPng(canvas, overlay, field, legendInfo);
+    // viewToPng copies the canvas before it returns, so the screen's pixel ratio can come back at once.
+    const png = viewToPng(canvas, overlay, field, legendInfo);
+    if (wanted !== ratio) {
+      renderer.setPixelRatio(ratio);
+      renderNow();
+    }
+    return png;
   }
 
   function dispose(): void {

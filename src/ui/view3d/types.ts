@@ -24,7 +24,7 @@ export interface WheelView {
   /** Render now (synchronously); normally renders happen on demand by themselves. */
   render(): void;
   /** The view as a PNG: the 3D image with the colour legend and the force values drawn onto it. */
-  toPngBlob(): Promise<Blob>;
+  toPngBlob(minWidthPx?: number): Promise<Blob>;
   dispose(): void;
 }
 

@@ -1,38 +1,45 @@
-/** Each figure's caption buttons: save as PNG, and show its numbers in the Tables tab. */
-import type { AppState } from '../appState';
-import { designFileStem } from '../designFileStem';
-import { downloadBlob } from '../download';
-import type { Messages } from '../messages';
+/**
+ * Each figure's caption buttons: save as PNG (high resolution) and SVG, both with the caption block
+ * (design, conditions, model options, CALIBRATED, version, date), or PNG only for a raster view (the 3D
+ * view); and show its numbers in the Tables tab. Files are named after the current design.
+ */
+
+import type { ExportMeta } from '../export/exportMeta';
+import { figureExportButtons } from '../export/figureExportButtons';
+import type { SvgFigure } from '../export/plotSvg';
+import { rasterExportButton } from '../export/rasterExportButton';
 import type { ViewState } from '../viewState';
 import { byId } from './present';
 
 export interface FigureHost {
-  readonly state: AppState;
-  readonly messages: Messages;
   setView(patch: Partial<ViewState>): void;
 }
 
-/** [figure element id, its PNG, the id of the table with its numbers (or null)] */
-export type FigureAction = [string, () => Promise<Blob>, string | null];
+export interface FigureAction {
+  /** The figure element's id (`fig-...`); the files' suffix is the id without `fig-`. */
+  id: string;
+  /** The figure as SVG with this caption (its PNG is the SVG rasterised), or null before it is drawn. */
+  svg?: (caption: string[]) => SvgFigure | null;
+  /** A raster-only figure's PNG with this caption. */
+  png?: (caption: string[]) => Promise<Blob>;
+  /** The id of the table with its numbers (or null). */
+  tableId: string | null;
+  /** Lines the figure adds to its caption. */
+  extra?: (meta: ExportMeta) => string[];
+}
 
 export function wireFigureActions(figures: readonly FigureAction[], host: FigureHost): void {
-  for (const [id, png, tableId] of figures) {
-    const cap = byId(id).querySelector('figcaption')!;
+  for (const f of figures) {
+    const cap = byId(f.id).querySelector('figcaption')!;
     const actions = document.createElement('span');
     actions.className = 'fig-actions';
-    const title = cap.querySelector('.fig-title')?.textContent ?? id;
-    const pngButton = document.createElement('button');
-    pngButton.type = 'button';
-    pngButton.textContent = 'PNG';
-    pngButton.setAttribute('aria-label', `Save as PNG: ${title}`);
-    pngButton.addEventListener('click', () => {
-      png().then(
-        (blob) => downloadBlob(`${designFileStem(host.state.case)}-${id.replace('fig-', '')}.png`, blob),
-        (error: Error) => host.messages.show('error', 'PNG export failed', [error.message], 'png'),
-      );
-    });
-    actions.append(pngButton);
-    if (tableId) {
+    const title = cap.querySelector('.fig-title')?.textContent ?? f.id;
+    const suffix = f.id.replace('fig-', '');
+    const extra = f.extra ? { extra: f.extra } : {};
+    if (f.svg) actions.append(...figureExportButtons({ title, suffix, svg: f.svg, ...extra }));
+    else if (f.png) actions.append(rasterExportButton(title, suffix, f.png, f.extra));
+    if (f.tableId) {
+      const tableId = f.tableId;
       const tableButton = document.createElement('button');
       tableButton.type = 'button';
       tableButton.textContent = 'Table';

@@ -1,6 +1,6 @@
-/** The Tables tab: one DataTable per view of the results, each with a CSV button. */
+/** The Tables tab: one DataTable per view of the results, each with CSV and JSON buttons (self-describing). */
 import { DataTable } from '../dataTable';
-import { downloadText, safeFileStem } from '../download';
+import { tableExportButtons } from '../export/tableExportButtons';
 import { renderCurrentTables } from './currentTables';
 import type { PageResults } from './pageResults';
 import type { Present } from './present';
@@ -9,8 +9,8 @@ import { renderSweepTables } from './sweepTables';
 export class PageTables {
   private readonly tables = new Map<string, DataTable>();
 
-  /** `designName` names the CSV files (the design's name at the time of the click). */
-  constructor(host: HTMLElement, designName: () => string | undefined) {
+  /** `extra(id)`: lines a table adds to its file's header (e.g. the map's yaw and airspeed). */
+  constructor(host: HTMLElement, extra: (id: string) => string[] = () => []) {
     const tables = this.tables;
     const specs: Array<[string, string]> = [
       ['table-current', 'Current design at each airspeed and yaw (drag and yaw plots, handling plot)'],
@@ -26,24 +26,20 @@ export class PageTables {
       block.id = `${id}-block`;
       const head = document.createElement('div');
       head.className = 'table-head';
-      const csv = document.createElement('button');
-      csv.type = 'button';
-      csv.textContent = 'CSV';
-      csv.setAttribute('aria-label', `Save as CSV: ${caption}`);
       const scroll = document.createElement('div');
       scroll.className = 'table-scroll';
       scroll.tabIndex = 0;
       scroll.setAttribute('role', 'region');
       scroll.setAttribute('aria-label', caption);
       const table = new DataTable(scroll, id, caption);
-      csv.addEventListener('click', () =>
-        downloadText(
-          `${safeFileStem(designName(), 'coversweep')}-${id.replace('table-', '')}.csv`,
-          table.toCsv(),
-          'text/csv',
-        ),
+      head.append(
+        ...tableExportButtons({
+          title: () => table.caption(),
+          suffix: id.replace('table-', ''),
+          data: () => table.exportData(),
+          extra: () => extra(id),
+        }),
       );
-      head.append(csv);
       block.append(head, scroll);
       host.append(block);
       tables.set(id, table);
