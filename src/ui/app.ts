@@ -181,7 +181,10 @@ export class App implements ComputeHost, ActionsHost, StudyHost {
     const onlyData = onlyDataChanged(this.state, next);
     this.state = next;
     this.store.save(next, opts.replaceUrl);
-    if (onlyData) return this.dataGlue.showData(next); // the imported data: kept, nothing to redraw
+    if (onlyData) {
+      this.dataGlue.showData(next); // the imported data: kept, nothing to redraw
+      return;
+    }
     this.controls.refresh(next);
     byId('clear-baseline').hidden = next.baseline === null;
     renderBaselineList(byId('baseline-list'), next, (s) => this.apply(s));
