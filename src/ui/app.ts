@@ -24,6 +24,7 @@ import { pngWithCaption } from './export/pngWithCaption';
 import type { Field, FieldValue } from './fields';
 import { LinePlot } from './linePlot';
 import { Messages } from './messages';
+import { onlyDataChanged } from './onlyDataChanged';
 import { type ActionsHost, wirePageActions } from './pageActions';
 import { type ComputeHost, PageCompute } from './pageCompute';
 import { PageStore } from './pageStore';
@@ -66,7 +67,7 @@ export class App implements ComputeHost, ActionsHost, StudyHost, ReportHost {
   private readonly view3dGlue = new View3dGlue(this);
   /** The two panels (built, and their code loaded, when first opened), each with its own worker. */
   private readonly roadGlue = new RoadGlue(this);
-  private readonly dataGlue = new DataGlue(this);
+  private readonly dataGlue = new DataGlue(this, (hash) => this.store.autosave.dataFor(hash));
   /** The design study tab (built when first opened), with its own worker. */
   private readonly studyGlue = new StudyGlue(this);
   private lastCaseKey = '';
@@ -176,10 +177,19 @@ export class App implements ComputeHost, ActionsHost, StudyHost, ReportHost {
   // -------------------------------------------------------------------------------------------
   // State
 
+  withDataText(state: AppState): Promise<AppState> {
+    return this.dataGlue.withText(state);
+  }
+
   /** Make `next` the state: autosave, URL, controls, then recompute or redraw. */
   apply(next: AppState, opts: { replaceUrl: boolean } = { replaceUrl: true }): void {
+    const onlyData = onlyDataChanged(this.state, next);
     this.state = next;
     this.store.save(next, opts.replaceUrl);
+    if (onlyData) {
+      this.dataGlue.showData(next); // the imported data: kept, nothing to redraw
+      return;
+    }
     this.controls.refresh(next);
     byId('clear-baseline').hidden = next.baseline === null;
     renderBaselineList(byId('baseline-list'), next, (s) => this.apply(s));
@@ -188,6 +198,7 @@ export class App implements ComputeHost, ActionsHost, StudyHost, ReportHost {
     this.roadGlue.showInputs(next);
     this.studyGlue.showInputs(next);
     this.dataGlue.showCalibrationBadge(next.calibration ?? null);
+    this.dataGlue.showData(next);
     const caseKey = JSON.stringify(next.case);
     if (caseKey !== this.lastCaseKey) {
       if (this.lastCaseKey !== '') this.dataGlue.designChanged();
@@ -362,13 +373,8 @@ export class App implements ComputeHost, ActionsHost, StudyHost, ReportHost {
     return this.roadGlue.rideFor(s);
   }
 
-  chooseDesign(
-    fraction: number,
-    depthM: number,
-    what: string,
-    values?: Record<string, number | string>,
-  ): void {
-    this.mapPick.choose(fraction, depthM, what, values);
+  chooseDesign(...args: Parameters<MapPick['choose']>): void {
+    this.mapPick.choose(...args);
   }
 
   undoChoice(): void {

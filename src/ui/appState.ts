@@ -1,13 +1,14 @@
 /**
  * The page's whole state: the design (a CoverSweep case file), the view settings, an optional pinned
- * baseline design, and two optional sections added later (version-compatible: a state without them is
- * read as before, with defaults): the "On the road" inputs and the mark of a calibrated model. One
+ * baseline design, and optional sections added later (version-compatible: a state without them is
+ * read as before, with defaults): the "On the road" inputs, the mark of a calibrated model, the design
+ * study's inputs and the imported data (data/savedData.ts: its CSV, mapping and fit; a link carries a
+ * reference to it, never its rows). One
  * validated shape travels three ways: the URL fragment (shareable link), the local autosave and the
  * project file. Every reader validates (validateCase for designs, validateView for the view, the ride
  * file's rules for the road inputs) and returns messages naming the field; nothing is applied unless
  * everything is valid.
  */
-import { z } from 'zod';
 import {
   type CaseFile,
   describeValue,
@@ -16,23 +17,16 @@ import {
   parseJsonText,
   validateCase,
 } from '../compute/caseFile';
-import { CALIBRATABLE, type Calibratable } from '../compute/compare/index';
+import { MAX_DATA_BYTES } from '../compute/compare/index';
+import { type FormatVersions, migrateFile } from '../compute/fileVersion';
 import { base64UrlToText, textToBase64Url } from './base64url';
 import { pinnedBaselines } from './baselines/pinnedBaselines';
 import { validateBaselines } from './baselines/validateBaselines';
+import { type CalibrationMark, validateCalibration } from './calibrationMark';
+import { dataReference, type SavedData, validateSavedData } from './data/savedData';
 import { type RoadState, validateRoadFor, validateRoadShape } from './roadState';
 import { type StudyInputs, validateStudyInputs } from './study/studyState';
 import { type ViewState, validateView } from './viewState';
-
-/** The design's model options were replaced by values fitted to a data file ("Use calibrated model"). */
-export interface CalibrationMark {
-  /** The data file's name and its number of data points. */
-  data: string;
-  points: number;
-  /** Fitted values now in the design's model options, and the values they replaced. */
-  values: Partial<Record<Calibratable, number>>;
-  original: Partial<Record<Calibratable, number>>;
-}
 
 export interface AppState {
   case: CaseFile;
@@ -48,40 +42,32 @@ export interface AppState {
   calibration?: CalibrationMark | null;
   /** The design study's inputs (absent: the defaults); its result is recomputed, never stored. */
   study?: StudyInputs;
+  /** The "Your data" panel's table, mapping and fit (absent or null: no data imported). */
+  data?: SavedData | null;
 }
 
-const paramRecord = z.partialRecord(
-  z.enum(CALIBRATABLE),
-  z.number().refine(Number.isFinite, { error: 'must be a finite number' }),
-);
-const calibrationSchema = z.strictObject({
-  data: z.string().max(300),
-  points: z.number().int().min(0),
-  values: paramRecord,
-  original: paramRecord,
-});
-
-function validateCalibration(raw: unknown, label: string): Parsed<CalibrationMark> {
-  const r = calibrationSchema.safeParse(raw);
-  if (r.success) return { ok: true, value: r.data as CalibrationMark };
-  return {
-    ok: false,
-    errors: r.error.issues.map(
-      (i) => `${label}: calibration${i.path.map((k) => `.${String(k)}`).join('')}: ${i.message}`,
-    ),
-  };
-}
+export type { CalibrationMark };
 
 export const PROJECT_FORMAT = 'coversweep-project';
-export const PROJECT_VERSION = 1;
+/** Version 2 added the `data` section; a version 1 file is read as before (migrated: nothing to change). */
+export const PROJECT_VERSION = 2;
+const PROJECT_VERSIONS: FormatVersions = {
+  format: PROJECT_FORMAT,
+  label: 'project',
+  current: PROJECT_VERSION,
+  steps: { 1: (raw) => raw },
+};
 export const LINK_VERSION = 1;
 export const AUTOSAVE_KEY = 'coversweep.autosave.v1';
 
 /** Longest design name (characters) the page accepts, in a link, a project file or the autosave: the
  * case file's own limit. */
 export { MAX_NAME_CHARS };
-/** Largest project file the page opens (bytes); a design with its view is a few kB. */
-export const MAX_PROJECT_BYTES = 1024 * 1024;
+/** Largest project file the page opens (bytes): a design with its view is a few kB, plus the imported
+ * data's CSV (at most MAX_DATA_BYTES) and the JSON escapes of its line ends. */
+export const MAX_PROJECT_BYTES = 1024 * 1024 + 2 * MAX_DATA_BYTES;
+/** Largest case file the page opens (bytes); a design is a few kB. */
+export const MAX_CASE_FILE_BYTES = 1024 * 1024;
 /** Longest link fragment the page makes or reads (characters); larger designs go in a project file. */
 export const MAX_LINK_CHARS = 256 * 1024;
 
@@ -109,6 +95,7 @@ export function validateStateParts(
     road?: unknown;
     calibration?: unknown;
     study?: unknown;
+    data?: unknown;
   },
   label: string,
 ): Parsed<AppState> {
@@ -151,23 +138,31 @@ export function validateStateParts(
     if (!st.ok) errors.push(...st.errors.map((e) => `${label}: ${e}`));
     else study = st.value;
   }
+  let data: SavedData | null | undefined;
+  if (parts.data !== undefined && parts.data !== null) {
+    const d = validateSavedData(parts.data, label);
+    if (!d.ok) errors.push(...d.errors);
+    else data = d.value;
+  } else if (parts.data === null) data = null;
   if (errors.length > 0 || !c.ok || !v.ok) return { ok: false, errors };
   const value: AppState = { case: c.value, view: v.value, baseline };
   if (pinned.ok && pinned.value && pinned.value.length > 1) value.baselines = pinned.value;
   if (road !== undefined) value.road = road;
   if (calibration !== undefined) value.calibration = calibration;
   if (study !== undefined) value.study = study;
+  if (data) value.data = data;
   return { ok: true, value };
 }
 
-/** The optional sections of a state, for writing (absent ones are left out). */
-function optionalParts(state: AppState): Record<string, unknown> {
+/** The optional sections of a state, for writing (absent ones are left out); a link's data is its reference. */
+function optionalParts(state: AppState, forLink = false): Record<string, unknown> {
   const out: Record<string, unknown> = {};
   const pinned = pinnedBaselines(state);
   if (pinned.length > 1) out.baselines = pinned;
   if (state.road !== undefined) out.road = state.road;
   if (state.calibration) out.calibration = state.calibration;
   if (state.study !== undefined) out.study = state.study;
+  if (state.data) out.data = forLink ? dataReference(state.data) : state.data;
   return out;
 }
 
@@ -190,7 +185,7 @@ export function stateToHash(state: AppState): string {
     case: state.case,
     view: state.view,
     baseline: state.baseline,
-    ...optionalParts(state),
+    ...optionalParts(state, true),
   });
   return `#s=${textToBase64Url(json)}`;
 }
@@ -241,6 +236,7 @@ export function hashToState(hash: string): Parsed<AppState> | null {
       road: raw.road,
       calibration: raw.calibration,
       study: raw.study,
+      data: raw.data,
     },
     'link',
   );
@@ -269,7 +265,7 @@ export function projectTextToState(text: string, label = 'project file'): Parsed
     return {
       ok: false,
       errors: [
-        `${label}: ${Math.round(text.length / 1024)} kB, more than the ${MAX_PROJECT_BYTES / 1024} kB a project file may hold (a design with its view is a few kB)`,
+        `${label}: ${Math.round(text.length / 1024)} kB, more than the ${MAX_PROJECT_BYTES / 1024} kB a project file may hold (a design with its view is a few kB; imported data at most ${MAX_DATA_BYTES / (1024 * 1024)} MB)`,
       ],
     };
   }
@@ -285,27 +281,27 @@ export function projectTextToState(text: string, label = 'project file'): Parsed
         (raw.format === 'coversweep-case' ? ' (this is a case file: use "Open case file")' : ''),
     );
   }
-  if (raw.version !== PROJECT_VERSION) {
-    errors.push(
-      `${label}: version: unsupported project version ${describeValue(raw.version)}; this page reads version ${PROJECT_VERSION}`,
-    );
-  }
+  // Versions 1..PROJECT_VERSION open (migrated step by step); a newer or malformed one is named.
+  const migrated = migrateFile(raw, PROJECT_VERSIONS);
+  if (!migrated.ok) errors.push(...migrated.errors.map((e) => `${label}: ${e}`));
   for (const key of Object.keys(raw)) {
     if (!PROJECT_KEYS.includes(key)) {
       errors.push(`${label}: ${key}: unknown key (allowed: ${PROJECT_KEYS.join(', ')})`);
     }
   }
   if (!('case' in raw)) errors.push(`${label}: case: is required (the design, a CoverSweep case)`);
-  if (errors.length > 0) return { ok: false, errors };
+  if (errors.length > 0 || !migrated.ok) return { ok: false, errors };
+  const doc = migrated.value as Record<string, unknown>;
   return validateStateParts(
     {
-      case: raw.case,
-      view: raw.view,
-      baseline: raw.baseline,
-      baselines: raw.baselines,
-      road: raw.road,
-      calibration: raw.calibration,
-      study: raw.study,
+      case: doc.case,
+      view: doc.view,
+      baseline: doc.baseline,
+      baselines: doc.baselines,
+      road: doc.road,
+      calibration: doc.calibration,
+      study: doc.study,
+      data: doc.data,
     },
     label,
   );
@@ -321,6 +317,7 @@ const PROJECT_KEYS = [
   'road',
   'calibration',
   'study',
+  'data',
 ];
 
 // ---------------------------------------------------------------------------------------------

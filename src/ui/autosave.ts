@@ -12,14 +12,31 @@
  * Each save is also mirrored to a durable copy (IndexedDB, durableAutosave.ts); at start-up the newer
  * of the two is read, so an edit survives a browser killed right after it.
  *
+ * The imported data's CSV (state.data.csv) is not part of the autosaved document (which is rewritten on
+ * every edit and kept aside whole): it lives under its own key, DATA_KEY, written only when new data is
+ * imported, and the document names it by its SHA-256. Data too large for the storage is not kept there
+ * (its mapping, fit and reference are), and the save says so (`dataNote`), so the page can tell the user.
+ *
  * Kept copies live under their own key (newest first, at most MAX_KEPT; the oldest beyond that is
  * dropped, and the page says how many are kept) and can be restored or downloaded from the page.
  */
+import { sha256Hex } from '../compute/sha256';
 import { type AppState, AUTOSAVE_KEY, projectTextToState, stateToProjectText } from './appState';
+import { dataReference, type SavedData } from './data/savedData';
 import type { DurableCopy } from './durableAutosave';
 
 export const AUTOSAVE_META_KEY = 'coversweep.autosave.meta.v1';
 export const KEPT_KEY = 'coversweep.autosave.kept.v1';
+/** The imported data's CSV: {"hash", "name", "csv"} of the latest data imported. */
+export const DATA_KEY = 'coversweep.autosave.data.v1';
+/** Most characters of CSV kept in the browser's storage (localStorage holds about 5 million characters per
+ * site in Chromium and Firefox, shared with the design and its kept copies). */
+export const MAX_AUTOSAVED_DATA_CHARS = 2_000_000;
+
+/** The autosaved document: the state as a project file, its data's CSV left out (kept under DATA_KEY). */
+export function stateToAutosaveText(state: AppState): string {
+  return stateToProjectText(state.data ? { ...state, data: dataReference(state.data) } : state);
+}
 /** Most kept copies; older ones are dropped beyond this. */
 export const MAX_KEPT = 10;
 
@@ -89,6 +106,8 @@ export interface SaveOutcome {
   /** Another tab's document kept aside before this save replaced it. */
   kept: KeptCopy | null;
   error: string | null;
+  /** Why the imported data's rows are not in the autosave (too large, or the storage refused), or null. */
+  dataNote: string | null;
 }
 
 export class AutosaveStore {
@@ -97,6 +116,10 @@ export class AutosaveStore {
   /** The revision this tab last read or wrote. */
   private rev = 0;
   private serial = 0;
+  /** The data hash whose CSV the storage could not take, with the reason (not retried on every save). */
+  private dataFailed: { hash: string; note: string } | null = null;
+  /** The data hash this tab last wrote or found under DATA_KEY (saves in between skip reading it). */
+  private dataKept: string | null = null;
 
   constructor(
     private readonly storage: StorageLike,
@@ -159,7 +182,12 @@ export class AutosaveStore {
    * Never throws.
    */
   save(state: AppState): SaveOutcome {
-    const text = stateToProjectText(state);
+    const dataNote = state.data ? this.saveData(state.data) : null;
+    return { ...this.saveDocument(state), dataNote };
+  }
+
+  private saveDocument(state: AppState): Omit<SaveOutcome, 'dataNote'> {
+    const text = stateToAutosaveText(state);
     let kept: KeptCopy | null = null;
     try {
       const meta = readMeta(this.storage);
@@ -198,5 +226,60 @@ export class AutosaveStore {
 
   kept(): KeptCopy[] {
     return readKept(this.storage) ?? [];
+  }
+
+  /** Keep the data's CSV under DATA_KEY (once per data); a note when it cannot be kept, else null. */
+  private saveData(data: SavedData): string | null {
+    if (this.dataFailed?.hash === data.hash) return this.dataFailed.note;
+    if (this.dataKept === data.hash) return null;
+    const chars = data.csv?.length ?? data.chars ?? 0;
+    // A reference only (a link, or rows held back in the data worker): whatever is stored stays.
+    if (data.csv === undefined && chars <= MAX_AUTOSAVED_DATA_CHARS) return null;
+    try {
+      if (this.storedHash() === data.hash) {
+        this.dataKept = data.hash;
+        return null;
+      }
+      if (data.csv === undefined || chars > MAX_AUTOSAVED_DATA_CHARS)
+        throw new Error(
+          `${(chars / 1e6).toFixed(1)} million characters, more than the ${MAX_AUTOSAVED_DATA_CHARS / 1e6} million the page keeps in this browser's storage`,
+        );
+      this.storage.setItem(DATA_KEY, JSON.stringify({ hash: data.hash, name: data.name, csv: data.csv }));
+      this.dataKept = data.hash;
+      this.dataFailed = null;
+      return null;
+    } catch (error) {
+      const note =
+        `your data “${data.name}” (${data.rows} rows) is not in the autosave: ${(error as Error).message}. ` +
+        'The autosave keeps its mapping, its fit and a reference to it (its SHA-256); after a reload, import the same file again and they come back. Save a project file to keep the rows too.';
+      this.dataFailed = { hash: data.hash, note };
+      return note;
+    }
+  }
+
+  private storedData(): { hash: string; name: string; csv: string } | null {
+    try {
+      const raw = JSON.parse(this.storage.getItem(DATA_KEY) ?? 'null') as unknown;
+      if (raw && typeof raw === 'object') {
+        const d = raw as Record<string, unknown>;
+        if (typeof d.hash === 'string' && typeof d.name === 'string' && typeof d.csv === 'string')
+          return { hash: d.hash, name: d.name, csv: d.csv };
+      }
+    } catch {
+      // unreadable: treated as none (and never overwritten by a reference)
+    }
+    return null;
+  }
+
+  /** The stored data's hash, read from the document's start (it is written first) without parsing the CSV. */
+  private storedHash(): string | null {
+    const m = /^\{"hash":"([0-9a-f]{64})"/.exec(this.storage.getItem(DATA_KEY)?.slice(0, 80) ?? '');
+    return m ? m[1]! : null;
+  }
+
+  /** The autosaved CSV of the data with this hash (checked against it), or null. */
+  dataFor(hash: string): string | null {
+    const d = this.storedData();
+    return d && d.hash === hash && sha256Hex(d.csv) === hash ? d.csv : null;
   }
 }

@@ -1,12 +1,16 @@
 /**
  * The "Your data" panel's glue: reading and comparing tables in their own background worker (with
- * deadlines), the demo data, and using (or dropping) the calibrated model values in the state.
+ * deadlines), the demo data, using (or dropping) the calibrated model values in the state, and keeping
+ * the imported data in the state (`data`: its table, mapping and fit) both ways: the panel's changes go
+ * into the state (so the autosave, a project file and a link keep them), and a state arriving with data
+ * (start-up, a project file, a link, a kept design) is shown in the panel as it was.
  */
 import { type CaseFile, caseAirDensity, parseCaseFile, validateCase } from '../compute/caseFile';
 import type { CalibrationResult } from '../compute/compare/index';
-import type { CalibrationMark } from './appState';
+import type { AppState, CalibrationMark } from './appState';
 import { DATA_SLIP_LABELS } from './data/dataLabels';
-import type { PackedResult, ReadOutcome } from './dataJobs';
+import { pendingText, type SavedData } from './data/savedData';
+import type { PackedResult, ReadOutcome, TableRef, TextOutcome } from './dataJobs';
 import type { DataContext, DataPanel, DataPlotName, DataRunRequest } from './dataPanel';
 import { fmt } from './displayUnits';
 import { JobWorker } from './jobWorker';
@@ -20,8 +24,78 @@ export class DataGlue {
   private readonly dataWorker = new JobWorker();
   /** The last finished comparison, for the yaw plots' overlay (views/dataOverlay). */
   private compared: DataOverlaySource | null = null;
+  /** The data last put into the state or shown from it (compared by dataKey). */
+  private shownKey = '';
+  private shownData: SavedData | null = null;
 
-  constructor(private readonly host: PageHost) {}
+  /** `storedCsv`: the autosave's CSV of the data with a hash, or null (autosave.ts, DATA_KEY). */
+  constructor(
+    private readonly host: PageHost,
+    private readonly storedCsv: (hash: string) => string | null = () => null,
+  ) {}
+
+  /**
+   * The state's data, shown in the panel when it differs from what the panel holds; a state without
+   * data keeps the panel's (opening a design or Reset does not drop imported data). Called on every
+   * apply; the panel is loaded only when there is data.
+   */
+  showData(state: AppState): void {
+    const data = state.data ?? null;
+    if (data === null) {
+      const kept = this.shownData;
+      if (kept) queueMicrotask(() => this.host.state.data || this.putData(kept));
+      return;
+    }
+    const key = dataKey(data);
+    if (key === this.shownKey) return;
+    let shown = data;
+    if (data.csv === undefined) {
+      // A reference only (a link, or an autosave that could not keep the rows): the autosave may have them.
+      const csv = this.storedCsv(data.hash);
+      if (csv !== null) {
+        shown = { ...data, csv };
+        queueMicrotask(() => this.putData(shown));
+        this.host.messages.show(
+          'info',
+          `Your data “${data.name}” was restored from this browser’s autosave (the same content, by its SHA-256, as the design refers to).`,
+          [],
+          'data-ref',
+        );
+      } else this.host.messages.show('warning', `${pendingText(data)} (tab “Your data”)`, [], 'data-ref');
+    } else this.host.messages.clear('data-ref');
+    this.shownKey = dataKey(shown);
+    this.shownData = shown;
+    void this.panel().then((panel) => panel.restore(shown));
+  }
+
+  /**
+   * `state` with its data's CSV text, for a project file: a table too large to hold in the page is
+   * read again in a worker of its own (the data worker's running job is never displaced).
+   */
+  async withText(state: AppState): Promise<AppState> {
+    const d = state.data;
+    if (!d || d.csv !== undefined || !this.data) return state;
+    const held = await this.data.dataWithText();
+    return held?.hash === d.hash && held.csv !== undefined
+      ? { ...state, data: { ...d, csv: held.csv } }
+      : state;
+  }
+
+  private async tableText(ref: TableRef): Promise<string | null> {
+    const worker = new JobWorker();
+    const size = ref.source.kind === 'file' ? ref.source.file.size : ref.source.text.length;
+    const out = await worker.run<TextOutcome>((api) => api.tableText(ref), readDeadlineMs(size));
+    worker.cancel();
+    return out.status === 'done' && out.value.ok ? out.value.text : null;
+  }
+
+  /** Keep the panel's data in the state (autosave, link, project file). */
+  private putData(data: SavedData, fromPanel = false): void {
+    if (fromPanel) this.host.messages.clear('data-ref');
+    this.shownKey = dataKey(data);
+    this.shownData = data;
+    this.host.apply({ ...this.host.state, data });
+  }
 
   plotSpec(name: DataPlotName) {
     return this.data?.plotSpec(name) ?? null;
@@ -62,6 +136,9 @@ export class DataGlue {
           panel.setStatus('done', 'Cancelled; the results shown are from the last finished run.');
         },
         onUseCalibrated: (use, calibration, points) => this.useCalibrated(use, calibration, points),
+        // In a task of its own: the autosave and its notice do not lengthen the panel's drawing task.
+        onData: (data) => setTimeout(() => this.putData(data, true), 0),
+        text: (ref) => this.tableText(ref),
       });
       this.data = panel;
       panel.setCalibratedInUse(Boolean(this.host.state.calibration));
@@ -193,4 +270,9 @@ function readDeadlineMs(bytes: number): number {
 
 function compareDeadlineMs(rows: number, heavy: boolean): number {
   return 60_000 + 2 * rows * (heavy ? 50 : 1);
+}
+
+/** What identifies the data's state: its content, whether its rows are held, its mapping and its fit. */
+function dataKey(d: SavedData): string {
+  return JSON.stringify([d.hash, d.name, d.csv !== undefined, d.map ?? null, d.fit ?? null]);
 }

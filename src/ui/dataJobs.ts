@@ -1,8 +1,9 @@
 /**
- * The data panel's heavy work, run in the data panel's own worker (dataJobs.worker.ts) so that a large table never blocks the page:
- * reading the CSV (a dropped file is handed over as a File and read there), guessing the columns, and
+ * The data panel's heavy work, run in the data panel's own worker (dataJobs.worker.ts) so that a large
+ * table never blocks the page: reading the CSV (a dropped file is handed over as a File and read there), guessing the columns, and
  * the comparison. The parsed table stays in the worker (keyed by the panel's reference); the page only
- * ever holds a summary (headers, row count, a few rows, the guessed map). A fresh worker (after a
+ * ever holds a summary (headers, row count, a few rows, the guessed map) and the text as read with its
+ * SHA-256 (to keep with the page state). A fresh worker (after a
  * cancel or a crash) reads the source again. The comparison's per-point results travel back as
  * columns of typed arrays (buffers transferred, no per-row objects to copy), and the page reads rows
  * from them on demand. No DOM here: this module runs in the worker and in the page.
@@ -25,6 +26,7 @@ import {
   runComparison,
 } from '../compute/compare/index';
 import { BoundedCache } from '../compute/engine/boundedCache';
+import { sha256Hex } from '../compute/sha256';
 import { modelAtDataHere } from '../compute/study/dataComparisonStudy';
 
 /** Where a table comes from: a file the user chose, or text (pasted, or the demo file). */
@@ -45,7 +47,20 @@ export interface TableSummary {
   rowCount: number;
   preview: string[][];
   guess: MapGuess;
+  /**
+   * The table's text as read (kept with the page's state), or null when longer than MAX_INLINE_CHARS: a
+   * large text stays here until a project file asks for it (tableText), so reading never moves tens
+   * of MB to the page. Its length in characters, and its SHA-256, which names it in a link.
+   */
+  text: string | null;
+  chars: number;
+  hash: string;
 }
+
+/** Longest table text handed to the page with its summary (characters): what the autosave can keep. */
+export const MAX_INLINE_CHARS = 2_000_000;
+
+export type TextOutcome = { ok: true; text: string } | { ok: false; errors: string[] };
 
 export type ReadOutcome = { ok: true; summary: TableSummary } | { ok: false; errors: string[] };
 
@@ -88,6 +103,8 @@ export interface TableCompareRequest extends Omit<CompareRequest, 'table'> {
 
 export interface DataJobsApi {
   readTable(ref: TableRef, context: GuessContext): Promise<ReadOutcome>;
+  /** The table's text as read (a large one, held back by readTable), or an error. */
+  tableText(ref: TableRef): Promise<TextOutcome>;
   compareTable(request: TableCompareRequest): Promise<PackedResult>;
 }
 
@@ -226,6 +243,14 @@ async function readSource(source: TableSource): Promise<CsvResult> {
   }
 }
 
+async function textOf(source: TableSource): Promise<TextOutcome> {
+  try {
+    return { ok: true, text: source.kind === 'text' ? source.text : await source.file.text() };
+  } catch (error) {
+    return { ok: false, errors: [`could not read the file: ${(error as Error).message}`] };
+  }
+}
+
 async function tableFor(ref: TableRef): Promise<CsvResult> {
   const kept = tables.get(ref.id);
   if (kept) return { ok: true, value: kept };
@@ -239,6 +264,9 @@ export const dataJobsApi: DataJobsApi = {
     const r = await tableFor(ref);
     if (!r.ok) return r;
     const t = r.value;
+    const read = await textOf(ref.source);
+    if (!read.ok) return read;
+    const text = read.text;
     return {
       ok: true,
       summary: {
@@ -246,9 +274,13 @@ export const dataJobsApi: DataJobsApi = {
         rowCount: t.rows.length,
         preview: t.rows.slice(0, PREVIEW_ROWS),
         guess: guessMap(t.headers, t, context),
+        text: text.length <= MAX_INLINE_CHARS ? text : null,
+        chars: text.length,
+        hash: sha256Hex(text),
       },
     };
   },
+  tableText: (ref) => textOf(ref.source),
   async compareTable(request) {
     const { ref, ...rest } = request;
     const t = await tableFor(ref);

@@ -27,6 +27,16 @@ import type {
 import { fillMappingForm, type MapRow, mapFromForm } from './data/mappingForm';
 import { overlayOutput, renderDataPlot } from './data/renderDataPlot';
 import { renderConvergence, renderFit, renderResiduals, renderUncertainty } from './data/renderDataTables';
+import { errorBlock, renderSummary, runText } from './data/renderFlags';
+import {
+  FIT_RESTORED_NOTE,
+  fitResult,
+  notReferencedText,
+  pendingText,
+  type SavedData,
+  savedFit,
+} from './data/savedData';
+import { readUncertaintyRanges, setDefaultRanges } from './data/uncertaintyRanges';
 import {
   type PackedComparison,
   type ReadOutcome,
@@ -35,7 +45,6 @@ import {
   type TableSummary,
   unpackComparison,
 } from './dataJobs';
-import { el } from './dom';
 import type { PlotSpec } from './linePlot';
 
 export type { DataContext, DataPanelState, DataPlotName, DataRunRequest } from './data/dataPanelTypes';
@@ -67,6 +76,10 @@ export class DataPanel {
       onRun(request: DataRunRequest): void;
       onCancel(): void;
       onUseCalibrated(use: boolean, calibration: CalibrationResult | null, points: number): void;
+      /** The data, its applied mapping or its fit changed (to keep in the page's state). */
+      onData(data: SavedData): void;
+      /** A table's text, read in the background (null when it cannot be read). */
+      text(ref: TableRef): Promise<string | null>;
     },
   ) {
     this.dom = buildDataPanelDom(host, {
@@ -94,12 +107,28 @@ export class DataPanel {
     return this.readSource({ kind: 'text', text }, label);
   }
 
+  /**
+   * Show kept data as it was (from a project file, the autosave or a link): its table, the mapping that
+   * was applied and the comparison recomputed with the current design; the fit as it was saved, not
+   * made again. Data named only by its reference (a link) waits for the same file to be imported again.
+   */
+  restore(data: SavedData): void {
+    if (data.csv === undefined) {
+      this.pending = data;
+      this.host.dataset.pending = data.hash;
+      this.setStatus('empty', pendingText(data));
+      return;
+    }
+    void this.readSource({ kind: 'text', text: data.csv }, data.name, data);
+  }
+
   /** Read a table in the background worker (the page stays responsive however large it is). */
-  private async readSource(source: TableSource, label: string): Promise<void> {
+  private async readSource(source: TableSource, label: string, restore?: SavedData): Promise<void> {
     this.setStatus('computing', `Reading ${label}…`);
     const ctx = this.handlers.context();
     this.ctx = ctx;
     const ref: TableRef = { id: this.nextTableId++, source, label };
+    this.restoreFor = restore ? { id: ref.id, data: restore } : null;
     const result = await this.handlers.read(ref, {
       referenceAreaM2: ctx.referenceAreaM2,
       airspeedMps: ctx.airspeedMps,
@@ -112,17 +141,20 @@ export class DataPanel {
     const label = ref.label;
     if (!result.ok) {
       this.dom.readErrors.replaceChildren(
-        el('strong', { text: `${label} could not be read; nothing changed.` }),
-        el(
-          'ul',
-          {},
-          result.errors.map((e) => el('li', { text: e })),
-        ),
+        ...errorBlock(`${label} could not be read; nothing changed.`, result.errors),
       );
       this.setStatus(this.table ? 'mapping' : 'empty', '');
       return;
     }
     this.dom.readErrors.replaceChildren();
+    const sum = result.summary;
+    const pending = this.pending;
+    const restore =
+      this.restoreFor?.id === ref.id ? this.restoreFor.data : pending?.hash === sum.hash ? pending : null;
+    this.pending = null;
+    delete this.host.dataset.pending;
+    this.data = { name: label, hash: sum.hash, rows: sum.rowCount, chars: sum.chars };
+    if (sum.text !== null) this.data.csv = sum.text;
     this.table = result.summary;
     this.ref = ref;
     this.label = label;
@@ -133,20 +165,54 @@ export class DataPanel {
     this.uncertainty = null;
     this.applied = null;
     this.dom.results.hidden = true;
+    this.fitRestored = false;
+    if (restore) {
+      this.restoreMapping(restore, ref);
+      return;
+    }
+    this.handlers.onData(this.data);
     this.fillMapping();
     this.setStatus(
       'mapping',
-      `Read ${label}: ${result.summary.rowCount} rows, ${result.summary.headers.length} columns. Check what each column holds, then “Apply and compare”.`,
+      `Read ${label}: ${result.summary.rowCount} rows, ${result.summary.headers.length} columns. Check what each column holds, then “Apply and compare”.` +
+        (pending ? notReferencedText(pending) : ''),
     );
   }
 
-  private fillMapping(): void {
+  /** The kept mapping and fit of data just read again; the comparison is recomputed (not stored). */
+  private restoreMapping(kept: SavedData, ref: TableRef): void {
+    const data = this.data!;
+    // Data named by a reference and now imported again: its rows go back into the page's state.
+    if (kept.csv === undefined) this.handlers.onData({ ...kept, ...data });
+    this.data = { ...data, ...(kept.map ? { map: kept.map } : {}), ...(kept.fit ? { fit: kept.fit } : {}) };
+    this.fillMapping(kept.map);
+    if (!kept.map) {
+      this.setStatus(
+        'mapping',
+        `Restored ${data.name} (${data.rows} rows): check what each column holds, then “Apply and compare”.`,
+      );
+      return;
+    }
+    this.applied = { ref, rowCount: data.rows, map: kept.map, label: data.name };
+    this.calibration = kept.fit ? fitResult(kept.fit) : null;
+    this.fitRestored = Boolean(kept.fit);
+    this.run({});
+  }
+
+  private fillMapping(given?: MapFile): void {
     const ctx = this.handlers.context();
     this.ctx = ctx;
-    this.mapRows = fillMappingForm(this.dom, this.table!, ctx);
+    this.mapRows = fillMappingForm(this.dom, this.table!, ctx, given);
   }
 
   private mapRows: MapRow[] = [];
+  /** The data as kept in the page's state (table text, hash, applied mapping, fit). */
+  private data: SavedData | null = null;
+  /** A table being read to restore kept data (its read's id), and a reference waiting for its file. */
+  private restoreFor: { id: number; data: SavedData } | null = null;
+  private pending: SavedData | null = null;
+  /** The fit shown was restored as saved (not made in this page). */
+  private fitRestored = false;
 
   private apply(): void {
     if (!this.table || !this.ref) return;
@@ -154,18 +220,17 @@ export class DataPanel {
     const v = validateMap(map);
     const all = [...errors, ...(v.ok ? [] : v.errors)];
     if (all.length > 0 || !v.ok) {
-      this.dom.mapErrors.replaceChildren(
-        el('strong', { text: 'Not applied:' }),
-        el(
-          'ul',
-          {},
-          all.map((e) => el('li', { text: e })),
-        ),
-      );
+      this.dom.mapErrors.replaceChildren(...errorBlock('Not applied:', all));
       return;
     }
     this.dom.mapErrors.replaceChildren();
     this.applied = { ref: this.ref, rowCount: this.table.rowCount, map: v.value, label: this.label };
+    if (this.data) {
+      const { fit: _old, ...data } = this.data;
+      this.data = { ...data, map: v.value };
+      this.handlers.onData(this.data);
+    }
+    this.fitRestored = false;
     this.calibration = null;
     this.convergence = null;
     this.uncertainty = null;
@@ -174,14 +239,7 @@ export class DataPanel {
 
   private run(extra: { calibrate?: boolean; convergence?: boolean; uncertainty?: UncertainRange[] }): void {
     if (!this.applied) return;
-    const what = extra.calibrate
-      ? 'Fitting the model’s parameters to the data (a few seconds)…'
-      : extra.convergence
-        ? 'Convergence study: the model on three lattices…'
-        : extra.uncertainty
-          ? 'Input-uncertainty band: sampling the model…'
-          : 'Comparing the data with the model…';
-    this.setStatus('computing', what);
+    this.setStatus('computing', runText(extra, 'running'));
     this.handlers.onRun({
       ...this.applied,
       calibrate: extra.calibrate ?? false,
@@ -191,21 +249,7 @@ export class DataPanel {
   }
 
   private runUncertainty(): void {
-    const ranges: UncertainRange[] = [];
-    const errors: string[] = [];
-    for (const [name, { min, max }] of this.dom.rangeInputs) {
-      const a = min.value.trim();
-      const b = max.value.trim();
-      if (a === '' && b === '') continue;
-      const lo = Number(a);
-      const hi = Number(b);
-      if (a === '' || b === '' || !Number.isFinite(lo) || !Number.isFinite(hi) || lo > hi) {
-        errors.push(`${name}: give two numbers, lowest first`);
-        continue;
-      }
-      ranges.push({ name, min: lo, max: hi });
-    }
-    if (ranges.length === 0) errors.push('give at least one range');
+    const { ranges, errors } = readUncertaintyRanges(this.dom);
     if (errors.length > 0) {
       this.setStatus('done', `Input-uncertainty band not run: ${errors.join('; ')}.`);
       return;
@@ -238,6 +282,14 @@ export class DataPanel {
     for (const b of this.dom.actionButtons) b.disabled = state === 'computing';
   }
 
+  /** The data shown, with its CSV text (fetched from the worker when too large to hold here), or null. */
+  async dataWithText(): Promise<SavedData | null> {
+    const data = this.data;
+    if (!data || data.csv !== undefined || !this.ref) return data;
+    const csv = await this.handlers.text(this.ref);
+    return csv === null ? data : { ...data, csv };
+  }
+
   setCalibratedInUse(on: boolean): void {
     this.dom.useCalibrated.checked = on;
   }
@@ -257,16 +309,7 @@ export class DataPanel {
 
   /** The uncertainty ranges' defaults for the design (density +- 2 %, suction recovery 0.3..0.7). */
   setDefaultRanges(rhoKgPerM3: number): void {
-    const d = this.dom.rangeInputs.get('air_density_kgpm3');
-    if (d && d.min.value === '' && d.max.value === '') {
-      d.min.value = (rhoKgPerM3 * 0.98).toFixed(4);
-      d.max.value = (rhoKgPerM3 * 1.02).toFixed(4);
-    }
-    const s = this.dom.rangeInputs.get('suction_recovered');
-    if (s && s.min.value === '' && s.max.value === '') {
-      s.min.value = '0.3';
-      s.max.value = '0.7';
-    }
+    setDefaultRanges(this.dom, rhoKgPerM3);
   }
 
   // -------------------------------------------------------------------------------------------
@@ -274,14 +317,7 @@ export class DataPanel {
 
   showErrors(title: string, errors: readonly string[]): void {
     this.setStatus('error', title);
-    this.dom.mapErrors.replaceChildren(
-      el('strong', { text: title }),
-      el(
-        'ul',
-        {},
-        errors.slice(0, 20).map((e) => el('li', { text: e })),
-      ),
-    );
+    this.dom.mapErrors.replaceChildren(...errorBlock(title, errors.slice(0, 20)));
   }
 
   /** Counts showReport calls: a newer report stops an older one still drawing. */
@@ -305,25 +341,18 @@ export class DataPanel {
     this.packed = packed;
     this.dom.results.hidden = false;
     const n = packed.converted.count;
-    this.dom.summary.textContent = `${n} data point${n === 1 ? '' : 's'} from ${report.data}, compared with ${ctx.designName}. Airspeed: ${report.conversion.airspeed}. Air density: ${report.conversion.density}.`;
-    this.dom.flags.replaceChildren(
-      ...(report.flags.length > 0
-        ? report.flags.map((f) =>
-            el('div', { className: 'message warning', attrs: { role: 'status', 'data-flag': f.code } }, [
-              el('div', {}, [el('strong', { text: 'Check: ' }), el('span', { text: f.message })]),
-            ]),
-          )
-        : [
-            el('div', { className: 'message info' }, [
-              el('div', {
-                text: 'No unit, axis, sign or reference-area slip found: the data and the model agree in kind.',
-              }),
-            ]),
-          ]),
-    );
-    if (request.calibrate && report.calibration) this.calibration = report.calibration;
+    renderSummary(this.dom, report, n, ctx.designName);
+    if (request.calibrate && report.calibration) {
+      this.calibration = report.calibration;
+      this.fitRestored = false;
+      if (this.data) {
+        this.data = { ...this.data, map: request.map, fit: savedFit(report.calibration) };
+        this.handlers.onData(this.data);
+      }
+    }
     // The small tables at once...
     renderFit(this.dom, this.calibration);
+    if (this.fitRestored) this.dom.fitText.append(FIT_RESTORED_NOTE);
     this.dom.convergenceBlock.hidden = !report.convergence;
     if (report.convergence) renderConvergence(this.dom, report, ctx.speedUnit);
     this.dom.uncertaintyBlock.hidden = !report.uncertainty;
@@ -347,16 +376,7 @@ export class DataPanel {
       step();
     }
     this.report = report;
-    this.setStatus(
-      'done',
-      request.calibrate
-        ? 'Fit done.'
-        : request.convergence
-          ? 'Convergence study done.'
-          : request.uncertainty
-            ? 'Input-uncertainty band done.'
-            : 'Comparison done.',
-    );
+    this.setStatus('done', runText(request, 'done'));
   }
 
   private renderOverlay(report: CompareReport, which: DataPlotName): void {

@@ -4,6 +4,8 @@
  */
 import { parseCaseFile } from '../compute/caseFile';
 import {
+  type AppState,
+  MAX_CASE_FILE_BYTES,
   MAX_LINK_CHARS,
   MAX_PROJECT_BYTES,
   nameErrors,
@@ -22,6 +24,8 @@ import { byId } from './views/present';
 export interface ActionsHost extends PageHost {
   cancelCompute(): void;
   showKept(): void;
+  /** The state with its imported data's CSV text (held back in a worker when large). */
+  withDataText(state: AppState): Promise<AppState>;
 }
 
 export function wirePageActions(host: ActionsHost): void {
@@ -58,10 +62,18 @@ export function wirePageActions(host: ActionsHost): void {
         host.messages.show('info', 'Copy this link (it reopens this design and view):', [link], 'link-copy'),
     ) ?? host.messages.show('info', 'Copy this link (it reopens this design and view):', [link], 'link-copy');
   });
-  byId('save-project').addEventListener('click', () => {
+  byId('save-project').addEventListener('click', async () => {
+    const state = await host.withDataText(host.state);
+    if (state.data && state.data.csv === undefined)
+      host.messages.show(
+        'warning',
+        `The project file keeps a reference to your data “${state.data.name}”, not its rows: they could not be read again. Import the file again before saving to keep them.`,
+        [],
+        'file',
+      );
     downloadText(
-      `${designFileStem(host.state.case)}.coversweep-project.json`,
-      stateToProjectText(host.state),
+      `${designFileStem(state.case)}.coversweep-project.json`,
+      stateToProjectText(state),
       'application/json',
     );
   });
@@ -74,16 +86,22 @@ export function wirePageActions(host: ActionsHost): void {
   });
   byId<HTMLInputElement>('open-project').addEventListener('change', (event) => {
     const input = event.target as HTMLInputElement;
-    void openFile(host, input, (text, name) => {
-      const r = projectTextToState(text, name);
-      if (!r.ok) return r.errors;
-      host.apply(r.value);
-      return null;
-    });
+    void openFile(
+      host,
+      input,
+      MAX_PROJECT_BYTES,
+      'a project file is a design of a few kB and its imported data',
+      (text, name) => {
+        const r = projectTextToState(text, name);
+        if (!r.ok) return r.errors;
+        host.apply(r.value);
+        return null;
+      },
+    );
   });
   byId<HTMLInputElement>('open-case').addEventListener('change', (event) => {
     const input = event.target as HTMLInputElement;
-    void openFile(host, input, (text, name) => {
+    void openFile(host, input, MAX_CASE_FILE_BYTES, 'a design file is a few kB', (text, name) => {
       const r = parseCaseFile(text);
       if (!r.ok) return r.errors.map((e) => `${name}: ${e}`);
       const long = nameErrors({ case: r.value }, name);
@@ -113,6 +131,8 @@ export function wirePageActions(host: ActionsHost): void {
 async function openFile(
   host: PageHost,
   input: HTMLInputElement,
+  maxBytes: number,
+  what: string,
   use: (text: string, name: string) => string[] | null,
 ): Promise<void> {
   const file = input.files?.[0];
@@ -120,9 +140,9 @@ async function openFile(
   if (!file) return;
   let text: string;
   try {
-    if (file.size > MAX_PROJECT_BYTES)
+    if (file.size > maxBytes)
       throw new Error(
-        `the file is ${Math.round(file.size / 1024)} kB, more than the ${MAX_PROJECT_BYTES / 1024} kB limit; a design file is a few kB`,
+        `the file is ${Math.round(file.size / 1024)} kB, more than the ${Math.round(maxBytes / 1024)} kB limit; ${what}`,
       );
     text = await file.text();
   } catch (error) {

@@ -9,9 +9,8 @@ import {
   MAX_LINK_CHARS,
   projectTextToState,
   stateToHashOrNull,
-  stateToProjectText,
 } from './appState';
-import { AutosaveStore, type KeptCopy } from './autosave';
+import { AutosaveStore, type KeptCopy, stateToAutosaveText } from './autosave';
 import { defaultCase } from './defaultCase';
 import { downloadText } from './download';
 import { type DurableCopy, writeDurable } from './durableAutosave';
@@ -38,6 +37,14 @@ export class PageStore {
     const saved = this.autosave.save(next);
     this.refreshKeptButton();
     if (saved.error) this.host.messages.show('warning', 'Autosave failed', [saved.error], 'autosave');
+    if (saved.dataNote)
+      this.host.messages.show(
+        'warning',
+        'Your data is only partly autosaved',
+        [saved.dataNote],
+        'autosave-data',
+      );
+    else this.host.messages.clear('autosave-data');
     if (saved.kept) {
       this.host.messages.show(
         'warning',
@@ -64,7 +71,7 @@ export class PageStore {
     }
     const fallback = saved.kind === 'ok' ? saved.state : null;
     if (fromHash?.ok) {
-      if (saved.kind === 'ok' && saved.text !== stateToProjectText(fromHash.value)) {
+      if (saved.kind === 'ok' && saved.text !== stateToAutosaveText(fromHash.value)) {
         const copy = this.autosave.keepAside(
           saved.text,
           'your autosaved design, set aside when a link was opened',
@@ -142,7 +149,7 @@ export class PageStore {
         }
         // The design shown now is kept aside in its turn, so restoring loses nothing.
         this.autosave.keepAside(
-          stateToProjectText(this.host.state),
+          stateToAutosaveText(this.host.state),
           'the design shown before a kept one was restored',
         );
         this.host.messages.clear('autosave');
@@ -204,9 +211,9 @@ export class PageStore {
       return;
     }
     this.host.messages.clear('link');
-    const before = stateToProjectText(this.host.state);
+    const before = stateToAutosaveText(this.host.state);
     const keptCopy =
-      before !== stateToProjectText(parsed.value)
+      before !== stateToAutosaveText(parsed.value)
         ? this.autosave.keepAside(before, 'the design shown when a link was opened in its tab')
         : null;
     this.host.apply(parsed.value, { replaceUrl: false });

@@ -97,8 +97,8 @@ describe('project file', () => {
     wrong.extra = true;
     const r2 = projectTextToState(JSON.stringify(wrong), 'p.json');
     expect(!r2.ok && r2.errors).toEqual([
-      'p.json: version: unsupported project version 3; this page reads version 1',
-      'p.json: extra: unknown key (allowed: format, version, case, view, baseline, baselines, road, calibration, study)',
+      'p.json: version: unsupported project version 3: newer than this program reads (version 2); update CoverSweep to open it',
+      'p.json: extra: unknown key (allowed: format, version, case, view, baseline, baselines, road, calibration, study, data)',
     ]);
     const caseFile = projectTextToState(JSON.stringify(s.case), 'c.json');
     expect(!caseFile.ok && caseFile.errors[0]).toContain('(this is a case file: use "Open case file")');

@@ -34,8 +34,8 @@ describe('autosave', () => {
     const s = new MemoryStorage();
     const a = new AutosaveStore(s);
     expect(a.load()).toEqual({ kind: 'none' });
-    expect(a.save(state(0.3))).toEqual({ kept: null, error: null });
-    expect(a.save(state(0.4))).toEqual({ kept: null, error: null });
+    expect(a.save(state(0.3))).toEqual({ kept: null, error: null, dataNote: null });
+    expect(a.save(state(0.4))).toEqual({ kept: null, error: null, dataNote: null });
     expect(JSON.parse(s.getItem(AUTOSAVE_META_KEY)!).rev).toBe(2);
     const again = new AutosaveStore(s).load();
     expect(again.kind === 'ok' && again.state.case.wheel.cover.fraction).toBe(0.4);

@@ -57,6 +57,7 @@ export function candidatesFor(
 ): Candidate[] {
   const unitKey = labels.unit ?? 'unit';
   const areaKey = labels.reference_area_m2 ?? 'reference_area_m2';
+  const unitValue = (u: Unit) => labels.unit_values?.[u] ?? u;
   const src = conv.sources[out];
   if (!src) return [];
   const list: Candidate[] = [];
@@ -70,7 +71,7 @@ export function candidatesFor(
     list.push({
       factor: f,
       code: 'unit_factor',
-      text: `the values look like ${unitName(y)} but the column is mapped as ${unitName(src.unit)} (factor ${fmt(f)}); set its ${unitKey} to "${y}"`,
+      text: `the values look like ${unitName(y)} but the column is mapped as ${unitName(src.unit)} (factor ${fmt(f)}); set its ${unitKey} to "${unitValue(y)}"`,
     });
   }
   if (isForce) {
@@ -92,7 +93,7 @@ export function candidatesFor(
     list.push({
       factor: f,
       code: 'area_unit',
-      text: `the drag areas look like ${unitName(other)} but are mapped as ${unitName(src.unit)} (factor ${fmt(f)}); set the ${unitKey} to "${other}"`,
+      text: `the drag areas look like ${unitName(other)} but are mapped as ${unitName(src.unit)} (factor ${fmt(f)}); set the ${unitKey} to "${unitValue(other)}"`,
     });
   }
   if (src.reference_area_m2 !== undefined) {

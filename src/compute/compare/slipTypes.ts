@@ -54,6 +54,8 @@ export interface SlipLabels {
   yaw_moment_sign?: string;
   unit?: string;
   reference_area_m2?: string;
+  /** What the unit control calls each unit (a page's menu text, e.g. "grams-force" for "gf"). */
+  unit_values?: Partial<Record<Unit, string>>;
 }
 
 export interface DetectOptions {

@@ -56,4 +56,5 @@ export const DATA_SLIP_LABELS: SlipLabels = {
   side_force_sign: `“${MAPPING_LABELS.sideForceSign}” (1 = “${MAPPING_LABELS.sideForceLeft}”, -1 = “${MAPPING_LABELS.sideForceRight}”)`,
   unit: `“${MAPPING_LABELS.unit}” (in “What each column holds”)`,
   reference_area_m2: `“${MAPPING_LABELS.referenceArea}” (in “What each column holds”)`,
+  unit_values: UNIT_TEXT,
 };

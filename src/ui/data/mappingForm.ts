@@ -7,6 +7,7 @@ import {
   MAP_FORMAT,
   MAP_VERSION,
   type MapColumn,
+  type MapFile,
   QUANTITIES,
   QUANTITY_UNITS,
   type Quantity,
@@ -27,9 +28,19 @@ export interface MapRow {
   areaCell: HTMLElement;
 }
 
-/** Fill the mapping table for a table just read (the guess pre-filled); returns its rows. */
-export function fillMappingForm(dom: DataPanelDom, table: TableSummary, ctx: DataContext): MapRow[] {
-  const guess = table.guess;
+/**
+ * Fill the mapping table for a table just read, pre-filled with the guess, or with `given` (a mapping
+ * applied before, restored from a project file, the autosave or a link); returns its rows.
+ */
+export function fillMappingForm(
+  dom: DataPanelDom,
+  table: TableSummary,
+  ctx: DataContext,
+  given?: MapFile,
+): MapRow[] {
+  const guess = given
+    ? { map: given, notes: ['The mapping as it was applied when this data was saved.'] }
+    : table.guess;
   // Column names are data: look them up without the prototype chain ("__proto__" is a name too).
   const guessed = new Map(Object.entries(guess.map.columns));
   const rows: MapRow[] = [];
@@ -88,7 +99,7 @@ export function fillMappingForm(dom: DataPanelDom, table: TableSummary, ctx: Dat
   dom.speedInput.value = String(
     Number(speedFromMps(guess.map.airspeed_mps ?? ctx.airspeedMps, su).toPrecision(6)),
   );
-  dom.densityInput.value = '';
+  dom.densityInput.value = given?.air_density_kgpm3 === undefined ? '' : String(given.air_density_kgpm3);
   dom.guessNotes.replaceChildren(...guess.notes.map((n) => el('li', { text: n })));
   dom.mapErrors.replaceChildren();
   // A preview of the first rows, as read (text only).

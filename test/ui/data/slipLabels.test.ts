@@ -4,7 +4,7 @@
 // "Side force sign" control with what -1 means on it, and the "Unit" column, and never the file keys.
 import { describe, expect, it } from 'vitest';
 import { type MapFile, parseCsvText, runComparison } from '../../../src/compute/compare/index';
-import { DATA_SLIP_LABELS, MAPPING_LABELS } from '../../../src/ui/data/dataLabels';
+import { DATA_SLIP_LABELS, MAPPING_LABELS, UNIT_TEXT } from '../../../src/ui/data/dataLabels';
 import { gridPoints, testCase, truthAt } from '../../compute/compare/helpers';
 
 describe('slip messages on the data panel', () => {
@@ -47,7 +47,11 @@ describe('slip messages on the data panel', () => {
       `set “${MAPPING_LABELS.sideForceSign}” (1 = “${MAPPING_LABELS.sideForceLeft}”, -1 = “${MAPPING_LABELS.sideForceRight}”) to -1`,
     );
     const unit = messages.find((m) => m.includes('grams-force'));
-    expect(unit, all).toContain(`“${MAPPING_LABELS.unit}” (in “What each column holds”)`);
-    expect(all).not.toMatch(/side_force_sign|set its unit /);
+    expect(unit, all).toContain(
+      `“${MAPPING_LABELS.unit}” (in “What each column holds”) to "${UNIT_TEXT.gf}"`,
+    );
+    // The factor is the one of grams-force read as newtons: 1000 / 9.80665 = 101.97 (not 9.81, kgf's).
+    expect(unit, all).toMatch(/factor 102\b/);
+    expect(all).not.toMatch(/side_force_sign|set its unit |"gf"/);
   });
 });

@@ -1,0 +1,82 @@
+/**
+ * SHA-256 of a text's UTF-8 bytes, as 64 lower-case hex digits (FIPS 180-4, Secure Hash Standard, 2015,
+ * sections 4.1.2, 4.2.2, 5.3.3 and 6.2). Synchronous and environment-free (the page's crypto.subtle is
+ * asynchronous and absent outside secure contexts), so a file's reader can check a stored content hash
+ * while it validates. Used to name imported data by its content: a link carries the hash, not the data.
+ */
+
+const K = new Uint32Array([
+  0x428a2f98, 0x71374491, 0xb5c0fbcf, 0xe9b5dba5, 0x3956c25b, 0x59f111f1, 0x923f82a4, 0xab1c5ed5, 0xd807aa98,
+  0x12835b01, 0x243185be, 0x550c7dc3, 0x72be5d74, 0x80deb1fe, 0x9bdc06a7, 0xc19bf174, 0xe49b69c1, 0xefbe4786,
+  0x0fc19dc6, 0x240ca1cc, 0x2de92c6f, 0x4a7484aa, 0x5cb0a9dc, 0x76f988da, 0x983e5152, 0xa831c66d, 0xb00327c8,
+  0xbf597fc7, 0xc6e00bf3, 0xd5a79147, 0x06ca6351, 0x14292967, 0x27b70a85, 0x2e1b2138, 0x4d2c6dfc, 0x53380d13,
+  0x650a7354, 0x766a0abb, 0x81c2c92e, 0x92722c85, 0xa2bfe8a1, 0xa81a664b, 0xc24b8b70, 0xc76c51a3, 0xd192e819,
+  0xd6990624, 0xf40e3585, 0x106aa070, 0x19a4c116, 0x1e376c08, 0x2748774c, 0x34b0bcb5, 0x391c0cb3, 0x4ed8aa4a,
+  0x5b9cca4f, 0x682e6ff3, 0x748f82ee, 0x78a5636f, 0x84c87814, 0x8cc70208, 0x90befffa, 0xa4506ceb, 0xbef9a3f7,
+  0xc67178f2,
+]);
+
+/** SHA-256 of `text` encoded as UTF-8 (lone surrogates become U+FFFD, as TextEncoder writes them). */
+export function sha256Hex(text: string): string {
+  if (typeof text !== 'string') throw new RangeError(`text: must be a string, got ${typeof text}`);
+  const bytes = new TextEncoder().encode(text);
+  const n = bytes.length;
+  // Padding: 0x80, zeros, then the length in bits as a 64-bit big-endian number (section 5.1.1).
+  const blocks = Math.ceil((n + 9) / 64);
+  const padded = new Uint8Array(blocks * 64);
+  padded.set(bytes);
+  padded[n] = 0x80;
+  const view = new DataView(padded.buffer);
+  view.setUint32(padded.length - 8, Math.floor(n / 0x20000000), false);
+  view.setUint32(padded.length - 4, (n * 8) >>> 0, false);
+  const H = new Uint32Array([
+    0x6a09e667, 0xbb67ae85, 0x3c6ef372, 0xa54ff53a, 0x510e527f, 0x9b05688c, 0x1f83d9ab, 0x5be0cd19,
+  ]);
+  const W = new Uint32Array(64);
+  for (let b = 0; b < blocks; b++) {
+    const off = b * 64;
+    for (let t = 0; t < 16; t++) W[t] = view.getUint32(off + 4 * t, false);
+    for (let t = 16; t < 64; t++) {
+      const w15 = W[t - 15]!;
+      const w2 = W[t - 2]!;
+      const s0 = ((w15 >>> 7) | (w15 << 25)) ^ ((w15 >>> 18) | (w15 << 14)) ^ (w15 >>> 3);
+      const s1 = ((w2 >>> 17) | (w2 << 15)) ^ ((w2 >>> 19) | (w2 << 13)) ^ (w2 >>> 10);
+      W[t] = (W[t - 16]! + s0 + W[t - 7]! + s1) >>> 0;
+    }
+    let a = H[0]!;
+    let b1 = H[1]!;
+    let c = H[2]!;
+    let d = H[3]!;
+    let e = H[4]!;
+    let f = H[5]!;
+    let g = H[6]!;
+    let h = H[7]!;
+    for (let t = 0; t < 64; t++) {
+      const S1 = ((e >>> 6) | (e << 26)) ^ ((e >>> 11) | (e << 21)) ^ ((e >>> 25) | (e << 7));
+      const ch = (e & f) ^ (~e & g);
+      const t1 = (h + S1 + ch + K[t]! + W[t]!) >>> 0;
+      const S0 = ((a >>> 2) | (a << 30)) ^ ((a >>> 13) | (a << 19)) ^ ((a >>> 22) | (a << 10));
+      const maj = (a & b1) ^ (a & c) ^ (b1 & c);
+      const t2 = (S0 + maj) >>> 0;
+      h = g;
+      g = f;
+      f = e;
+      e = (d + t1) >>> 0;
+      d = c;
+      c = b1;
+      b1 = a;
+      a = (t1 + t2) >>> 0;
+    }
+    H[0] = (H[0]! + a) >>> 0;
+    H[1] = (H[1]! + b1) >>> 0;
+    H[2] = (H[2]! + c) >>> 0;
+    H[3] = (H[3]! + d) >>> 0;
+    H[4] = (H[4]! + e) >>> 0;
+    H[5] = (H[5]! + f) >>> 0;
+    H[6] = (H[6]! + g) >>> 0;
+    H[7] = (H[7]! + h) >>> 0;
+  }
+  let hex = '';
+  for (let i = 0; i < 8; i++) hex += H[i]!.toString(16).padStart(8, '0');
+  return hex;
+}
