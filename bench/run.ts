@@ -132,10 +132,10 @@ function sweepIn(dir: string, workers: number, entry: string, label: string): vo
       sweepIn('.', workers, entry, 'current');
       if (baseline) sweepIn(baseline.dir, workers, baseline.entry, `baseline ${baselineRef}`);
     }
+    // --- The command line as a whole process: start-up and the standard plan, compiled (and the
+    // baseline's compiled command line, interleaved) against tsx ----
+    benchWholeProcess(print, baseline ? { label: `baseline ${baselineRef}`, dir: baseline.dir } : undefined);
   } finally {
     if (baseline) spawnSync('git', ['worktree', 'remove', '--force', baseline.dir], { stdio: 'ignore' });
   }
 }
-
-// --- The command line as a whole process: start-up and the standard plan, compiled against tsx ----
-benchWholeProcess(print);
