@@ -5,7 +5,7 @@
  */
 import { spawnSync } from 'node:child_process';
 import { mkdtempSync, symlinkSync } from 'node:fs';
-import { availableParallelism, cpus, tmpdir } from 'node:os';
+import { availableParallelism, cpus, loadavg, tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { luFactor } from '../src/model/numeric';
 import { luKernel } from '../src/model/numeric/luKernel';
@@ -17,8 +17,11 @@ import { benchWholeProcess } from './wholeProcess';
 const cores = availableParallelism();
 const machine = { cores, cpu: cpus()[0]?.model ?? 'unknown', node: process.version };
 
+/** Each line carries the machine's 1-minute load average when it was printed (the machine may be shared). */
 function print(name: string, figures: Record<string, unknown>): void {
-  console.log(JSON.stringify({ bench: name, ...figures, machine }));
+  console.log(
+    JSON.stringify({ bench: name, ...figures, machine: { ...machine, load1: +loadavg()[0]!.toFixed(1) } }),
+  );
 }
 
 // --- Dense LU factorisation: n = 1000, and the model's lattice sizes 648 and 288 ----------------------
@@ -109,7 +112,7 @@ function sweepIn(dir: string, workers: number, entry: string, label: string): vo
   for (const line of child.stdout.split('\n')) {
     if (line.trim() === '') continue;
     const figures = JSON.parse(line) as Record<string, unknown>;
-    console.log(JSON.stringify({ ...figures, tree: label }));
+    console.log(JSON.stringify({ ...figures, tree: label, load1: +loadavg()[0]!.toFixed(1) }));
   }
 }
 {
@@ -132,10 +135,10 @@ function sweepIn(dir: string, workers: number, entry: string, label: string): vo
       sweepIn('.', workers, entry, 'current');
       if (baseline) sweepIn(baseline.dir, workers, baseline.entry, `baseline ${baselineRef}`);
     }
+    // --- The command line as a whole process: start-up and the standard plan, compiled (and the
+    // baseline's compiled command line, interleaved) against tsx ----
+    benchWholeProcess(print, baseline ? { label: `baseline ${baselineRef}`, dir: baseline.dir } : undefined);
   } finally {
     if (baseline) spawnSync('git', ['worktree', 'remove', '--force', baseline.dir], { stdio: 'ignore' });
   }
 }
-
-// --- The command line as a whole process: start-up and the standard plan, compiled against tsx ----
-benchWholeProcess(print);

@@ -9,6 +9,7 @@ import { createHash } from 'node:crypto';
 import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
+import { pathToFileURL } from 'node:url';
 import { builtCli, sourceFingerprint } from '../bin/builtCli.mjs';
 import { median } from './timing';
 
@@ -32,23 +33,48 @@ const STANDARD_PLAN = {
   },
 };
 
-/** Wall time of one process (ms); throws on a non-zero exit. */
-function timeProcess(command: string, args: string[], cwd: string, fromSource: boolean): number {
+const PEAK_RSS = resolve('bench/peakRss.mjs');
+
+interface ProcessFigures {
+  ms: number;
+  /** Peak resident memory (MB) and CPU time (ms) of the whole process, every thread (bench/peakRss.mjs). */
+  peakRssMB: number;
+  cpuMs: number;
+}
+
+/** Wall time, peak memory and CPU time of one process; throws on a non-zero exit. */
+function timeProcess(command: string, args: string[], cwd: string, fromSource: boolean): ProcessFigures {
   const env = { ...process.env };
   delete env.COVERSWEEP_FROM_SOURCE;
   if (fromSource) env.COVERSWEEP_FROM_SOURCE = '1';
+  const node = command === process.execPath;
   const t0 = performance.now();
-  const r = spawnSync(command, args, { cwd, env, stdio: ['ignore', 'pipe', 'pipe'], maxBuffer: 1 << 26 });
+  const r = spawnSync(command, node ? ['--import', pathToFileURL(PEAK_RSS).href, ...args] : args, {
+    cwd,
+    env,
+    stdio: ['ignore', 'pipe', 'pipe'],
+    maxBuffer: 1 << 26,
+  });
   const ms = performance.now() - t0;
   if (r.status !== 0) throw new Error(`${command} ${args.join(' ')} failed: ${r.stderr}`);
-  return ms;
+  const last = node ? String(r.stderr).trim().split('\n').pop() : undefined;
+  const usage = last ? (JSON.parse(last) as { peakRssKB: number; cpuMs: number }) : undefined;
+  return { ms, peakRssMB: usage ? usage.peakRssKB / 1024 : Number.NaN, cpuMs: usage?.cpuMs ?? Number.NaN };
 }
 
-export function benchWholeProcess(print: Print): void {
+/** Whole-process figures; `baseline` (a tree with its own dist-cli/, built here) is timed beside this one. */
+export function benchWholeProcess(print: Print, baseline?: { label: string; dir: string }): void {
   const build = spawnSync('npm', ['run', '--silent', 'build:cli'], {
     stdio: ['ignore', 'ignore', 'inherit'],
   });
   if (build.status !== 0) throw new Error('npm run build:cli failed');
+  if (baseline) {
+    const other = spawnSync('npm', ['run', '--silent', 'build:cli'], {
+      cwd: baseline.dir,
+      stdio: ['ignore', 'ignore', 'inherit'],
+    });
+    if (other.status !== 0) throw new Error(`npm run build:cli failed in ${baseline.dir}`);
+  }
   const t0 = performance.now();
   const built = builtCli(resolve('.'));
   const checkMs = performance.now() - t0;
@@ -63,7 +89,7 @@ export function benchWholeProcess(print: Print): void {
 
   const runs = 5;
   const help = (command: string, args: string[], fromSource: boolean) =>
-    Math.round(median(Array.from({ length: runs }, () => timeProcess(command, args, '.', fromSource))));
+    Math.round(median(Array.from({ length: runs }, () => timeProcess(command, args, '.', fromSource).ms)));
   print('cli_help_process', {
     runs,
     builtMedianMs: help(process.execPath, [BIN, '--help'], false),
@@ -75,32 +101,56 @@ export function benchWholeProcess(print: Print): void {
   const dir = mkdtempSync(join(tmpdir(), 'coversweep-bench-cli-'));
   try {
     writeFileSync(join(dir, 'plan.json'), JSON.stringify(STANDARD_PLAN));
-    const sweepRuns = 3;
-    for (const workers of [1, 2]) {
-      const figures: Record<string, unknown> = { points: 20_664, workers, runs: sweepRuns };
-      const hashes: string[] = [];
-      for (const [label, fromSource] of [
-        ['built', false],
-        ['tsx', true],
-      ] as const) {
-        const times: number[] = [];
-        for (let i = 0; i < sweepRuns; i++) {
-          const out = `${label}-${workers}-${i}.csv`;
-          const args = [BIN, 'sweep', 'plan.json', '--workers', String(workers), '--out', out];
-          times.push(timeProcess(process.execPath, args, dir, fromSource));
-          hashes.push(
-            createHash('sha256')
-              .update(readFileSync(join(dir, out)))
-              .digest('hex'),
-          );
-          rmSync(join(dir, out));
+    // The compiled sweep of this tree and (COVERSWEEP_BENCH_BASELINE) of the baseline's, interleaved run
+    // by run, with 1 and 2 workers; the tsx sweep of this tree once per worker count.
+    const trees = [
+      { label: 'current', bin: BIN },
+      ...(baseline ? [{ label: baseline.label, bin: join(baseline.dir, 'bin/coversweep.mjs') }] : []),
+    ];
+    const sweepRuns = 5;
+    const hashes = new Set<string>();
+    const runs = new Map<string, ProcessFigures[]>();
+    const sweep = (bin: string, workers: number, fromSource: boolean, out: string): ProcessFigures => {
+      const args = [bin, 'sweep', 'plan.json', '--workers', String(workers), '--out', out];
+      const figures = timeProcess(process.execPath, args, dir, fromSource);
+      hashes.add(
+        createHash('sha256')
+          .update(readFileSync(join(dir, out)))
+          .digest('hex'),
+      );
+      rmSync(join(dir, out));
+      return figures;
+    };
+    for (let i = 0; i < sweepRuns; i++) {
+      for (const workers of [1, 2]) {
+        for (const tree of trees) {
+          const key = `${tree.label}|${workers}`;
+          runs.set(key, [...(runs.get(key) ?? []), sweep(tree.bin, workers, false, `${i}-${workers}.csv`)]);
         }
-        figures[`${label}MedianMs`] = Math.round(median(times));
       }
-      figures.outputsIdentical = hashes.every((h) => h === hashes[0]);
-      figures.sha256 = hashes[0]!.slice(0, 16);
-      print('standard_plan_process', figures);
     }
+    const tsxMs = [1, 2].map((workers) => Math.round(sweep(BIN, workers, true, `tsx-${workers}.csv`).ms));
+    for (const tree of trees) {
+      const of = (workers: number, pick: (f: ProcessFigures) => number) =>
+        median(runs.get(`${tree.label}|${workers}`)!.map(pick));
+      const one = of(1, (f) => f.ms);
+      const two = of(2, (f) => f.ms);
+      print('standard_plan_process', {
+        tree: tree.label,
+        points: 20_664,
+        runs: sweepRuns,
+        built1WorkerMedianMs: Math.round(one),
+        built2WorkersMedianMs: Math.round(two),
+        speedUp1To2: +(one / two).toFixed(2),
+        cpuMs1Worker: Math.round(of(1, (f) => f.cpuMs)),
+        cpuMs2Workers: Math.round(of(2, (f) => f.cpuMs)),
+        peakRssMB1Worker: Math.round(of(1, (f) => f.peakRssMB)),
+        peakRssMB2Workers: Math.round(of(2, (f) => f.peakRssMB)),
+        all2WorkerMs: runs.get(`${tree.label}|2`)!.map((f) => Math.round(f.ms)),
+        ...(tree.label === 'current' ? { tsx1WorkerMs: tsxMs[0], tsx2WorkersMs: tsxMs[1] } : {}),
+      });
+    }
+    print('standard_plan_outputs', { identical: hashes.size === 1, sha256: [...hashes][0]!.slice(0, 16) });
   } finally {
     rmSync(dir, { recursive: true, force: true });
   }

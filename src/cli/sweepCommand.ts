@@ -9,15 +9,21 @@ import { WorkerPool } from '../compute/engine/workerPool';
 import { type ExpandedCase, type ExpandedPlan, parsePlanFile } from '../compute/planFile';
 import { csvHeader, documentCsvLines, errorCsvLine } from '../compute/resultTable';
 import { commandLineStudy } from '../compute/study/commandLineStudy';
-import { runStudies } from '../compute/study/runStudies';
+import { type CaseLanded, runStudies } from '../compute/study/runStudies';
 import { OUT_OPTIONS, onePositional, openOutput, parseCommandArgs, readJsonFile } from './commandArgs';
 import { HELP, MAX_JOB_POINTS, MIN_CASES_FOR_POOL } from './commandHelp';
 import { CliInputError, type CliIo, EXIT_INPUT, EXIT_OK } from './io';
 import { nodeWorkerSpawner } from './nodeWorker';
 import { checkOutputPath, OutputTakenError } from './outputFile';
+import { prestartedSpawner } from './prestartedSpawner';
 import { progressReporter } from './progress';
 import { refuseRepeatedOptions } from './refuseRepeatedOptions';
 import { SweepSpool } from './sweepSpool';
+
+/** Cases landed but not yet written (see writeSweep); `flush` writes them now. */
+export interface PendingCases {
+  flush: () => void;
+}
 
 /** Write a sweep's results as CSV or as a JSON list of documents to `sink`, streaming case by case in
  * plan order. The plan runs as one study (commandLineStudy) on `runner`: a worker pool, or this thread.
@@ -31,6 +37,7 @@ export async function writeSweep(
   onProgress?: (progress: SweepProgress) => void,
   runner: JobRunner = new InProcessRunner(),
   spool: SweepSpool = new SweepSpool(),
+  pending: PendingCases = { flush: () => undefined },
 ): Promise<number> {
   const keys = plan.variedKeys;
   if (format === 'csv') {
@@ -61,6 +68,39 @@ export async function writeSweep(
   // worker goes on solving, and the error is thrown once it has stopped.
   const stop = new AbortController();
   let failure: { error: unknown } | null = null;
+  const writeCase = ({ caseIndex: i, cube, surface, error }: CaseLanded): void => {
+    try {
+      const expanded = plan.cases[i]!;
+      const document =
+        cube && surface ? solutionToDocument(expanded.caseFile, { surface, points: cube.points() }) : null;
+      const text = render(i, expanded, document, error);
+      if (i !== next) {
+        spool.put(i, text);
+        return;
+      }
+      sink(text);
+      next++;
+      for (let held = spool.take(next); held !== null; held = spool.take(next)) {
+        sink(held);
+        next++;
+      }
+    } catch (sinkError) {
+      failure = { error: sinkError };
+      stop.abort();
+    }
+  };
+  // A pool's cases are written after the job's result has been handled (setImmediate), not inside it:
+  // the pool hands the worker its next job first, so the workers compute while this thread renders
+  // and writes (rendering inside the handler left both workers idle while it ran).
+  // An interrupted run writes them through `pending.flush` before it keeps its partial output.
+  const queued: CaseLanded[] = [];
+  let drainScheduled = false;
+  const drain = (): void => {
+    drainScheduled = false;
+    while (queued.length > 0 && failure === null) writeCase(queued.shift()!);
+    queued.length = 0;
+  };
+  pending.flush = drain;
   const outcome = await runStudies(runner, [commandLineStudy(plan)], {
     keep: false,
     signal: stop.signal,
@@ -70,29 +110,20 @@ export async function writeSweep(
     ...(onProgress ? { onProgress } : {}),
     // In this thread the bar starts at 0 %; a pool's first line comes with its first finished job.
     reportStart: runner.inOrder === true,
-    onCase: ({ caseIndex: i, cube, surface, error }) => {
+    onCase: (landed) => {
       if (failure !== null) return;
-      try {
-        const expanded = plan.cases[i]!;
-        const document =
-          cube && surface ? solutionToDocument(expanded.caseFile, { surface, points: cube.points() }) : null;
-        const text = render(i, expanded, document, error);
-        if (i !== next) {
-          spool.put(i, text);
-          return;
-        }
-        sink(text);
-        next++;
-        for (let held = spool.take(next); held !== null; held = spool.take(next)) {
-          sink(held);
-          next++;
-        }
-      } catch (sinkError) {
-        failure = { error: sinkError };
-        stop.abort();
+      if (runner.inOrder === true) {
+        writeCase(landed);
+        return;
+      }
+      queued.push(landed);
+      if (!drainScheduled) {
+        drainScheduled = true;
+        setImmediate(drain);
       }
     },
   });
+  drain();
   if (failure !== null) throw (failure as { error: unknown }).error;
   if (spool.size > 0) throw new Error(`sweep: ${spool.size} case(s) finished but were never written`);
   spool.close();
@@ -132,16 +163,30 @@ export async function commandSweep(args: string[], io: CliIo): Promise<number> {
       throw new CliInputError(`--workers ${values.workers}: must be a whole number from 0 to 64`);
     }
   }
-  const parsed = parsePlanFile(readJsonFile(path, io.cwd, 'plan file'));
-  if (!parsed.ok) throw new CliInputError(`invalid plan file ${path}:`, parsed.errors);
-  const plan = parsed.value;
+  // Workers asked for start now and boot while this thread reads the plan; those the plan does not
+  // need (fewer cases than workers) are ended once it is read.
+  const early = prestartedSpawner(nodeWorkerSpawner(io.workerEntry), workers ?? 0);
+  let plan: ExpandedPlan;
+  try {
+    const parsed = parsePlanFile(readJsonFile(path, io.cwd, 'plan file'));
+    if (!parsed.ok) throw new CliInputError(`invalid plan file ${path}:`, parsed.errors);
+    plan = parsed.value;
+  } catch (error) {
+    early.release();
+    throw error;
+  }
   const progress = progressReporter(io.stderr, io.stderrIsTTY);
   workers ??= plan.cases.length < MIN_CASES_FOR_POOL ? 0 : availableParallelism();
   workers = Math.min(workers, plan.cases.length);
   io.stderr(
     `sweep: ${plan.cases.length} case(s), ${plan.pointCount} operating point(s), ${workers > 0 ? `${workers} worker thread(s)` : 'in this process'}\n`,
   );
-  const pool = workers > 0 ? new WorkerPool(nodeWorkerSpawner(io.workerEntry), workers) : undefined;
+  early.release(workers);
+  const pool = workers > 0 ? new WorkerPool(early.spawn, workers) : undefined;
+  const close = () => {
+    pool?.close();
+    early.release();
+  };
   const finish = (failed: number): number => {
     if (failed > 0)
       io.stderr(`sweep: ${failed} of ${plan.cases.length} case(s) failed; see the error column\n`);
@@ -151,15 +196,23 @@ export async function commandSweep(args: string[], io: CliIo): Promise<number> {
     try {
       return finish(await writeSweep(plan, format, io.stdout, progress, pool));
     } finally {
-      pool?.close();
+      close();
     }
   }
-  const file = openOutput(outPath, force, io);
+  let file: ReturnType<typeof openOutput>;
+  try {
+    file = openOutput(outPath, force, io);
+  } catch (error) {
+    close();
+    throw error;
+  }
   const spool = new SweepSpool();
   // Finished rows are never lost: an interrupted or failed sweep leaves every finished case beside the
   // output, in OUT.partial (never under the output's own name, never over an existing file): first the
   // cases in plan order up to the first unfinished one, then the others that finished, in plan order.
+  const pending: PendingCases = { flush: () => undefined };
   const keepPartial = (): string => {
+    pending.flush();
     let drained = '';
     try {
       const held = spool.drainTo((text) => file.write(text));
@@ -182,7 +235,7 @@ export async function commandSweep(args: string[], io: CliIo): Promise<number> {
   process.once('SIGTERM', onSignal);
   let failed = 0;
   try {
-    failed = await writeSweep(plan, format, (text) => file.write(text), progress, pool, spool);
+    failed = await writeSweep(plan, format, (text) => file.write(text), progress, pool, spool, pending);
     file.commit();
   } catch (error) {
     if (error instanceof OutputTakenError) throw error;
@@ -194,7 +247,7 @@ export async function commandSweep(args: string[], io: CliIo): Promise<number> {
     throw error;
   } finally {
     spool.close();
-    pool?.close();
+    close();
     process.off('SIGINT', onSignal);
     process.off('SIGTERM', onSignal);
   }

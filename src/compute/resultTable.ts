@@ -6,13 +6,7 @@
  * empty for null; text is quoted per RFC 4180 when it holds a comma, quote or line break. Lines end
  * with "\n".
  */
-import {
-  COMPONENT_KEYS,
-  COMPONENT_NAMES,
-  RESULT_SCALAR_KEYS,
-  type ResultDocument,
-  type ResultRow,
-} from './caseFile';
+import { COMPONENT_KEYS, COMPONENT_NAMES, RESULT_SCALAR_KEYS, type ResultDocument } from './caseFile';
 import type { PlanValue } from './planFile';
 
 /** The result columns after the varied parameters, in order. */
@@ -56,13 +50,6 @@ export function csvHeader(variedKeys: readonly string[]): string {
   return csvLine(tableColumns(variedKeys));
 }
 
-function rowValues(row: ResultRow): PlanValue[] {
-  const out: PlanValue[] = RESULT_SCALAR_KEYS.map((k) => row[k]);
-  for (const c of COMPONENT_NAMES) for (const k of COMPONENT_KEYS) out.push(row.components[c][k]);
-  out.push(row.uncertainty.axial_N, row.uncertainty.side_N, row.flags.join(';'), '');
-  return out;
-}
-
 /** The one CSV line of a case that failed: its varied parameters, empty results, and the message. */
 export function errorCsvLine(
   variedKeys: readonly string[],
@@ -75,15 +62,28 @@ export function errorCsvLine(
   return csvLine([...variedKeys.map((k) => varied[k] ?? null), ...empty, message]);
 }
 
-/** The CSV lines (no header) of one case's document: one per operating point. */
+/** The CSV lines (no header) of one case's document: one per operating point. The same fields as
+ * csvLine of the varied values, the row's scalars in RESULT_SCALAR_KEYS order, each component's
+ * COMPONENT_KEYS, the uncertainty, the flags joined with ';' and an empty error, appended field by
+ * field (no arrays per row: a sweep writes tens of thousands of rows). */
 export function documentCsvLines(
   document: ResultDocument,
   variedKeys: readonly string[],
   varied: Readonly<Record<string, PlanValue>>,
 ): string {
-  const prefix = variedKeys.map((k) => varied[k] ?? null);
+  let prefix = '';
+  for (const k of variedKeys) prefix += `${csvField(varied[k] ?? null)},`;
   let out = '';
-  for (const row of document.results) out += csvLine([...prefix, ...rowValues(row)]);
+  for (const row of document.results) {
+    let line = prefix;
+    for (const k of RESULT_SCALAR_KEYS) line += `${csvField(row[k])},`;
+    for (const c of COMPONENT_NAMES) {
+      const loads = row.components[c];
+      for (const k of COMPONENT_KEYS) line += `${csvField(loads[k])},`;
+    }
+    const { axial_N, side_N } = row.uncertainty;
+    out += `${line}${csvField(axial_N)},${csvField(side_N)},${csvField(row.flags.join(';'))},\n`;
+  }
   return out;
 }
 

@@ -99,4 +99,45 @@ describe('CSV fields (RFC 4180 quoting, shortest round-trip numbers)', () => {
     expect(parseCsvLine(lines[1]!)[header.indexOf('cp_x_m')]).toBe('');
     expect(row[header.indexOf('flags')]).toBe(r.flags.join(';'));
   });
+
+  it("every field of every row reads back as the document's value, in the column order", () => {
+    const c = validateCase({
+      conditions: { airspeed_mps: [8, 12], yaw_deg: [0, 7.5, 15] },
+      model: { lattice_span: 8, lattice_chord: 6, grid_convergence: true },
+    });
+    if (!c.ok) throw new Error(c.errors.join('\n'));
+    const doc: ResultDocument = solveCase(c.value);
+    const keys = ['note', 'wheel.cover.fraction'];
+    const varied = { note: '=a, "b"', 'wheel.cover.fraction': 0.25 };
+    const lines = resultsToCsv([{ varied, document: doc }], keys)
+      .trimEnd()
+      .split('\n');
+    const header = parseCsvLine(lines[0]!);
+    expect(lines).toHaveLength(1 + doc.results.length);
+    doc.results.forEach((r, i) => {
+      const fields = parseCsvLine(`${lines[i + 1]!}\n`);
+      expect(fields, `row ${i}: ${lines[i + 1]}`).toHaveLength(header.length);
+      const expected: string[] = ['\'=a, "b"', '0.25'];
+      for (const name of resultColumnNames()) {
+        const component = Object.keys(r.components).find((c) => name.startsWith(`${c}_`)) as
+          | keyof typeof r.components
+          | undefined;
+        const scalars = r as unknown as Record<string, number | null>;
+        const value =
+          name === 'gci_axial_N'
+            ? r.uncertainty.axial_N
+            : name === 'gci_side_N'
+              ? r.uncertainty.side_N
+              : name === 'flags'
+                ? r.flags.join(';')
+                : name === 'error'
+                  ? ''
+                  : name in scalars
+                    ? scalars[name]!
+                    : r.components[component!][name.slice(component!.length + 1) as 'axial_N'];
+        expected.push(value === null ? '' : String(value));
+      }
+      expect(fields, `row ${i}`).toEqual(expected);
+    });
+  });
 });

@@ -33,6 +33,8 @@ import { type LuKernel, luKernel } from './luKernel';
 
 const OUTER_BLOCK = 32;
 const INNER_BLOCK = 8;
+/** Narrower block rows are solved in TypeScript (solveBlockRow): the call costs more than SIMD saves. */
+const KERNEL_ROW_MIN_COLUMNS = OUTER_BLOCK;
 /** Below this order the copy into the kernel's memory costs more than SIMD saves. */
 const WASM_MIN_N = 64;
 /**
@@ -188,12 +190,15 @@ function solveBlockRow(
   c1: number,
   kernel: LuKernel | null,
 ): void {
+  // A row of a narrow block (the inner panels': at most OUTER_BLOCK - INNER_BLOCK columns) is a few
+  // dozen multiply-adds, less than a call into the kernel costs; both paths give the same bits.
+  const useKernel = kernel !== null && c1 - kEnd >= KERNEL_ROW_MIN_COLUMNS;
   for (let i = k0 + 1; i < kEnd; i++) {
-    if (kernel === null) {
+    if (!useKernel) {
       updateRow(a, n, i * n, k0, i, kEnd, c1);
       continue;
     }
-    kernel.updateRow(n, i, k0, i, kEnd, c1);
+    kernel!.updateRow(n, i, k0, i, kEnd, c1);
     const groupsEnd = k0 + 4 * Math.floor((i - k0) / 4);
     const colsEven = kEnd + 2 * Math.floor((c1 - kEnd) / 2);
     // The odd column (groups then single p, as updateRow), then the single p on the paired columns.

@@ -22,13 +22,18 @@ export function solveWheel(
   const { wheel, options, steering, points } = input;
   checkWheelInput(input);
   const radii = wheelRadii(wheel);
+  // The surface of each rotation ratio met, so the key is built once per ratio, not once per point.
+  const byRatio = new Map<number, SurfaceCoefficients>();
   const coefficientsFor = (ratio: number): SurfaceCoefficients => {
+    const known = byRatio.get(ratio);
+    if (known) return known;
     const key = surfaceKey(wheel, radii, options, ratio);
     let c = cache.get(key);
     if (!c) {
       c = surfaceCoefficients(wheel, radii, options, ratio);
       cache.set(key, c);
     }
+    byRatio.set(ratio, c);
     return c;
   };
   const results = points.map((p) =>
