@@ -21,6 +21,7 @@ import {
   type UncertainInput,
   type UncertainRange,
 } from '../compute/compare/index';
+import { modelAtDataHere } from '../compute/study/dataComparisonStudy';
 import { formatCompareTable } from './formatCompare';
 import { outputFormat } from './formatTable';
 import { CliInputError } from './io';
@@ -230,15 +231,18 @@ export function runCompare(argv: string[], io: CompareIo): number {
     const ranges = values.uncertainty !== undefined ? parseUncertainty(values.uncertainty) : null;
     let result: ReturnType<typeof runComparison>;
     try {
-      result = runComparison({
-        caseFile,
-        table: table.value,
-        map: parsedMap.value,
-        dataLabel: dataPath,
-        calibrate: values.calibrate ? (parameters ? { parameters } : {}) : false,
-        convergence: values.convergence ? {} : false,
-        uncertainty: ranges ? { ranges, options: { samples, seed } } : false,
-      });
+      result = runComparison(
+        {
+          caseFile,
+          table: table.value,
+          map: parsedMap.value,
+          dataLabel: dataPath,
+          calibrate: values.calibrate ? (parameters ? { parameters } : {}) : false,
+          convergence: values.convergence ? {} : false,
+          uncertainty: ranges ? { ranges, options: { samples, seed } } : false,
+        },
+        modelAtDataHere,
+      );
     } catch (error) {
       if (error instanceof RangeError) throw new UsageError([error.message]);
       throw error;

@@ -3,7 +3,8 @@
  * (JSON) on stdout. Exit codes as for `solve`: 0 success, 1 internal error, 2 invalid input or usage
  * (messages naming the field and the rule on stderr, nothing on stdout).
  */
-import { parseRideFile, solveRide } from '../compute/ride/index';
+import { parseRideFile } from '../compute/ride/index';
+import { solveRideStudy } from '../compute/study/rideStudy';
 import { formatRideTable } from './formatRide';
 import { type OutputFormat, outputFormat } from './formatTable';
 import { readErrorReason } from './io';
@@ -75,7 +76,7 @@ export function runRide(argv: string[], io: RideIo): number {
   if (!parsed.ok) return fail(io, `invalid ride file ${path}:`, parsed.errors);
   let out: string;
   try {
-    const result = solveRide(parsed.value);
+    const result = solveRideStudy(parsed.value);
     out = format === 'table' ? formatRideTable(result) : `${JSON.stringify(result, null, 2)}\n`;
   } catch (error) {
     const detail = error instanceof Error ? (error.stack ?? error.message) : String(error);

@@ -373,8 +373,8 @@ export class App implements ComputeHost, ActionsHost, StudyHost, ReportHost {
     return this.roadGlue.rideFor(s);
   }
 
-  chooseDesign(fraction: number, depthM: number, what: string): void {
-    this.mapPick.choose(fraction, depthM, what);
+  chooseDesign(...args: Parameters<MapPick['choose']>): void {
+    this.mapPick.choose(...args);
   }
 
   undoChoice(): void {

@@ -1,12 +1,11 @@
 /**
- * The page's Web Workers, wrapped by comlink: the sweep pool's solver worker (workers/solver.worker.ts)
- * and the worker of the ride and comparison jobs (src/ui/pageJobs.worker.ts). `failed` rejects when a
+ * The page's Web Workers, wrapped by comlink: the pool's solver worker (workers/solver.worker.ts: the
+ * sweeps and the tasks) and the data panel's worker (src/ui/dataJobs.worker.ts). `failed` rejects when a
  * worker reports an uncaught error or cannot load, or when `crash()` stops it (the page's test hook for
  * a worker dying mid-sweep, and the watchdog's way to stop a hung one: terminate() alone would leave a
  * call waiting forever, as a real crash does not).
  */
 import { type Remote, wrap } from 'comlink';
-import type { PageJobsApi } from '../compute/engine/pageJobs';
 import type { SolverApi } from '../compute/engine/protocol';
 import type { WorkerHandle } from '../compute/engine/workerPool';
 import type { DataJobsApi } from './dataJobs';
@@ -18,8 +17,8 @@ export interface BrowserWorkerHandle extends WorkerHandle {
   crash(reason?: string): void;
 }
 
-/** The page-jobs worker's interface: rides and comparisons, and the data panel's tables. */
-export type PageWorkerApi = PageJobsApi & DataJobsApi;
+/** The data panel's worker: its tables and their comparison. */
+export type PageWorkerApi = DataJobsApi & { ping(): string };
 
 export interface PageJobsHandle {
   api: Remote<PageWorkerApi>;
@@ -58,7 +57,7 @@ export function spawnBrowserWorker(): BrowserWorkerHandle {
 }
 
 export function spawnPageJobsWorker(): PageJobsHandle {
-  const worker = new Worker(new URL('./pageJobs.worker.ts', import.meta.url), { type: 'module' });
-  const { failed } = watch(worker, 'ride and comparison worker');
+  const worker = new Worker(new URL('./dataJobs.worker.ts', import.meta.url), { type: 'module' });
+  const { failed } = watch(worker, 'data worker');
   return { api: wrap<PageWorkerApi>(worker), failed, terminate: () => worker.terminate() };
 }

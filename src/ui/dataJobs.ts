@@ -1,6 +1,6 @@
 /**
- * The data panel's heavy work, run in the page-jobs worker so that a large table never blocks the page:
- * reading the CSV (a dropped file is handed over as a File and read there), guessing the columns, and
+ * The data panel's heavy work, run in the data panel's own worker (dataJobs.worker.ts) so that a large
+ * table never blocks the page: reading the CSV (a dropped file is handed over as a File and read there), guessing the columns, and
  * the comparison. The parsed table stays in the worker (keyed by the panel's reference); the page only
  * ever holds a summary (headers, row count, a few rows, the guessed map) and the text as read with its
  * SHA-256 (to keep with the page state). A fresh worker (after a
@@ -27,6 +27,7 @@ import {
 } from '../compute/compare/index';
 import { BoundedCache } from '../compute/engine/boundedCache';
 import { sha256Hex } from '../compute/sha256';
+import { modelAtDataHere } from '../compute/study/dataComparisonStudy';
 
 /** Where a table comes from: a file the user chose, or text (pasted, or the demo file). */
 export type TableSource = { kind: 'file'; file: File } | { kind: 'text'; text: string };
@@ -286,7 +287,7 @@ export const dataJobsApi: DataJobsApi = {
     if (!t.ok) return t;
     let result: ReturnType<typeof runComparison>;
     try {
-      result = runComparison({ ...rest, table: t.value });
+      result = runComparison({ ...rest, table: t.value }, modelAtDataHere);
     } catch (error) {
       return { ok: false, errors: [error instanceof Error ? error.message : String(error)] };
     }

@@ -30,7 +30,7 @@ export function spawnTracked(): BrowserWorkerHandle {
 
 export const poolWorkers: BrowserWorkerHandle[] = [];
 
-/** The sweep pool: up to four workers, one per core. */
+/** The sweep pool: up to four workers, one per core; and two task workers (the 3D view, ride, study). */
 export const pool = new WorkerPool(
   () => {
     const h = spawnTracked();
@@ -38,6 +38,7 @@ export const pool = new WorkerPool(
     return h;
   },
   Math.max(1, Math.min(4, navigator.hardwareConcurrency || 2)),
+  { taskWorkers: 2, spawnTask: spawnTracked },
 );
 
 /** When every sweep worker had loaded and answered (ms after navigation start), for the timings. */

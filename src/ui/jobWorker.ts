@@ -1,6 +1,7 @@
 /**
- * One worker for the page's jobs besides the sweeps (a ride, a comparison with data), so that
- * they neither wait for nor slow down the design's sweeps more than the machine must. Latest wins: a
+ * The data panel's worker (src/ui/dataJobs.worker.ts: it keeps the parsed table, read from a File in
+ * the worker, so it is not a pool task worker; every other background task of the page is a task on the
+ * pool, compute/engine/taskChannel.ts, with the same latest-wins rule). Latest wins: a
  * request made while one runs replaces any request still waiting, and a superseded answer is dropped.
  * cancel() stops the worker at once (a long calibration) and the next request starts a fresh one.
  * A job may carry a deadline (ms): a worker that has not answered by then is taken as hung, stopped and

@@ -1,16 +1,17 @@
 /**
  * The "On the road" panel's glue: the ride built from the state (its baseline wheel: the pinned one or
- * this wheel without covers), computed in its own background worker (JobWorker) when the road tab shows,
+ * this wheel without covers), computed as a task on the pool's task workers (a TaskChannel: the latest ride wins) when the road tab shows,
  * and the ride file saved for `coversweep ride`.
  */
 import type { CaseWheel, Parsed } from '../compute/caseFile';
+import { TaskChannel } from '../compute/engine/taskChannel';
 import type { RideFile } from '../compute/ride/index';
 import { kmhToMps } from '../compute/units';
 import type { AppState } from './appState';
 import { designFileStem } from './designFileStem';
 import { fmt } from './displayUnits';
 import { downloadText } from './download';
-import { JobWorker } from './jobWorker';
+import { pool } from './earlyPool';
 import type { PageHost } from './pageHost';
 import type { RoadContext, RoadPanel, RoadPlotName } from './roadPanel';
 import { defaultRoad, type RoadState, roadToRideRaw, validateRoadFor } from './roadState';
@@ -19,7 +20,7 @@ import { byId } from './views/present';
 export class RoadGlue {
   private road: RoadPanel | null = null;
   private roadLoading: Promise<RoadPanel> | null = null;
-  private readonly rideWorker = new JobWorker();
+  private readonly rideTasks = new TaskChannel(pool);
   private rideTimer: ReturnType<typeof setTimeout> | null = null;
   private lastRideKey = '';
   private roadShown: { road: string; unit: string } = { road: '', unit: '' };
@@ -155,7 +156,7 @@ export class RoadGlue {
       "Solving both wheels' yaw curves (0–90°) and the ride's wind states in the background…",
     );
     const started = performance.now();
-    const out = await this.rideWorker.run((api) => api.ride({ ride: r.value }));
+    const out = await this.rideTasks.run({ kind: 'ride', request: { ride: r.value } });
     if (out.status === 'superseded' || out.status === 'cancelled') return;
     if (key !== this.lastRideKey) return;
     if (out.status === 'failed') {

@@ -1,20 +1,19 @@
 /**
  * The "Design study" tab's glue: the study built from the state (its inputs, the ride the road inputs
- * define, the current wheel as the design space's base), checked by the study file's rules, run in its
- * own background worker (JobWorker: progress, cancel) and shown; a design chosen in the result becomes
+ * define, the current wheel as the design space's base), checked by the study file's rules, run as a
+ * task on the pool's task workers (a TaskChannel: progress, cancel) and shown; a design chosen in the result becomes
  * the current design through the map's pick path (with undo). Only the inputs live in the state: the
  * result is kept here, and marked out of date when the inputs, the ride or the base wheel change.
  */
-import { proxy } from 'comlink';
 import type { Parsed } from '../compute/caseFile';
-import { type StudyDocument, validateStudy } from '../compute/design/index';
-import type { StudyJobResult } from '../compute/engine/studyJobs';
+import { designVariable, type StudyDocument, validateStudy } from '../compute/design/index';
+import { TaskChannel } from '../compute/engine/taskChannel';
 import type { RideFile } from '../compute/ride/index';
 import type { AppState } from './appState';
 import { designFileStem } from './designFileStem';
 import { fmt } from './displayUnits';
 import { downloadText } from './download';
-import { JobWorker } from './jobWorker';
+import { pool } from './earlyPool';
 import type { PageHost } from './pageHost';
 import type { StudyPanel } from './study/studyPanel';
 import {
@@ -29,8 +28,14 @@ import { byId } from './views/present';
 export interface StudyHost extends PageHost {
   /** The ride the road inputs define for a state. */
   rideFor(s: AppState): Parsed<RideFile>;
-  /** Make a design (cover fraction, rim depth in m) current, with undo; `what` names it in messages. */
-  chooseDesign(fraction: number, depthM: number, what: string): void;
+  /** Make a design (cover fraction, rim depth in m, and any other freed variables' values by id)
+   * current, with undo; `what` names it in messages. */
+  chooseDesign(
+    fraction: number,
+    depthM: number,
+    what: string,
+    values?: Record<string, number | string>,
+  ): void;
   undoChoice(): void;
 }
 
@@ -40,7 +45,7 @@ const keyOf = (raw: unknown) => JSON.stringify(raw);
 export class StudyGlue {
   private view: StudyPanel | null = null;
   private loading: Promise<StudyPanel> | null = null;
-  private readonly worker = new JobWorker();
+  private readonly tasks = new TaskChannel(pool);
   private doc: StudyDocument | null = null;
   private docKey = '';
   private running = false;
@@ -102,7 +107,7 @@ export class StudyGlue {
       ? `${r.position} wheel, ${r.ride.power_W !== undefined ? `${fmt(r.ride.power_W)} W` : `${fmt((r.ride.speed_mps ?? 0) * 3.6, 3)} km/h`}${r.course ? ` over a course of ${r.course.length} segments` : ` over ${fmt((r.ride.distance_m ?? 0) / 1000, 3)} km`}`
       : 'no valid ride';
     v.setContext(
-      `The ride is the one “On the road” defines (${what}); the design space's base is the current wheel, its cover fraction and rim depth varied. Savings are against the ride's baseline.`,
+      `The ride is the one “On the road” defines (${what}); the design space's base is the current wheel, its cover fraction and rim depth varied (and any variable ticked under “More design variables”). Savings are against the ride's baseline.`,
       w.cover.placement === 'explicit'
         ? 'Current design: an explicit cover list (a study sets a cover fraction at the rim instead).'
         : `Current design: cover fraction ${fmt(w.cover.fraction, 3)}, rim depth ${fmt(w.rim_depth_m * 1000, 3)} mm.`,
@@ -121,16 +126,19 @@ export class StudyGlue {
   }
 
   /**
-   * The study's key leaves out the two varied values of the base wheel, and of the baseline when it is
-   * this wheel without covers (no pinned baseline), so choosing one of its designs keeps the result.
+   * The study's key leaves out the varied values of the base wheel (every freed variable set to one
+   * placeholder), and of the baseline when it is this wheel without covers (no pinned baseline), so
+   * choosing one of its designs keeps the result.
    */
   private forKey(raw: Record<string, unknown>, derivedBaseline: boolean): unknown {
     const ride = raw.ride as RideFile;
-    const strip = (w: RideFile['design']) => {
-      const { fraction: _f, ...cover } = w.cover;
-      const { rim_depth_m: _d, ...rest } = w;
-      return { ...rest, cover };
-    };
+    const freed = Object.keys((raw.variables ?? {}) as Record<string, unknown>);
+    const strip = (w: RideFile['design']) =>
+      freed.reduce((x, id) => {
+        const v = designVariable(id);
+        if (!v) return x;
+        return v.kind === 'continuous' ? v.set(x, 0) : v.set(x, v.choices?.[0] ?? 0);
+      }, w);
     return {
       ...raw,
       name: undefined,
@@ -142,14 +150,17 @@ export class StudyGlue {
     };
   }
 
-  /** Index of the evaluated design equal to the current design, if any. */
+  /** Index of the evaluated design equal to the current design in every freed variable, if any. */
   private currentIndex(s: AppState): number | null {
-    const w = s.case.wheel;
-    const d = this.doc?.designs.find(
-      (x) =>
-        Math.abs((x.design.cover_fraction as number) - w.cover.fraction) < 1e-9 &&
-        Math.abs((x.design.rim_depth_m as number) - w.rim_depth_m) < 1e-9,
-    );
+    const w = s.case.wheel as unknown as RideFile['design'];
+    const same = (id: string, value: number | string | null) => {
+      const v = designVariable(id);
+      const here = v?.get(w);
+      return typeof value === 'number' && typeof here === 'number'
+        ? Math.abs(value - here) < 1e-9
+        : value === here;
+    };
+    const d = this.doc?.designs.find((x) => Object.entries(x.design).every(([id, value]) => same(id, value)));
     return d?.index ?? null;
   }
 
@@ -183,11 +194,9 @@ export class StudyGlue {
     this.running = true;
     view.setStatus('running', 'Starting the study in the background…');
     const started = performance.now();
-    const progress = proxy((done: number, budget: number) => {
-      if (this.running) view.setProgress(done, budget);
-    });
-    const out = await this.worker.run<StudyJobResult>(
-      (api) => api.study(raw.value, progress) as Promise<StudyJobResult>,
+    const out = await this.tasks.run(
+      { kind: 'study', raw: raw.value },
+      { onProgress: (done, budget) => view.setProgress(done, budget) },
     );
     this.running = false;
     if (out.status === 'superseded') return;
@@ -214,7 +223,7 @@ export class StudyGlue {
   }
 
   cancel(): void {
-    this.worker.cancel();
+    this.tasks.cancel();
   }
 
   private select(index: number): void {
@@ -224,6 +233,9 @@ export class StudyGlue {
       d.design.cover_fraction as number,
       d.design.rim_depth_m as number,
       `Design ${index} of the study`,
+      Object.fromEntries(
+        Object.entries(d.design).filter((e): e is [string, number | string] => e[1] !== null),
+      ),
     );
   }
 

@@ -1,14 +1,14 @@
 /**
  * The Help tab's validation table: the built-in reference set (src/compute/validation) computed by the
- * model in a page-jobs worker when Help is first opened (nothing runs at page load), with the same rows
+ * model as a task on the pool's task workers when Help is first opened (nothing runs at page load), with the same rows
  * and numbers as `coversweep validate`: case, source, strength of the reference, reference and band,
  * the model's value, pass or fail. The host's data-state says idle, computing, done or failed.
  */
 import { formatNumber, withUnit } from '../compute/validation/bandText';
 import type { ValidationReport, ValidationRow } from '../compute/validation/types';
 import { el } from './dom';
+import { pool } from './earlyPool';
 import { tableExportButtons } from './export/tableExportButtons';
-import { JobWorker } from './jobWorker';
 
 function referenceText(row: ValidationRow): string {
   const nominal = row.reference === null ? '' : `${formatNumber(row.reference)}; `;
@@ -107,10 +107,9 @@ function reportTable(report: ValidationReport): HTMLElement {
   ]);
 }
 
-/** Compute the reference set in a worker and show it in `host` (once; later calls do nothing). */
+/** Compute the reference set as a task on the pool and show it in `host` (once; later calls do nothing). */
 export class ValidationPanel {
   private started = false;
-  private readonly worker = new JobWorker();
   /** The computed report, shared with the printable report (src/ui/report). */
   private computed: Promise<ValidationReport> | null = null;
 
@@ -129,22 +128,20 @@ export class ValidationPanel {
     this.started = true;
     this.host.dataset.state = 'computing';
     this.host.replaceChildren(el('p', { className: 'small', text: 'Computing the reference cases…' }));
-    this.computed = this.worker
-      .run((api) => api.validate())
-      .then((outcome) => {
-        if (outcome.status === 'done') {
-          this.host.replaceChildren(reportTable(outcome.value));
-          this.host.dataset.state = 'done';
-          return outcome.value;
-        }
-        const why = outcome.status === 'failed' ? outcome.error : outcome.status;
-        this.host.replaceChildren(
-          el('p', { className: 'field-error', text: `The reference cases could not be computed: ${why}` }),
-        );
-        this.host.dataset.state = 'failed';
-        this.started = false;
-        throw new Error(why);
-      });
+    this.computed = pool.runTask({ kind: 'validate' }).then((outcome) => {
+      if (outcome.status === 'done') {
+        this.host.replaceChildren(reportTable(outcome.value));
+        this.host.dataset.state = 'done';
+        return outcome.value;
+      }
+      const why = outcome.status === 'failed' ? outcome.error : outcome.status;
+      this.host.replaceChildren(
+        el('p', { className: 'field-error', text: `The reference cases could not be computed: ${why}` }),
+      );
+      this.host.dataset.state = 'failed';
+      this.started = false;
+      throw new Error(why);
+    });
     this.computed.catch(() => {});
   }
 }

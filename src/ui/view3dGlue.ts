@@ -1,14 +1,13 @@
 /**
  * The 3D view's glue: its module and WebGL context load once the first numbers are on screen; its field
- * (viewFieldRequest) is computed in a solver worker of its own, so it never waits behind a sweep; its
- * layer switches are part of the state.
+ * (viewFieldRequest) is a task on the pool's task workers (a TaskChannel: the latest request wins), so
+ * it never waits behind a sweep; its layer switches are part of the state.
  */
-import type { ViewField } from '../compute/engine/protocol';
+import { TaskChannel } from '../compute/engine/taskChannel';
 import { viewFieldRequest } from '../compute/study/viewFieldRequest';
 import type { AppState } from './appState';
-import type { BrowserWorkerHandle } from './browserWorker';
 import { fmt } from './displayUnits';
-import { spawnTracked } from './earlyPool';
+import { pool } from './earlyPool';
 import { view3dLoader, type WheelView } from './view3dSlot';
 import type { ViewState } from './viewState';
 import type { PageResults } from './views/pageResults';
@@ -22,8 +21,7 @@ export interface View3dHost {
 
 export class View3dGlue {
   private view: WheelView | null = null;
-  private worker: BrowserWorkerHandle | null = null;
-  private request = 0;
+  private readonly channel = new TaskChannel(pool);
   private started = false;
   /** The yaw of the field last asked for (null before the first draw). */
   private drawnYawDeg: number | null = null;
@@ -86,29 +84,22 @@ export class View3dGlue {
     }
   }
 
-  /** Draw the current design's field (its own solver worker; the latest request wins). */
+  /** Draw the current design's field (a task on the pool; the latest request wins). */
   async update(): Promise<void> {
     if (!this.view || !this.host.results?.current) return;
     const yawDeg = this.host.state.view.view3dYawDeg;
     this.drawnYawDeg = yawDeg;
     const request = viewFieldRequest(this.host.state.case, yawDeg);
     const p0 = request.input.points[0]!;
-    const ticket = ++this.request;
-    try {
-      this.worker ??= spawnTracked();
-      const field = (await Promise.race([
-        this.worker.api.viewField(request),
-        this.worker.failed,
-      ])) as ViewField;
-      if (ticket !== this.request || !this.view) return;
-      this.view.update(field);
-      byId('view3d-note').textContent =
-        `Pressure jump on the wheel at ${fmt(yawDeg)}° yaw, ${conditionsText(presentOf(this.host.state, this.host.results), p0.airspeedMps, p0.rhoKgPerM3)}; drag to orbit.`;
-    } catch (error) {
-      this.worker?.terminate();
-      this.worker = null;
-      byId('view3d-note').textContent =
-        `The 3D view's flow field could not be computed: ${(error as Error).message}`;
+    const out = await this.channel.run({ kind: 'viewField', request });
+    // Superseded: a later request draws; cancelled: nothing is wanted any more.
+    if (out.status === 'superseded' || out.status === 'cancelled' || !this.view) return;
+    if (out.status === 'failed') {
+      byId('view3d-note').textContent = `The 3D view's flow field could not be computed: ${out.error}`;
+      return;
     }
+    this.view.update(out.value);
+    byId('view3d-note').textContent =
+      `Pressure jump on the wheel at ${fmt(yawDeg)}° yaw, ${conditionsText(presentOf(this.host.state, this.host.results), p0.airspeedMps, p0.rhoKgPerM3)}; drag to orbit.`;
   }
 }

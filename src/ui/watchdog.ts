@@ -63,7 +63,7 @@ export function watchSolver(h: BrowserWorkerHandle): void {
   };
   const watched = {
     ping: () => raw.ping(),
-    viewField: (request: Parameters<SolverApi['viewField']>[0]) => raw.viewField(request),
+    runTask: (...args: Parameters<SolverApi['runTask']>) => raw.runTask(...args),
     solveJob: (job: SolveJob) =>
       new Promise((resolve, reject) => {
         const deadlineMs = overrides.get(h) ?? jobDeadlineMs(job);

@@ -1,7 +1,9 @@
+import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { nodeWorkerSpawner } from '../../src/cli/nodeWorker';
 import { runSweep } from '../../src/compute/engine/runSweep';
 import { type SpawnWorker, WorkerPool } from '../../src/compute/engine/workerPool';
+import { parseRideFile, solveRide } from '../../src/compute/ride/index';
 import { smallSweep } from '../compute/engine/fixtures';
 
 // Real Node worker_threads running the TypeScript worker entry (through tsx). Start-up is ~1 s each.
@@ -65,5 +67,18 @@ describe('solver pool on Node worker threads', () => {
     busy.terminate();
     const busyExit = await busy.failed.catch((err: Error) => err.message);
     expect(busyExit, 'busy worker: got this exit, expected code 1 (terminated)').toMatch(/code 1/);
+  }, 60_000);
+
+  it('runs a task (a ride, its code loaded in the worker on first use) with the same numbers as here', async () => {
+    const parsed = parseRideFile(
+      readFileSync(new URL('../../public/examples/ride.json', import.meta.url), 'utf8'),
+    );
+    if (!parsed.ok) throw new Error(parsed.errors.join('; '));
+    const pool = new WorkerPool(nodeWorkerSpawner(), 1);
+    const out = await pool.runTask({ kind: 'ride', request: { ride: parsed.value } });
+    pool.close();
+    if (out.status !== 'done') throw new Error(JSON.stringify(out));
+    expect(out.value.curvesReused).toBe(false);
+    expect(out.value.document).toEqual(solveRide(parsed.value));
   }, 60_000);
 });

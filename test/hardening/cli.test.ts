@@ -12,7 +12,7 @@ import { join, resolve } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { writeSweep } from '../../src/cli/main';
 import { InProcessRunner } from '../../src/compute/engine/inProcessRunner';
-import { solveJob } from '../../src/compute/engine/solverApi';
+import { solveJob } from '../../src/compute/engine/solveJob';
 import { expandPlan } from '../../src/compute/planFile';
 import { parseCsvLine, tableColumns } from '../../src/compute/resultTable';
 

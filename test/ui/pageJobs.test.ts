@@ -1,4 +1,4 @@
-// The page's ride and comparison jobs (src/compute/engine/pageJobs.ts, run in the page's jobs worker):
+// The page's ride task (src/compute/study/rideJob.ts, on the pool's task workers) and comparison job:
 // a ride evaluated from cached yaw curves equals the same ride solved afresh and the command line's
 // solveRide (exactly: the same code on the same numbers), and a comparison never throws.
 import { readFileSync } from 'node:fs';
@@ -7,8 +7,9 @@ import { describe, expect, it } from 'vitest';
 import { parseCaseFile } from '../../src/compute/caseFile';
 import { parseCsvText } from '../../src/compute/compare/csv';
 import { parseMapFile } from '../../src/compute/compare/mapFile';
-import { compareJob, rideCurvesKey, solveRideJob } from '../../src/compute/engine/pageJobs';
+import { compareJob } from '../../src/compute/engine/pageJobs';
 import { parseRideFile, solveRide } from '../../src/compute/ride/index';
+import { rideCurvesKey, solveRideJob } from '../../src/compute/study/rideJob';
 
 const ROOT = join(__dirname, '../..');
 

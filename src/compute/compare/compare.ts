@@ -2,6 +2,7 @@
  * One comparison: data table + map + case -> converted data, flags, residuals against the model's band,
  * and on request a calibration, a convergence study and an input-uncertainty band. Browser-safe.
  */
+import type { PointResult } from '../../model/wheel/index';
 import { type CaseFile, caseAirDensity } from '../caseFile';
 import { type CalibrationOptions, type CalibrationResult, calibrate } from './calibrate';
 import { type ConvergenceOptions, type ConvergenceStudy, convergenceStudy } from './convergenceStudy';
@@ -155,12 +156,18 @@ export function bandGrid(conv: ConvertedData): {
   return { conditions: [...seen.values()].slice(0, 12), yawDeg };
 }
 
-export function runComparison(req: CompareRequest): CompareResult {
+/** The model at the data's points (the page and the command line pass the comparison study's solve,
+ * compute/study/dataComparisonStudy; the same bits as this default). */
+export type ModelAtData = (caseFile: CaseFile, points: readonly DataPoint[]) => PointResult[];
+
+const evaluatorAtData: ModelAtData = (caseFile, points) => createModelEvaluator(caseFile, points).evaluate();
+
+export function runComparison(req: CompareRequest, modelAt: ModelAtData = evaluatorAtData): CompareResult {
   const rho = caseAirDensity(req.caseFile);
   const converted = convertTable(req.table, req.map, rho);
   if (!converted.ok) return converted;
   const conv = converted.value;
-  const model = createModelEvaluator(req.caseFile, conv.points).evaluate();
+  const model = modelAt(req.caseFile, conv.points);
   const residuals = computeResiduals(conv, model);
   const grid = bandGrid(conv);
   const report: CompareReport = {

@@ -17,6 +17,7 @@ export {
   type CompareResult,
   type ConvertedRow,
   convertedRows,
+  type ModelAtData,
   modelBand,
   runComparison,
 } from './compare';

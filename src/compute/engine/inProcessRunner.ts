@@ -1,6 +1,6 @@
 import type { JobRunner, PoolRunOptions, PoolRunSummary } from './jobRunner';
 import type { JobResult, SolveJob } from './protocol';
-import { solveJob } from './solverApi';
+import { solveJob } from './solveJob';
 
 /**
  * Runs jobs in this thread, one by one in the order given (the command line's small sweeps, where a

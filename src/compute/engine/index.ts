@@ -3,8 +3,11 @@ export { FLAG_CODES, POINT_COLUMN_COUNT, POINT_COLUMNS, packPoints, unpackPoints
 export { type PlanJobsOptions, planJobs } from './planJobs';
 export type * from './protocol';
 export { type RunSweepOptions, runSweep, type SweepOutcome, type SweepProgress } from './runSweep';
-export { solveJob, solverApi, transferablesOf } from './solverApi';
+export { solveJob, transferablesOf } from './solveJob';
+export { type ChannelOutcome, type ChannelRunOptions, TaskChannel, type TaskRunner } from './taskChannel';
+export { type TaskOutcome, type TaskRunOptions, TaskWorkers } from './taskWorkers';
 export {
+  type PoolOptions,
   type PoolRunOptions,
   type PoolRunSummary,
   type SpawnWorker,

@@ -1,68 +1,12 @@
 /**
- * The page's heavier jobs besides sweeps, run in their own worker (src/ui/pageJobs.worker.ts; kept
- * out of the sweep workers, whose small bundle starts fast) so the page stays responsive:
- *  - a ride: both wheels' yaw curves (the lattice solves; kept per worker and reused while only the
- *    rider, wind or course change) and then the ride's evaluation;
- *  - a comparison with data: conversion, slips, residuals, the model band and, on request, the
- *    calibration, the convergence study and the input-uncertainty band (src/compute/compare).
- *  - the reference set of the Help tab (src/compute/validation), as `coversweep validate` runs it;
- *  - a design study and the ride objectives over the design map (studyJobs.ts), as `coversweep optimise`.
- * Nothing here is new physics: each calls the same functions as the command line's `ride`, `compare`
- * and `validate`.
+ * A comparison with data as one call that never throws (the result carries the messages): conversion,
+ * slips, residuals, the model band and, on request, the calibration, the convergence study and the
+ * input-uncertainty band (src/compute/compare). The data panel runs it in its own worker beside the
+ * tables it keeps there (src/ui/dataJobs.ts). The page's other tasks are in tasks.ts.
  */
 import { type CompareRequest, type CompareResult, runComparison } from '../compare/index';
-import {
-  evaluateRide,
-  type RideCurves,
-  type RideDocument,
-  type RideFile,
-  rideCases,
-  rideCurves,
-  rideReferenceSpeed,
-} from '../ride/index';
-import { runValidation } from '../validation/runValidation';
-import type { ValidationReport } from '../validation/types';
-import { BoundedCache } from './boundedCache';
-import {
-  type MapObjectivesRequest,
-  mapObjectivesJob,
-  type StudyJobProgress,
-  type StudyJobResult,
-  studyJob,
-} from './studyJobs';
 
-export interface RideRequest {
-  /** A validated ride (validateRide's value). */
-  ride: RideFile;
-}
-
-export interface RideResponse {
-  document: RideDocument;
-  curves: RideCurves;
-  /** True when the yaw curves came from this worker's cache (no lattice solve). */
-  curvesReused: boolean;
-}
-
-const curveCache = new BoundedCache<string, RideCurves>(6);
-
-/** What the yaw curves depend on: both wheels as case files (air, steering, model) and the curve speed. */
-export function rideCurvesKey(ride: RideFile): string {
-  const cases = rideCases(ride);
-  const ref = rideReferenceSpeed(ride, cases.rhoKgPerM3);
-  return JSON.stringify([cases.design, cases.baseline, ref.speedMps, ref.capped]);
-}
-
-/** Solve (or reuse) a ride's yaw curves and evaluate it. Throws RangeError from the model on bad input. */
-export function solveRideJob(request: RideRequest): RideResponse {
-  const key = rideCurvesKey(request.ride);
-  let curves = curveCache.get(key);
-  const curvesReused = curves !== undefined;
-  if (!curves) {
-    curves = rideCurves(request.ride);
-    curveCache.set(key, curves);
-  }
-  return { document: evaluateRide(request.ride, curves), curves, curvesReused };
-}
+export type { RideRequest, RideResponse } from './tasks';
 
 /** Run a comparison (never throws for bad data: the result carries the messages). */
 export function compareJob(request: CompareRequest): CompareResult {
@@ -72,24 +16,3 @@ export function compareJob(request: CompareRequest): CompareResult {
     return { ok: false, errors: [error instanceof Error ? error.message : String(error)] };
   }
 }
-
-/** What the page-jobs worker offers. */
-export interface PageJobsApi {
-  ride(request: RideRequest): RideResponse;
-  compare(request: CompareRequest): CompareResult;
-  validate(): ValidationReport;
-  /** A design study (a study file's object) with progress (studyJobs.ts). */
-  study(raw: unknown, onProgress?: StudyJobProgress): StudyJobResult;
-  /** Ride objectives of the design map's cells (studyJobs.ts). */
-  mapObjectives(request: MapObjectivesRequest, onProgress?: StudyJobProgress): Record<string, number>[];
-  ping(): string;
-}
-
-export const pageJobsApi: PageJobsApi = {
-  ride: (request) => solveRideJob(request),
-  compare: (request) => compareJob(request),
-  validate: () => runValidation(),
-  study: (raw, onProgress) => studyJob(raw, onProgress),
-  mapObjectives: (request, onProgress) => mapObjectivesJob(request, onProgress),
-  ping: () => 'ready',
-};

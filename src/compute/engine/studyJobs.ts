@@ -1,5 +1,5 @@
 /**
- * The page's design-study jobs, run in the page-jobs worker (pageJobs.ts) like `coversweep optimise`:
+ * The page's design-study jobs, run as tasks on the pool's task workers (pageJobs.ts, runTask.ts) like `coversweep optimise`:
  *  - a study: a study file's object validated (validateStudy), optimised (optimiseStudy, the grid or
  *    Nelder-Mead method) and written as the result document (studyDocument), with progress;
  *  - ride objectives over the design map's cells: each cell's design (cover fraction x rim depth set on

@@ -6,7 +6,7 @@ import {
   surfaceSolution,
   wheelRadii,
 } from '../../model/wheel';
-import type { ViewField, ViewFieldRequest } from './protocol';
+import type { ViewField, ViewFieldRequest } from './viewFieldTypes';
 
 /** Streamline seeds: heights (fractions of R) where they would cross x = 0.25 R in the disc's plane
  * undisturbed, on both sides of it (fractions of R in y). */

@@ -1,20 +1,18 @@
-import type { Remote } from 'comlink';
 import type { JobRunner, PoolRunOptions, PoolRunSummary } from './jobRunner';
-import type { JobResult, SolveJob, SolverApi } from './protocol';
+import type { JobResult, SolveJob } from './protocol';
 import { settleFirst } from './settleFirst';
+import type { TaskKind, TaskOf, TaskResults } from './tasks';
+import { type TaskOutcome, type TaskRunOptions, TaskWorkers } from './taskWorkers';
+import type { SpawnWorker, WorkerHandle } from './workerHandle';
 
-/** A live worker as the pool sees it; made by the environment's spawn function. */
-export interface WorkerHandle {
-  api: Remote<SolverApi>;
-  /** Resolves... never; rejects when the worker dies or reports an uncaught error. */
-  failed: Promise<never>;
-  terminate(): void;
+export interface PoolOptions {
+  /** Workers kept for tasks (tasks.ts), apart from the sweep workers (default 1). */
+  taskWorkers?: number;
+  /** Spawns the task workers (default: the pool's spawn function). */
+  spawnTask?: SpawnWorker;
 }
 
-/** Environment-specific: the page spawns a Web Worker, the command line a worker thread. */
-export type SpawnWorker = () => WorkerHandle;
-
-export type { PoolRunOptions, PoolRunSummary };
+export type { PoolRunOptions, PoolRunSummary, SpawnWorker, TaskOutcome, TaskRunOptions, WorkerHandle };
 
 /**
  * A fixed-size pool of solver workers, free of environment code. Jobs are dealt dynamically (a free
@@ -22,17 +20,34 @@ export type { PoolRunOptions, PoolRunSummary };
  * job retried once on a fresh worker; a job that fails twice is reported through onJobFailed and the run
  * goes on. Cancelling stops dealing and terminates busy workers at once (they are respawned on the next
  * run): every finished job has already been delivered through onJobDone.
+ *
+ * Tasks (runTask: the 3D view's field, a ride, a design study, the map's ride objectives, the reference
+ * set) run on the pool's task workers (taskWorkers.ts), spawned on first use, so they neither wait for
+ * the sweeps nor hold them up. A client that wants only its latest task runs them through a
+ * TaskChannel (taskChannel.ts).
  */
 export class WorkerPool implements JobRunner {
   private readonly workers: Array<WorkerHandle | null>;
+  /** The task workers (runTask). */
+  readonly tasks: TaskWorkers;
 
   constructor(
     private readonly spawn: SpawnWorker,
     readonly size: number,
+    options: PoolOptions = {},
   ) {
     if (!(Number.isInteger(size) && size >= 1))
       throw new RangeError(`pool size must be an integer >= 1, got ${size}`);
     this.workers = new Array<WorkerHandle | null>(size).fill(null);
+    this.tasks = new TaskWorkers(options.spawnTask ?? spawn, options.taskWorkers ?? 1);
+  }
+
+  /** Run one task on a task worker; resolves with its outcome, never rejects (taskWorkers.ts). */
+  runTask<K extends TaskKind>(
+    task: TaskOf<K>,
+    options: TaskRunOptions = {},
+  ): Promise<TaskOutcome<TaskResults[K]>> {
+    return this.tasks.runTask(task, options);
   }
 
   private worker(slot: number): WorkerHandle {
@@ -129,8 +144,9 @@ export class WorkerPool implements JobRunner {
     return { cancelled, workersReplaced: replaced };
   }
 
-  /** Stop every worker. The pool can be used again: workers are respawned on demand. */
+  /** Stop every worker, the task workers too. The pool can be used again: workers are respawned on demand. */
   close(): void {
     for (let slot = 0; slot < this.workers.length; slot++) this.replace(slot);
+    this.tasks.close();
   }
 }

@@ -24,6 +24,8 @@ export {
   MAX_RIDE_SPEED_MPS,
   type RideCurve,
   type RideCurves,
+  rideCurveInput,
+  rideCurveOf,
   rideCurves,
   rideReferenceSpeed,
   rideSetup,

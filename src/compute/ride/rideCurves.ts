@@ -9,7 +9,8 @@ import { ridePower } from '../../model/ride/ridePower';
 import { speedForPower } from '../../model/ride/speedForPower';
 import type { RideSetup, WheelYawCurve } from '../../model/ride/types';
 import { solveWheel } from '../../model/wheel/solveWheel';
-import type { FlowConditions } from '../../model/wheel/types';
+import type { FlowConditions, PointResult } from '../../model/wheel/types';
+import type { WheelInput } from '../../model/wheel/wheelInput';
 import { type CaseFile, caseToModelInput } from '../caseFile';
 import { celsiusToKelvin, G0_MPS2 } from '../units';
 import { type RideFile, rideCases } from './rideFile';
@@ -95,8 +96,8 @@ export function rideReferenceSpeed(
   return { speedMps: Math.max(v, MIN_CURVE_SPEED_MPS), capped: false };
 }
 
-/** Solve one wheel's yaw curve, 0..90 deg, at airspeed = ground speed = speedMps. */
-export function solveRideCurve(caseFile: CaseFile, speedMps: number): RideCurve {
+/** One wheel's yaw-curve input: its case at yaw 0..90 deg, airspeed = ground speed = speedMps. */
+export function rideCurveInput(caseFile: CaseFile, speedMps: number): WheelInput {
   const input = caseToModelInput(caseFile);
   const rho = input.points[0]!.rhoKgPerM3;
   const mu = sutherlandViscosity(celsiusToKelvin(caseFile.conditions.temperature_c));
@@ -111,19 +112,30 @@ export function solveRideCurve(caseFile: CaseFile, speedMps: number): RideCurve 
       muPaS: mu,
     });
   }
-  const solution = solveWheel({ ...input, points });
-  const p = solution.points;
+  return { ...input, points };
+}
+
+/** A yaw curve from its input (rideCurveInput) and the model's results at the input's points. */
+export function rideCurveOf(input: WheelInput, p: readonly PointResult[]): RideCurve {
+  if (p.length !== input.points.length)
+    throw new RangeError(`yaw curve: ${p.length} results for ${input.points.length} points`);
   return {
-    yawRad: Float64Array.from(points, (q) => q.yawRad),
+    yawRad: Float64Array.from(input.points, (q) => q.yawRad),
     axialN: Float64Array.from(p, (q) => q.axialN),
     sideN: Float64Array.from(p, (q) => q.sideN),
     rollMomentNm: Float64Array.from(p, (q) => q.rollMomentNm),
     steeringMomentNm: Float64Array.from(p, (q) => q.steeringMomentNm),
     axleTorqueNm: Float64Array.from(p, (q) => q.axleTorqueNm),
-    referenceAirspeedMps: speedMps,
+    referenceAirspeedMps: input.points[0]!.airspeedMps,
     outerRadiusM: input.wheel.outerRadiusM,
     flags: p.map((q) => [...q.flags]),
   };
+}
+
+/** Solve one wheel's yaw curve, 0..90 deg, at airspeed = ground speed = speedMps. */
+export function solveRideCurve(caseFile: CaseFile, speedMps: number): RideCurve {
+  const input = rideCurveInput(caseFile, speedMps);
+  return rideCurveOf(input, solveWheel(input).points);
 }
 
 /** Solve both wheels' yaw curves for a ride. */

@@ -7,6 +7,8 @@ export const AXIS = {
   airspeed: 'airspeed',
   yaw: 'yaw',
   case: 'case',
+  wheel: 'wheel',
+  dataPoint: 'dataPoint',
 } as const;
 
 export const coverFractionAxis = (values: readonly number[]): StudyAxis => ({

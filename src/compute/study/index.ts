@@ -5,6 +5,7 @@ export { commandLineStudy } from './commandLineStudy';
 export { coverFamilyStudy, sweepPlacement } from './coverFamilyStudy';
 export { coverSweepStudy } from './coverSweepStudy';
 export { currentDesignStudy } from './currentDesignStudy';
+export { dataComparisonStudy, modelAtDataHere, modelAtDataOf } from './dataComparisonStudy';
 export { designMapStudy } from './designMapStudy';
 export {
   coverPlotSpeeds,
@@ -16,6 +17,8 @@ export {
 export { FLAG_MESSAGES, type PointResult, type WheelInput, type WheelSolution } from './modelResults';
 export { type PageStudies, pageStudies } from './pageStudies';
 export { type AxisPick, ResultCube } from './resultCube';
+export { rideCurvesKey, solveRideJob } from './rideJob';
+export { RIDE_WHEELS, type RideStudyPlan, rideCurvesOf, rideStudy, solveRideStudy } from './rideStudy';
 export {
   type CaseLanded,
   caseCell,
@@ -24,6 +27,7 @@ export {
   type StudiesOutcome,
   type StudyResult,
 } from './runStudies';
+export { solveStudiesHere, studyLanding } from './studyLanding';
 export {
   type AxisValue,
   axesSize,

@@ -8,6 +8,7 @@ import { OBJECTIVES, type StudyDocument } from '../../compute/design/index';
 import type { RideFile } from '../../compute/ride/index';
 import { button, el } from '../dom';
 import { designTable } from './designTable';
+import { type ExtraVariablesForm, extraVariablesForm } from './extraVariablesForm';
 import { type ObjectivePicker, objectivePicker } from './objectivePicker';
 import { optimumSummary } from './optimumSummary';
 import { studyCautions } from './studyCautions';
@@ -52,6 +53,7 @@ const getPath = (o: StudyInputs, key: string): number | undefined =>
 
 export class StudyPanel {
   private readonly fields: NumberInput[] = [];
+  private readonly extra: ExtraVariablesForm = extraVariablesForm();
   private readonly method: HTMLSelectElement;
   private picker: ObjectivePicker;
   private readonly pickerSlot: HTMLElement;
@@ -99,6 +101,7 @@ export class StudyPanel {
           numberField('rimDepthMm.max', 'Rim depth to', 'mm', '5', f),
           numberField('rimDepthMm.points', 'Rim depth values', 'points', '1', f),
         ]),
+        this.extra.element,
         el('fieldset', {}, [el('legend', { text: 'Objective (minimised)' }), this.pickerSlot]),
         el('fieldset', { className: 'study-limits' }, [
           el('legend', { text: 'Handling limits in the design gust' }),
@@ -182,6 +185,7 @@ export class StudyPanel {
       (base as unknown as Record<string, Record<string, number>>)[group]![name] =
         text === '' ? Number.NaN : Number(text);
     }
+    this.extra.read(base);
     return base;
   }
 
@@ -197,6 +201,7 @@ export class StudyPanel {
       const v = getPath(inputs, key);
       input.value = v === undefined || Number.isNaN(v) ? '' : String(v);
     }
+    this.extra.set(inputs);
     const applicable = OBJECTIVES.filter((o) => ride === null || o.applies(ride) === null);
     const ids = applicable.map((o) => o.id).join(',');
     if (ids !== this.objectiveIds) {
@@ -216,12 +221,13 @@ export class StudyPanel {
       f.error.textContent = '';
       f.input.removeAttribute('aria-invalid');
     }
+    this.extra.clearErrors();
     for (const e of errors) {
       const f = this.fields.find((x) => x.key === e.input);
       if (f) {
         f.error.textContent = f.error.textContent ? `${f.error.textContent} ${e.message}` : e.message;
         f.input.setAttribute('aria-invalid', 'true');
-      } else rest.push(e.message);
+      } else if (e.input === null || !this.extra.showError(e.input, e.message)) rest.push(e.message);
     }
     this.formErrors.replaceChildren(...rest.map((m) => el('div', { text: m })));
   }

@@ -32,10 +32,25 @@ export interface StudyInputs {
   /** Rim depth in millimetres (the page's unit; the study file takes metres). */
   rimDepthMm: StudyRange;
   lattice: { span: number; chord: number };
+  /** Tyre width in millimetres, freed when present (absent: the current wheel's). */
+  tyreWidthMm?: StudyRange;
+  /** The discrete design variables, freed when present: the choices every design tries. */
+  coverSides?: number[];
+  coverPlacement?: string[];
+  spokeCount?: number[];
+  spokeSection?: string[];
   /** Colour and lines of the design map by a ride objective (absent or null: the view's own outputs). */
   mapColour?: string | null;
   mapContour?: string | null;
 }
+
+/** The discrete inputs and the study file's variable ids they free. */
+export const DISCRETE_INPUTS = [
+  ['coverSides', 'cover_sides'],
+  ['coverPlacement', 'cover_placement'],
+  ['spokeCount', 'spoke_count'],
+  ['spokeSection', 'spoke_section'],
+] as const;
 
 /** The defaults: a 6 x 4 grid over the whole cover range and 30-90 mm rims, time over the ride, no limits. */
 export function defaultStudyInputs(): StudyInputs {
@@ -69,6 +84,14 @@ const schema = z.strictObject({
     span: z.number().int().min(4).max(200),
     chord: z.number().int().min(2).max(200),
   }),
+  tyreWidthMm: range.optional(),
+  coverSides: z.array(finite).max(8).optional(),
+  coverPlacement: z.array(z.string().max(20)).max(8).optional(),
+  spokeCount: z
+    .array(z.number({ error: 'must be whole numbers separated by commas, e.g. 16, 20, 24' }))
+    .max(40)
+    .optional(),
+  spokeSection: z.array(z.string().max(20)).max(8).optional(),
   mapColour: z
     .enum(OBJECTIVES.map((o) => o.id) as [string, ...string[]])
     .nullable()
@@ -91,8 +114,14 @@ export function validateStudyInputs(raw: unknown, where = 'study'): Parsed<Study
 
 /** The study file's object (to be validated by validateStudy) for these inputs and a validated ride. */
 export function studyToRaw(inputs: StudyInputs, ride: RideFile, name?: string): Record<string, unknown> {
-  const { coverFraction: cf, rimDepthMm: rd } = inputs;
-  const grid = cf.points * rd.points;
+  const { coverFraction: cf, rimDepthMm: rd, tyreWidthMm: tw } = inputs;
+  const discrete: Record<string, (number | string)[]> = {};
+  for (const [key, id] of DISCRETE_INPUTS) {
+    const choices = inputs[key];
+    if (choices !== undefined) discrete[id] = [...choices];
+  }
+  const combos = Object.values(discrete).reduce((n, c) => n * c.length, 1);
+  const grid = combos * cf.points * rd.points * (tw?.points ?? 1);
   return {
     format: STUDY_FORMAT,
     version: STUDY_VERSION,
@@ -101,12 +130,18 @@ export function studyToRaw(inputs: StudyInputs, ride: RideFile, name?: string): 
     variables: {
       cover_fraction: { min: cf.min, max: cf.max },
       rim_depth_m: { min: rd.min / 1000, max: rd.max / 1000 },
+      ...(tw ? { tyre_width_m: { min: tw.min / 1000, max: tw.max / 1000 } } : {}),
+      ...discrete,
     },
     objective: inputs.objective,
     limits: { ...inputs.limits },
     search: {
       method: inputs.method,
-      grid_points: { cover_fraction: cf.points, rim_depth_m: rd.points },
+      grid_points: {
+        cover_fraction: cf.points,
+        rim_depth_m: rd.points,
+        ...(tw ? { tyre_width_m: tw.points } : {}),
+      },
       // The grid method evaluates its grid alone; the optimiser gets its usual budget beyond the grid.
       max_evaluations: inputs.method === 'grid' ? Math.max(grid, 1) : grid + STUDY_DEFAULTS.max_evaluations,
       lattice_span: inputs.lattice.span,
@@ -121,11 +156,18 @@ export function studyToRaw(inputs: StudyInputs, ride: RideFile, name?: string): 
  */
 export function studyMessageInput(message: string): string | null {
   const rules: [RegExp, string][] = [
-    [/^study\.((?:coverFraction|rimDepthMm|lattice|limits)\.\w+)/, '$1'],
+    [/^study\.((?:coverFraction|rimDepthMm|tyreWidthMm|lattice|limits)\.\w+)/, '$1'],
+    [/^study\.(coverSides|coverPlacement|spokeCount|spokeSection)\b/, '$1'],
     [/^variables\.cover_fraction\.(min|max)/, 'coverFraction.$1'],
     [/^variables\.rim_depth_m\.(min|max)/, 'rimDepthMm.$1'],
+    [/^variables\.tyre_width_m\.(min|max)/, 'tyreWidthMm.$1'],
+    [/^variables\.cover_sides\b/, 'coverSides'],
+    [/^variables\.cover_placement\b/, 'coverPlacement'],
+    [/^variables\.spoke_count\b/, 'spokeCount'],
+    [/^variables\.spoke_section\b/, 'spokeSection'],
     [/^search\.grid_points\.cover_fraction/, 'coverFraction.points'],
     [/^search\.grid_points\.rim_depth_m/, 'rimDepthMm.points'],
+    [/^search\.grid_points\.tyre_width_m/, 'tyreWidthMm.points'],
     [/^limits\.(\w+)/, 'limits.$1'],
     [/^objective/, 'objective'],
     [/^search\.lattice_(span|chord)/, 'lattice.$1'],

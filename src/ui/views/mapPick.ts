@@ -4,6 +4,8 @@
  * recent first.
  */
 import { type CaseFile, validateCase } from '../../compute/caseFile';
+import { applyDesign } from '../../compute/design/designVariables';
+import type { DesignWheel } from '../../compute/design/types';
 import type { PageHost } from '../pageHost';
 import { axisOf, type PageResults } from './pageResults';
 
@@ -28,15 +30,18 @@ export class MapPick {
   }
 
   /**
-   * A design chosen by its covering fraction and rim depth (a map cell, a study's row or front point)
+   * A design chosen by its covering fraction and rim depth (a map cell, a study's row or front point;
+   * a study's other freed variables in `values`, by variable id)
    * becomes the current design; `what` names it in a message. Undo restores the design it replaced.
    */
-  choose(fraction: number, depthM: number, what: string): void {
+  choose(fraction: number, depthM: number, what: string, values: Record<string, number | string> = {}): void {
     const c = this.host.state.case;
     const placement = c.wheel.cover.placement === 'explicit' ? 'rim' : c.wheel.cover.placement;
+    const wheel = { ...c.wheel, rim_depth_m: depthM, cover: { ...c.wheel.cover, fraction, placement } };
+    // A study's other freed variables (tyre width, sides, placement, spokes), as the study set them.
     const next = validateCase({
       ...c,
-      wheel: { ...c.wheel, rim_depth_m: depthM, cover: { ...c.wheel.cover, fraction, placement } },
+      wheel: { ...wheel, ...applyDesign(wheel as unknown as DesignWheel, values) },
     });
     if (!next.ok) {
       this.host.messages.show('error', `${what} cannot be made the current design:`, next.errors, 'edit');

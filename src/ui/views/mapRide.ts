@@ -1,17 +1,18 @@
 /**
  * Ride objectives on the design map: every ride objective is a map source ("ride:<id>"), one number per
  * map cell (cover fraction x rim depth): that cell's design evaluated on the ride "On the road" defines,
- * computed in the page-jobs worker (api.mapObjectives: evaluateDesign per cell, as the design study
- * does) on the study's lattice. The choice of objectives lives in the study inputs (mapColour,
+ * computed as a task on the pool's task workers ('mapObjectives': evaluateDesign per cell, as the design
+ * study does) on the study's lattice, through a TaskChannel (the latest request wins; see there why a
+ * late progress message can no longer overwrite the finished status). The choice of objectives lives in the study inputs (mapColour,
  * mapContour); "model output" keeps the map's own choice under "Plots and design map".
  */
-import { proxy } from 'comlink';
 import type { Parsed } from '../../compute/caseFile';
 import { OBJECTIVES } from '../../compute/design/index';
+import { TaskChannel } from '../../compute/engine/taskChannel';
 import type { RideFile } from '../../compute/ride/index';
 import type { AppState } from '../appState';
 import { el, uniqueId } from '../dom';
-import { JobWorker } from '../jobWorker';
+import { pool } from '../earlyPool';
 import type { PageHost } from '../pageHost';
 import { headerText } from '../study/studyRows';
 import { defaultStudyInputs } from '../study/studyState';
@@ -49,7 +50,7 @@ export interface MapRideHost extends PageHost {
 }
 
 export class MapRide {
-  private readonly worker = new JobWorker();
+  private readonly tasks = new TaskChannel(pool);
   private key = '';
   private colour: HTMLSelectElement | null = null;
   private contour: HTMLSelectElement | null = null;
@@ -129,13 +130,18 @@ export class MapRide {
     },
   ): Promise<void> {
     this.say(`Evaluating the ${request.cells.length} designs on the ride…`);
-    const progress = proxy((done: number, n: number) => {
-      if (key === this.key) this.say(`Evaluating the designs on the ride: ${done} of ${n}…`);
-    });
-    const out = await this.worker.run((api) => api.mapObjectives(request, progress));
-    if (key !== this.key) return;
-    if (out.status === 'superseded' || out.status === 'cancelled') {
-      // The run for the objectives still wanted was dropped: ask again rather than stay "Evaluating".
+    const out = await this.tasks.run(
+      { kind: 'mapObjectives', request },
+      {
+        onProgress: (done, n) => {
+          if (key === this.key) this.say(`Evaluating the designs on the ride: ${done} of ${n}…`);
+        },
+      },
+    );
+    // Superseded: a later request (a later key) answers. A newer key: its own run answers.
+    if (out.status === 'superseded' || key !== this.key) return;
+    if (out.status === 'cancelled') {
+      // Nothing cancels this channel; should anything, ask again rather than stay "Evaluating".
       this.key = '';
       this.update(this.host.state);
       return;

@@ -2,8 +2,8 @@ import { MessageChannel } from 'node:worker_threads';
 import { expose, wrap } from 'comlink';
 import nodeEndpoint from 'comlink/dist/esm/node-adapter.mjs';
 import type { SolverApi } from '../../../src/compute/engine/protocol';
-import { solverApi } from '../../../src/compute/engine/solverApi';
 import type { SpawnWorker, WorkerHandle } from '../../../src/compute/engine/workerPool';
+import { solverApi } from '../../../src/compute/worker/solverApi';
 
 /**
  * A test spawn function: the real solver API behind a MessageChannel in this thread (same protocol,
@@ -27,6 +27,7 @@ export function inProcessSpawner(sabotage: (jobNumber: number, jobId: number) =>
     });
     const api = {
       ping: () => remote.ping(),
+      runTask: (...args: Parameters<SolverApi['runTask']>) => remote.runTask(...args),
       solveJob: (job: Parameters<SolverApi['solveJob']>[0]) => {
         jobs++;
         if (sabotage(jobs, job.jobId)) {

@@ -7,15 +7,19 @@ import type { Remote } from 'comlink';
 import { describe, expectTypeOf, it } from 'vitest';
 import type { InProcessRunner } from '../../../src/compute/engine/inProcessRunner';
 import type { JobRunner } from '../../../src/compute/engine/jobRunner';
-import type { PageJobsApi, RideRequest } from '../../../src/compute/engine/pageJobs';
+import type { RideRequest, RideResponse } from '../../../src/compute/engine/pageJobs';
 import type {
   CaseOutcome,
   JobResult,
   SolveJob,
   SolverApi,
+  TaskRequest,
+  TaskResult,
   ViewField,
   ViewFieldRequest,
 } from '../../../src/compute/engine/protocol';
+import type { ChannelOutcome, TaskChannel } from '../../../src/compute/engine/taskChannel';
+import type { TaskOutcome } from '../../../src/compute/engine/taskWorkers';
 import type { WorkerPool } from '../../../src/compute/engine/workerPool';
 import type { ResultCube, StudyPlan } from '../../../src/compute/study';
 
@@ -41,14 +45,24 @@ describe('the worker protocol (types)', () => {
     expectTypeOf<PlainData<ViewField>>().toEqualTypeOf<true>();
     expectTypeOf<PlainData<RideRequest>>().toEqualTypeOf<true>();
     expectTypeOf<PlainData<StudyPlan>>().toEqualTypeOf<true>();
+    expectTypeOf<PlainData<TaskRequest>>().toEqualTypeOf<true>();
+    expectTypeOf<PlainData<RideResponse>>().toEqualTypeOf<true>();
     // The check can fail: a cube (methods) must never be sent.
     expectTypeOf<PlainData<ResultCube>>().toEqualTypeOf<false>();
   });
   it('answers remote calls with promises of the same types', () => {
     expectTypeOf<Remote<SolverApi>['solveJob']>().parameters.toEqualTypeOf<[SolveJob]>();
     expectTypeOf<ReturnType<Remote<SolverApi>['solveJob']>>().toEqualTypeOf<Promise<JobResult>>();
-    expectTypeOf<ReturnType<Remote<SolverApi>['viewField']>>().toEqualTypeOf<Promise<ViewField>>();
-    expectTypeOf<ReturnType<Remote<PageJobsApi>['ping']>>().toEqualTypeOf<Promise<string>>();
+    expectTypeOf<Awaited<ReturnType<Remote<SolverApi>['runTask']>>>().toEqualTypeOf<TaskResult>();
+    expectTypeOf<ReturnType<Remote<SolverApi>['ping']>>().toEqualTypeOf<Promise<string>>();
+  });
+  it('types each task answer by its kind, on the pool and on a channel', () => {
+    const pool = null as unknown as WorkerPool;
+    const channel = null as unknown as TaskChannel;
+    type PoolViewField = Awaited<ReturnType<typeof pool.runTask<'viewField'>>>;
+    expectTypeOf<PoolViewField>().toEqualTypeOf<TaskOutcome<ViewField>>();
+    type ChannelRide = Awaited<ReturnType<typeof channel.run<'ride'>>>;
+    expectTypeOf<ChannelRide>().toEqualTypeOf<ChannelOutcome<RideResponse>>();
   });
   it('gives the pool and the in-thread runner one shape', () => {
     expectTypeOf<WorkerPool>().toExtend<JobRunner>();

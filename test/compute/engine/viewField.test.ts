@@ -3,8 +3,8 @@ import { expose, wrap } from 'comlink';
 import nodeEndpoint from 'comlink/dist/esm/node-adapter.mjs';
 import { describe, expect, it } from 'vitest';
 import type { SolverApi, ViewField } from '../../../src/compute/engine/protocol';
-import { solverApi } from '../../../src/compute/engine/solverApi';
 import { viewField } from '../../../src/compute/engine/viewField';
+import { solverApi } from '../../../src/compute/worker/solverApi';
 import {
   DEFAULT_MODEL_OPTIONS,
   DEFAULT_STEERING,
@@ -148,7 +148,7 @@ describe('viewField (one operating point for the 3D view)', () => {
     const { port1, port2 } = new MessageChannel();
     expose(solverApi, nodeEndpoint(port1));
     const remote = wrap<SolverApi>(nodeEndpoint(port2));
-    const got: ViewField = await remote.viewField({ input: input(10) });
+    const got = (await remote.runTask({ kind: 'viewField', request: { input: input(10) } })) as ViewField;
     expect(got.pressureJump).toBeInstanceOf(Float64Array);
     expect(got.streamOffsets).toBeInstanceOf(Uint32Array);
     expect(Array.from(got.pressureJump)).toEqual(Array.from(f.pressureJump));

@@ -1,12 +1,10 @@
-import { transfer } from 'comlink';
 import { type SurfaceCoefficients, solveWheel } from '../../model/wheel';
 import { BoundedCache } from './boundedCache';
 import { packPoints } from './packPoints';
-import type { CaseOutcome, JobResult, SolveJob, SolverApi } from './protocol';
-import { viewField, viewFieldTransferables } from './viewField';
+import type { CaseOutcome, JobResult, SolveJob } from './protocol';
 
 /** Surface solutions kept per worker: a sweep sorted by surface key reuses each one across its cases. */
-const surfaceCache = new BoundedCache<string, SurfaceCoefficients>(64);
+export const surfaceCache = new BoundedCache<string, SurfaceCoefficients>(64);
 
 /**
  * Solve every case of a job. A case that the model rejects becomes a failed outcome with the model's
@@ -36,16 +34,3 @@ export function transferablesOf(result: JobResult): ArrayBuffer[] {
   for (const o of result.outcomes) if (o.ok) buffers.push(o.packed.buffer as ArrayBuffer);
   return buffers;
 }
-
-/** The API a worker exposes: results go back with their buffers transferred. */
-export const solverApi: SolverApi = {
-  solveJob: (job) => {
-    const result = solveJob(job);
-    return transfer(result, transferablesOf(result));
-  },
-  ping: () => 'ready',
-  viewField: (request) => {
-    const field = viewField(request, surfaceCache);
-    return transfer(field, viewFieldTransferables(field));
-  },
-};
