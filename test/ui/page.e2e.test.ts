@@ -386,7 +386,7 @@ describe.skipIf(!haveBrowser && !requireBrowser)('web page in headless Chromium'
     await download.saveAs(projectPath);
     const project = JSON.parse(readFileSync(projectPath, 'utf8'));
     expect(project.format).toBe('coversweep-project');
-    expect(project.version).toBe(1);
+    expect(project.version).toBe(2);
     // Opened over the demo wheel (Reset) in the second browser.
     const page3 = page2;
     await page3.click('#reset');
