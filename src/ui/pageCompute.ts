@@ -9,9 +9,10 @@ import { caseAirDensity } from '../compute/caseFile';
 import type { SweepProgress } from '../compute/engine/runCases';
 import type { WorkerPool } from '../compute/engine/workerPool';
 import { baselineInput, baselineStudy } from '../compute/study/baselineStudy';
+import { inputKey, OutcomeCache } from '../compute/study/outcomeCache';
 import { type PageStudies, pageStudies } from '../compute/study/pageStudies';
 import { type RunStudiesOptions, runStudies, type StudiesOutcome } from '../compute/study/runStudies';
-import type { StudyPlan } from '../compute/study/studyPlan';
+import { isUnplanned, type StudyPlan } from '../compute/study/studyPlan';
 import type { AppState } from './appState';
 import { pinnedBaselines, referenceIndex } from './baselines/pinnedBaselines';
 import { scriptStartMs, workersReadyMs } from './earlyPool';
@@ -20,6 +21,9 @@ import type { OtherBaseline, PageResults } from './views/pageResults';
 import { byId } from './views/present';
 
 type Phase = 'computing' | 'done' | 'error';
+
+/** What the kept solved designs may hold: about 20 states of the default page's studies. */
+const SOLVED_BUDGET_BYTES = 8e6;
 
 /** What the computing needs of the page. */
 export interface ComputeHost {
@@ -78,6 +82,13 @@ export class PageCompute {
   private firstResultMs: number | null = null;
   /** The computeKey of the state computed (or being computed) last. */
   lastComputeKey = '';
+  /** Designs solved by earlier runs, by their exact input: an edit re-solves only what it changed. */
+  private readonly solved = new OutcomeCache(SOLVED_BUDGET_BYTES);
+  /** Whether the 3D view waits for the end of this run (after the first run it follows the plots). */
+  private view3dAfterRun = false;
+  private threeDPending = false;
+  /** A redraw asked for while a stage runs (drawn at the next task unless the stage's end draws first). */
+  private soon: ReturnType<typeof setTimeout> | null = null;
 
   constructor(
     private readonly pool: WorkerPool,
@@ -105,15 +116,23 @@ export class PageCompute {
     document.body.dataset.state = phase;
   }
 
-  /** Compute the current state after `delayMs` (edits in between restart the wait). */
+  /**
+   * Compute the current state: at once when the page is idle (a typed entry, a choice, the first step
+   * of a drag), else after `delayMs` without a further edit (a drag's later steps restart the wait, so a
+   * run in progress is superseded once, by the state the drag ends on).
+   */
   schedule(delayMs: number): void {
+    const idle = this.timer === null && this.abort === null;
     if (this.timer) clearTimeout(this.timer);
     this.lastComputeKey = computeKey(this.host.state);
     this.setPhase('computing');
-    this.timer = setTimeout(() => {
-      this.timer = null;
-      void this.compute();
-    }, delayMs);
+    this.timer = setTimeout(
+      () => {
+        this.timer = null;
+        void this.compute();
+      },
+      idle ? 0 : delayMs,
+    );
   }
 
   private status(text: string, progress: SweepProgress | null = null): void {
@@ -137,7 +156,7 @@ export class PageCompute {
    */
   private run(plans: readonly StudyPlan[], options: RunStudiesOptions): Promise<StudiesOutcome> {
     const previous = this.poolIdle;
-    const run = previous.then(() => runStudies(this.pool, plans, options));
+    const run = previous.then(() => runStudies(this.pool, plans, { ...options, cache: this.solved }));
     this.poolIdle = run.then(
       () => undefined,
       () => undefined,
@@ -206,7 +225,13 @@ export class PageCompute {
       this.firstResultMs = performance.now();
       document.body.dataset.firstResultMs = this.firstResultMs.toFixed(0);
     }
-    this.host.firstNumbersShown();
+    // The 3D view (its own solve and a WebGL frame, both heavy on a small machine) starts with the first
+    // run's numbers; after an edit it is redrawn once the plots and the map are.
+    if (this.view3dAfterRun) this.threeDPending = true;
+    else {
+      this.view3dAfterRun = true;
+      this.host.firstNumbersShown();
+    }
 
     // 2. The current design with its grid-convergence estimate, the family, drag vs cover and the
     //    baseline, in one run (cases of one surface share their factorisation).
@@ -224,7 +249,7 @@ export class PageCompute {
       onCase: (landed) => {
         if (landed.study === gciStudy && landed.cube && !superseded()) {
           r.current = landed.cube;
-          this.host.renderAll();
+          this.renderSoon();
         }
       },
     });
@@ -243,8 +268,9 @@ export class PageCompute {
     });
     const gci = gciStudy >= 0 ? s2.results[gciStudy]! : null;
     if (gci?.cube && gci.landed[0] === 1 && gci.errors[0] === null) r.current = gci.cube;
-    this.host.renderAll();
     if (s2.cancelled) return this.cancelled(r);
+    // Drawn now unless the map is kept from an earlier run: then the map stage draws everything at once.
+    if (!this.allKept(studies.map)) this.renderNow();
 
     // 3. The design map (the longer sweep).
     this.stage('map');
@@ -259,7 +285,7 @@ export class PageCompute {
     });
     if (superseded()) return;
     r.map = s3.results[0]!;
-    this.host.renderAll();
+    this.renderNow();
     if (s3.cancelled) return this.cancelled(r);
     const failed = s2.failedCount + s3.failedCount;
     if (failed > 0) {
@@ -289,6 +315,32 @@ export class PageCompute {
     this.abort = null;
     this.stage('done');
     this.setPhase('done');
+    this.redraw3d();
+  }
+
+  private renderSoon(): void {
+    this.soon ??= setTimeout(() => {
+      this.soon = null;
+      this.host.renderAll();
+    }, 0);
+  }
+
+  private renderNow(): void {
+    if (this.soon) clearTimeout(this.soon);
+    this.soon = null;
+    this.host.renderAll();
+  }
+
+  /** Whether every case of `plan` is kept from an earlier run (so it lands without a solve). */
+  private allKept(plan: StudyPlan): boolean {
+    return plan.inputs.every((input) => !isUnplanned(input) && this.solved.has(inputKey(input)));
+  }
+
+  /** Redraw the 3D view if this run's numbers are not in it yet. */
+  private redraw3d(): void {
+    if (!this.threeDPending) return;
+    this.threeDPending = false;
+    this.host.firstNumbersShown();
   }
 
   private stage(name: 'current' | 'sweeps' | 'map' | 'done'): void {
@@ -297,12 +349,13 @@ export class PageCompute {
 
   private cancelled(r: PageResults): void {
     this.host.results = r.current ? r : this.host.results;
-    this.host.renderAll();
+    this.renderNow();
     this.status('Cancelled: the sweeps are incomplete. Change any control to compute again.');
     byId('cancel').hidden = true;
     this.abort = null;
     this.lastComputeKey = '';
     this.setPhase('done');
+    this.redraw3d();
   }
 
   private fail(message: string): void {

@@ -14,6 +14,7 @@ export {
   SWEEP_FRACTIONS,
 } from './designSpace';
 export { FLAG_MESSAGES, type PointResult, type WheelInput, type WheelSolution } from './modelResults';
+export { inputKey, OutcomeCache } from './outcomeCache';
 export { type PageStudies, pageStudies } from './pageStudies';
 export { type AxisPick, ResultCube } from './resultCube';
 export {

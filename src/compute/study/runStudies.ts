@@ -9,6 +9,7 @@ import { COLUMN_COUNT } from '../engine/columns';
 import type { JobRunner } from '../engine/jobRunner';
 import type { CaseOutcome } from '../engine/protocol';
 import { runCases, type SweepProgress } from '../engine/runCases';
+import { inputKey, type OutcomeCache } from './outcomeCache';
 import { type AxisPick, ResultCube } from './resultCube';
 import { axesSize, checkStudyPlan, isUnplanned, type StudyPlan } from './studyPlan';
 
@@ -45,6 +46,9 @@ export interface RunStudiesOptions {
   now?: () => number;
   /** Keep the numbers in the studies' cubes (default true); a streaming caller passes false. */
   keep?: boolean;
+  /** Solved cases kept across runs: a case whose exact input is kept lands from it (first, before any
+   * solve) and is not solved again; every case solved by this run is kept. */
+  cache?: OutcomeCache;
 }
 
 export interface StudiesOutcome {
@@ -113,14 +117,29 @@ export async function runStudies(
     options.onCase?.({ study: s, caseIndex: k, cube: caseCube, surface: outcome.surface, error: null });
   };
   for (const [s, k, error] of unplanned) land(s, k, { ok: false, error });
-  const summary = await runCases(runner, inputs, {
+  // Cases kept from an earlier run land now; the rest are solved (and kept).
+  const cache = options.cache;
+  const keys = cache ? inputs.map(inputKey) : [];
+  const toSolve: number[] = [];
+  inputs.forEach((_, i) => {
+    const hit = cache?.take(keys[i]!, i);
+    if (hit) land(owner[i]![0], owner[i]![1], hit);
+    else toSolve.push(i);
+  });
+  if (toSolve.length === 0) {
+    return { results, cancelled: options.signal?.aborted ?? false, failedCount, workersReplaced: 0 };
+  }
+  const solving = toSolve.length === inputs.length ? inputs : toSolve.map((i) => inputs[i]!);
+  const summary = await runCases(runner, solving, {
     ...(options.signal ? { signal: options.signal } : {}),
     ...(options.onProgress ? { onProgress: options.onProgress } : {}),
     ...(options.jobsPerWorker !== undefined ? { jobsPerWorker: options.jobsPerWorker } : {}),
     ...(options.now ? { now: options.now } : {}),
     ...(options.reportStart ? { reportStart: true } : {}),
     onOutcome: (o) => {
-      const [s, k] = owner[o.caseIndex]!;
+      const i = toSolve[o.caseIndex]!;
+      if (cache && o.ok) cache.keep(keys[i]!, o);
+      const [s, k] = owner[i]!;
       land(s, k, o);
     },
   });
