@@ -203,10 +203,32 @@ export class PageCompute {
     this.stage('current');
     const started = performance.now();
 
+    // The studies of stage 2 (below), planned now: when all but the current design are kept from an
+    // earlier run, the current design's grid-convergence solve joins stage 1 on the other worker.
+    const b = studies.baseline;
+    const plans: StudyPlan[] = [studies.family, studies.cover];
+    if (b) plans.push(b.curve, b.cover, b.map);
+    const firstOther = plans.length;
+    plans.push(...others.map((o) => o.plan));
+    const early = studies.quick !== null && plans.every((p) => this.allKept(p));
+    if (studies.quick) plans.push(studies.current);
+    const gciStudy = studies.quick ? plans.length - 1 : -1;
+
     // 1. The current design, exactly as its case file says, but first without the grid-convergence
-    //    lattices (the same values, about half the cost): its numbers show at once; the uncertainty
-    //    estimate follows with the next stage.
-    const s1 = await this.run([studies.quick ?? studies.current], { signal: ac.signal });
+    //    lattices (the same values, about half the cost): its numbers show as soon as they land; the
+    //    uncertainty estimate follows (with stage 2, or beside this one when the rest is kept).
+    let t1 = Number.NaN;
+    const s1 = await this.run(
+      early ? [studies.quick!, studies.current] : [studies.quick ?? studies.current],
+      {
+        signal: ac.signal,
+        onCase: (landed) => {
+          if (landed.study !== 0 || !landed.cube || superseded()) return;
+          r.current = landed.cube;
+          t1 = this.showFirst(r);
+        },
+      },
+    );
     if (superseded()) return;
     if (s1.cancelled) return this.cancelled(r);
     const first = s1.results[0]!;
@@ -214,35 +236,10 @@ export class PageCompute {
       this.fail(`The model could not solve this design: ${first.errors[0] ?? 'unknown error'}`);
       return;
     }
-    r.current = first.cube;
-    this.host.results = r;
-    const t1 = performance.now();
-    this.host.messages.clear('model');
-    // The first numbers: the headline and the plots now; the tables and the map with the next stage.
-    this.host.renderAll({ light: true });
-    if (this.firstResultMs === null) {
-      // On screen: the figures and plots are drawn (the browser paints them at the next frame).
-      this.firstResultMs = performance.now();
-      document.body.dataset.firstResultMs = this.firstResultMs.toFixed(0);
-    }
-    // The 3D view (its own solve and a WebGL frame, both heavy on a small machine) starts with the first
-    // run's numbers; after an edit it is redrawn once the plots and the map are.
-    if (this.view3dAfterRun) this.threeDPending = true;
-    else {
-      this.view3dAfterRun = true;
-      this.host.firstNumbersShown();
-    }
 
     // 2. The current design with its grid-convergence estimate, the family, drag vs cover and the
     //    baseline, in one run (cases of one surface share their factorisation).
     this.stage('sweeps');
-    const b = studies.baseline;
-    const plans: StudyPlan[] = [studies.family, studies.cover];
-    if (b) plans.push(b.curve, b.cover, b.map);
-    const firstOther = plans.length;
-    plans.push(...others.map((o) => o.plan));
-    if (studies.quick) plans.push(studies.current);
-    const gciStudy = studies.quick ? plans.length - 1 : -1;
     const s2 = await this.run(plans, {
       signal: ac.signal,
       onProgress: (p) => this.status(`Cover-fraction sweeps: ${p.casesDone}/${p.casesTotal} cases`, p),
@@ -316,6 +313,27 @@ export class PageCompute {
     this.stage('done');
     this.setPhase('done');
     this.redraw3d();
+  }
+
+  /** The first numbers of a run: the headline and the plots now; the tables and the map follow. */
+  private showFirst(r: PageResults): number {
+    this.host.results = r;
+    const t1 = performance.now();
+    this.host.messages.clear('model');
+    this.host.renderAll({ light: true });
+    if (this.firstResultMs === null) {
+      // On screen: the figures and plots are drawn (the browser paints them at the next frame).
+      this.firstResultMs = performance.now();
+      document.body.dataset.firstResultMs = this.firstResultMs.toFixed(0);
+    }
+    // The 3D view (its own solve and a WebGL frame, both heavy on a small machine) starts with the first
+    // run's numbers; after an edit it is redrawn once the plots and the map are.
+    if (this.view3dAfterRun) this.threeDPending = true;
+    else {
+      this.view3dAfterRun = true;
+      this.host.firstNumbersShown();
+    }
+    return t1;
   }
 
   private renderSoon(): void {
