@@ -123,7 +123,9 @@ export class App implements ComputeHost, ActionsHost, StudyHost {
   async start(): Promise<void> {
     this.computer.startNow();
     await new Promise((resolve) => setTimeout(resolve, 0));
-    this.controls = new Controls(byId('controls'), this.state, (field, value) => this.onEdit(field, value));
+    this.controls = new Controls(byId('controls'), this.state, (field, value, settled) =>
+      this.onEdit(field, value, settled),
+    );
     this.tables = new PageTables(byId('tables'), () => designFileStem(this.state.case));
     this.designMap.onPick((i, j) => this.mapPick.pick(i, j));
     this.mapRide.mount();
@@ -158,8 +160,9 @@ export class App implements ComputeHost, ActionsHost, StudyHost {
   // -------------------------------------------------------------------------------------------
   // State
 
-  /** Make `next` the state: autosave, URL, controls, then recompute or redraw. */
-  apply(next: AppState, opts: { replaceUrl: boolean } = { replaceUrl: true }): void {
+  /** Make `next` the state: autosave, URL, controls, then recompute (at once for a settled edit, else
+   * after a pause, so a drag computes the state it ends on) or redraw. */
+  apply(next: AppState, opts: { replaceUrl: boolean; settled?: boolean } = { replaceUrl: true }): void {
     this.state = next;
     this.store.save(next, opts.replaceUrl);
     this.controls.refresh(next);
@@ -175,12 +178,12 @@ export class App implements ComputeHost, ActionsHost, StudyHost {
       if (this.lastCaseKey !== '') this.dataGlue.designChanged();
       this.lastCaseKey = caseKey;
     }
-    if (this.computer.needed(next)) this.computer.schedule(150);
+    if (this.computer.needed(next)) this.computer.schedule(opts.settled ? 0 : 150);
     else this.renderAll();
     if (next.view.tab === 'road') this.roadGlue.schedule(200);
   }
 
-  private onEdit(field: Field, value: FieldValue): readonly string[] | null {
+  private onEdit(field: Field, value: FieldValue, settled: boolean): readonly string[] | null {
     const ctx = { case: this.state.case, view: this.state.view };
     const raw = structuredClone(
       field.target === 'case' ? this.state.case : this.state.view,
@@ -208,7 +211,7 @@ export class App implements ComputeHost, ActionsHost, StudyHost {
         return r.errors;
       }
       this.messages.clear('edit');
-      this.apply({ ...this.state, case: r.value });
+      this.apply({ ...this.state, case: r.value }, { replaceUrl: true, settled });
     } else {
       const r = validateView(raw);
       if (!r.ok) {
@@ -221,7 +224,7 @@ export class App implements ComputeHost, ActionsHost, StudyHost {
         return r.errors;
       }
       this.messages.clear('edit');
-      this.apply({ ...this.state, view: r.value });
+      this.apply({ ...this.state, view: r.value }, { replaceUrl: true, settled });
     }
     return null;
   }

@@ -116,23 +116,15 @@ export class PageCompute {
     document.body.dataset.state = phase;
   }
 
-  /**
-   * Compute the current state: at once when the page is idle (a typed entry, a choice, the first step
-   * of a drag), else after `delayMs` without a further edit (a drag's later steps restart the wait, so a
-   * run in progress is superseded once, by the state the drag ends on).
-   */
+  /** Compute the current state after `delayMs` (0: at once; edits in between restart the wait). */
   schedule(delayMs: number): void {
-    const idle = this.timer === null && this.abort === null;
     if (this.timer) clearTimeout(this.timer);
     this.lastComputeKey = computeKey(this.host.state);
     this.setPhase('computing');
-    this.timer = setTimeout(
-      () => {
-        this.timer = null;
-        void this.compute();
-      },
-      idle ? 0 : delayMs,
-    );
+    this.timer = setTimeout(() => {
+      this.timer = null;
+      void this.compute();
+    }, delayMs);
   }
 
   private status(text: string, progress: SweepProgress | null = null): void {
