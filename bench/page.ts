@@ -15,8 +15,10 @@
  *     dedicated workers (JS heap, workers, Blink and the WebGL client together); and the PSS of every
  *     Chromium process of the run, read from /proc. PSS shares pages mapped by several processes among
  *     them, so it falls when other Chromium instances run on the machine; USS does not.
- * Medians of the runs are printed with the issue's targets beside them. Needs /usr/bin/chromium
- * (apt-get install -y chromium); says so and exits 0 when it is missing, like the browser tests.
+ * Medians of the runs are printed with the issue's targets beside them. COVERSWEEP_PAGE_BENCH_DIST=<dir>
+ * serves a page built elsewhere (e.g. another commit's `vite build --outDir <dir>`), to compare trees in one
+ * sitting. Needs /usr/bin/chromium (apt-get install -y chromium); says so and exits 0 when it is missing,
+ * like the browser tests.
  */
 import { type ChildProcess, execFileSync, spawn } from 'node:child_process';
 import { existsSync, mkdtempSync, readdirSync, readFileSync, rmSync } from 'node:fs';
@@ -169,11 +171,19 @@ async function main(): Promise<void> {
     print('page', { skipped: `${CHROMIUM} is missing (apt-get install -y chromium)` });
     return;
   }
-  const dist = mkdtempSync(join(tmpdir(), 'coversweep-page-bench-'));
-  execFileSync(process.execPath, [VITE, 'build', '--outDir', dist, '--emptyOutDir', '--logLevel', 'error'], {
-    cwd: ROOT,
-    stdio: 'inherit',
-  });
+  // COVERSWEEP_PAGE_BENCH_DIST: serve a page built elsewhere (another commit's `vite build`) instead.
+  const given = process.env.COVERSWEEP_PAGE_BENCH_DIST;
+  const dist = given ? resolve(given) : mkdtempSync(join(tmpdir(), 'coversweep-page-bench-'));
+  if (!given) {
+    execFileSync(
+      process.execPath,
+      [VITE, 'build', '--outDir', dist, '--emptyOutDir', '--logLevel', 'error'],
+      {
+        cwd: ROOT,
+        stdio: 'inherit',
+      },
+    );
+  }
   const port = await freePort();
   const server = spawn(
     process.execPath,
@@ -242,7 +252,7 @@ async function main(): Promise<void> {
     }
   } finally {
     server.kill();
-    rmSync(dist, { recursive: true, force: true });
+    if (!given) rmSync(dist, { recursive: true, force: true });
   }
   const pick = (k: keyof (typeof rows)[number]) => median(rows.map((r) => r[k]));
   print('page', {
