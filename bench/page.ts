@@ -13,19 +13,22 @@
  *   - memory: the page's JS heap (CDP Runtime.getHeapUsage); the proportional set size (PSS) and the
  *     private memory (USS) of the page's renderer process, the one whose threads include the page's
  *     dedicated workers (JS heap, workers, Blink and the WebGL client together); and the PSS of every
- *     Chromium process of the run, read from /proc. PSS shares pages mapped by several processes among
- *     them, so it falls when other Chromium instances run on the machine; USS does not.
+ *     Chromium process of the run, read from /proc (bench/pageMemory.ts): at rest 3 s after the edits,
+ *     and the renderer's peaks sampled every 100 ms from the navigation on. PSS shares pages mapped by
+ *     several processes among them, so it falls when other Chromium instances run on the machine; USS
+ *     does not.
  * Medians of the runs are printed with the issue's targets beside them. COVERSWEEP_PAGE_BENCH_DIST=<dir>
  * serves a page built elsewhere (e.g. another commit's `vite build --outDir <dir>`), to compare trees in one
  * sitting. Needs /usr/bin/chromium (apt-get install -y chromium); says so and exits 0 when it is missing,
  * like the browser tests.
  */
 import { type ChildProcess, execFileSync, spawn } from 'node:child_process';
-import { existsSync, mkdtempSync, readdirSync, readFileSync, rmSync } from 'node:fs';
+import { existsSync, mkdtempSync, rmSync } from 'node:fs';
 import { createServer } from 'node:net';
 import { availableParallelism, cpus, loadavg, tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { chromium, type Page } from 'playwright-core';
+import { samplePageRenderer, treePssBytes } from './pageMemory';
 import { median } from './timing';
 
 const ROOT = resolve(import.meta.dirname, '..');
@@ -61,71 +64,6 @@ async function waitForServer(url: string, child: ChildProcess): Promise<void> {
     await new Promise((ok) => setTimeout(ok, 100));
   }
   throw new Error(`vite preview did not answer at ${url}`);
-}
-
-/** Whether a process has a dedicated-worker thread (the renderer of the page, whose workers live in it). */
-function hostsWorkers(pid: number): boolean {
-  try {
-    return readdirSync(`/proc/${pid}/task`).some((tid) =>
-      readFileSync(`/proc/${pid}/task/${tid}/comm`, 'utf8').startsWith('DedicatedWorker'),
-    );
-  } catch {
-    return false;
-  }
-}
-
-/** Proportional set size (bytes) of a process and all its descendants, from /proc (Linux only; 0 elsewhere);
- * and the PSS and private bytes (USS) of the page's renderer (the one hosting dedicated workers). */
-function treePssBytes(rootPid: number): { all: number; renderer: number; page: number; pageUss: number } {
-  if (!existsSync('/proc')) return { all: 0, renderer: 0, page: 0, pageUss: 0 };
-  const renderers = new Set<number>();
-  const children = new Map<number, number[]>();
-  const pss = new Map<number, number>();
-  const uss = new Map<number, number>();
-  for (const name of readdirSync('/proc')) {
-    if (!/^\d+$/.test(name)) continue;
-    try {
-      const status = readFileSync(`/proc/${name}/status`, 'utf8');
-      const ppid = Number(/^PPid:\s+(\d+)/m.exec(status)?.[1] ?? -1);
-      // Proportional set size: shared pages divided among the processes sharing them, so the sum over
-      // the tree is not inflated by the code every Chromium process maps.
-      const rollup = existsSync(`/proc/${name}/smaps_rollup`)
-        ? readFileSync(`/proc/${name}/smaps_rollup`, 'utf8')
-        : '';
-      const kb = Number(/^Pss:\s+(\d+)/m.exec(rollup)?.[1] ?? /^VmRSS:\s+(\d+)/m.exec(status)?.[1] ?? 0);
-      const privateKb = ['Private_Clean', 'Private_Dirty'].reduce(
-        (n, k) => n + Number(new RegExp(`^${k}:\\s+(\\d+)`, 'm').exec(rollup)?.[1] ?? 0),
-        0,
-      );
-      const pid = Number(name);
-      uss.set(pid, privateKb * 1024);
-      if (readFileSync(`/proc/${name}/cmdline`, 'utf8').includes('--type=renderer')) renderers.add(pid);
-      pss.set(pid, kb * 1024);
-      const list = children.get(ppid) ?? [];
-      list.push(pid);
-      children.set(ppid, list);
-    } catch {
-      // the process ended while we looked
-    }
-  }
-  let all = 0;
-  let renderer = 0;
-  let page = 0;
-  let pageUss = 0;
-  const stack = [rootPid];
-  while (stack.length > 0) {
-    const pid = stack.pop() as number;
-    all += pss.get(pid) ?? 0;
-    if (renderers.has(pid)) {
-      renderer += pss.get(pid) ?? 0;
-      if (hostsWorkers(pid)) {
-        page += pss.get(pid) ?? 0;
-        pageUss += uss.get(pid) ?? 0;
-      }
-    }
-    stack.push(...(children.get(pid) ?? []));
-  }
-  return { all, renderer, page, pageUss };
 }
 
 /** Marks the page's own timeline: each data-state/data-stage change and the Enter key that commits an edit. */
@@ -202,6 +140,8 @@ async function main(): Promise<void> {
     rendererPssMB: number;
     pageRendererPssMB: number;
     pageRendererUssMB: number;
+    pageRendererPeakPssMB: number;
+    pageRendererPeakUssMB: number;
   }[] = [];
   try {
     await waitForServer(url, server);
@@ -212,6 +152,8 @@ async function main(): Promise<void> {
       try {
         const page = await browser.newPage({ viewport: { width: 1280, height: 800 } });
         await page.addInitScript(MARKS_SCRIPT);
+        const browserPid = browserServer.process().pid;
+        const sampler = browserPid ? samplePageRenderer(browserPid) : null;
         await page.goto(url);
         await page.waitForFunction(() => document.body.dataset.state === 'done', null, { timeout: 120_000 });
         const first = await page.evaluate(() => Number(document.body.dataset.firstResultMs));
@@ -222,11 +164,12 @@ async function main(): Promise<void> {
         const controlChangeMs = await editToDone(page, 'coverFraction', run % 2 === 0 ? '0.55' : '0.45');
         // One that changes every design: the tyre width (mm).
         const everyDesignChangeMs = await editToDone(page, 'tyreWidthMm', run % 2 === 0 ? '26' : '24');
-        // Memory once the edits are done and the 3D view has drawn (the kept designs of three states held).
-        await page.waitForTimeout(1000);
+        // Memory at rest, 3 s after the edits (the 3D view redrawn, the kept designs of three states held);
+        // the peaks were sampled every 100 ms from the navigation to here.
+        await page.waitForTimeout(3000);
+        const peak = sampler?.stop() ?? { pss: Number.NaN, uss: Number.NaN };
         const cdp = await page.context().newCDPSession(page);
         const heap = (await cdp.send('Runtime.getHeapUsage')) as { usedSize: number };
-        const browserPid = browserServer.process().pid;
         const none = { all: Number.NaN, renderer: Number.NaN, page: Number.NaN, pageUss: Number.NaN };
         const pss = browserPid ? treePssBytes(browserPid) : none;
         const timings = JSON.parse((await page.evaluate(() => document.body.dataset.timings)) ?? '{}') as {
@@ -243,6 +186,8 @@ async function main(): Promise<void> {
           rendererPssMB: Math.round(pss.renderer / 1e6),
           pageRendererPssMB: Math.round(pss.page / 1e6),
           pageRendererUssMB: Math.round(pss.pageUss / 1e6),
+          pageRendererPeakPssMB: Math.round(peak.pss / 1e6),
+          pageRendererPeakUssMB: Math.round(peak.uss / 1e6),
         });
         print('page-run', { run, ...rows.at(-1) });
       } finally {
@@ -269,11 +214,13 @@ async function main(): Promise<void> {
     pageHeapMB: pick('heapMB'),
     pageRendererPssMB: pick('pageRendererPssMB'),
     pageRendererUssMB: pick('pageRendererUssMB'),
+    pageRendererPeakPssMB: pick('pageRendererPeakPssMB'),
+    pageRendererPeakUssMB: pick('pageRendererPeakUssMB'),
     memoryTargetMB: 300,
     rendererPssMB: pick('rendererPssMB'),
     chromiumAllProcessesPssMB: pick('pssMB'),
     loadAverage1min: Number(loadavg()[0]!.toFixed(2)),
-    note: "medians; page clock from navigation; controlChangeMs edits the cover fraction (the map, family and cover sweep are kept from the first run), everyDesignChangeMs the tyre width (every design solved again), mapStageMs is the latter's design-map stage; pageRenderer* is the renderer process hosting the page and its dedicated workers; rendererPssMB sums every renderer process (spare ones included), chromiumAllProcessesPssMB every Chromium process; PSS falls when other Chromium instances share the pages, USS does not",
+    note: "medians; page clock from navigation; controlChangeMs edits the cover fraction (the map, family and cover sweep are kept from the first run), everyDesignChangeMs the tyre width (every design solved again), mapStageMs is the latter's design-map stage; pageRenderer* is the renderer process hosting the page and its dedicated workers, at rest 3 s after the edits and at its peak (sampled every 100 ms from the navigation); rendererPssMB sums every renderer process (spare ones included), chromiumAllProcessesPssMB every Chromium process; PSS falls when other Chromium instances share the pages, USS does not",
   });
 }
 
