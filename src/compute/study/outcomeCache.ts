@@ -6,18 +6,7 @@
  * Only solved cases are kept (a failure may be a worker's, not the input's). Least recently used cases
  * are dropped beyond a byte budget.
  */
-import type { WheelInput } from '../../model/wheel';
 import type { SolvedCase } from '../engine/protocol';
-
-/** The exact text of a model input: every float64 in its shortest round-trip form, -0 and non-finite
- * numbers spelt out (JSON would write -0 as 0 and NaN or Infinity as null). */
-export function inputKey(input: WheelInput): string {
-  return JSON.stringify(input, (_key, value: unknown) =>
-    typeof value === 'number' && (Object.is(value, -0) || !Number.isFinite(value))
-      ? `#${Object.is(value, -0) ? '-0' : String(value)}`
-      : value,
-  );
-}
 
 /** Bytes a kept case costs: its packed numbers and its key (two bytes a character), roughly. */
 function caseBytes(key: string, outcome: SolvedCase): number {

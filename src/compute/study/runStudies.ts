@@ -9,7 +9,8 @@ import { COLUMN_COUNT } from '../engine/columns';
 import type { JobRunner } from '../engine/jobRunner';
 import type { CaseOutcome } from '../engine/protocol';
 import { runCases, type SweepProgress } from '../engine/runCases';
-import { inputKey, type OutcomeCache } from './outcomeCache';
+import { inputKey } from './inputKey';
+import type { OutcomeCache } from './outcomeCache';
 import { type AxisPick, ResultCube } from './resultCube';
 import { axesSize, checkStudyPlan, isUnplanned, type StudyPlan } from './studyPlan';
 
