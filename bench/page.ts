@@ -14,7 +14,8 @@
  *     private memory (USS) of the page's renderer process, the one whose threads include the page's
  *     dedicated workers (JS heap, workers, Blink and the WebGL client together); and the PSS of every
  *     Chromium process of the run, read from /proc (bench/pageMemory.ts): at rest 3 s after the edits,
- *     and the renderer's peaks sampled every 100 ms from the navigation on. PSS shares pages mapped by
+ *     the renderer's peaks sampled every 100 ms from the navigation on, and its USS once every page and
+ *     worker has collected its garbage (CDP HeapProfiler.collectGarbage). PSS shares pages mapped by
  *     several processes among them, so it falls when other Chromium instances run on the machine; USS
  *     does not.
  * Medians of the runs are printed with the issue's targets beside them. COVERSWEEP_PAGE_BENCH_DIST=<dir>
@@ -28,7 +29,7 @@ import { createServer } from 'node:net';
 import { availableParallelism, cpus, loadavg, tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { chromium, type Page } from 'playwright-core';
-import { samplePageRenderer, treePssBytes } from './pageMemory';
+import { collectGarbageEverywhere, samplePageRenderer, treePssBytes } from './pageMemory';
 import { median } from './timing';
 
 const ROOT = resolve(import.meta.dirname, '..');
@@ -142,6 +143,7 @@ async function main(): Promise<void> {
     pageRendererUssMB: number;
     pageRendererPeakPssMB: number;
     pageRendererPeakUssMB: number;
+    pageRendererLiveUssMB: number;
   }[] = [];
   try {
     await waitForServer(url, server);
@@ -172,6 +174,10 @@ async function main(): Promise<void> {
         const heap = (await cdp.send('Runtime.getHeapUsage')) as { usedSize: number };
         const none = { all: Number.NaN, renderer: Number.NaN, page: Number.NaN, pageUss: Number.NaN };
         const pss = browserPid ? treePssBytes(browserPid) : none;
+        // What the page holds: the same process once every page and worker has collected its garbage.
+        await collectGarbageEverywhere(browser);
+        await page.waitForTimeout(1500);
+        const live = browserPid ? treePssBytes(browserPid) : none;
         const timings = JSON.parse((await page.evaluate(() => document.body.dataset.timings)) ?? '{}') as {
           mapMs?: number;
         };
@@ -188,6 +194,7 @@ async function main(): Promise<void> {
           pageRendererUssMB: Math.round(pss.pageUss / 1e6),
           pageRendererPeakPssMB: Math.round(peak.pss / 1e6),
           pageRendererPeakUssMB: Math.round(peak.uss / 1e6),
+          pageRendererLiveUssMB: Math.round(live.pageUss / 1e6),
         });
         print('page-run', { run, ...rows.at(-1) });
       } finally {
@@ -216,11 +223,12 @@ async function main(): Promise<void> {
     pageRendererUssMB: pick('pageRendererUssMB'),
     pageRendererPeakPssMB: pick('pageRendererPeakPssMB'),
     pageRendererPeakUssMB: pick('pageRendererPeakUssMB'),
+    pageRendererLiveUssMB: pick('pageRendererLiveUssMB'),
     memoryTargetMB: 300,
     rendererPssMB: pick('rendererPssMB'),
     chromiumAllProcessesPssMB: pick('pssMB'),
     loadAverage1min: Number(loadavg()[0]!.toFixed(2)),
-    note: "medians; page clock from navigation; controlChangeMs edits the cover fraction (the map, family and cover sweep are kept from the first run), everyDesignChangeMs the tyre width (every design solved again), mapStageMs is the latter's design-map stage; pageRenderer* is the renderer process hosting the page and its dedicated workers, at rest 3 s after the edits and at its peak (sampled every 100 ms from the navigation); rendererPssMB sums every renderer process (spare ones included), chromiumAllProcessesPssMB every Chromium process; PSS falls when other Chromium instances share the pages, USS does not",
+    note: "medians; page clock from navigation; controlChangeMs edits the cover fraction (the map, family and cover sweep are kept from the first run), everyDesignChangeMs the tyre width (every design solved again), mapStageMs is the latter's design-map stage; pageRenderer* is the renderer process hosting the page and its dedicated workers, at rest 3 s after the edits, at its peak (sampled every 100 ms from the navigation) and live (USS once every page and worker collected its garbage); rendererPssMB sums every renderer process (spare ones included), chromiumAllProcessesPssMB every Chromium process; PSS falls when other Chromium instances share the pages, USS does not",
   });
 }
 

@@ -4,6 +4,7 @@
  * renderer whose threads include the page's dedicated workers, sampled for its peaks.
  */
 import { existsSync, readdirSync, readFileSync } from 'node:fs';
+import type { Browser } from 'playwright-core';
 
 /** Whether a process has a dedicated-worker thread (the renderer of the page, whose workers live in it). */
 function hostsWorkers(pid: number): boolean {
@@ -132,4 +133,30 @@ export function samplePageRenderer(rootPid: number, everyMs = 100): { stop(): { 
       return peak;
     },
   };
+}
+
+/**
+ * Ask every page and worker of the browser to collect its garbage (CDP HeapProfiler.collectGarbage through
+ * the browser's target sessions), so that what stays is what the page holds. Returns how many were asked.
+ */
+export async function collectGarbageEverywhere(browser: Browser): Promise<number> {
+  const session = await browser.newBrowserCDPSession();
+  const { targetInfos } = (await session.send('Target.getTargets')) as {
+    targetInfos: { targetId: string; type: string }[];
+  };
+  let asked = 0;
+  for (const t of targetInfos) {
+    if (t.type !== 'worker' && t.type !== 'page') continue;
+    const { sessionId } = (await session.send('Target.attachToTarget', {
+      targetId: t.targetId,
+      flatten: false,
+    })) as {
+      sessionId: string;
+    };
+    const message = JSON.stringify({ id: 1, method: 'HeapProfiler.collectGarbage' });
+    await session.send('Target.sendMessageToTarget', { sessionId, message });
+    asked++;
+  }
+  await session.detach();
+  return asked;
 }
