@@ -237,7 +237,7 @@ export class App implements ComputeHost, ActionsHost, StudyHost {
   // -------------------------------------------------------------------------------------------
   // Views: each reads the state and the results' cubes (src/ui/views)
 
-  /** The first numbers are on screen: the 3D view (a large module and a WebGL context) starts now. */
+  /** A run's plots and map are drawn: the 3D view (a large module and a WebGL context) starts or redraws. */
   firstNumbersShown(): void {
     this.view3dGlue.firstNumbersShown();
   }

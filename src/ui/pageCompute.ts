@@ -33,7 +33,7 @@ export interface ComputeHost {
   /** The results on screen; each stage replaces them. */
   results: PageResults | null;
   renderAll(opts?: { light?: boolean }): void;
-  /** The first numbers of a run are on screen (the 3D view may start). */
+  /** A run's plots and map are drawn (or it was cancelled): the 3D view starts, or draws the new design. */
   firstNumbersShown(): void;
 }
 
@@ -85,8 +85,7 @@ export class PageCompute {
   lastComputeKey = '';
   /** Designs solved by earlier runs, by their exact input: an edit re-solves only what it changed. */
   private readonly solved = new OutcomeCache(SOLVED_BUDGET_BYTES);
-  /** Whether the 3D view waits for the end of this run (after the first run it follows the plots). */
-  private view3dAfterRun = false;
+  /** Whether the 3D view waits to draw this run's design (at the end of the run, or its cancel). */
   private threeDPending = false;
   /** A redraw asked for while a stage runs (drawn at the next task unless the stage's end draws first). */
   private soon: ReturnType<typeof setTimeout> | null = null;
@@ -319,13 +318,10 @@ export class PageCompute {
       this.firstResultMs = performance.now();
       document.body.dataset.firstResultMs = this.firstResultMs.toFixed(0);
     }
-    // The 3D view (its own solve and a WebGL frame, both heavy on a small machine) starts with the first
-    // run's numbers; after an edit it is redrawn once the plots and the map are.
-    if (this.view3dAfterRun) this.threeDPending = true;
-    else {
-      this.view3dAfterRun = true;
-      this.host.firstNumbersShown();
-    }
+    // The 3D view (its module, a WebGL context, its own solve and frames of 100-200 ms on a software
+    // renderer, all competing with the sweeps on a small machine) is drawn once the plots and the map
+    // are: measured on 2 cores, every plot and the map are drawn in half the time.
+    this.threeDPending = true;
     return t1;
   }
 
