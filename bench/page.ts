@@ -5,18 +5,31 @@
  * (performance.now(), whose origin is the navigation):
  *   - firstHeadlineMs: the first current-design result on screen (the page's data-first-result-ms mark),
  *   - doneMs: every plot and the design map drawn (body data-state first becomes "done"),
- *   - controlChangeMs: from the Enter key that commits a cover-fraction edit to "done" again,
- *   - memory: the page's JS heap (CDP Runtime.getHeapUsage) and the proportional set size (PSS) of every
- *     Chromium process of the run (renderer and its dedicated workers included), read from /proc.
- * Medians of the runs are printed with the issue's targets beside them. Needs /usr/bin/chromium
- * (apt-get install -y chromium); says so and exits 0 when it is missing, like the browser tests.
+ *   - controlChangeMs: from the Enter key that commits a cover-fraction edit to "done" again (the map,
+ *     the family and the cover sweep do not depend on the current design's cover fraction: they are
+ *     kept from the first run, and only the current design is solved),
+ *   - everyDesignChangeMs: the same for a tyre-width edit, which changes every design of every study
+ *     (the map's included), so nothing is kept; mapStageMs is that edit's design-map stage alone,
+ *   - memory: the page's JS heap (CDP Runtime.getHeapUsage); the proportional set size (PSS) and the
+ *     private memory (USS) of the page's renderer process, the one whose threads include the page's
+ *     dedicated workers (JS heap, workers, Blink and the WebGL client together); and the PSS of every
+ *     Chromium process of the run, read from /proc (bench/pageMemory.ts): at rest 3 s after the edits,
+ *     the renderer's peaks sampled every 100 ms from the navigation on, and its USS once every page and
+ *     worker has collected its garbage (CDP HeapProfiler.collectGarbage). PSS shares pages mapped by
+ *     several processes among them, so it falls when other Chromium instances run on the machine; USS
+ *     does not.
+ * Medians of the runs are printed with the issue's targets beside them. COVERSWEEP_PAGE_BENCH_DIST=<dir>
+ * serves a page built elsewhere (e.g. another commit's `vite build --outDir <dir>`), to compare trees in one
+ * sitting. Needs /usr/bin/chromium (apt-get install -y chromium); says so and exits 0 when it is missing,
+ * like the browser tests.
  */
 import { type ChildProcess, execFileSync, spawn } from 'node:child_process';
-import { existsSync, mkdtempSync, readdirSync, readFileSync, rmSync } from 'node:fs';
+import { existsSync, mkdtempSync, rmSync } from 'node:fs';
 import { createServer } from 'node:net';
-import { availableParallelism, cpus, tmpdir } from 'node:os';
+import { availableParallelism, cpus, loadavg, tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
-import { chromium } from 'playwright-core';
+import { chromium, type Page } from 'playwright-core';
+import { collectGarbageEverywhere, samplePageRenderer, treePssBytes } from './pageMemory';
 import { median } from './timing';
 
 const ROOT = resolve(import.meta.dirname, '..');
@@ -54,45 +67,6 @@ async function waitForServer(url: string, child: ChildProcess): Promise<void> {
   throw new Error(`vite preview did not answer at ${url}`);
 }
 
-/** Proportional set size (bytes) of a process and all its descendants, from /proc (Linux only; 0 elsewhere). */
-function treePssBytes(rootPid: number): { all: number; renderer: number } {
-  if (!existsSync('/proc')) return { all: 0, renderer: 0 };
-  const renderers = new Set<number>();
-  const children = new Map<number, number[]>();
-  const pss = new Map<number, number>();
-  for (const name of readdirSync('/proc')) {
-    if (!/^\d+$/.test(name)) continue;
-    try {
-      const status = readFileSync(`/proc/${name}/status`, 'utf8');
-      const ppid = Number(/^PPid:\s+(\d+)/m.exec(status)?.[1] ?? -1);
-      // Proportional set size: shared pages divided among the processes sharing them, so the sum over
-      // the tree is not inflated by the code every Chromium process maps.
-      const rollup = existsSync(`/proc/${name}/smaps_rollup`)
-        ? readFileSync(`/proc/${name}/smaps_rollup`, 'utf8')
-        : '';
-      const kb = Number(/^Pss:\s+(\d+)/m.exec(rollup)?.[1] ?? /^VmRSS:\s+(\d+)/m.exec(status)?.[1] ?? 0);
-      const pid = Number(name);
-      if (readFileSync(`/proc/${name}/cmdline`, 'utf8').includes('--type=renderer')) renderers.add(pid);
-      pss.set(pid, kb * 1024);
-      const list = children.get(ppid) ?? [];
-      list.push(pid);
-      children.set(ppid, list);
-    } catch {
-      // the process ended while we looked
-    }
-  }
-  let all = 0;
-  let renderer = 0;
-  const stack = [rootPid];
-  while (stack.length > 0) {
-    const pid = stack.pop() as number;
-    all += pss.get(pid) ?? 0;
-    if (renderers.has(pid)) renderer += pss.get(pid) ?? 0;
-    stack.push(...(children.get(pid) ?? []));
-  }
-  return { all, renderer };
-}
-
 /** Marks the page's own timeline: each data-state/data-stage change and the Enter key that commits an edit. */
 const MARKS_SCRIPT = `
   window.__benchMarks = { states: [], enter: [] };
@@ -110,16 +84,45 @@ interface Marks {
   enter: number[];
 }
 
+/** Type `value` into the control `field`, commit it with Enter, and return the ms from Enter to "done". */
+async function editToDone(page: Page, field: string, value: string): Promise<number> {
+  const marks = () => page.evaluate(() => (window as unknown as { __benchMarks: Marks }).__benchMarks);
+  const before = (await marks()).states.length;
+  const input = page.locator(`[data-field="${field}"] input`).first();
+  await input.fill(value);
+  await input.press('Enter');
+  await page.waitForFunction(
+    (n) => {
+      const m = (window as unknown as { __benchMarks: Marks }).__benchMarks;
+      return m.states.slice(n).some(([s]) => s === 'computing') && document.body.dataset.state === 'done';
+    },
+    before,
+    { timeout: 120_000 },
+  );
+  const after = await marks();
+  const enterAt = after.enter.at(-1) ?? Number.NaN;
+  const doneMarks = after.states.slice(before).filter(([s]) => s === 'done');
+  return Math.round((doneMarks[doneMarks.length - 1]?.[2] ?? Number.NaN) - enterAt);
+}
+
 async function main(): Promise<void> {
   if (!existsSync(CHROMIUM)) {
     print('page', { skipped: `${CHROMIUM} is missing (apt-get install -y chromium)` });
     return;
   }
-  const dist = mkdtempSync(join(tmpdir(), 'coversweep-page-bench-'));
-  execFileSync(process.execPath, [VITE, 'build', '--outDir', dist, '--emptyOutDir', '--logLevel', 'error'], {
-    cwd: ROOT,
-    stdio: 'inherit',
-  });
+  // COVERSWEEP_PAGE_BENCH_DIST: serve a page built elsewhere (another commit's `vite build`) instead.
+  const given = process.env.COVERSWEEP_PAGE_BENCH_DIST;
+  const dist = given ? resolve(given) : mkdtempSync(join(tmpdir(), 'coversweep-page-bench-'));
+  if (!given) {
+    execFileSync(
+      process.execPath,
+      [VITE, 'build', '--outDir', dist, '--emptyOutDir', '--logLevel', 'error'],
+      {
+        cwd: ROOT,
+        stdio: 'inherit',
+      },
+    );
+  }
   const port = await freePort();
   const server = spawn(
     process.execPath,
@@ -131,9 +134,16 @@ async function main(): Promise<void> {
     firstHeadlineMs: number;
     doneMs: number;
     controlChangeMs: number;
+    everyDesignChangeMs: number;
+    mapStageMs: number;
     heapMB: number;
     pssMB: number;
     rendererPssMB: number;
+    pageRendererPssMB: number;
+    pageRendererUssMB: number;
+    pageRendererPeakPssMB: number;
+    pageRendererPeakUssMB: number;
+    pageRendererLiveUssMB: number;
   }[] = [];
   try {
     await waitForServer(url, server);
@@ -144,42 +154,47 @@ async function main(): Promise<void> {
       try {
         const page = await browser.newPage({ viewport: { width: 1280, height: 800 } });
         await page.addInitScript(MARKS_SCRIPT);
+        const browserPid = browserServer.process().pid;
+        const sampler = browserPid ? samplePageRenderer(browserPid) : null;
         await page.goto(url);
         await page.waitForFunction(() => document.body.dataset.state === 'done', null, { timeout: 120_000 });
         const first = await page.evaluate(() => Number(document.body.dataset.firstResultMs));
         const marks1 = await page.evaluate(() => (window as unknown as { __benchMarks: Marks }).__benchMarks);
         const done = marks1.states.find(([state]) => state === 'done')?.[2] ?? Number.NaN;
-        const cdp = await page.context().newCDPSession(page);
-        const heap = (await cdp.send('Runtime.getHeapUsage')) as { usedSize: number };
-        const browserPid = browserServer.process().pid;
-        const pss = browserPid ? treePssBytes(browserPid) : { all: Number.NaN, renderer: Number.NaN };
 
         // One control change: the cover fraction, committed with Enter, to "done" again.
-        const before = marks1.states.length;
-        const input = page.locator('[data-field="coverFraction"] input').first();
-        await input.fill(run % 2 === 0 ? '0.55' : '0.45');
-        await input.press('Enter');
-        await page.waitForFunction(
-          (n) => {
-            const m = (window as unknown as { __benchMarks: Marks }).__benchMarks;
-            return (
-              m.states.slice(n).some(([s]) => s === 'computing') && document.body.dataset.state === 'done'
-            );
-          },
-          before,
-          { timeout: 120_000 },
-        );
-        const marks2 = await page.evaluate(() => (window as unknown as { __benchMarks: Marks }).__benchMarks);
-        const enterAt = marks2.enter.at(-1) ?? Number.NaN;
-        const doneMarks = marks2.states.slice(before).filter(([s]) => s === 'done');
-        const doneAgain = doneMarks[doneMarks.length - 1]?.[2] ?? Number.NaN;
+        const controlChangeMs = await editToDone(page, 'coverFraction', run % 2 === 0 ? '0.55' : '0.45');
+        // One that changes every design: the tyre width (mm).
+        const everyDesignChangeMs = await editToDone(page, 'tyreWidthMm', run % 2 === 0 ? '26' : '24');
+        // Memory at rest, 3 s after the edits (the 3D view redrawn, the kept designs of three states held);
+        // the peaks were sampled every 100 ms from the navigation to here.
+        await page.waitForTimeout(3000);
+        const peak = sampler?.stop() ?? { pss: Number.NaN, uss: Number.NaN };
+        const cdp = await page.context().newCDPSession(page);
+        const heap = (await cdp.send('Runtime.getHeapUsage')) as { usedSize: number };
+        const none = { all: Number.NaN, renderer: Number.NaN, page: Number.NaN, pageUss: Number.NaN };
+        const pss = browserPid ? treePssBytes(browserPid) : none;
+        // What the page holds: the same process once every page and worker has collected its garbage.
+        await collectGarbageEverywhere(browser);
+        await page.waitForTimeout(1500);
+        const live = browserPid ? treePssBytes(browserPid) : none;
+        const timings = JSON.parse((await page.evaluate(() => document.body.dataset.timings)) ?? '{}') as {
+          mapMs?: number;
+        };
         rows.push({
           firstHeadlineMs: Math.round(first),
           doneMs: Math.round(done),
-          controlChangeMs: Math.round(doneAgain - enterAt),
+          controlChangeMs,
+          everyDesignChangeMs,
+          mapStageMs: timings.mapMs ?? Number.NaN,
           heapMB: Math.round(heap.usedSize / 1e6),
           pssMB: Math.round(pss.all / 1e6),
           rendererPssMB: Math.round(pss.renderer / 1e6),
+          pageRendererPssMB: Math.round(pss.page / 1e6),
+          pageRendererUssMB: Math.round(pss.pageUss / 1e6),
+          pageRendererPeakPssMB: Math.round(peak.pss / 1e6),
+          pageRendererPeakUssMB: Math.round(peak.uss / 1e6),
+          pageRendererLiveUssMB: Math.round(live.pageUss / 1e6),
         });
         print('page-run', { run, ...rows.at(-1) });
       } finally {
@@ -189,7 +204,7 @@ async function main(): Promise<void> {
     }
   } finally {
     server.kill();
-    rmSync(dist, { recursive: true, force: true });
+    if (!given) rmSync(dist, { recursive: true, force: true });
   }
   const pick = (k: keyof (typeof rows)[number]) => median(rows.map((r) => r[k]));
   print('page', {
@@ -200,11 +215,20 @@ async function main(): Promise<void> {
     doneTargetMs: 2500,
     controlChangeMs: pick('controlChangeMs'),
     controlChangeTargetMs: 300,
+    everyDesignChangeMs: pick('everyDesignChangeMs'),
+    mapStageMs: pick('mapStageMs'),
+    mapTargetMs: 300,
     pageHeapMB: pick('heapMB'),
+    pageRendererPssMB: pick('pageRendererPssMB'),
+    pageRendererUssMB: pick('pageRendererUssMB'),
+    pageRendererPeakPssMB: pick('pageRendererPeakPssMB'),
+    pageRendererPeakUssMB: pick('pageRendererPeakUssMB'),
+    pageRendererLiveUssMB: pick('pageRendererLiveUssMB'),
+    memoryTargetMB: 300,
     rendererPssMB: pick('rendererPssMB'),
     chromiumAllProcessesPssMB: pick('pssMB'),
-    memoryTargetMB: 300,
-    note: 'medians; page clock from navigation; PSS sums every Chromium process of the run (browser, utility processes, renderer with its workers), so it overstates the page alone; rendererPssMB is the page renderer process with its dedicated workers',
+    loadAverage1min: Number(loadavg()[0]!.toFixed(2)),
+    note: "medians; page clock from navigation; controlChangeMs edits the cover fraction (the map, family and cover sweep are kept from the first run), everyDesignChangeMs the tyre width (every design solved again), mapStageMs is the latter's design-map stage; pageRenderer* is the renderer process hosting the page and its dedicated workers, at rest 3 s after the edits, at its peak (sampled every 100 ms from the navigation) and live (USS once every page and worker collected its garbage); rendererPssMB sums every renderer process (spare ones included), chromiumAllProcessesPssMB every Chromium process; PSS falls when other Chromium instances share the pages, USS does not",
   });
 }
 

@@ -130,7 +130,9 @@ export class App implements ComputeHost, ActionsHost, StudyHost, ReportHost {
   async start(): Promise<void> {
     this.computer.startNow();
     await new Promise((resolve) => setTimeout(resolve, 0));
-    this.controls = new Controls(byId('controls'), this.state, (field, value) => this.onEdit(field, value));
+    this.controls = new Controls(byId('controls'), this.state, (field, value, settled) =>
+      this.onEdit(field, value, settled),
+    );
     setExportSource(
       () => ({
         case: this.state.case,
@@ -174,15 +176,15 @@ export class App implements ComputeHost, ActionsHost, StudyHost, ReportHost {
     (window as unknown as { coversweep: unknown }).coversweep = inspect;
   }
 
-  // -------------------------------------------------------------------------------------------
-  // State
+  // State ------------------------------------------------------------------------------------
 
   withDataText(state: AppState): Promise<AppState> {
     return this.dataGlue.withText(state);
   }
 
-  /** Make `next` the state: autosave, URL, controls, then recompute or redraw. */
-  apply(next: AppState, opts: { replaceUrl: boolean } = { replaceUrl: true }): void {
+  /** Make `next` the state: autosave, URL, controls, then recompute (at once for a settled edit, else
+   * after a pause, so a drag computes the state it ends on) or redraw. */
+  apply(next: AppState, opts: { replaceUrl: boolean; settled?: boolean } = { replaceUrl: true }): void {
     const onlyData = onlyDataChanged(this.state, next);
     this.state = next;
     this.store.save(next, opts.replaceUrl);
@@ -204,12 +206,12 @@ export class App implements ComputeHost, ActionsHost, StudyHost, ReportHost {
       if (this.lastCaseKey !== '') this.dataGlue.designChanged();
       this.lastCaseKey = caseKey;
     }
-    if (this.computer.needed(next)) this.computer.schedule(150);
+    if (this.computer.needed(next)) this.computer.schedule(opts.settled ? 0 : 150);
     else this.renderAll();
     if (next.view.tab === 'road') this.roadGlue.schedule(200);
   }
 
-  private onEdit(field: Field, value: FieldValue): readonly string[] | null {
+  private onEdit(field: Field, value: FieldValue, settled: boolean): readonly string[] | null {
     const ctx = { case: this.state.case, view: this.state.view };
     const raw = structuredClone(
       field.target === 'case' ? this.state.case : this.state.view,
@@ -237,7 +239,7 @@ export class App implements ComputeHost, ActionsHost, StudyHost, ReportHost {
         return r.errors;
       }
       this.messages.clear('edit');
-      this.apply({ ...this.state, case: r.value });
+      this.apply({ ...this.state, case: r.value }, { replaceUrl: true, settled });
     } else {
       const r = validateView(raw);
       if (!r.ok) {
@@ -250,7 +252,7 @@ export class App implements ComputeHost, ActionsHost, StudyHost, ReportHost {
         return r.errors;
       }
       this.messages.clear('edit');
-      this.apply({ ...this.state, view: r.value });
+      this.apply({ ...this.state, view: r.value }, { replaceUrl: true, settled });
     }
     return null;
   }
@@ -263,7 +265,7 @@ export class App implements ComputeHost, ActionsHost, StudyHost, ReportHost {
   // -------------------------------------------------------------------------------------------
   // Views: each reads the state and the results' cubes (src/ui/views)
 
-  /** The first numbers are on screen: the 3D view (a large module and a WebGL context) starts now. */
+  /** A run's plots and map are drawn: the 3D view (a large module and a WebGL context) starts or redraws. */
   firstNumbersShown(): void {
     this.view3dGlue.firstNumbersShown();
   }

@@ -14,7 +14,12 @@ import { labelParts, withUnit } from './fields/labelParts';
 import { speakLabels } from './fields/speakLabels';
 
 /** Validate and apply an edit; return the reasons when it is refused (nothing is applied then). */
-export type EditHandler = (field: Field, value: FieldValue) => readonly string[] | null | undefined;
+/** `settled`: the edit is complete (a typed entry committed, a choice, a checkbox), not a step of a drag. */
+export type EditHandler = (
+  field: Field,
+  value: FieldValue,
+  settled: boolean,
+) => readonly string[] | null | undefined;
 
 const OPEN_GROUPS: readonly GroupId[] = ['wheel', 'spokes', 'cover', 'conditions'];
 
@@ -66,7 +71,7 @@ export class Controls {
       addFieldHelp(controller, field);
       const entry: Entry = { field, controller, note: ruleNote(controller, field.key) };
       const fire = (v: FieldValue) => {
-        if (!this.refreshing) this.edit(entry, v);
+        if (!this.refreshing) this.edit(entry, v, field.control !== 'number');
       };
       // Text fields apply when finished (a half-typed list is not an edit); the rest on every change
       // (slider, arrow keys, drag, select, checkbox). Typed numbers are taken over by watchTyping.
@@ -110,13 +115,13 @@ export class Controls {
         return;
       }
       this.form[field.key] = check.value;
-      this.edit(entry, check.value);
+      this.edit(entry, check.value, true);
     });
   }
 
   /** Hand an edit to the page; a refusal is shown beside the control and the control restored. */
-  private edit(entry: Entry, value: FieldValue): void {
-    const refused = this.onEdit(entry.field, value);
+  private edit(entry: Entry, value: FieldValue, settled: boolean): void {
+    const refused = this.onEdit(entry.field, value, settled);
     if (refused && refused.length > 0) this.refuse(entry, refused);
     else entry.note.clear();
   }

@@ -9,9 +9,11 @@ import { caseAirDensity } from '../compute/caseFile';
 import type { SweepProgress } from '../compute/engine/runCases';
 import type { WorkerPool } from '../compute/engine/workerPool';
 import { baselineInput, baselineStudy } from '../compute/study/baselineStudy';
+import { inputKey } from '../compute/study/inputKey';
+import { OutcomeCache } from '../compute/study/outcomeCache';
 import { type PageStudies, pageStudies } from '../compute/study/pageStudies';
 import { type RunStudiesOptions, runStudies, type StudiesOutcome } from '../compute/study/runStudies';
-import type { StudyPlan } from '../compute/study/studyPlan';
+import { isUnplanned, type StudyPlan } from '../compute/study/studyPlan';
 import type { AppState } from './appState';
 import { pinnedBaselines, referenceIndex } from './baselines/pinnedBaselines';
 import { scriptStartMs, workersReadyMs } from './earlyPool';
@@ -21,6 +23,9 @@ import { byId } from './views/present';
 
 type Phase = 'computing' | 'done' | 'error';
 
+/** What the kept solved designs may hold: about 20 states of the default page's studies. */
+const SOLVED_BUDGET_BYTES = 8e6;
+
 /** What the computing needs of the page. */
 export interface ComputeHost {
   readonly state: AppState;
@@ -28,7 +33,7 @@ export interface ComputeHost {
   /** The results on screen; each stage replaces them. */
   results: PageResults | null;
   renderAll(opts?: { light?: boolean }): void;
-  /** The first numbers of a run are on screen (the 3D view may start). */
+  /** A run's plots and map are drawn (or it was cancelled): the 3D view starts, or draws the new design. */
   firstNumbersShown(): void;
 }
 
@@ -78,6 +83,12 @@ export class PageCompute {
   private firstResultMs: number | null = null;
   /** The computeKey of the state computed (or being computed) last. */
   lastComputeKey = '';
+  /** Designs solved by earlier runs, by their exact input: an edit re-solves only what it changed. */
+  private readonly solved = new OutcomeCache(SOLVED_BUDGET_BYTES);
+  /** Whether the 3D view waits to draw this run's design (at the end of the run, or its cancel). */
+  private threeDPending = false;
+  /** A redraw asked for while a stage runs (drawn at the next task unless the stage's end draws first). */
+  private soon: ReturnType<typeof setTimeout> | null = null;
 
   constructor(
     private readonly pool: WorkerPool,
@@ -105,7 +116,7 @@ export class PageCompute {
     document.body.dataset.state = phase;
   }
 
-  /** Compute the current state after `delayMs` (edits in between restart the wait). */
+  /** Compute the current state after `delayMs` (0: at once; edits in between restart the wait). */
   schedule(delayMs: number): void {
     if (this.timer) clearTimeout(this.timer);
     this.lastComputeKey = computeKey(this.host.state);
@@ -137,7 +148,7 @@ export class PageCompute {
    */
   private run(plans: readonly StudyPlan[], options: RunStudiesOptions): Promise<StudiesOutcome> {
     const previous = this.poolIdle;
-    const run = previous.then(() => runStudies(this.pool, plans, options));
+    const run = previous.then(() => runStudies(this.pool, plans, { ...options, cache: this.solved }));
     this.poolIdle = run.then(
       () => undefined,
       () => undefined,
@@ -184,10 +195,32 @@ export class PageCompute {
     this.stage('current');
     const started = performance.now();
 
+    // The studies of stage 2 (below), planned now: when all but the current design are kept from an
+    // earlier run, the current design's grid-convergence solve joins stage 1 on the other worker.
+    const b = studies.baseline;
+    const plans: StudyPlan[] = [studies.family, studies.cover];
+    if (b) plans.push(b.curve, b.cover, b.map);
+    const firstOther = plans.length;
+    plans.push(...others.map((o) => o.plan));
+    const early = studies.quick !== null && plans.every((p) => this.allKept(p));
+    if (studies.quick) plans.push(studies.current);
+    const gciStudy = studies.quick ? plans.length - 1 : -1;
+
     // 1. The current design, exactly as its case file says, but first without the grid-convergence
-    //    lattices (the same values, about half the cost): its numbers show at once; the uncertainty
-    //    estimate follows with the next stage.
-    const s1 = await this.run([studies.quick ?? studies.current], { signal: ac.signal });
+    //    lattices (the same values, about half the cost): its numbers show as soon as they land; the
+    //    uncertainty estimate follows (with stage 2, or beside this one when the rest is kept).
+    let t1 = Number.NaN;
+    const s1 = await this.run(
+      early ? [studies.quick!, studies.current] : [studies.quick ?? studies.current],
+      {
+        signal: ac.signal,
+        onCase: (landed) => {
+          if (landed.study !== 0 || !landed.cube || superseded()) return;
+          r.current = landed.cube;
+          t1 = this.showFirst(r);
+        },
+      },
+    );
     if (superseded()) return;
     if (s1.cancelled) return this.cancelled(r);
     const first = s1.results[0]!;
@@ -195,36 +228,17 @@ export class PageCompute {
       this.fail(`The model could not solve this design: ${first.errors[0] ?? 'unknown error'}`);
       return;
     }
-    r.current = first.cube;
-    this.host.results = r;
-    const t1 = performance.now();
-    this.host.messages.clear('model');
-    // The first numbers: the headline and the plots now; the tables and the map with the next stage.
-    this.host.renderAll({ light: true });
-    if (this.firstResultMs === null) {
-      // On screen: the figures and plots are drawn (the browser paints them at the next frame).
-      this.firstResultMs = performance.now();
-      document.body.dataset.firstResultMs = this.firstResultMs.toFixed(0);
-    }
-    this.host.firstNumbersShown();
 
     // 2. The current design with its grid-convergence estimate, the family, drag vs cover and the
     //    baseline, in one run (cases of one surface share their factorisation).
     this.stage('sweeps');
-    const b = studies.baseline;
-    const plans: StudyPlan[] = [studies.family, studies.cover];
-    if (b) plans.push(b.curve, b.cover, b.map);
-    const firstOther = plans.length;
-    plans.push(...others.map((o) => o.plan));
-    if (studies.quick) plans.push(studies.current);
-    const gciStudy = studies.quick ? plans.length - 1 : -1;
     const s2 = await this.run(plans, {
       signal: ac.signal,
       onProgress: (p) => this.status(`Cover-fraction sweeps: ${p.casesDone}/${p.casesTotal} cases`, p),
       onCase: (landed) => {
         if (landed.study === gciStudy && landed.cube && !superseded()) {
           r.current = landed.cube;
-          this.host.renderAll();
+          this.renderSoon();
         }
       },
     });
@@ -243,8 +257,9 @@ export class PageCompute {
     });
     const gci = gciStudy >= 0 ? s2.results[gciStudy]! : null;
     if (gci?.cube && gci.landed[0] === 1 && gci.errors[0] === null) r.current = gci.cube;
-    this.host.renderAll();
     if (s2.cancelled) return this.cancelled(r);
+    // Drawn now unless the map is kept from an earlier run: then the map stage draws everything at once.
+    if (!this.allKept(studies.map)) this.renderNow();
 
     // 3. The design map (the longer sweep).
     this.stage('map');
@@ -259,7 +274,7 @@ export class PageCompute {
     });
     if (superseded()) return;
     r.map = s3.results[0]!;
-    this.host.renderAll();
+    this.renderNow();
     if (s3.cancelled) return this.cancelled(r);
     const failed = s2.failedCount + s3.failedCount;
     if (failed > 0) {
@@ -289,6 +304,50 @@ export class PageCompute {
     this.abort = null;
     this.stage('done');
     this.setPhase('done');
+    this.redraw3d();
+  }
+
+  /** The first numbers of a run: the headline and the plots now; the tables and the map follow. */
+  private showFirst(r: PageResults): number {
+    this.host.results = r;
+    const t1 = performance.now();
+    this.host.messages.clear('model');
+    this.host.renderAll({ light: true });
+    if (this.firstResultMs === null) {
+      // On screen: the figures and plots are drawn (the browser paints them at the next frame).
+      this.firstResultMs = performance.now();
+      document.body.dataset.firstResultMs = this.firstResultMs.toFixed(0);
+    }
+    // The 3D view (its module, a WebGL context, its own solve and frames of 100-200 ms on a software
+    // renderer, all competing with the sweeps on a small machine) is drawn once the plots and the map
+    // are: measured on 2 cores, every plot and the map are drawn in half the time.
+    this.threeDPending = true;
+    return t1;
+  }
+
+  private renderSoon(): void {
+    this.soon ??= setTimeout(() => {
+      this.soon = null;
+      this.host.renderAll();
+    }, 0);
+  }
+
+  private renderNow(): void {
+    if (this.soon) clearTimeout(this.soon);
+    this.soon = null;
+    this.host.renderAll();
+  }
+
+  /** Whether every case of `plan` is kept from an earlier run (so it lands without a solve). */
+  private allKept(plan: StudyPlan): boolean {
+    return plan.inputs.every((input) => !isUnplanned(input) && this.solved.has(inputKey(input)));
+  }
+
+  /** Redraw the 3D view if this run's numbers are not in it yet. */
+  private redraw3d(): void {
+    if (!this.threeDPending) return;
+    this.threeDPending = false;
+    this.host.firstNumbersShown();
   }
 
   private stage(name: 'current' | 'sweeps' | 'map' | 'done'): void {
@@ -297,12 +356,13 @@ export class PageCompute {
 
   private cancelled(r: PageResults): void {
     this.host.results = r.current ? r : this.host.results;
-    this.host.renderAll();
+    this.renderNow();
     this.status('Cancelled: the sweeps are incomplete. Change any control to compute again.');
     byId('cancel').hidden = true;
     this.abort = null;
     this.lastComputeKey = '';
     this.setPhase('done');
+    this.redraw3d();
   }
 
   private fail(message: string): void {

@@ -14,7 +14,9 @@ export {
   mapDepths,
   SWEEP_FRACTIONS,
 } from './designSpace';
+export { inputKey } from './inputKey';
 export { FLAG_MESSAGES, type PointResult, type WheelInput, type WheelSolution } from './modelResults';
+export { OutcomeCache } from './outcomeCache';
 export { type PageStudies, pageStudies } from './pageStudies';
 export { type AxisPick, ResultCube } from './resultCube';
 export { rideCurvesKey, solveRideJob } from './rideJob';

@@ -6,6 +6,8 @@
  */
 import type { JobRunner } from '../engine/jobRunner';
 import { runCases, type SweepProgress } from '../engine/runCases';
+import { inputKey } from './inputKey';
+import type { OutcomeCache } from './outcomeCache';
 import type { AxisPick } from './resultCube';
 import { type CaseLanded, type StudyResult, studyLanding } from './studyLanding';
 import type { StudyPlan } from './studyPlan';
@@ -22,6 +24,9 @@ export interface RunStudiesOptions {
   now?: () => number;
   /** Keep the numbers in the studies' cubes (default true); a streaming caller passes false. */
   keep?: boolean;
+  /** Solved cases kept across runs: a case whose exact input is kept lands from it (first, before any
+   * solve) and is not solved again; every case solved by this run is kept. */
+  cache?: OutcomeCache;
 }
 
 export interface StudiesOutcome {
@@ -49,13 +54,31 @@ export async function runStudies(
 ): Promise<StudiesOutcome> {
   const landing = studyLanding(plans, options.keep ?? true, options.onCase);
   const { results, inputs } = landing;
-  const summary = await runCases(runner, inputs, {
+  // Cases kept from an earlier run land now; the rest are solved (and kept).
+  const cache = options.cache;
+  const keys = cache ? inputs.map(inputKey) : [];
+  const toSolve: number[] = [];
+  inputs.forEach((_, i) => {
+    const hit = cache?.take(keys[i]!, i);
+    if (hit) landing.land(hit);
+    else toSolve.push(i);
+  });
+  if (toSolve.length === 0) {
+    const cancelled = options.signal?.aborted ?? false;
+    return { results, cancelled, failedCount: landing.unplannedCount, workersReplaced: 0 };
+  }
+  const solving = toSolve.length === inputs.length ? inputs : toSolve.map((i) => inputs[i]!);
+  const summary = await runCases(runner, solving, {
     ...(options.signal ? { signal: options.signal } : {}),
     ...(options.onProgress ? { onProgress: options.onProgress } : {}),
     ...(options.jobsPerWorker !== undefined ? { jobsPerWorker: options.jobsPerWorker } : {}),
     ...(options.now ? { now: options.now } : {}),
     ...(options.reportStart ? { reportStart: true } : {}),
-    onOutcome: (o) => landing.land(o),
+    onOutcome: (o) => {
+      const i = toSolve[o.caseIndex]!;
+      if (cache && o.ok) cache.keep(keys[i]!, o);
+      landing.land({ ...o, caseIndex: i });
+    },
   });
   const failedCount = landing.unplannedCount + summary.failedCount;
   return { results, cancelled: summary.cancelled, failedCount, workersReplaced: summary.workersReplaced };

@@ -24,6 +24,7 @@ import { WorkerPool } from '../../../src/compute/engine/workerPool';
 import {
   type AxisPick,
   isUnplanned,
+  OutcomeCache,
   pageStudies,
   runStudies,
   type StudyPlan,
@@ -109,42 +110,51 @@ describe("the page's studies, run on a pool and read by axis name, equal the ref
       if (studies.quick) plans.push(studies.quick);
       if (studies.baseline) plans.push(studies.baseline.curve, studies.baseline.cover, studies.baseline.map);
       const pool = new WorkerPool(inProcessSpawner().spawn, 2);
-      let results: StudyResult[];
+      // Solved once on the pool (kept as the page keeps them), then again: every case from the kept ones.
+      const cache = new OutcomeCache(64e6);
+      const runs: StudyResult[][] = [];
       try {
-        const out = await runStudies(pool, plans);
-        expect(out.failedCount).toBe(0);
-        results = out.results;
+        for (let pass = 0; pass < 2; pass++) {
+          const out = await runStudies(pool, plans, { cache });
+          expect(out.failedCount).toBe(0);
+          runs.push(out.results);
+        }
       } finally {
         pool.close();
       }
-      const byPlan = new Map(plans.map((p, i) => [p, results[i]!]));
-      const check = (what: string, plan: StudyPlan, k: number, at: AxisPick, expected: SolvedRef) => {
-        expect(inputHash(plan, k), `${what}: model input`).toBe(expected.input);
-        expect(caseBytes(byPlan.get(plan)!, at), `${what}: packed result bytes`).toBe(expected.packed);
-      };
-      check('current', studies.current, 0, {}, ref.current);
-      if (studies.quick) check('current, first pass', studies.quick, 0, {}, ref.quick);
-      ref.family.forEach((expected: SolvedRef, k: number) => {
-        check(`family ${k}`, studies.family, k, { coverFraction: k }, expected);
-      });
-      ref.cover.forEach((expected: SolvedRef, k: number) => {
-        check(`cover ${k}`, studies.cover, k, { coverFraction: k }, expected);
-      });
-      const nx = ref.axes.mapFractions.length;
-      ref.map.forEach((expected: SolvedRef, i: number) => {
-        const at = { rimDepth: Math.floor(i / nx), coverFraction: i % nx };
-        check(`map ${i}`, studies.map, i, at, expected);
-      });
-      expect(studies.family.inputs.length).toBe(ref.family.length);
-      expect(studies.cover.inputs.length).toBe(ref.cover.length);
-      expect(studies.map.inputs.length).toBe(ref.map.length);
-      expect(studies.notes).toEqual(ref.notes);
-      if (studies.baseline) {
-        check('baseline curve', studies.baseline.curve, 0, {}, ref.baseline.curve);
-        check('baseline cover', studies.baseline.cover, 0, {}, ref.baseline.cover);
-        check('baseline map', studies.baseline.map, 0, {}, ref.baseline.map);
-      } else {
-        expect(ref.baseline).toBeNull();
+      for (const [pass, results] of runs.entries()) {
+        const byPlan = new Map(plans.map((p, i) => [p, results[i]!]));
+        const check = (what: string, plan: StudyPlan, k: number, at: AxisPick, expected: SolvedRef) => {
+          expect(inputHash(plan, k), `${what}: model input`).toBe(expected.input);
+          expect(
+            caseBytes(byPlan.get(plan)!, at),
+            `${what}: packed result bytes, ${pass === 0 ? 'solved' : 'kept'}`,
+          ).toBe(expected.packed);
+        };
+        check('current', studies.current, 0, {}, ref.current);
+        if (studies.quick) check('current, first pass', studies.quick, 0, {}, ref.quick);
+        ref.family.forEach((expected: SolvedRef, k: number) => {
+          check(`family ${k}`, studies.family, k, { coverFraction: k }, expected);
+        });
+        ref.cover.forEach((expected: SolvedRef, k: number) => {
+          check(`cover ${k}`, studies.cover, k, { coverFraction: k }, expected);
+        });
+        const nx = ref.axes.mapFractions.length;
+        ref.map.forEach((expected: SolvedRef, i: number) => {
+          const at = { rimDepth: Math.floor(i / nx), coverFraction: i % nx };
+          check(`map ${i}`, studies.map, i, at, expected);
+        });
+        expect(studies.family.inputs.length).toBe(ref.family.length);
+        expect(studies.cover.inputs.length).toBe(ref.cover.length);
+        expect(studies.map.inputs.length).toBe(ref.map.length);
+        expect(studies.notes).toEqual(ref.notes);
+        if (studies.baseline) {
+          check('baseline curve', studies.baseline.curve, 0, {}, ref.baseline.curve);
+          check('baseline cover', studies.baseline.cover, 0, {}, ref.baseline.cover);
+          check('baseline map', studies.baseline.map, 0, {}, ref.baseline.map);
+        } else {
+          expect(ref.baseline).toBeNull();
+        }
       }
     }, 120_000);
   }
