@@ -65,10 +65,10 @@ export class App implements ComputeHost, ActionsHost, StudyHost, ReportHost {
   private readonly mapPick = new MapPick(this);
   private readonly mapRide = new MapRide(this);
   private readonly view3dGlue = new View3dGlue(this);
-  /** The two panels (built, and their code loaded, when first opened), each with its own worker. */
+  /** The two panels (built, and their code loaded, when first opened), each with its own task channel. */
   private readonly roadGlue = new RoadGlue(this);
   private readonly dataGlue = new DataGlue(this, (hash) => this.store.autosave.dataFor(hash));
-  /** The design study tab (built when first opened), with its own worker. */
+  /** The design study tab (built when first opened), with its own task channel. */
   private readonly studyGlue = new StudyGlue(this);
   private lastCaseKey = '';
 
