@@ -148,18 +148,21 @@ export class TaskWorkers {
   private worker(slot: number): WorkerHandle {
     let w = this.slots[slot];
     if (!w) {
-      w = this.spawn();
-      w.failed.catch(() => undefined);
-      this.slots[slot] = w;
+      const spawned = this.spawn();
+      // A worker that dies, even idle, leaves its slot at once: the next task gets a fresh one.
+      void crashedOf(spawned).then(() => this.retire(slot, spawned));
+      this.slots[slot] = spawned;
+      w = spawned;
     }
     return w;
   }
 
-  /** Stop a slot's worker, and empty the slot if it still holds it. */
+  /** Stop a slot's worker and empty the slot, if the slot still holds it (else it was retired). */
   private retire(slot: number, handle: WorkerHandle | null): void {
-    handle?.terminate();
+    if (handle === null || this.slots[slot] !== handle) return;
+    handle.terminate();
+    this.slots[slot] = null;
     for (const [affinity, home] of this.homes) if (home === handle) this.homes.delete(affinity);
-    if (handle !== null && this.slots[slot] === handle) this.slots[slot] = null;
   }
 
   private async start(slot: number, q: Queued): Promise<void> {

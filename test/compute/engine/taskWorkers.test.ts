@@ -83,6 +83,17 @@ describe('TaskWorkers', () => {
     expect(await wg.runTask(VALIDATE)).toEqual({ status: 'failed', error: 'worker 2 crashed' });
   });
 
+  it('replaces a worker that dies while idle before its next task (which it would otherwise fail)', async () => {
+    const f = fakes(async (_t, _p, n) => `answer ${n}`);
+    const w = new TaskWorkers(f.spawn, 2);
+    await Promise.all([w.runTask(VALIDATE), w.runTask(VALIDATE)]);
+    f.crash(1);
+    f.crash(2);
+    await tick();
+    expect(f.counts()).toEqual({ spawned: 2, terminated: 2 });
+    expect(await w.runTask(VALIDATE)).toEqual({ status: 'done', value: 'answer 3' });
+  });
+
   it('takes a worker past the deadline as hung: stopped, retried once, then reported', async () => {
     const f = fakes(async (_t, _p, n) => (n === 1 ? never() : `answer ${n}`));
     const w = new TaskWorkers(f.spawn, 1);
