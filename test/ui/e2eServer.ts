@@ -1,7 +1,9 @@
 /** Helpers of the browser tests: the page built, served and opened (port and server helpers from the adversarial harness). */
 import { execFileSync, spawn } from 'node:child_process';
-import { join } from 'node:path';
+import { existsSync, mkdirSync } from 'node:fs';
+import { join, resolve } from 'node:path';
 import { type Browser, chromium } from 'playwright-core';
+import { afterAll, beforeAll, describe } from 'vitest';
 import { freePort, waitForServer } from '../adversarial/pageHarness';
 
 export { freePort, waitForServer };
@@ -54,4 +56,32 @@ export async function startE2ePage(root: string, dist: string, chromiumPath: str
       if (server.exitCode === null) server.kill('SIGTERM');
     },
   };
+}
+
+/** The project's root, where browser tests write their outputs (test-results/), and the system's Chromium. */
+export const E2E_ROOT = resolve(__dirname, '../..');
+export const E2E_OUT = join(E2E_ROOT, 'test-results');
+export const CHROMIUM = '/usr/bin/chromium';
+export const haveBrowser = existsSync(CHROMIUM);
+export const requireBrowser = process.env.COVERSWEEP_REQUIRE_BROWSER === '1';
+
+/** A describe for browser tests: skipped where Chromium is missing, unless COVERSWEEP_REQUIRE_BROWSER=1,
+ * where the missing browser fails instead (CI sets it). */
+export const describeInBrowser = describe.skipIf(!haveBrowser && !requireBrowser);
+
+/**
+ * Register the enclosing describe's hooks: build the page into test-results/<distName>, serve it and launch
+ * Chromium before the tests (`ready` receives the page and browser), and close both after them.
+ */
+export function servePage(distName: string, ready: (page: E2ePage) => void): void {
+  let served: E2ePage | null = null;
+  beforeAll(async () => {
+    if (!haveBrowser) throw new Error(`${CHROMIUM} is missing and COVERSWEEP_REQUIRE_BROWSER=1`);
+    mkdirSync(E2E_OUT, { recursive: true });
+    served = await startE2ePage(E2E_ROOT, join(E2E_OUT, distName), CHROMIUM);
+    ready(served);
+  }, 300_000);
+  afterAll(async () => {
+    await served?.close();
+  });
 }

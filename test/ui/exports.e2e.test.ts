@@ -4,23 +4,19 @@
  * caption or header block (the version from package.json, today's date); CALIBRATED appears only once the
  * calibrated model is in use.
  */
-import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
-import { join, resolve } from 'node:path';
+import { readFileSync, writeFileSync } from 'node:fs';
+import { join } from 'node:path';
 import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { expect, it } from 'vitest';
 import type { AppState } from '../../src/ui/appState';
-import { type E2ePage, startE2ePage } from './e2eServer';
+import { describeInBrowser, E2E_OUT, E2E_ROOT, servePage } from './e2eServer';
 
 interface Inspect {
   coversweep: { state(): AppState; comparison(): { calibration?: unknown } | null };
 }
 
-const ROOT = resolve(__dirname, '../..');
-const CHROMIUM = '/usr/bin/chromium';
-const OUT = join(ROOT, 'test-results');
-const DIST = join(OUT, 'ui-dist-exports');
-const haveBrowser = existsSync(CHROMIUM);
-const requireBrowser = process.env.COVERSWEEP_REQUIRE_BROWSER === '1';
+const ROOT = E2E_ROOT;
+const OUT = E2E_OUT;
 const VERSION = (JSON.parse(readFileSync(join(ROOT, 'package.json'), 'utf8')) as { version: string }).version;
 const NAME = 'Export trial wheel';
 const STEM = 'Export-trial-wheel';
@@ -62,20 +58,11 @@ function pngSize(bytes: Buffer): { width: number; height: number } {
   return { width: bytes.readUInt32BE(16), height: bytes.readUInt32BE(20) };
 }
 
-describe.skipIf(!haveBrowser && !requireBrowser)('exports in headless Chromium', () => {
+describeInBrowser('exports in headless Chromium', () => {
   let browser: Browser;
   let base = '';
-  let served: E2ePage | null = null;
-
-  beforeAll(async () => {
-    if (!haveBrowser) throw new Error(`${CHROMIUM} is missing and COVERSWEEP_REQUIRE_BROWSER=1`);
-    mkdirSync(OUT, { recursive: true });
-    served = await startE2ePage(ROOT, DIST, CHROMIUM);
+  servePage('ui-dist-exports', (served) => {
     ({ base, browser } = served);
-  }, 300_000);
-
-  afterAll(async () => {
-    await served?.close();
   });
 
   it('PNG (>= 1600 px) and SVG of a yaw plot, the road and data CSVs: the design as it is now, version, date, CALIBRATED only when calibrated', async () => {

@@ -1,20 +1,12 @@
-import { existsSync, mkdirSync, readFileSync } from 'node:fs';
-import { join, resolve } from 'node:path';
+import { readFileSync } from 'node:fs';
 import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { expect, it } from 'vitest';
 import type { AppState } from '../../src/ui/appState';
-import { type E2ePage, startE2ePage } from './e2eServer';
+import { describeInBrowser, servePage } from './e2eServer';
 
 interface Inspect {
   coversweep: { state(): AppState };
 }
-
-const ROOT = resolve(__dirname, '../..');
-const CHROMIUM = '/usr/bin/chromium';
-const OUT = join(ROOT, 'test-results');
-const DIST = join(OUT, 'ui-dist-fixes12');
-const haveBrowser = existsSync(CHROMIUM);
-const requireBrowser = process.env.COVERSWEEP_REQUIRE_BROWSER === '1';
 
 const state = (page: Page) => page.evaluate(() => (window as unknown as Inspect).coversweep.state());
 
@@ -36,20 +28,11 @@ async function setNumberControl(page: Page, field: string, value: string): Promi
   await input.press('Enter');
 }
 
-describe.skipIf(!haveBrowser && !requireBrowser)('page fixes in headless Chromium', () => {
+describeInBrowser('page fixes in headless Chromium', () => {
   let browser: Browser;
   let base = '';
-  let served: E2ePage | null = null;
-
-  beforeAll(async () => {
-    if (!haveBrowser) throw new Error(`${CHROMIUM} is missing and COVERSWEEP_REQUIRE_BROWSER=1`);
-    mkdirSync(OUT, { recursive: true });
-    served = await startE2ePage(ROOT, DIST, CHROMIUM);
+  servePage('ui-dist-fixes12', (served) => {
     ({ base, browser } = served);
-  }, 300_000);
-
-  afterAll(async () => {
-    await served?.close();
   });
 
   it('the 3D yaw control redraws the view; exports follow the edited design; the map CSV names its conditions; a damaged link keeps the design', async () => {

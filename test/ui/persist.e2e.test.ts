@@ -4,25 +4,21 @@
 // a reload brings them back from the autosave; the link, opened where the data is not, says the data
 // must be imported again and, once the same file is, restores its mapping and fit.
 // Waits on the page's own state marks (data-state), never on timers.
-import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
-import { join, resolve } from 'node:path';
+import { readFileSync, writeFileSync } from 'node:fs';
+import { join } from 'node:path';
 import type { Browser, BrowserContext, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, expect, it } from 'vitest';
 import type { CompareReport } from '../../src/compute/compare/index';
 import { type AppState, stateToProjectText } from '../../src/ui/appState';
-import { type E2ePage, startE2ePage } from './e2eServer';
+import { describeInBrowser, E2E_OUT, E2E_ROOT, servePage } from './e2eServer';
 
 interface Inspect {
   coversweep: { state(): AppState; comparison(): CompareReport | null };
 }
 
-const ROOT = resolve(__dirname, '../..');
-const CHROMIUM = '/usr/bin/chromium';
-const OUT = join(ROOT, 'test-results');
-const DIST = join(OUT, 'ui-dist-persist');
+const ROOT = E2E_ROOT;
+const OUT = E2E_OUT;
 const CSV = join(ROOT, 'public/demo/demo-tunnel.csv');
-const haveBrowser = existsSync(CHROMIUM);
-const requireBrowser = process.env.COVERSWEEP_REQUIRE_BROWSER === '1';
 
 const state = (page: Page) => page.evaluate(() => (window as unknown as Inspect).coversweep.state());
 
@@ -56,22 +52,16 @@ function mappingShown(page: Page) {
 
 const fitTable = (page: Page) => page.locator('#table-data-fit tbody').textContent();
 
-describe.skipIf(!haveBrowser && !requireBrowser)('imported data kept, in headless Chromium', () => {
+describeInBrowser('imported data kept, in headless Chromium', () => {
   let browser: Browser;
   let base = '';
-  let served: E2ePage | null = null;
   const contexts: BrowserContext[] = [];
-
-  beforeAll(async () => {
-    if (!haveBrowser) throw new Error(`${CHROMIUM} is missing and COVERSWEEP_REQUIRE_BROWSER=1`);
-    mkdirSync(OUT, { recursive: true });
-    served = await startE2ePage(ROOT, DIST, CHROMIUM);
+  servePage('ui-dist-persist', (served) => {
     ({ base, browser } = served);
-  }, 300_000);
+  });
 
   afterAll(async () => {
     for (const c of contexts) await c.close();
-    await served?.close();
   });
 
   async function freshPage(url = base): Promise<Page> {

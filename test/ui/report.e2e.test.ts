@@ -5,14 +5,14 @@
  * numbers agree with the page (headline card, ride document, Help's validation table), its plots are
  * drawn at print resolution, and Chromium's PDF of it is one valid A4 page and one Letter page.
  */
-import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
-import { join, resolve } from 'node:path';
+import { readFileSync, writeFileSync } from 'node:fs';
+import { join } from 'node:path';
 import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { expect, it } from 'vitest';
 import type { RideDocument } from '../../src/compute/ride/index';
 import { type AppState, stateToHash } from '../../src/ui/appState';
 import { PRINTABLE_HEIGHT_MM } from '../../src/ui/report/fitToPage';
-import { type E2ePage, startE2ePage } from './e2eServer';
+import { describeInBrowser, E2E_OUT, E2E_ROOT, servePage } from './e2eServer';
 import { pdfPageCount } from './pdfPageCount';
 
 interface Inspect {
@@ -20,12 +20,8 @@ interface Inspect {
   reportPrints?: number;
 }
 
-const ROOT = resolve(__dirname, '../..');
-const CHROMIUM = '/usr/bin/chromium';
-const OUT = join(ROOT, 'test-results');
-const DIST = join(OUT, 'ui-dist-report');
-const haveBrowser = existsSync(CHROMIUM);
-const requireBrowser = process.env.COVERSWEEP_REQUIRE_BROWSER === '1';
+const ROOT = E2E_ROOT;
+const OUT = E2E_OUT;
 const VERSION = (JSON.parse(readFileSync(join(ROOT, 'package.json'), 'utf8')) as { version: string }).version;
 const SECTIONS = ['header', 'design', 'headline', 'plots', 'cautions', 'calibration', 'ride', 'validation'];
 const FIGURES = ['drag-yaw', 'side-yaw', 'handling', 'drag-cover', 'map'];
@@ -61,20 +57,11 @@ const sectionText = (page: Page, id: string) =>
     .textContent()
     .then((t) => t ?? '');
 
-describe.skipIf(!haveBrowser && !requireBrowser)('printable report in headless Chromium', () => {
+describeInBrowser('printable report in headless Chromium', () => {
   let browser: Browser;
   let base = '';
-  let served: E2ePage | null = null;
-
-  beforeAll(async () => {
-    if (!haveBrowser) throw new Error(`${CHROMIUM} is missing and COVERSWEEP_REQUIRE_BROWSER=1`);
-    mkdirSync(OUT, { recursive: true });
-    served = await startE2ePage(ROOT, DIST, CHROMIUM);
+  servePage('ui-dist-report', (served) => {
     ({ base, browser } = served);
-  }, 300_000);
-
-  afterAll(async () => {
-    await served?.close();
   });
 
   it('prints the current design, its figures, ride, calibration and validation on one page', async () => {

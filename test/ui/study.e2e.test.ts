@@ -1,25 +1,19 @@
-import { existsSync, mkdirSync } from 'node:fs';
-import { join, resolve } from 'node:path';
+import { join } from 'node:path';
 import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { expect, it } from 'vitest';
 import { designContext } from '../../src/compute/design/designContext';
 import { applyDesign } from '../../src/compute/design/designVariables';
 import { evaluateDesign } from '../../src/compute/design/evaluateDesign';
 import type { StudyDocument } from '../../src/compute/design/index';
 import type { RideFile } from '../../src/compute/ride/index';
 import type { AppState } from '../../src/ui/appState';
-import { type E2ePage, startE2ePage } from './e2eServer';
+import { describeInBrowser, E2E_OUT, servePage } from './e2eServer';
 
 interface Inspect {
   coversweep: { state(): AppState; study(): StudyDocument | null };
 }
 
-const ROOT = resolve(__dirname, '../..');
-const CHROMIUM = '/usr/bin/chromium';
-const OUT = join(ROOT, 'test-results');
-const DIST = join(OUT, 'ui-dist-study');
-const haveBrowser = existsSync(CHROMIUM);
-const requireBrowser = process.env.COVERSWEEP_REQUIRE_BROWSER === '1';
+const OUT = E2E_OUT;
 
 const state = (page: Page) => page.evaluate(() => (window as unknown as Inspect).coversweep.state());
 const studyDoc = (page: Page) => page.evaluate(() => (window as unknown as Inspect).coversweep.study());
@@ -37,21 +31,12 @@ async function studyStatus(page: Page, states: string[]): Promise<string> {
   return page.evaluate(() => document.getElementById('study-status')?.dataset.state ?? '');
 }
 
-describe.skipIf(!haveBrowser && !requireBrowser)('design study tab in headless Chromium', () => {
+describeInBrowser('design study tab in headless Chromium', () => {
   let browser: Browser;
   let base = '';
-  let served: E2ePage | null = null;
   const errors: string[] = [];
-
-  beforeAll(async () => {
-    if (!haveBrowser) throw new Error(`${CHROMIUM} is missing and COVERSWEEP_REQUIRE_BROWSER=1`);
-    mkdirSync(OUT, { recursive: true });
-    served = await startE2ePage(ROOT, DIST, CHROMIUM);
+  servePage('ui-dist-study', (served) => {
     ({ base, browser } = served);
-  }, 300_000);
-
-  afterAll(async () => {
-    await served?.close();
   });
 
   it('runs the 6 x 4 grid study; its optimum is the brute-force best cell; a row becomes the current design, with undo', async () => {

@@ -1,39 +1,21 @@
-// The Design study tab's "More design variables" in headless Chromium: ticking "Vary the covered sides"
-// runs the study over both choices (twice the designs), a bad spoke count is refused beside its input
-// with the rule, and a chosen design takes its covered sides as well as its cover fraction and rim depth.
-import { existsSync, mkdirSync } from 'node:fs';
-import { join, resolve } from 'node:path';
+import { join } from 'node:path';
 import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { expect, it } from 'vitest';
 import type { StudyDocument } from '../../src/compute/design/index';
 import type { AppState } from '../../src/ui/appState';
-import { type E2ePage, startE2ePage } from './e2eServer';
+import { describeInBrowser, E2E_OUT, servePage } from './e2eServer';
 
 interface Inspect {
   coversweep: { state(): AppState; study(): StudyDocument | null };
 }
 
-const ROOT = resolve(__dirname, '../..');
-const CHROMIUM = '/usr/bin/chromium';
-const OUT = join(ROOT, 'test-results');
-const DIST = join(OUT, 'ui-dist-study-more');
-const haveBrowser = existsSync(CHROMIUM);
-const requireBrowser = process.env.COVERSWEEP_REQUIRE_BROWSER === '1';
+const OUT = E2E_OUT;
 
-describe.skipIf(!haveBrowser && !requireBrowser)('more design variables in the study tab', () => {
+describeInBrowser('more design variables in the study tab', () => {
   let browser: Browser;
   let base = '';
-  let served: E2ePage | null = null;
-
-  beforeAll(async () => {
-    if (!haveBrowser) throw new Error(`${CHROMIUM} is missing and COVERSWEEP_REQUIRE_BROWSER=1`);
-    mkdirSync(OUT, { recursive: true });
-    served = await startE2ePage(ROOT, DIST, CHROMIUM);
+  servePage('ui-dist-study-more', (served) => {
     ({ base, browser } = served);
-  }, 300_000);
-
-  afterAll(async () => {
-    await served?.close();
   });
 
   it('varies the covered sides too, refuses a bad spoke count beside it, and a chosen row takes its sides', async () => {

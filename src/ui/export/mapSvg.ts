@@ -10,6 +10,7 @@ import { marchingSquares, niceLevels } from '../marchingSquares';
 import { captionSvg, SVG_FONT } from './captionSvg';
 import { escapeXml } from './escapeXml';
 import type { SvgFigure } from './plotSvg';
+import { svgCoord, svgTick } from './svgNumbers';
 
 const WIDTH = 900;
 const PLOT_H = 520;
@@ -18,8 +19,8 @@ const RIGHT = 110;
 /** Most shading cells (sub-cells of the grid) in one SVG. */
 const MAX_CELLS = 40_000;
 
-const tick = (v: number): string => String(Number(v.toPrecision(4)));
-const r2 = (v: number): string => String(Math.round(v * 100) / 100);
+const tick = svgTick;
+const r2 = svgCoord;
 
 export function mapSvg(d: MapData, caption: readonly string[]): SvgFigure {
   const nx = d.xs.length;

@@ -9,6 +9,7 @@ import { niceLevels } from '../marchingSquares';
 import { beyondYawIntervals } from '../yawTrust';
 import { captionSvg, SVG_FONT } from './captionSvg';
 import { escapeXml } from './escapeXml';
+import { svgCoord, svgTick } from './svgNumbers';
 
 export interface SvgFigure {
   svg: string;
@@ -24,8 +25,8 @@ const LEFT = 70;
 const LEGEND_ROW = 18;
 const PER_ROW = 3;
 
-const tick = (v: number): string => String(Number(v.toPrecision(4)));
-const r2 = (v: number): string => String(Math.round(v * 100) / 100);
+const tick = svgTick;
+const r2 = svgCoord;
 
 function range(values: Iterable<number | null>): [number, number] {
   let lo = Number.POSITIVE_INFINITY;

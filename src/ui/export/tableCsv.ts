@@ -5,6 +5,7 @@
  */
 import { toCsv } from '../csv';
 import type { Cell } from '../dataTable';
+import { checkTableRows } from './checkTableRows';
 import type { ExportMeta } from './exportMeta';
 import { metaHeaderLines } from './metaHeaderLines';
 
@@ -15,9 +16,7 @@ export function tableCsv(
   rows: ReadonlyArray<ReadonlyArray<Cell>>,
   extra: readonly string[] = [],
 ): string {
-  if (rows.some((r) => r.length !== headers.length)) {
-    throw new RangeError(`tableCsv: every row must have ${headers.length} cells, one per header`);
-  }
+  checkTableRows('tableCsv', headers, rows);
   const head = metaHeaderLines(meta, title, extra).map(([k, v]) => `# ${k}: ${v}`);
   return `${head.join('\r\n')}\r\n${toCsv(headers, rows)}`;
 }

@@ -4,6 +4,7 @@
  * units) and the rows as arrays. Numbers that are not finite are written as null.
  */
 import type { Cell } from '../dataTable';
+import { checkTableRows } from './checkTableRows';
 import type { ExportMeta } from './exportMeta';
 
 export const TABLE_FORMAT = 'coversweep-table';
@@ -16,9 +17,7 @@ export function tableJson(
   rows: ReadonlyArray<ReadonlyArray<Cell>>,
   extra: readonly string[] = [],
 ): string {
-  if (rows.some((r) => r.length !== headers.length)) {
-    throw new RangeError(`tableJson: every row must have ${headers.length} cells, one per header`);
-  }
+  checkTableRows('tableJson', headers, rows);
   const doc = {
     format: TABLE_FORMAT,
     version: TABLE_VERSION,
