@@ -694,7 +694,9 @@ describe.skipIf(!haveBrowser && !requireBrowser)('web page in headless Chromium'
 
     // The task workers crash (the one holding the parsed table with them): comparing again reads the
     // table afresh from the text the panel keeps, on a fresh worker, and gives the same report.
-    expect(await page.evaluate(() => (window as unknown as Inspect).coversweep.crashTaskWorkers())).toBe(2);
+    // (At least the one that read the table is live; the other is started only when a task needs it.)
+    const crashed = await page.evaluate(() => (window as unknown as Inspect).coversweep.crashTaskWorkers());
+    expect(crashed).toBeGreaterThanOrEqual(1);
     await page.evaluate(() => {
       const panel = document.getElementById('panel-data')!;
       const seen: string[] = [];
