@@ -16,7 +16,7 @@ import { DataGlue } from './dataGlue';
 import type { DataPlotName } from './dataPanel';
 import { DesignMap } from './designMap';
 import type { DurableCopy } from './durableAutosave';
-import { crashPoolWorker, hangPoolWorkers } from './earlyPool';
+import { workerTestHooks } from './earlyPool';
 import { setExportSource } from './export/exportContext';
 import { mapSvg } from './export/mapSvg';
 import { plotSvg } from './export/plotSvg';
@@ -65,10 +65,10 @@ export class App implements ComputeHost, ActionsHost, StudyHost, ReportHost {
   private readonly mapPick = new MapPick(this);
   private readonly mapRide = new MapRide(this);
   private readonly view3dGlue = new View3dGlue(this);
-  /** The two panels (built, and their code loaded, when first opened), each with its own worker. */
+  /** The two panels (built, and their code loaded, when first opened), each with its own task channel. */
   private readonly roadGlue = new RoadGlue(this);
   private readonly dataGlue = new DataGlue(this, (hash) => this.store.autosave.dataFor(hash));
-  /** The design study tab (built when first opened), with its own worker. */
+  /** The design study tab (built when first opened), with its own task channel. */
   private readonly studyGlue = new StudyGlue(this);
   private lastCaseKey = '';
 
@@ -161,7 +161,7 @@ export class App implements ComputeHost, ActionsHost, StudyHost, ReportHost {
     this.store.reportStartupKept();
     // Inspection for the browser tests and the curious: what each plot shows, the state, the last ride
     // and comparison. The browser tests' build (vite build --mode e2e) adds hooks that crash or hang a
-    // sweep worker as a real fault would; the production build leaves them out.
+    // sweep or task worker as a real fault would; the production build leaves them out.
     const inspect: Record<string, unknown> = {
       plot: (name: PlotName) => this.plotSpec(name),
       state: () => structuredClone(this.state),
@@ -169,10 +169,7 @@ export class App implements ComputeHost, ActionsHost, StudyHost, ReportHost {
       comparison: () => structuredClone(this.dataGlue.lastReport() ?? null),
       study: () => structuredClone(this.studyGlue.lastDocument()),
     };
-    if (import.meta.env.MODE === 'e2e') {
-      inspect.crashWorker = () => crashPoolWorker();
-      inspect.hangWorkers = (deadlineMs: number) => hangPoolWorkers(deadlineMs);
-    }
+    if (import.meta.env.MODE === 'e2e') Object.assign(inspect, workerTestHooks());
     (window as unknown as { coversweep: unknown }).coversweep = inspect;
   }
 

@@ -233,7 +233,7 @@ export class AutosaveStore {
     if (this.dataFailed?.hash === data.hash) return this.dataFailed.note;
     if (this.dataKept === data.hash) return null;
     const chars = data.csv?.length ?? data.chars ?? 0;
-    // A reference only (a link, or rows held back in the data worker): whatever is stored stays.
+    // A reference only (a link, or rows held back in the task worker): whatever is stored stays.
     if (data.csv === undefined && chars <= MAX_AUTOSAVED_DATA_CHARS) return null;
     try {
       if (this.storedHash() === data.hash) {

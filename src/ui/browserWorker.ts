@@ -1,29 +1,19 @@
 /**
- * The page's Web Workers, wrapped by comlink: the pool's solver worker (workers/solver.worker.ts: the
- * sweeps and the tasks) and the data panel's worker (src/ui/dataJobs.worker.ts). `failed` rejects when a
- * worker reports an uncaught error or cannot load, or when `crash()` stops it (the page's test hook for
- * a worker dying mid-sweep, and the watchdog's way to stop a hung one: terminate() alone would leave a
- * call waiting forever, as a real crash does not).
+ * The page's Web Workers, wrapped by comlink: the pool's solver workers (workers/solver.worker.ts: the
+ * sweeps and the tasks, the data panel's too). `failed` rejects when a worker reports an uncaught error
+ * or cannot load, or when `crash()` stops it (the page's test hook for a worker dying mid-sweep, and the
+ * watchdog's way to stop a hung one: terminate() alone would leave a call waiting forever, as a real
+ * crash does not).
  */
 import { type Remote, wrap } from 'comlink';
 import type { SolverApi } from '../compute/engine/protocol';
 import type { WorkerHandle } from '../compute/engine/workerPool';
-import type { DataJobsApi } from './dataJobs';
 
 export interface BrowserWorkerHandle extends WorkerHandle {
   /** The worker's own interface (`api` may be wrapped, e.g. by the watchdog). */
   readonly rawApi: Remote<SolverApi>;
   /** Stop the worker as if it had crashed: terminate it and reject `failed` (with `reason`). */
   crash(reason?: string): void;
-}
-
-/** The data panel's worker: its tables and their comparison. */
-export type PageWorkerApi = DataJobsApi & { ping(): string };
-
-export interface PageJobsHandle {
-  api: Remote<PageWorkerApi>;
-  failed: Promise<never>;
-  terminate(): void;
 }
 
 function watch(worker: Worker, what: string): { failed: Promise<never>; reject: (error: Error) => void } {
@@ -54,10 +44,4 @@ export function spawnBrowserWorker(): BrowserWorkerHandle {
       reject(new Error(reason));
     },
   };
-}
-
-export function spawnPageJobsWorker(): PageJobsHandle {
-  const worker = new Worker(new URL('./dataJobs.worker.ts', import.meta.url), { type: 'module' });
-  const { failed } = watch(worker, 'data worker');
-  return { api: wrap<PageWorkerApi>(worker), failed, terminate: () => worker.terminate() };
 }

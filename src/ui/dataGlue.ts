@@ -1,19 +1,21 @@
 /**
- * The "Your data" panel's glue: reading and comparing tables in their own background worker (with
- * deadlines), the demo data, using (or dropping) the calibrated model values in the state, and keeping
+ * The "Your data" panel's glue: reading and comparing tables as tasks on the pool's task workers (one
+ * channel, latest wins, with deadlines; the parsed table stays in the worker that read it, and the
+ * panel's later tasks go back to that worker by the table's affinity), the demo data, using (or dropping) the calibrated model values in the state, and keeping
  * the imported data in the state (`data`: its table, mapping and fit) both ways: the panel's changes go
  * into the state (so the autosave, a project file and a link keep them), and a state arriving with data
  * (start-up, a project file, a link, a kept design) is shown in the panel as it was.
  */
 import { type CaseFile, caseAirDensity, parseCaseFile, validateCase } from '../compute/caseFile';
 import type { CalibrationResult } from '../compute/compare/index';
+import type { TableRef } from '../compute/engine/dataTaskTypes';
+import { TaskChannel } from '../compute/engine/taskChannel';
 import type { AppState, CalibrationMark } from './appState';
 import { DATA_SLIP_LABELS } from './data/dataLabels';
 import { pendingText, type SavedData } from './data/savedData';
-import type { PackedResult, ReadOutcome, TableRef, TextOutcome } from './dataJobs';
 import type { DataContext, DataPanel, DataPlotName, DataRunRequest } from './dataPanel';
 import { fmt } from './displayUnits';
-import { JobWorker } from './jobWorker';
+import { pool } from './earlyPool';
 import type { PageHost } from './pageHost';
 import type { DataOverlaySource } from './views/dataOverlay';
 import { byId } from './views/present';
@@ -21,7 +23,8 @@ import { byId } from './views/present';
 export class DataGlue {
   private data: DataPanel | null = null;
   private dataLoading: Promise<DataPanel> | null = null;
-  private readonly dataWorker = new JobWorker();
+  /** The panel's reading and comparing (a cancel stops the worker running it). */
+  private readonly tasks = new TaskChannel(pool);
   /** The last finished comparison, for the yaw plots' overlay (views/dataOverlay). */
   private compared: DataOverlaySource | null = null;
   /** The data last put into the state or shown from it (compared by dataKey). */
@@ -70,7 +73,7 @@ export class DataGlue {
 
   /**
    * `state` with its data's CSV text, for a project file: a table too large to hold in the page is
-   * read again in a worker of its own (the data worker's running job is never displaced).
+   * read again by a task of its own (outside the panel's channel: its running task is never displaced).
    */
   async withText(state: AppState): Promise<AppState> {
     const d = state.data;
@@ -82,10 +85,7 @@ export class DataGlue {
   }
 
   private async tableText(ref: TableRef): Promise<string | null> {
-    const worker = new JobWorker();
-    const size = ref.source.kind === 'file' ? ref.source.file.size : ref.source.text.length;
-    const out = await worker.run<TextOutcome>((api) => api.tableText(ref), readDeadlineMs(size));
-    worker.cancel();
+    const out = await pool.runTask({ kind: 'dataText', ref }, { deadlineMs: readDeadlineMs(ref) });
     return out.status === 'done' && out.value.ok ? out.value.text : null;
   }
 
@@ -121,9 +121,9 @@ export class DataGlue {
       const panel: DataPanel = new DataPanel(byId('panel-data'), {
         context: () => this.dataContext(),
         read: async (ref, context) => {
-          const out = await this.dataWorker.run<ReadOutcome>(
-            (api) => api.readTable(ref, context),
-            readDeadlineMs(ref.source.kind === 'file' ? ref.source.file.size : ref.source.text.length),
+          const out = await this.tasks.run(
+            { kind: 'dataRead', ref, context },
+            { deadlineMs: readDeadlineMs(ref), affinity: tableAffinity(ref) },
           );
           if (out.status === 'superseded' || out.status === 'cancelled') return null;
           if (out.status === 'failed') return { ok: false, errors: [out.error] };
@@ -132,7 +132,7 @@ export class DataGlue {
         onLoadDemo: () => void this.loadDemoData(panel),
         onRun: (request) => void this.runComparison(panel, request),
         onCancel: () => {
-          this.dataWorker.cancel();
+          this.tasks.cancel();
           panel.setStatus('done', 'Cancelled; the results shown are from the last finished run.');
         },
         onUseCalibrated: (use, calibration, points) => this.useCalibrated(use, calibration, points),
@@ -191,9 +191,10 @@ export class DataGlue {
     const caseFile: CaseFile = this.host.state.case;
     panel.setDefaultRanges(caseAirDensity(caseFile));
     const heavy = req.calibrate || req.convergence || req.uncertainty !== null;
-    const out = await this.dataWorker.run<PackedResult>(
-      (api) =>
-        api.compareTable({
+    const out = await this.tasks.run(
+      {
+        kind: 'dataCompare',
+        request: {
           caseFile,
           ref: req.ref,
           map: req.map,
@@ -202,8 +203,9 @@ export class DataGlue {
           calibrate: req.calibrate ? {} : false,
           convergence: req.convergence ? {} : false,
           uncertainty: req.uncertainty ? { ranges: req.uncertainty } : false,
-        }),
-      compareDeadlineMs(req.rowCount, heavy),
+        },
+      },
+      { deadlineMs: compareDeadlineMs(req.rowCount, heavy), affinity: tableAffinity(req.ref) },
     );
     if (out.status === 'superseded' || out.status === 'cancelled') return;
     if (out.status === 'failed') {
@@ -258,13 +260,19 @@ export class DataGlue {
   }
 }
 
+/** The task workers' affinity of a table's tasks: the worker that read it keeps it parsed. */
+function tableAffinity(ref: TableRef): string {
+  return `data-table:${ref.id}`;
+}
+
 /**
- * Deadlines of the data panel's background jobs (a worker silent for longer is taken as hung, replaced
- * and the job retried once): generous on purpose, scaled by the job's size. Reading: 60 s plus 10 s per
- * MB (reading runs at tens of MB/s). Comparing: 60 s plus 2 ms per data row, 50 times that for a fit,
+ * Deadlines of the data panel's tasks (a worker silent for longer is taken as hung, replaced and the
+ * task retried once on a fresh worker, which reads the table again from its source): generous on
+ * purpose, scaled by the task's size. Reading: 60 s plus 10 s per MB (reading runs at tens of MB/s). Comparing: 60 s plus 2 ms per data row, 50 times that for a fit,
  * a convergence study or an uncertainty band (each evaluates the model many times per row).
  */
-function readDeadlineMs(bytes: number): number {
+function readDeadlineMs(ref: TableRef): number {
+  const bytes = ref.source.kind === 'file' ? ref.source.file.size : ref.source.text.length;
   return 60_000 + (10_000 * bytes) / 1_048_576;
 }
 

@@ -16,6 +16,14 @@ import type {
   UncertainRange,
 } from '../compute/compare/index';
 import { validateMap } from '../compute/compare/index';
+import type {
+  PackedComparison,
+  ReadOutcome,
+  TableRef,
+  TableSource,
+  TableSummary,
+} from '../compute/engine/dataTaskTypes';
+import { unpackComparison } from '../compute/engine/packComparison';
 import { buildDataPanelDom } from './data/buildDataPanelDom';
 import type {
   DataContext,
@@ -37,14 +45,6 @@ import {
   savedFit,
 } from './data/savedData';
 import { readUncertaintyRanges, setDefaultRanges } from './data/uncertaintyRanges';
-import {
-  type PackedComparison,
-  type ReadOutcome,
-  type TableRef,
-  type TableSource,
-  type TableSummary,
-  unpackComparison,
-} from './dataJobs';
 import type { PlotSpec } from './linePlot';
 
 export type { DataContext, DataPanelState, DataPlotName, DataRunRequest } from './data/dataPanelTypes';

@@ -29,6 +29,8 @@ export function spawnTracked(): BrowserWorkerHandle {
 }
 
 export const poolWorkers: BrowserWorkerHandle[] = [];
+/** The task workers started (the live ones among them are in liveWorkers), for the test hook. */
+const taskWorkers: BrowserWorkerHandle[] = [];
 
 /** The sweep pool: up to four workers, one per core; and two task workers (the 3D view, ride, study). */
 export const pool = new WorkerPool(
@@ -38,7 +40,14 @@ export const pool = new WorkerPool(
     return h;
   },
   Math.max(1, Math.min(4, navigator.hardwareConcurrency || 2)),
-  { taskWorkers: 2, spawnTask: spawnTracked },
+  {
+    taskWorkers: 2,
+    spawnTask: () => {
+      const h = spawnTracked();
+      taskWorkers.push(h);
+      return h;
+    },
+  },
 );
 
 /** When every sweep worker had loaded and answered (ms after navigation start), for the timings. */
@@ -69,6 +78,21 @@ export function crashPoolWorker(): boolean {
 }
 
 /**
+ * Test hook: crash every live task worker (the data panel's parsed table goes with it; its next task
+ * is read again from the source by a fresh worker). Returns how many were live.
+ */
+export function crashTaskWorkers(): number {
+  let n = 0;
+  for (const h of taskWorkers.splice(0)) {
+    if (!liveWorkers.has(h)) continue;
+    h.crash();
+    liveWorkers.delete(h);
+    n++;
+  }
+  return n;
+}
+
+/**
  * Test hook: make every live sweep worker hang (loop forever) on its next job, with the watchdog's
  * deadline for them cut to `deadlineMs`. Needs the test build's worker (workers/testHang.ts).
  */
@@ -81,4 +105,9 @@ export function hangPoolWorkers(deadlineMs: number): number {
     n++;
   }
   return n;
+}
+
+/** The page's test hooks on its workers (window.coversweep in the browser tests' build only). */
+export function workerTestHooks(): Record<string, unknown> {
+  return { crashWorker: crashPoolWorker, crashTaskWorkers, hangWorkers: hangPoolWorkers };
 }

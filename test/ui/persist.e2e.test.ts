@@ -196,7 +196,7 @@ describeInBrowser('imported data kept, in headless Chromium', () => {
     );
     const before = await state(page);
     expect(before.data?.rows).toBe(60_000);
-    // Its rows stay in the data worker (not handed to the page), and a project file still gets them.
+    // Its rows stay in the task worker that read them (not handed to the page), and a project file still gets them.
     expect(before.data?.csv).toBeUndefined();
     expect(before.data?.chars).toBe(csv.length);
     const [download] = await Promise.all([page.waitForEvent('download'), page.click('#save-project')]);

@@ -212,7 +212,7 @@ describe('the data in the autosave', () => {
     const loaded = new AutosaveStore(s).load();
     const { csv: _c, ...ref } = bigData;
     expect(loaded.kind === 'ok' && loaded.state.data).toEqual(ref);
-    // Rows held back in the data worker (too large to hand to the page): said the same way.
+    // Rows held back in the task worker (too large to hand to the page): said the same way.
     const { csv: _held, ...heldBack } = bigData;
     const held = new AutosaveStore(new MemoryStorage()).save({
       ...state,

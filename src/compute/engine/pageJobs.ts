@@ -1,8 +1,8 @@
 /**
  * A comparison with data as one call that never throws (the result carries the messages): conversion,
  * slips, residuals, the model band and, on request, the calibration, the convergence study and the
- * input-uncertainty band (src/compute/compare). The data panel runs it in its own worker beside the
- * tables it keeps there (src/ui/dataJobs.ts). The page's other tasks are in tasks.ts.
+ * input-uncertainty band (src/compute/compare). The data panel's `dataCompare` task runs the same
+ * comparison on a table kept in a task worker (compute/worker/dataTasks.ts); the tasks are in tasks.ts.
  */
 import { type CompareRequest, type CompareResult, runComparison } from '../compare/index';
 

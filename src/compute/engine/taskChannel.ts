@@ -15,6 +15,8 @@ export type ChannelOutcome<T> = TaskOutcome<T> | { status: 'superseded' };
 export interface ChannelRunOptions {
   onProgress?: TaskProgress;
   deadlineMs?: number;
+  /** Passed on to the runner (TaskRunOptions.affinity: the worker holding the task's state). */
+  affinity?: string;
 }
 
 interface Entry {
@@ -80,7 +82,7 @@ export class TaskChannel {
 
   private async start(entry: Entry): Promise<void> {
     this.running = entry;
-    const { onProgress, deadlineMs } = entry.options;
+    const { onProgress, deadlineMs, affinity } = entry.options;
     const outcome = await this.runner.runTask(entry.task, {
       signal: entry.abort.signal,
       ...(onProgress
@@ -91,6 +93,7 @@ export class TaskChannel {
           }
         : {}),
       ...(deadlineMs !== undefined ? { deadlineMs } : {}),
+      ...(affinity !== undefined ? { affinity } : {}),
     });
     if (this.running !== entry) return; // cancelled meanwhile: already resolved
     const next = this.waiting;

@@ -10,6 +10,12 @@ export interface TaskRunOptions {
   onProgress?: TaskProgress;
   /** A worker that has not answered in this many ms is taken as hung (default: no deadline). */
   deadlineMs?: number;
+  /**
+   * Tasks with the same affinity go to the worker that last finished one of them when it is free (it
+   * holds their state: the data panel's parsed table), else to any free worker (which must then rebuild
+   * that state from the task itself: a task never depends on a worker's memory to be answered).
+   */
+  affinity?: string;
 }
 
 export type TaskOutcome<T> =
@@ -37,6 +43,9 @@ function crashedOf(w: WorkerHandle): Promise<{ crashed: string }> {
   return p;
 }
 
+/** Affinities remembered (the data panel keeps two tables per worker: a few dozen is plenty). */
+const MAX_HOMES = 32;
+
 interface Queued {
   task: TaskOf<TaskKind>;
   options: TaskRunOptions;
@@ -63,6 +72,8 @@ export class TaskWorkers {
   private readonly queue: Queued[] = [];
   /** Tries given up as hung (for status lines and tests). */
   hangs = 0;
+  /** Affinity -> the worker that last finished a task with it (at most MAX_HOMES, oldest dropped). */
+  private readonly homes = new Map<string, WorkerHandle>();
 
   constructor(
     private readonly spawn: SpawnWorker,
@@ -111,26 +122,47 @@ export class TaskWorkers {
     for (let slot = 0; slot < this.size; slot++) this.retire(slot, this.slots[slot] ?? null);
   }
 
+  /** Start queued tasks, first come first served, while a worker is free. */
   private deal(): void {
-    for (let slot = 0; slot < this.size && this.queue.length > 0; slot++) {
-      if (!this.busy[slot]) void this.start(slot, this.queue.shift()!);
+    while (this.queue.length > 0) {
+      const slot = this.freeSlotFor(this.queue[0]!);
+      if (slot < 0) return;
+      void this.start(slot, this.queue.shift()!);
     }
+  }
+
+  /** The task's home worker's slot if that is free, else the first free slot, else -1. */
+  private freeSlotFor(q: Queued): number {
+    const { affinity } = q.options;
+    const home = affinity === undefined ? undefined : this.homes.get(affinity);
+    const at = home === undefined ? -1 : this.slots.indexOf(home);
+    return at >= 0 && !this.busy[at] ? at : this.busy.indexOf(false);
+  }
+
+  private setHome(affinity: string, w: WorkerHandle): void {
+    this.homes.delete(affinity);
+    this.homes.set(affinity, w);
+    if (this.homes.size > MAX_HOMES) this.homes.delete(this.homes.keys().next().value!);
   }
 
   private worker(slot: number): WorkerHandle {
     let w = this.slots[slot];
     if (!w) {
-      w = this.spawn();
-      w.failed.catch(() => undefined);
-      this.slots[slot] = w;
+      const spawned = this.spawn();
+      // A worker that dies, even idle, leaves its slot at once: the next task gets a fresh one.
+      void crashedOf(spawned).then(() => this.retire(slot, spawned));
+      this.slots[slot] = spawned;
+      w = spawned;
     }
     return w;
   }
 
-  /** Stop a slot's worker, and empty the slot if it still holds it. */
+  /** Stop a slot's worker and empty the slot, if the slot still holds it (else it was retired). */
   private retire(slot: number, handle: WorkerHandle | null): void {
-    handle?.terminate();
-    if (handle !== null && this.slots[slot] === handle) this.slots[slot] = null;
+    if (handle === null || this.slots[slot] !== handle) return;
+    handle.terminate();
+    this.slots[slot] = null;
+    for (const [affinity, home] of this.homes) if (home === handle) this.homes.delete(affinity);
   }
 
   private async start(slot: number, q: Queued): Promise<void> {
@@ -178,6 +210,7 @@ export class TaskWorkers {
         outcome = { status: 'failed', error: first.error };
       } else {
         outcome = { status: 'done', value: first.value };
+        if (q.options.affinity !== undefined) this.setHome(q.options.affinity, w);
       }
     } catch (error) {
       // The worker could not even be spawned.

@@ -2,10 +2,13 @@
  * The tasks of the one protocol (protocol.ts): besides the sweeps' solve jobs, a solver worker runs one
  * task at a time, a plain object naming its kind. Each kind's result is plain data (typed arrays
  * transferred). The pool deals tasks to its task workers (workerPool.ts), a TaskChannel keeps the
- * latest of one client's tasks (taskChannel.ts); compute/worker/runTask.ts runs them in the worker.
+ * latest of one client's tasks (taskChannel.ts); compute/worker/runTask.ts runs them in the worker. The
+ * data panel's kinds (dataTaskTypes.ts) carry an affinity: they go back to the worker holding the table.
  */
+import type { GuessContext } from '../compare/index';
 import type { RideCurves, RideDocument, RideFile } from '../ride/index';
 import type { ValidationReport } from '../validation/types';
+import type { PackedResult, ReadOutcome, TableCompareRequest, TableRef, TextOutcome } from './dataTaskTypes';
 import type { MapObjectivesRequest, StudyJobResult } from './studyJobs';
 import type { ViewField, ViewFieldRequest } from './viewFieldTypes';
 
@@ -31,7 +34,13 @@ export type TaskRequest =
   /** Every ride objective of the design map's cells; progress: cells done. */
   | { kind: 'mapObjectives'; request: MapObjectivesRequest }
   /** The built-in reference set, as `coversweep validate`. */
-  | { kind: 'validate' };
+  | { kind: 'validate' }
+  /** The data panel: read a table (kept in the worker under `ref.id`) into a summary. */
+  | { kind: 'dataRead'; ref: TableRef; context: GuessContext }
+  /** The data panel: a table's text as read (a large one is held back by dataRead). */
+  | { kind: 'dataText'; ref: TableRef }
+  /** The data panel: compare a table with the model (and fit, convergence, uncertainty on request). */
+  | { kind: 'dataCompare'; request: TableCompareRequest };
 
 export type TaskKind = TaskRequest['kind'];
 
@@ -42,6 +51,9 @@ export interface TaskResults {
   study: StudyJobResult;
   mapObjectives: Record<string, number>[];
   validate: ValidationReport;
+  dataRead: ReadOutcome;
+  dataText: TextOutcome;
+  dataCompare: PackedResult;
 }
 
 export type TaskResult = TaskResults[TaskKind];

@@ -1,6 +1,6 @@
 /** What the "Your data" panel is given (the design's context), asks to run, and is made of. */
 import type { MapFile, UncertainInput, UncertainRange } from '../../compute/compare/index';
-import type { TableRef } from '../dataJobs';
+import type { TableRef } from '../../compute/engine/dataTaskTypes';
 import type { DataTable } from '../dataTable';
 import type { LinePlot } from '../linePlot';
 import type { SpeedUnit } from '../viewState';

@@ -13,7 +13,7 @@ import {
   type Quantity,
   type Unit,
 } from '../../compute/compare/index';
-import type { TableSummary } from '../dataJobs';
+import type { TableSummary } from '../../compute/engine/dataTaskTypes';
 import { speedFromMps, speedToMps, speedUnitText } from '../displayUnits';
 import { el } from '../dom';
 import type { SpeedUnit } from '../viewState';

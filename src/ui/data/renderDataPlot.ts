@@ -1,6 +1,6 @@
 /** The data panel's plots: the data (dots) over the model's band (lines, shaded lattice uncertainty). */
 import { type CompareReport, OUTPUT_LABEL, type Output } from '../../compute/compare/index';
-import type { PackedComparison } from '../dataJobs';
+import type { PackedComparison } from '../../compute/engine/dataTaskTypes';
 import { fixed, fmt, speedFromMps, speedUnitText } from '../displayUnits';
 import type { LinePlot, PlotBand, PlotSeries } from '../linePlot';
 import type { SpeedUnit } from '../viewState';

@@ -5,7 +5,8 @@ import {
   OUTPUT_LABEL,
   PARAMETER_BOUNDS,
 } from '../../compute/compare/index';
-import { type PackedComparison, residualRowAt } from '../dataJobs';
+import type { PackedComparison } from '../../compute/engine/dataTaskTypes';
+import { residualRowAt } from '../../compute/engine/packComparison';
 import type { Cell } from '../dataTable';
 import { fixed, speedFromMps, speedUnitText } from '../displayUnits';
 import type { SpeedUnit } from '../viewState';

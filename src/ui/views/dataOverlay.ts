@@ -7,9 +7,9 @@
  * to SI, shown in the plots' display units, as markers. Anything not drawn is counted in the note.
  */
 import type { CaseFile } from '../../compute/caseFile';
+import type { ConvertedColumns } from '../../compute/engine/dataTaskTypes';
 import type { PointResult } from '../../compute/study/modelResults';
 import { caseDifferences, differingKeys } from '../baselines/caseDifferences';
-import type { ConvertedColumns } from '../dataJobs';
 import { toDisplay } from '../displayUnits';
 import type { PlotSeries } from '../linePlot';
 import type { Present } from './present';

@@ -5,6 +5,7 @@
  */
 import type { Remote } from 'comlink';
 import { describe, expectTypeOf, it } from 'vitest';
+import type { PackedResult, ReadOutcome, TextOutcome } from '../../../src/compute/engine/dataTaskTypes';
 import type { InProcessRunner } from '../../../src/compute/engine/inProcessRunner';
 import type { JobRunner } from '../../../src/compute/engine/jobRunner';
 import type { RideRequest, RideResponse } from '../../../src/compute/engine/pageJobs';
@@ -23,10 +24,11 @@ import type { TaskOutcome } from '../../../src/compute/engine/taskWorkers';
 import type { WorkerPool } from '../../../src/compute/engine/workerPool';
 import type { ResultCube, StudyPlan } from '../../../src/compute/study';
 
-/** True when no function hides anywhere in T (typed arrays and plain objects only). */
+/** True when no function hides anywhere in T (typed arrays, plain objects, and a Blob or File: a
+ * handle that structured cloning carries without its bytes, how the data panel hands over a dropped file). */
 type PlainData<T> = T extends (...args: never[]) => unknown
   ? false
-  : T extends ArrayBufferView | ArrayBuffer | string | number | boolean | null | undefined
+  : T extends ArrayBufferView | ArrayBuffer | Blob | string | number | boolean | null | undefined
     ? true
     : T extends readonly (infer E)[]
       ? PlainData<E>
@@ -47,6 +49,9 @@ describe('the worker protocol (types)', () => {
     expectTypeOf<PlainData<StudyPlan>>().toEqualTypeOf<true>();
     expectTypeOf<PlainData<TaskRequest>>().toEqualTypeOf<true>();
     expectTypeOf<PlainData<RideResponse>>().toEqualTypeOf<true>();
+    expectTypeOf<PlainData<ReadOutcome>>().toEqualTypeOf<true>();
+    expectTypeOf<PlainData<TextOutcome>>().toEqualTypeOf<true>();
+    expectTypeOf<PlainData<PackedResult>>().toEqualTypeOf<true>();
     // The check can fail: a cube (methods) must never be sent.
     expectTypeOf<PlainData<ResultCube>>().toEqualTypeOf<false>();
   });
@@ -63,6 +68,8 @@ describe('the worker protocol (types)', () => {
     expectTypeOf<PoolViewField>().toEqualTypeOf<TaskOutcome<ViewField>>();
     type ChannelRide = Awaited<ReturnType<typeof channel.run<'ride'>>>;
     expectTypeOf<ChannelRide>().toEqualTypeOf<ChannelOutcome<RideResponse>>();
+    type ChannelCompare = Awaited<ReturnType<typeof channel.run<'dataCompare'>>>;
+    expectTypeOf<ChannelCompare>().toEqualTypeOf<ChannelOutcome<PackedResult>>();
   });
   it('gives the pool and the in-thread runner one shape', () => {
     expectTypeOf<WorkerPool>().toExtend<JobRunner>();

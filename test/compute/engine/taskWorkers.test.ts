@@ -83,6 +83,17 @@ describe('TaskWorkers', () => {
     expect(await wg.runTask(VALIDATE)).toEqual({ status: 'failed', error: 'worker 2 crashed' });
   });
 
+  it('replaces a worker that dies while idle before its next task (which it would otherwise fail)', async () => {
+    const f = fakes(async (_t, _p, n) => `answer ${n}`);
+    const w = new TaskWorkers(f.spawn, 2);
+    await Promise.all([w.runTask(VALIDATE), w.runTask(VALIDATE)]);
+    f.crash(1);
+    f.crash(2);
+    await tick();
+    expect(f.counts()).toEqual({ spawned: 2, terminated: 2 });
+    expect(await w.runTask(VALIDATE)).toEqual({ status: 'done', value: 'answer 3' });
+  });
+
   it('takes a worker past the deadline as hung: stopped, retried once, then reported', async () => {
     const f = fakes(async (_t, _p, n) => (n === 1 ? never() : `answer ${n}`));
     const w = new TaskWorkers(f.spawn, 1);
@@ -130,6 +141,55 @@ describe('TaskWorkers', () => {
       'validate on 1',
     ]);
     expect(f.counts().spawned).toBe(2);
+  });
+
+  it('sends a task back to the worker that finished one of the same affinity, when free; else to any free one', async () => {
+    // Worker n answers "n"; a task whose ref id is 'hold' waits until released (keeps its worker busy).
+    let release: () => void = () => undefined;
+    const f = fakes(async (t, _p, n) => {
+      if (t.kind === 'dataText' && t.ref.label === 'hold') await new Promise<void>((r) => (release = r));
+      return n;
+    });
+    const w = new TaskWorkers(f.spawn, 2);
+    const data = (label: string): TaskRequest => ({
+      kind: 'dataText',
+      ref: { id: 1, source: { kind: 'text', text: 'a\n1\n' }, label },
+    });
+    // Two at once: workers 1 and 2; the second finishes with affinity 'table', so worker 2 is its home.
+    const first = w.runTask(VALIDATE);
+    const second = w.runTask(data('x'), { affinity: 'table' });
+    expect([await first, await second]).toEqual([
+      { status: 'done', value: 1 },
+      { status: 'done', value: 2 },
+    ]);
+    // Without affinity the first free worker (1) would take it; with it, its home (2) does, every time.
+    for (let i = 0; i < 3; i++)
+      expect(await w.runTask(data('x'), { affinity: 'table' })).toEqual({ status: 'done', value: 2 });
+    // Home busy (worker 2 holds a task of the same affinity), another free: the free one takes it (it
+    // rebuilds the state from the task); the home is then the worker that finished last.
+    const held = w.runTask(data('hold'), { affinity: 'table' });
+    await tick();
+    expect(await w.runTask(data('x'), { affinity: 'table' })).toEqual({ status: 'done', value: 1 });
+    expect(await w.runTask(data('x'), { affinity: 'table' })).toEqual({ status: 'done', value: 1 });
+    release();
+    expect(await held).toEqual({ status: 'done', value: 2 });
+    expect(await w.runTask(data('x'), { affinity: 'table' })).toEqual({ status: 'done', value: 2 });
+    // A home that crashes is forgotten: the retry and later tasks go to whichever worker is free.
+    let g = fakes(() => never());
+    g = fakes(async (_t, _p, n) => {
+      if (n === 1 && crashNext) {
+        crashNext = false;
+        setTimeout(() => g.crash(1), 2);
+        return never();
+      }
+      return n;
+    });
+    let crashNext = false;
+    const wg = new TaskWorkers(g.spawn, 1);
+    expect(await wg.runTask(data('x'), { affinity: 'table' })).toEqual({ status: 'done', value: 1 });
+    crashNext = true;
+    expect(await wg.runTask(data('x'), { affinity: 'table' })).toEqual({ status: 'done', value: 2 });
+    expect(g.counts()).toEqual({ spawned: 2, terminated: 1 });
   });
 
   it('never passes progress on after the answer (a late message on the progress port)', async () => {

@@ -3,7 +3,7 @@
 // checked point by point on invented columns, with the note counting what was left out.
 import { describe, expect, it } from 'vitest';
 import { type CaseFile, validateCase } from '../../../src/compute/caseFile';
-import type { ConvertedColumns } from '../../../src/ui/dataJobs';
+import type { ConvertedColumns } from '../../../src/compute/engine/dataTaskTypes';
 import { dataOverlay, mergedYaws } from '../../../src/ui/views/dataOverlay';
 
 function design(rimDepthM: number, model: Record<string, unknown> = {}): CaseFile {
