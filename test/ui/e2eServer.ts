@@ -2,7 +2,7 @@
 import { execFileSync, spawn } from 'node:child_process';
 import { existsSync, mkdirSync } from 'node:fs';
 import { join, resolve } from 'node:path';
-import { type Browser, chromium } from 'playwright-core';
+import { type Browser, chromium, type Page } from 'playwright-core';
 import { afterAll, beforeAll, describe } from 'vitest';
 import { freePort, waitForServer } from '../adversarial/pageHarness';
 
@@ -84,4 +84,9 @@ export function servePage(distName: string, ready: (page: E2ePage) => void): voi
   afterAll(async () => {
     await served?.close();
   });
+}
+
+/** Wait until the page has finished computing (body[data-state="done"]). */
+export async function settled(page: Page, timeoutMs = 90_000): Promise<void> {
+  await page.waitForFunction(() => document.body.dataset.state === 'done', null, { timeout: timeoutMs });
 }

@@ -9,7 +9,7 @@ import { join } from 'node:path';
 import type { Browser, Page } from 'playwright-core';
 import { expect, it } from 'vitest';
 import type { AppState } from '../../src/ui/appState';
-import { describeInBrowser, E2E_OUT, E2E_ROOT, servePage } from './e2eServer';
+import { describeInBrowser, E2E_OUT, E2E_ROOT, servePage, settled } from './e2eServer';
 
 interface Inspect {
   coversweep: { state(): AppState; comparison(): { calibration?: unknown } | null };
@@ -20,10 +20,6 @@ const OUT = E2E_OUT;
 const VERSION = (JSON.parse(readFileSync(join(ROOT, 'package.json'), 'utf8')) as { version: string }).version;
 const NAME = 'Export trial wheel';
 const STEM = 'Export-trial-wheel';
-
-async function settled(page: Page): Promise<void> {
-  await page.waitForFunction(() => document.body.dataset.state === 'done', null, { timeout: 90_000 });
-}
 
 async function panelState(page: Page, id: string, states: string[], timeout = 90_000): Promise<string> {
   await page.waitForFunction(

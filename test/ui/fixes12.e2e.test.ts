@@ -2,17 +2,13 @@ import { readFileSync } from 'node:fs';
 import type { Browser, Page } from 'playwright-core';
 import { expect, it } from 'vitest';
 import type { AppState } from '../../src/ui/appState';
-import { describeInBrowser, servePage } from './e2eServer';
+import { describeInBrowser, servePage, settled } from './e2eServer';
 
 interface Inspect {
   coversweep: { state(): AppState };
 }
 
 const state = (page: Page) => page.evaluate(() => (window as unknown as Inspect).coversweep.state());
-
-async function settled(page: Page): Promise<void> {
-  await page.waitForFunction(() => document.body.dataset.state === 'done', null, { timeout: 90_000 });
-}
 
 /** A number control of the control panel (its folder opened first), typed and confirmed. */
 async function setNumberControl(page: Page, field: string, value: string): Promise<void> {

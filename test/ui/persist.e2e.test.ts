@@ -10,7 +10,7 @@ import type { Browser, BrowserContext, Page } from 'playwright-core';
 import { afterAll, expect, it } from 'vitest';
 import type { CompareReport } from '../../src/compute/compare/index';
 import { type AppState, stateToProjectText } from '../../src/ui/appState';
-import { describeInBrowser, E2E_OUT, E2E_ROOT, servePage } from './e2eServer';
+import { describeInBrowser, E2E_OUT, E2E_ROOT, servePage, settled } from './e2eServer';
 
 interface Inspect {
   coversweep: { state(): AppState; comparison(): CompareReport | null };
@@ -21,10 +21,6 @@ const OUT = E2E_OUT;
 const CSV = join(ROOT, 'public/demo/demo-tunnel.csv');
 
 const state = (page: Page) => page.evaluate(() => (window as unknown as Inspect).coversweep.state());
-
-async function settled(page: Page): Promise<void> {
-  await page.waitForFunction(() => document.body.dataset.state === 'done', null, { timeout: 120_000 });
-}
 
 /** Wait until the data panel shows one of `states`; returns the one it shows. */
 async function dataPanel(page: Page, states: string[]): Promise<string> {
@@ -72,7 +68,7 @@ describeInBrowser('imported data kept, in headless Chromium', () => {
     contexts.push(context);
     const page = await context.newPage();
     await page.goto(url);
-    await settled(page);
+    await settled(page, 120_000);
     return page;
   }
 
@@ -102,7 +98,7 @@ describeInBrowser('imported data kept, in headless Chromium', () => {
     const badge = page.locator('#calibrated-badge');
     await badge.waitFor({ state: 'visible' });
     expect(await dataPanel(page, ['done', 'error'])).toBe('done');
-    await settled(page);
+    await settled(page, 120_000);
     const before = await state(page);
     const mapping = await mappingShown(page);
     expect(mapping.columns).toContain('Yaw moment [N m]: ignore 1');
@@ -144,7 +140,7 @@ describeInBrowser('imported data kept, in headless Chromium', () => {
 
     // A reload of the first page: the autosave brings everything back.
     await page.reload();
-    await settled(page);
+    await settled(page, 120_000);
     await page.click('#tab-data');
     expect(await dataPanel(page, ['done', 'error'])).toBe('done');
     expect(await mappingShown(page)).toEqual(mapping);
@@ -206,7 +202,7 @@ describeInBrowser('imported data kept, in headless Chromium', () => {
     );
     expect(doc.data.hash).toBe(before.data!.hash);
     await page.reload();
-    await settled(page);
+    await settled(page, 120_000);
     const note = page.locator('.message[data-id="data-ref"]');
     await note.waitFor();
     expect(await note.textContent()).toMatch(

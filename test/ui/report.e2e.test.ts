@@ -12,7 +12,7 @@ import { expect, it } from 'vitest';
 import type { RideDocument } from '../../src/compute/ride/index';
 import { type AppState, stateToHash } from '../../src/ui/appState';
 import { PRINTABLE_HEIGHT_MM } from '../../src/ui/report/fitToPage';
-import { describeInBrowser, E2E_OUT, E2E_ROOT, servePage } from './e2eServer';
+import { describeInBrowser, E2E_OUT, E2E_ROOT, servePage, settled } from './e2eServer';
 import { pdfPageCount } from './pdfPageCount';
 
 interface Inspect {
@@ -25,10 +25,6 @@ const OUT = E2E_OUT;
 const VERSION = (JSON.parse(readFileSync(join(ROOT, 'package.json'), 'utf8')) as { version: string }).version;
 const SECTIONS = ['header', 'design', 'headline', 'plots', 'cautions', 'calibration', 'ride', 'validation'];
 const FIGURES = ['drag-yaw', 'side-yaw', 'handling', 'drag-cover', 'map'];
-
-async function settled(page: Page): Promise<void> {
-  await page.waitForFunction(() => document.body.dataset.state === 'done', null, { timeout: 90_000 });
-}
 
 async function setNumberControl(page: Page, field: string, value: string): Promise<void> {
   const input = page.locator(`[data-field="${field}"] input`).first();

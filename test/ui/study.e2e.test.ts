@@ -7,7 +7,7 @@ import { evaluateDesign } from '../../src/compute/design/evaluateDesign';
 import type { StudyDocument } from '../../src/compute/design/index';
 import type { RideFile } from '../../src/compute/ride/index';
 import type { AppState } from '../../src/ui/appState';
-import { describeInBrowser, E2E_OUT, servePage } from './e2eServer';
+import { describeInBrowser, E2E_OUT, servePage, settled } from './e2eServer';
 
 interface Inspect {
   coversweep: { state(): AppState; study(): StudyDocument | null };
@@ -17,10 +17,6 @@ const OUT = E2E_OUT;
 
 const state = (page: Page) => page.evaluate(() => (window as unknown as Inspect).coversweep.state());
 const studyDoc = (page: Page) => page.evaluate(() => (window as unknown as Inspect).coversweep.study());
-
-async function settled(page: Page): Promise<void> {
-  await page.waitForFunction(() => document.body.dataset.state === 'done', null, { timeout: 90_000 });
-}
 
 async function studyStatus(page: Page, states: string[]): Promise<string> {
   await page.waitForFunction(

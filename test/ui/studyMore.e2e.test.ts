@@ -3,7 +3,7 @@ import type { Browser } from 'playwright-core';
 import { expect, it } from 'vitest';
 import type { StudyDocument } from '../../src/compute/design/index';
 import type { AppState } from '../../src/ui/appState';
-import { describeInBrowser, E2E_OUT, servePage } from './e2eServer';
+import { describeInBrowser, E2E_OUT, servePage, settled } from './e2eServer';
 
 interface Inspect {
   coversweep: { state(): AppState; study(): StudyDocument | null };
@@ -25,7 +25,7 @@ describeInBrowser('more design variables in the study tab', () => {
     page.on('pageerror', (e) => errors.push(e.message));
     const state = () => page.evaluate(() => (window as unknown as Inspect).coversweep.state());
     await page.goto(base);
-    await page.waitForFunction(() => document.body.dataset.state === 'done', null, { timeout: 90_000 });
+    await settled(page);
     await page.click('#tab-study');
     await page.waitForSelector('#study-run');
 
