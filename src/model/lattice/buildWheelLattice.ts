@@ -15,12 +15,20 @@ export interface WheelLatticeOptions {
   /** Share of panels an open interval gets per unit length, relative to a solid one (default 0.35):
    * open regions carry little load, solid rings and their edges carry the gradients. */
   openPanelWeight?: number;
+  /** Chordwise clustering c in [0, 1] (default 0, even): within each interval panel edge q of k sits at
+   * the fraction (1 - c) q / k + c (1 - cos(pi q / k)) / 2, closer together at the interval's ends. */
+  chordClustering?: number;
 }
 
 export interface WheelLattice extends RingLattice {
   radiusM: number;
   ground: boolean;
   openAnnuliM: ReadonlyArray<readonly [number, number]>;
+  chordClustering: number;
+  /** x of the panels' geometric edges (m) on each strip's lower and upper edge line, row-major
+   * spanCount x (chordCount + 1), leading edge first (the ring corners sit a quarter panel behind). */
+  panelEdgeLowerX: Float64Array;
+  panelEdgeUpperX: Float64Array;
 }
 
 /**
@@ -35,7 +43,7 @@ export interface WheelLattice extends RingLattice {
  * - along each strip, corners are placed at the circles' crossings on each of the strip's edge lines
  *   and the strip's panels are shared among the crossed intervals in proportion to their lengths at
  *   the control station (open intervals weighted down by openPanelWeight; at least one each),
- *   uniform within an interval.
+ *   uniform within an interval (or clustered toward its ends, chordClustering).
  * Strips place their corners independently (ringInfluenceMatrix). With no boundary radii it is the
  * disc lattice of buildDiscLattice.
  */
@@ -60,6 +68,10 @@ export function buildWheelLattice(options: WheelLatticeOptions): WheelLattice {
   const openWeight = options.openPanelWeight ?? 0.35;
   if (!(openWeight > 0 && openWeight <= 1)) {
     throw new RangeError(`buildWheelLattice: openPanelWeight=${openWeight} must be in (0, 1]`);
+  }
+  const cluster = options.chordClustering ?? 0;
+  if (!(cluster >= 0 && cluster <= 1)) {
+    throw new RangeError(`buildWheelLattice: chordClustering=${cluster} must be in [0, 1]`);
   }
   const isOpen = (r: number): boolean => annuli.some(([a, b]) => r > a && r < b);
   const circles = [...new Set(annuli.flat())]
@@ -167,6 +179,8 @@ export function buildWheelLattice(options: WheelLatticeOptions): WheelLattice {
   const n = strips * chordCount;
   const nodeLowerX = new Float64Array(strips * cols);
   const nodeUpperX = new Float64Array(strips * cols);
+  const panelEdgeLowerX = new Float64Array(strips * cols);
+  const panelEdgeUpperX = new Float64Array(strips * cols);
   const controlX = new Float64Array(n);
   const controlZ = new Float64Array(n);
   const boundX = new Float64Array(n);
@@ -200,7 +214,8 @@ export function buildWheelLattice(options: WheelLatticeOptions): WheelLattice {
     let c = 0;
     for (let j = 0; j < intervals; j++) {
       for (let q = 0; q < counts[j]!; q++) {
-        const f = q / counts[j]!;
+        const even = q / counts[j]!;
+        const f = cluster > 0 ? (1 - cluster) * even + (cluster * (1 - Math.cos(Math.PI * even))) / 2 : even;
         lower[c] = atLower[j]! + f * (atLower[j + 1]! - atLower[j]!);
         upper[c] = atUpper[j]! + f * (atUpper[j + 1]! - atUpper[j]!);
         c++;
@@ -209,6 +224,8 @@ export function buildWheelLattice(options: WheelLatticeOptions): WheelLattice {
     lower[chordCount] = atLower[intervals]!;
     upper[chordCount] = atUpper[intervals]!;
     const nodes = s * cols;
+    panelEdgeLowerX.set(lower.subarray(0, cols), nodes);
+    panelEdgeUpperX.set(upper.subarray(0, cols), nodes);
     for (let m = 0; m < chordCount; m++) {
       nodeLowerX[nodes + m] = lower[m]! - 0.25 * (lower[m]! - lower[m + 1]!);
       nodeUpperX[nodes + m] = upper[m]! - 0.25 * (upper[m]! - upper[m + 1]!);
@@ -264,6 +281,9 @@ export function buildWheelLattice(options: WheelLatticeOptions): WheelLattice {
     radiusM: R,
     ground,
     openAnnuliM: annuli.map(([a, b]) => [a, b] as const),
+    chordClustering: cluster,
+    panelEdgeLowerX,
+    panelEdgeUpperX,
   };
 }
 

@@ -30,24 +30,32 @@ export interface EdgeSuctionShares {
  * Gamma_1 is the edge panel's circulation jump and dx its chord. Only the shares are used by the
  * wheel, and they do not depend on the constant.
  *
- * Edges with a singularity: each strip's leading panel (the disc's outer edge) and every solid panel
- * whose upstream neighbour is porous (openness > 0). A porous region's own leading edge carries none:
+ * Edges with a singularity: each strip's leading panel (the disc's outer edge, the tyre: always
+ * solid at its leading edge) and every solid panel whose upstream neighbour is porous (openness > 0).
+ * On a lattice that does not follow the region edges (`solid` given: each panel's solid area share), a
+ * solid region's edge can fall inside a partly solid panel; the first wholly solid panel behind a
+ * partly solid one then takes the circulation jump over both, on the solid length behind the edge
+ * (its chord plus the solid share of the partial panel's), the same estimate with the edge panel
+ * measured from the edge. A porous region's own leading edge carries none:
  * the through-flow removes the square-root singularity (Hajian & Jaworski 2017, Proc. R. Soc. A 473:
  * 20170266, porous-edge aerofoil), and so does an open panel following a solid one (a trailing edge).
  * The shares are relative: the total suction comes from the lattice's force balance (Polhamus 1966).
  *
  * @param gamma ring circulations of a solution (any consistent forcing)
  * @param openness panel openness used in that solution (0 solid .. 1 open)
+ * @param solid optional solid area share of each panel (0..1); without it a panel is solid when its
+ * openness is 0
  */
 export function edgeSuctionShares(
   lattice: RingLattice,
   gamma: Float64Array,
   openness: Float64Array,
+  solid?: Float64Array,
 ): EdgeSuctionShares {
   const n = lattice.panelCount;
-  if (gamma.length !== n || openness.length !== n) {
+  if (gamma.length !== n || openness.length !== n || (solid !== undefined && solid.length !== n)) {
     throw new RangeError(
-      `edgeSuctionShares: gamma (${gamma.length}) and openness (${openness.length}) must have panelCount=${n} entries`,
+      `edgeSuctionShares: gamma (${gamma.length}), openness (${openness.length}) and solid (${solid?.length}) must have panelCount=${n} entries`,
     );
   }
   const spans = lattice.spanCount;
@@ -61,14 +69,23 @@ export function edgeSuctionShares(
     for (let c = 0; c < chords; c++) {
       const p = first + c;
       let jump: number;
+      let length = lattice.chordLengthM[p]!;
       if (c === 0) {
-        jump = openness[p]! === 0 ? gamma[p]! : 0;
-      } else if (openness[p]! === 0 && openness[p - 1]! > 0) {
-        jump = gamma[p]! - gamma[p - 1]!;
+        jump = gamma[p]!;
+      } else if (openness[p]! === 0 && (solid === undefined || solid[p]! === 1) && openness[p - 1]! > 0) {
+        const part = solid === undefined ? 0 : solid[p - 1]!;
+        if (part > 0 && part < 1) {
+          // The edge lies inside the partly solid panel upstream: the jump over it and this panel,
+          // on the solid length behind the edge.
+          jump = gamma[p]! - (c > 1 ? gamma[p - 2]! : 0);
+          length += part * lattice.chordLengthM[p - 1]!;
+        } else {
+          jump = gamma[p]! - gamma[p - 1]!;
+        }
       } else {
         continue;
       }
-      const suction = (SUCTION_FACTOR * jump * jump * lattice.spanWidthM[p]!) / lattice.chordLengthM[p]!;
+      const suction = (SUCTION_FACTOR * jump * jump * lattice.spanWidthM[p]!) / length;
       if (c === 0) outer[s] = outerRaw[s] = suction;
       else inner += suction;
       total += suction;

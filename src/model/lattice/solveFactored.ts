@@ -1,4 +1,5 @@
 import { luSolve } from '../numeric/luSolve';
+import { porousDragSlope } from './porousDragSlope';
 import { trefftzInducedDrag } from './trefftzInducedDrag';
 import type { LatticeFactor, LatticeSolution } from './types';
 
@@ -9,9 +10,7 @@ import type { LatticeFactor, LatticeSolution } from './types';
  *   (Kutta-Joukowski on the bound segment; Katz & Plotkin, Low-Speed Aerodynamics, 2nd ed., sec. 12.3);
  * - centre of pressure: load-weighted mean of the bound points;
  * - induced drag from the Trefftz plane (`trefftzInducedDrag`);
- * - porous dissipation drag: sum of pressure jump x through-flow x area / V over porous panels, with
- *   pressure jump rho V gamma_i and through-flow o/(1-o) gamma_i (the solved porous condition);
- *   o = 1 panels carry gamma = 0 and dissipate nothing.
+ * - porous dissipation drag (`porousDragSlope`).
  * `normalVelocityMps` is the freestream's normal velocity at each control point; by default 1 m/s
  * everywhere (V sin(beta) = 1), for which normalSlope is Kp and the drags are per sin^2(beta).
  */
@@ -38,7 +37,6 @@ export function solveFactored(factor: LatticeFactor, normalVelocityMps?: Float64
   let normal = 0;
   let momentX = 0;
   let momentZ = 0;
-  let dissipation = 0;
   for (let i = 0; i < n; i++) {
     const jump = i % chordCount === 0 ? gamma[i]! : gamma[i]! - gamma[i - 1]!;
     const cn = (jump * lattice.spanWidthM[i]!) / qS;
@@ -46,11 +44,6 @@ export function solveFactored(factor: LatticeFactor, normalVelocityMps?: Float64
     normal += cn;
     momentX += cn * lattice.boundX[i]!;
     momentZ += cn * lattice.boundZ[i]!;
-    const o = openness[i]!;
-    if (o > 0 && o < 1) {
-      const sheet = jump / lattice.chordLengthM[i]!;
-      dissipation += ((o / (1 - o)) * sheet * sheet * lattice.areaM2[i]!) / qS;
-    }
   }
   const inducedDragSlope = trefftzInducedDrag(lattice, gamma);
   return {
@@ -59,7 +52,7 @@ export function solveFactored(factor: LatticeFactor, normalVelocityMps?: Float64
     normalSlope: normal,
     inducedDragFactor: normal === 0 ? 0 : inducedDragSlope / (normal * normal),
     inducedDragSlope,
-    porousDragSlope: dissipation,
+    porousDragSlope: porousDragSlope(lattice, gamma, openness),
     centreX: normal === 0 ? Number.NaN : momentX / normal,
     centreZ: normal === 0 ? Number.NaN : momentZ / normal,
   };

@@ -3,7 +3,9 @@ export { attainableEdgeThrust, roundEdgeSuctionLimit } from './attainableEdgeThr
 export { DEFAULT_HUB_SHELL, DEFAULT_MODEL_OPTIONS, DEFAULT_STEERING, DEMO_WHEEL } from './defaults';
 export { hubEnclosed, hubLoads } from './hubLoads';
 export { meanAbsSinusoid } from './meanAbsSinusoid';
+export { panelAnnulusFraction } from './panelAnnulusFraction';
 export { openAnnuli, panelOpenness } from './panelOpenness';
+export { partialPanelOpenness } from './partialPanelOpenness';
 export { RIM_SECTION_RE_RANGE, rimTyreSection } from './rimTyreLoads';
 export { solveWheel, type WheelInput } from './solveWheel';
 export { type SpokeCageSwirl, spokeCageSwirl } from './spokeCageSwirl';

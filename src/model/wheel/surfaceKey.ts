@@ -5,7 +5,7 @@ import type { WheelRadii } from './wheelRadii';
 /**
  * Everything that determines the lifting surface's solution, as a string: lattice geometry (radius,
  * ground, counts), the region radii, the spokes' screen (count, section, porosity scale),
- * the rotation ratio, and whether coarser lattices are solved for the convergence index. Two cases with
+ * the rotation ratio, the lattice kind, and whether coarser lattices are solved for the convergence index. Two cases with
  * equal keys share one factorisation.
  */
 export function surfaceKey(
@@ -28,5 +28,6 @@ export function surfaceKey(
     spokeScreenKey(wheel),
     options.porosityScale,
     rotationRatio.toPrecision(12),
+    ...(options.fixedLattice ? ['fixed'] : []),
   ].join('|');
 }

@@ -65,6 +65,10 @@ export interface ModelOptions {
   oneSidedCoverSpokeShare: number;
   /** Compute the lattice on two coarser refinements for a grid-convergence index. */
   gridConvergence: boolean;
+  /** Solve on the fixed lattice (one per radius and counts, regions in the boundary condition only,
+   * partialPanelOpenness) instead of the lattice that follows the region edges (default false: less
+   * accurate at the default counts for open spoked wheels; see README, lattice convergence). */
+  fixedLattice?: boolean;
 }
 
 /** One operating point. */

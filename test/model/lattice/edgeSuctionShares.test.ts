@@ -79,6 +79,28 @@ describe('edgeSuctionShares', () => {
     expect(Math.abs(outer + e.innerEdgeShare - 1)).toBeLessThanOrEqual(1e-12);
   });
 
+  it('with solid shares of 0 and 1 gives the same shares as without them (invariant)', () => {
+    const lattice = buildWheelLattice({
+      radiusM: 0.33,
+      spanCount: 16,
+      chordCount: 8,
+      ground: true,
+      openAnnuliM: [[0, 0.26]],
+    });
+    const open = new Float64Array(lattice.panelCount);
+    const solid = new Float64Array(lattice.panelCount);
+    for (let p = 0; p < lattice.panelCount; p++) {
+      const inside = Math.hypot(lattice.centroidX[p]!, lattice.centroidZ[p]!) < 0.26;
+      open[p] = inside ? 0.7 : 0;
+      solid[p] = inside ? 0 : 1;
+    }
+    const sol = solveLattice(lattice, open);
+    const a = edgeSuctionShares(lattice, sol.gamma, open);
+    const b = edgeSuctionShares(lattice, sol.gamma, open, solid);
+    expect(b.innerEdgeShare).toBe(a.innerEdgeShare);
+    expect([...b.outerEdgeShare]).toEqual([...a.outerEdgeShare]);
+  });
+
   it('checks its arguments', () => {
     const lattice = rectangularLattice(2, 1, 2, 2, 0, Number.NaN);
     expect(() => edgeSuctionShares(lattice, new Float64Array(3), new Float64Array(4))).toThrow(RangeError);
