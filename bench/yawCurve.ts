@@ -14,7 +14,11 @@ const wheel = await load('src/model/wheel/index.ts');
 const lattice = await load('src/model/lattice/index.ts');
 const deg = Math.PI / 180;
 
-const options = wheel.DEFAULT_MODEL_OPTIONS;
+// COVERSWEEP_FIXED_LATTICE=1: the same on the fixed lattice (options.fixedLattice; README, lattice convergence).
+const options = {
+  ...wheel.DEFAULT_MODEL_OPTIONS,
+  fixedLattice: process.env.COVERSWEEP_FIXED_LATTICE === '1',
+};
 const buildOnce = () => {
   const l = lattice.buildWheelLattice({
     radiusM: wheel.DEMO_WHEEL.outerRadiusM,

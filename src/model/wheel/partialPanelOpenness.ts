@@ -1,6 +1,5 @@
 import type { WheelLattice } from '../lattice/buildWheelLattice';
 import { panelAnnulusFraction } from './panelAnnulusFraction';
-import { openAnnuli } from './panelOpenness';
 import { screenOpenness, spokeScreenForceLengthM, spokeScreenResistance } from './spokeScreen';
 import type { WheelGeometry } from './types';
 import type { WheelRadii } from './wheelRadii';
@@ -8,8 +7,10 @@ import type { WheelRadii } from './wheelRadii';
 /**
  * Openness of every panel of a lattice that does not follow the region edges (the fixed lattice: one
  * per wheel radius and counts, shared by every design), so a panel may be partly open: the share f_k
- * of its area in each open annulus k of openAnnuli (panelAnnulusFraction, exact), the rest solid (tyre,
- * rim, covers; the hub opens with the spokes unless a cover reaches it).
+ * of its area in each open annulus k (panelAnnulusFraction, exact), the rest solid (tyre, rim, covers).
+ * The regions are panelOpenness's, so the two lattices discretise one model: open inside the rim's inner
+ * radius except the cover's annulus; the hub's disc (inside the flange radius) opens with the spokes
+ * at the flange radius, even under a cover that reaches it (a stated simplification of panelOpenness).
  *
  * Derivation. assembleSystem's row states, at each point of the sheet, the linear porous condition
  * (1 - o) w - o gamma = 0 (w the normal through-flow velocity, gamma the sheet strength, o = 2 / (K + 2)
@@ -40,7 +41,12 @@ export function partialPanelOpenness(
   if (out.length !== lattice.panelCount || (solidOut && solidOut.length !== lattice.panelCount)) {
     throw new RangeError(`out and solidOut must have ${lattice.panelCount} entries`);
   }
-  const annuli = openAnnuli(radii);
+  // The open set of panelOpenness: inside the rim, outside the cover (the hub's disc open even when a
+  // cover reaches the flange radius).
+  const { coverInnerRadiusM: cIn, coverOuterRadiusM: cOut, rimInnerRadiusM: rimIn } = radii;
+  const annuli = (cOut > cIn ? [[0, cIn] as const, [cOut, rimIn] as const] : [[0, rimIn] as const]).filter(
+    ([a, b]) => b > a,
+  );
   const shares = annuli.map(([a, b]) => panelAnnulusFraction(lattice, a, b));
   for (let p = 0; p < lattice.panelCount; p++) {
     const x = lattice.centroidX[p]!;

@@ -75,14 +75,13 @@ describe('partialPanelOpenness', () => {
       solid,
     );
 
-  it('without spokes opens exactly the open area: pi (rim inner radius)^2, halved by a cover (geometry)', () => {
+  it('without spokes opens exactly the open area: inside the rim, outside the cover (geometry)', () => {
     for (const coverFraction of [0, 0.5, 1]) {
       const wheel = { ...DEMO_WHEEL, spokeCount: 0, coverFraction };
       const r = wheelRadii(wheel);
+      // Open: inside the rim but outside the cover (the hub's disc stays open under a full cover).
       const exact =
-        coverFraction === 1
-          ? 0
-          : Math.PI * (r.rimInnerRadiusM ** 2 - (r.coverOuterRadiusM ** 2 - r.coverInnerRadiusM ** 2));
+        Math.PI * (r.rimInnerRadiusM ** 2 - (r.coverOuterRadiusM ** 2 - r.coverInnerRadiusM ** 2));
       const got = weighted(lattice, open(wheel));
       expect(
         Math.abs(got - exact),
