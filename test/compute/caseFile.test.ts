@@ -238,6 +238,16 @@ describe('caseToModelInput', () => {
     expect(input.wheel.outerRadiusM).toBe(0.334);
   });
 
+  it('model.fixed_lattice: off and left out of the echo by default; true reaches the model options', () => {
+    const plain = ok(minimal);
+    expect('fixed_lattice' in plain.model).toBe(false);
+    expect(caseToModelInput(plain).options.fixedLattice).toBeUndefined();
+    const fixed = ok({ ...minimal, model: { fixed_lattice: true } });
+    expect(fixed.model.fixed_lattice).toBe(true);
+    expect(caseToModelInput(fixed).options.fixedLattice).toBe(true);
+    expect(errorsOf({ ...minimal, model: { fixed_lattice: 1 } }).join('\n')).toMatch(/model\.fixed_lattice/);
+  });
+
   it('ground speed defaults to each point airspeed (wind-tunnel convention)', () => {
     const input = caseToModelInput(ok({ conditions: { airspeed_mps: [10, 12], yaw_deg: 0 } }));
     expect(input.points.map((p) => p.groundSpeedMps)).toEqual([10, 12]);

@@ -137,6 +137,7 @@ const modelShape = {
   profile_drag_factor: num({ min: 0, max: 100, minOpen: true }),
   one_sided_cover_spoke_share: num({ min: 0, max: 1 }),
   grid_convergence: bool(),
+  fixed_lattice: bool(),
 };
 
 function partial<S extends Record<string, z.ZodType>>(shape: S) {

@@ -56,6 +56,7 @@ export function caseToModelInput(caseFile: CaseFile): ModelInput {
     profileDragFactor: m.profile_drag_factor,
     oneSidedCoverSpokeShare: m.one_sided_cover_spoke_share,
     gridConvergence: m.grid_convergence,
+    ...(m.fixed_lattice === true ? { fixedLattice: true } : {}),
   };
   const steering: SteeringGeometry = {
     headAngleRad: degToRad(caseFile.steering.head_angle_deg),

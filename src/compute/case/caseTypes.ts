@@ -86,6 +86,8 @@ export interface CaseModel {
   profile_drag_factor: number;
   one_sided_cover_spoke_share: number;
   grid_convergence: boolean;
+  /** Solve on the fixed lattice (ModelOptions.fixedLattice); echoed only when true. */
+  fixed_lattice?: boolean;
 }
 
 export interface CaseFile {

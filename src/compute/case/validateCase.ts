@@ -243,6 +243,7 @@ function validateCaseUnsafe(given: unknown): Parsed<CaseFile> {
     profile_drag_factor: m.profile_drag_factor ?? dm.profile_drag_factor,
     one_sided_cover_spoke_share: m.one_sided_cover_spoke_share ?? dm.one_sided_cover_spoke_share,
     grid_convergence: m.grid_convergence ?? dm.grid_convergence,
+    ...(m.fixed_lattice === true ? { fixed_lattice: true } : {}),
   };
 
   const caseFile: CaseFile = {
