@@ -16,8 +16,9 @@
  *        value loaded once serves three rows, and each A22 element is loaded and stored once per four
  *        rank-1 terms).
  * Two paths give the same bits: step 3 and the groups of four of step 2 run in WebAssembly SIMD
- * (luKernel.wat, two f64 lanes) where it is available, on a copy of the matrix in the kernel's memory,
- * and in plain TypeScript otherwise (`path` = 'typescript' forces it). Every element receives the same
+ * (luKernel.wat, two f64 lanes; step 3 keeps a two-row by four-column tile in registers for the whole
+ * block) where it is available, on a copy of the matrix in the kernel's memory, and in plain
+ * TypeScript otherwise (`path` = 'typescript' forces it). Every element receives the same
  * IEEE-754 operations in the same order on both paths (groups of four rank-1 terms summed left to
  * right, then subtracted; then the single terms), so
  * the factors and pivots are identical. Plain scalar TypeScript gets its speed from cutting loads and
@@ -68,7 +69,8 @@ export function luFactor(a: Float64Array, n: number, pivots: Int32Array, path: L
   if (path === 'wasm' && kernel === null) {
     throw new RangeError("luFactor: path='wasm' but WebAssembly SIMD is not available here");
   }
-  const bytes = n * n * 8;
+  // The matrix, then (from byte n n 8 + 64) two rows of multipliers packed by the kernel's update.
+  const bytes = n * n * 8 + 64 + 16 * OUTER_BLOCK;
   const have = kernel === null ? 0 : kernel.memory.buffer.byteLength;
   if (kernel !== null && have < bytes && !growMemory(kernel.memory, bytes - have) && path === 'wasm') {
     throw new RangeError(`luFactor: path='wasm' but the kernel's memory cannot grow to ${bytes} bytes`);
@@ -115,12 +117,7 @@ function factorColumns(
     if (kernel === null || (kEnd - k0) % 4 !== 0) {
       updateTrailing(a, n, k0, kEnd, kEnd, n, kEnd, c1);
     } else {
-      // The kernel takes rows and columns in pairs; the odd column and the odd row are done here.
       kernel.update(n, k0, kEnd, c1);
-      const rowsEven = kEnd + 2 * Math.floor((n - kEnd) / 2);
-      const colsEven = kEnd + 2 * Math.floor((c1 - kEnd) / 2);
-      if (colsEven < c1) updateTrailing(a, n, k0, kEnd, kEnd, rowsEven, colsEven, c1);
-      if (rowsEven < n) updateTrailing(a, n, k0, kEnd, rowsEven, n, kEnd, c1);
     }
   }
 }
