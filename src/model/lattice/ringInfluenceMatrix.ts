@@ -22,7 +22,13 @@
  *
  * nodeLowerX / nodeUpperX: spanCount x (chordCount + 1) corner x positions on each strip's lower and
  * upper edge lines (see RingLattice).
+ *
+ * Two paths give the same bits: these loops in TypeScript, and the same operations in WebAssembly SIMD
+ * with two control points in the two lanes (numeric/ringInfluenceKernel.wat), used where available
+ * (`path` 'auto'; 'typescript' or 'wasm' force one).
  */
+import { ringInfluenceWasm } from '../numeric/ringInfluenceKernel';
+
 const CORE_RELATIVE = 1e-10;
 const CORE_SQ = CORE_RELATIVE * CORE_RELATIVE;
 const FOUR_PI = 4 * Math.PI;
@@ -137,6 +143,7 @@ export function ringInfluenceMatrix(
   controlZ: Float64Array,
   groundZM: number,
   out: Float64Array,
+  path: 'auto' | 'typescript' | 'wasm' = 'auto',
 ): Float64Array {
   const spanCount = edgeZ.length - 1;
   const n = spanCount * chordCount;
@@ -159,6 +166,16 @@ export function ringInfluenceMatrix(
       if (nodeUpperX[s * cols + m] !== nodeLowerX[(s + 1) * cols + m]) same = 0;
     }
     shared[s] = same;
+  }
+  if (path !== 'typescript') {
+    if (
+      ringInfluenceWasm(edgeZ, nodeLowerX, nodeUpperX, chordCount, controlX, controlZ, groundZM, shared, out)
+    ) {
+      return out;
+    }
+    if (path === 'wasm') {
+      throw new RangeError("ringInfluenceMatrix: path='wasm' but WebAssembly SIMD is not available here");
+    }
   }
   const ground = Number.isFinite(groundZM);
   const g2 = 2 * groundZM;

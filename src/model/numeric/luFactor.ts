@@ -31,6 +31,7 @@
  */
 
 import { type LuKernel, luKernel } from './luKernel';
+import { ensureMemory } from './simdInstance';
 
 const OUTER_BLOCK = 32;
 const INNER_BLOCK = 8;
@@ -71,8 +72,7 @@ export function luFactor(a: Float64Array, n: number, pivots: Int32Array, path: L
   }
   // The matrix, then (from byte n n 8 + 64) two rows of multipliers packed by the kernel's update.
   const bytes = n * n * 8 + 64 + 16 * OUTER_BLOCK;
-  const have = kernel === null ? 0 : kernel.memory.buffer.byteLength;
-  if (kernel !== null && have < bytes && !growMemory(kernel.memory, bytes - have) && path === 'wasm') {
+  if (kernel !== null && !ensureMemory(kernel.memory, bytes) && path === 'wasm') {
     throw new RangeError(`luFactor: path='wasm' but the kernel's memory cannot grow to ${bytes} bytes`);
   }
   if (kernel === null || kernel.memory.buffer.byteLength < bytes) {
@@ -83,16 +83,6 @@ export function luFactor(a: Float64Array, n: number, pivots: Int32Array, path: L
   work.set(a.subarray(0, n * n));
   factorColumns(work, n, pivots, 0, n, OUTER_BLOCK, kernel);
   a.set(work);
-}
-
-/** Grows a WebAssembly memory by at least `extraBytes`; false when the engine refuses. */
-function growMemory(memory: WebAssembly.Memory, extraBytes: number): boolean {
-  try {
-    memory.grow(Math.ceil(extraBytes / 65536));
-    return true;
-  } catch {
-    return false;
-  }
 }
 
 /**

@@ -5,6 +5,7 @@
  * TypeScript path, which gives the same bits.
  */
 import { LU_KERNEL_WASM_BASE64 } from './luKernelWasm';
+import { simdInstance } from './simdInstance';
 
 export interface LuKernel {
   memory: WebAssembly.Memory;
@@ -18,17 +19,11 @@ let kernel: LuKernel | null | undefined;
 
 export function luKernel(): LuKernel | null {
   if (kernel !== undefined) return kernel;
-  kernel = null;
-  try {
-    if (typeof WebAssembly !== 'object' || typeof atob !== 'function') return kernel;
-    const binary = atob(LU_KERNEL_WASM_BASE64);
-    const bytes = new Uint8Array(binary.length);
-    for (let i = 0; i < binary.length; i++) bytes[i] = binary.charCodeAt(i);
-    const instance = new WebAssembly.Instance(new WebAssembly.Module(bytes), {});
-    const { memory, update, updateRow } = instance.exports as unknown as LuKernel;
+  const instance = simdInstance(LU_KERNEL_WASM_BASE64);
+  kernel = instance === null ? null : (instance.exports as unknown as LuKernel);
+  if (kernel !== null) {
+    const { memory, update, updateRow } = kernel;
     kernel = { memory, update, updateRow };
-  } catch {
-    kernel = null; // no SIMD, or compiling forbidden (CSP without 'wasm-unsafe-eval')
   }
   return kernel;
 }
