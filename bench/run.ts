@@ -64,7 +64,9 @@ function print(name: string, figures: Record<string, unknown>): void {
   const influence = influenceFigures();
   const lapack = lapackLu(sizes);
   const path =
-    luKernel() === null ? 'typescript (no WebAssembly SIMD here)' : 'wasm-simd updates (panel in TypeScript)';
+    luKernel() === null
+      ? 'typescript (no WebAssembly SIMD here)'
+      : 'wasm-simd (panels, block rows and updates in WebAssembly)';
   for (const { n } of sizes) {
     const mine = ours[n]!.auto;
     const plain = ours[n]!.typescript;

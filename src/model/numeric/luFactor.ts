@@ -15,9 +15,9 @@
  *        rows of A22 at a time against four rows of U12 (12 multipliers held in registers; every U12
  *        value loaded once serves three rows, and each A22 element is loaded and stored once per four
  *        rank-1 terms).
- * Two paths give the same bits: step 3 and the groups of four of step 2 run in WebAssembly SIMD
- * (luKernel.wat, two f64 lanes; step 3 keeps a two-row by four-column tile in registers for the whole
- * block) where it is available, on a copy of the matrix in the kernel's memory, and in plain
+ * Two paths give the same bits: the panels of step 1, step 3 and the groups of four of step 2 run in
+ * WebAssembly (luKernel.wat: SIMD with two f64 lanes; step 3 keeps a two-row by four-column tile in
+ * registers for the whole block) where it is available, on a copy of the matrix in the kernel's memory, and in plain
  * TypeScript otherwise (`path` = 'typescript' forces it). Every element receives the same
  * IEEE-754 operations in the same order on both paths (groups of four rank-1 terms summed left to
  * right, then subtracted; then the single terms), so
@@ -70,24 +70,34 @@ export function luFactor(a: Float64Array, n: number, pivots: Int32Array, path: L
   if (path === 'wasm' && kernel === null) {
     throw new RangeError("luFactor: path='wasm' but WebAssembly SIMD is not available here");
   }
-  // The matrix, then (from byte n n 8 + 64) two rows of multipliers packed by the kernel's update.
-  const bytes = n * n * 8 + 64 + 16 * OUTER_BLOCK;
+  // The matrix, then (from byte n n 8 + 64) two rows of multipliers packed by the kernel's update,
+  // then the pivots (i32) written by its panel factorisation.
+  const pivotsAt = n * n * 8 + 64 + 16 * OUTER_BLOCK;
+  const bytes = pivotsAt + 4 * n;
   if (kernel !== null && !ensureMemory(kernel.memory, bytes) && path === 'wasm') {
     throw new RangeError(`luFactor: path='wasm' but the kernel's memory cannot grow to ${bytes} bytes`);
   }
   if (kernel === null || kernel.memory.buffer.byteLength < bytes) {
-    factorColumns(a, n, pivots, 0, n, OUTER_BLOCK, null);
+    factorColumns(a, n, pivots, 0, n, OUTER_BLOCK, null, 0);
     return;
   }
   const work = new Float64Array(kernel.memory.buffer, 0, n * n);
   work.set(a.subarray(0, n * n));
-  factorColumns(work, n, pivots, 0, n, OUTER_BLOCK, kernel);
+  factorColumns(work, n, pivots, 0, n, OUTER_BLOCK, kernel, pivotsAt);
   a.set(work);
+  pivots.set(new Int32Array(kernel.memory.buffer, pivotsAt, n));
+}
+
+function singular(k: number, big: number): RangeError {
+  return new RangeError(
+    `luFactor: matrix is singular or not finite: pivot column ${k} has largest |a|=${big} (must be finite and > 0)`,
+  );
 }
 
 /**
  * Blocked LU of columns c0..c1-1 (rows c0..n-1), block width `block` (steps 1-3 above); `kernel`
- * (null: TypeScript) does step 3, with `a` the view of its memory.
+ * (null: TypeScript) factorises the panels (its pivots from byte `pivotsAt`) and does step 3, with
+ * `a` the view of its memory.
  */
 function factorColumns(
   a: Float64Array,
@@ -97,11 +107,16 @@ function factorColumns(
   c1: number,
   block: number,
   kernel: LuKernel | null,
+  pivotsAt: number,
 ): void {
   for (let k0 = c0; k0 < c1; k0 += block) {
     const kEnd = Math.min(k0 + block, c1);
-    if (block > INNER_BLOCK) factorColumns(a, n, pivots, k0, kEnd, INNER_BLOCK, kernel);
-    else factorPanel(a, n, pivots, k0, kEnd);
+    if (block > INNER_BLOCK) factorColumns(a, n, pivots, k0, kEnd, INNER_BLOCK, kernel, pivotsAt);
+    else if (kernel === null) factorPanel(a, n, pivots, k0, kEnd);
+    else {
+      const k = kernel.panel(n, k0, kEnd, pivotsAt);
+      if (k >= 0) throw singular(k, new Float64Array(a.buffer, n * n * 8, 1)[0]!);
+    }
     if (kEnd === c1) break;
     solveBlockRow(a, n, k0, kEnd, c1, kernel);
     if (kernel === null || (kEnd - k0) % 4 !== 0) {
@@ -126,11 +141,7 @@ function factorPanel(a: Float64Array, n: number, pivots: Int32Array, k0: number,
     }
   }
   for (let k = k0; k < kEnd; k++) {
-    if (!(big > 0) || !Number.isFinite(big)) {
-      throw new RangeError(
-        `luFactor: matrix is singular or not finite: pivot column ${k} has largest |a|=${big} (must be finite and > 0)`,
-      );
-    }
+    if (!(big > 0) || !Number.isFinite(big)) throw singular(k, big);
     pivots[k] = p;
     const rk = k * n;
     if (p !== k) {

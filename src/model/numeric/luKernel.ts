@@ -13,6 +13,8 @@ export interface LuKernel {
   update: (n: number, k0: number, kEnd: number, c1: number) => void;
   /** Row i of the block-row solve: groups of four p from p0, columns j0.. in pairs (see luKernel.wat). */
   updateRow: (n: number, i: number, p0: number, p1: number, j0: number, j1: number) => void;
+  /** Panel factorisation of columns k0..kEnd-1, pivots at byte `piv`: -1, or the singular column. */
+  panel: (n: number, k0: number, kEnd: number, piv: number) => number;
 }
 
 let kernel: LuKernel | null | undefined;
@@ -22,8 +24,8 @@ export function luKernel(): LuKernel | null {
   const instance = simdInstance(LU_KERNEL_WASM_BASE64);
   kernel = instance === null ? null : (instance.exports as unknown as LuKernel);
   if (kernel !== null) {
-    const { memory, update, updateRow } = kernel;
-    kernel = { memory, update, updateRow };
+    const { memory, update, updateRow, panel } = kernel;
+    kernel = { memory, update, updateRow, panel };
   }
   return kernel;
 }

@@ -156,4 +156,81 @@
       (local.set $p (i32.add (local.get $p) (i32.const 4)))
       (br $ps)))
   )
+;; Unblocked partial-pivoting LU of columns k0 .. kEnd - 1, rows k0 .. n - 1 (luFactor.ts, factorPanel:
+  ;; Golub & Van Loan alg. 3.4.1), the same operations in the same order: pivot search by strict
+  ;; comparison riding along with the elimination, whole-row interchanges, multipliers l = a[i][k] (1 / a[k][k]),
+  ;; a[i][j] -= l a[k][j] where l != 0. pivots[k] (i32 at byte $piv + 4 k) is the row swapped with k.
+  ;; Returns -1, or the column k whose largest |a| is zero or not finite (that value is left at byte
+  ;; n n 8 for the caller's message).
+  (func (export "panel") (param $n i32) (param $k0 i32) (param $kEnd i32) (param $piv i32) (result i32)
+    (local $n8 i32) (local $k i32) (local $p i32) (local $i i32) (local $j i32) (local $next i32) (local $nextP i32)
+    (local $rk i32) (local $rp i32) (local $ri i32) (local $end i32)
+    (local $big f64) (local $nextBig f64) (local $v f64) (local $inv f64) (local $l f64) (local $t v128)
+    (local.set $n8 (i32.shl (local.get $n) (i32.const 3)))
+    (local.set $p (local.get $k0))
+    (local.set $big (f64.abs (f64.load (i32.add (i32.mul (local.get $k0) (local.get $n8)) (i32.shl (local.get $k0) (i32.const 3))))))
+    (local.set $i (i32.add (local.get $k0) (i32.const 1)))
+    (block $done_search (loop $search
+      (br_if $done_search (i32.ge_s (local.get $i) (local.get $n)))
+      (local.set $v (f64.abs (f64.load (i32.add (i32.mul (local.get $i) (local.get $n8)) (i32.shl (local.get $k0) (i32.const 3))))))
+      (if (f64.gt (local.get $v) (local.get $big)) (then (local.set $big (local.get $v)) (local.set $p (local.get $i))))
+      (local.set $i (i32.add (local.get $i) (i32.const 1)))
+      (br $search)))
+    (local.set $k (local.get $k0))
+    (block $done_cols (loop $cols
+      (br_if $done_cols (i32.ge_s (local.get $k) (local.get $kEnd)))
+      (if (i32.or (i32.eqz (f64.gt (local.get $big) (f64.const 0))) (f64.eq (local.get $big) (f64.const inf)))
+        (then
+          (f64.store (i32.mul (local.get $n) (local.get $n8)) (local.get $big))
+          (return (local.get $k))))
+      (i32.store (i32.add (local.get $piv) (i32.shl (local.get $k) (i32.const 2))) (local.get $p))
+      (local.set $rk (i32.mul (local.get $k) (local.get $n8)))
+      (if (i32.ne (local.get $p) (local.get $k)) (then
+        ;; interchange rows k and p (all n columns; moves are exact, two at a time)
+        (local.set $rp (i32.mul (local.get $p) (local.get $n8)))
+        (local.set $end (i32.add (local.get $rk) (i32.shl (i32.shr_u (local.get $n) (i32.const 1)) (i32.const 4))))
+        (local.set $j (local.get $rk))
+        (block $done_swap (loop $swap
+          (br_if $done_swap (i32.ge_u (local.get $j) (local.get $end)))
+          (local.set $t (v128.load (local.get $j)))
+          (v128.store (local.get $j) (v128.load (local.get $rp)))
+          (v128.store (local.get $rp) (local.get $t))
+          (local.set $j (i32.add (local.get $j) (i32.const 16)))
+          (local.set $rp (i32.add (local.get $rp) (i32.const 16)))
+          (br $swap)))
+        (if (i32.and (local.get $n) (i32.const 1)) (then
+          (local.set $v (f64.load (local.get $j)))
+          (f64.store (local.get $j) (f64.load (local.get $rp)))
+          (f64.store (local.get $rp) (local.get $v))))))
+      (local.set $inv (f64.div (f64.const 1) (f64.load (i32.add (local.get $rk) (i32.shl (local.get $k) (i32.const 3))))))
+      (local.set $next (i32.add (local.get $k) (i32.const 1)))
+      (local.set $nextP (local.get $next))
+      (local.set $nextBig (f64.const 0))
+      (local.set $i (local.get $next))
+      (block $done_rows (loop $rows
+        (br_if $done_rows (i32.ge_s (local.get $i) (local.get $n)))
+        (local.set $ri (i32.mul (local.get $i) (local.get $n8)))
+        (local.set $l (f64.mul (f64.load (i32.add (local.get $ri) (i32.shl (local.get $k) (i32.const 3)))) (local.get $inv)))
+        (f64.store (i32.add (local.get $ri) (i32.shl (local.get $k) (i32.const 3))) (local.get $l))
+        (if (f64.ne (local.get $l) (f64.const 0)) (then
+          (local.set $j (local.get $next))
+          (block $done_j (loop $js
+            (br_if $done_j (i32.ge_s (local.get $j) (local.get $kEnd)))
+            (f64.store (i32.add (local.get $ri) (i32.shl (local.get $j) (i32.const 3)))
+              (f64.sub (f64.load (i32.add (local.get $ri) (i32.shl (local.get $j) (i32.const 3))))
+                (f64.mul (local.get $l) (f64.load (i32.add (local.get $rk) (i32.shl (local.get $j) (i32.const 3)))))))
+            (local.set $j (i32.add (local.get $j) (i32.const 1)))
+            (br $js)))))
+        (if (i32.lt_s (local.get $next) (local.get $kEnd)) (then
+          (local.set $v (f64.abs (f64.load (i32.add (local.get $ri) (i32.shl (local.get $next) (i32.const 3))))))
+          (if (i32.or (i32.eq (local.get $i) (local.get $next)) (f64.gt (local.get $v) (local.get $nextBig)))
+            (then (local.set $nextBig (local.get $v)) (local.set $nextP (local.get $i))))))
+        (local.set $i (i32.add (local.get $i) (i32.const 1)))
+        (br $rows)))
+      (local.set $p (local.get $nextP))
+      (local.set $big (local.get $nextBig))
+      (local.set $k (i32.add (local.get $k) (i32.const 1)))
+      (br $cols)))
+    (i32.const -1)
+  )
 )

@@ -48,6 +48,24 @@ describe('the WebAssembly SIMD trailing update of luFactor', () => {
     }
   });
 
+  it('reports a singular matrix as the TypeScript path does (the same column and value)', () => {
+    // Column 70 of a 100 x 100 matrix is zero: elimination meets an exactly zero pivot column there.
+    const n = 100;
+    const a = seededMatrix(n, 5, 10);
+    for (let i = 0; i < n; i++) a[i * n + 70] = 0;
+    const message = (path: 'typescript' | 'wasm') => {
+      try {
+        luFactor(Float64Array.from(a), n, new Int32Array(n), path);
+      } catch (e) {
+        return (e as Error).message;
+      }
+      return 'no error';
+    };
+    const viaTs = message('typescript');
+    expect(viaTs, `typescript path: got "${viaTs}"`).toMatch(/pivot column 70 has largest \|a\|=0/);
+    expect(message('wasm'), 'wasm path message vs typescript').toBe(viaTs);
+  });
+
   it('rejects an unknown path by name', () => {
     const a = Float64Array.from([2, 1, 1, 3]);
     expect(() => luFactor(a, 2, new Int32Array(2), 'gpu' as never)).toThrow(/path=gpu/);
