@@ -56,11 +56,6 @@ export function luFactor(a: Float64Array, n: number, pivots: Int32Array, path: L
   if (pivots.length < n) {
     throw new RangeError(`luFactor: pivots.length=${pivots.length} must be at least n=${n}`);
   }
-  for (let i = 0; i < n * n; i++) {
-    if (!Number.isFinite(a[i]!)) {
-      throw new RangeError(`luFactor: a[${i}]=${a[i]} must be finite`);
-    }
-  }
   if (path !== 'auto' && path !== 'typescript' && path !== 'wasm') {
     throw new RangeError(`luFactor: path=${String(path)} must be 'auto', 'typescript' or 'wasm'`);
   }
@@ -77,14 +72,21 @@ export function luFactor(a: Float64Array, n: number, pivots: Int32Array, path: L
     throw new RangeError(`luFactor: path='wasm' but the kernel's memory cannot grow to ${bytes} bytes`);
   }
   if (kernel === null || kernel.memory.buffer.byteLength < bytes) {
+    for (let i = 0; i < n * n; i++) if (!Number.isFinite(a[i]!)) throw notFinite(a, i);
     factorColumns(a, n, pivots, 0, n, OUTER_BLOCK, null, 0);
     return;
   }
   const work = new Float64Array(kernel.memory.buffer, 0, n * n);
   work.set(a.subarray(0, n * n));
+  const bad = kernel.firstNonFinite(n * n);
+  if (bad >= 0) throw notFinite(a, bad);
   factorColumns(work, n, pivots, 0, n, OUTER_BLOCK, kernel, pivotsAt);
   a.set(work);
   pivots.set(new Int32Array(kernel.memory.buffer, pivotsAt, n));
+}
+
+function notFinite(a: Float64Array, i: number): RangeError {
+  return new RangeError(`luFactor: a[${i}]=${a[i]} must be finite`);
 }
 
 function singular(k: number, big: number): RangeError {

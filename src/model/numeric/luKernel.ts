@@ -15,6 +15,8 @@ export interface LuKernel {
   updateRow: (n: number, i: number, p0: number, p1: number, j0: number, j1: number) => void;
   /** Panel factorisation of columns k0..kEnd-1, pivots at byte `piv`: -1, or the singular column. */
   panel: (n: number, k0: number, kEnd: number, piv: number) => number;
+  /** Index of the first element of the matrix at byte 0 (count values) that is not finite, or -1. */
+  firstNonFinite: (count: number) => number;
 }
 
 let kernel: LuKernel | null | undefined;
@@ -24,8 +26,8 @@ export function luKernel(): LuKernel | null {
   const instance = simdInstance(LU_KERNEL_WASM_BASE64);
   kernel = instance === null ? null : (instance.exports as unknown as LuKernel);
   if (kernel !== null) {
-    const { memory, update, updateRow, panel } = kernel;
-    kernel = { memory, update, updateRow, panel };
+    const { memory, update, updateRow, panel, firstNonFinite } = kernel;
+    kernel = { memory, update, updateRow, panel, firstNonFinite };
   }
   return kernel;
 }

@@ -233,4 +233,23 @@
       (br $cols)))
     (i32.const -1)
   )
+;; The index of the first element of a[0 .. count - 1] that is not finite (x - x is not 0: an
+  ;; infinity or a NaN), or -1; two at a time.
+  (func (export "firstNonFinite") (param $count i32) (result i32)
+    (local $i i32) (local $x f64)
+    (block $done_pairs (loop $pairs
+      (br_if $done_pairs (i32.ge_u (i32.add (local.get $i) (i32.const 1)) (local.get $count)))
+      (br_if $done_pairs (i32.eqz (i64x2.all_true (f64x2.eq
+        (f64x2.sub (v128.load (i32.shl (local.get $i) (i32.const 3))) (v128.load (i32.shl (local.get $i) (i32.const 3))))
+        (v128.const i64x2 0 0)))))
+      (local.set $i (i32.add (local.get $i) (i32.const 2)))
+      (br $pairs)))
+    (block $done (loop $singles
+      (br_if $done (i32.ge_u (local.get $i) (local.get $count)))
+      (local.set $x (f64.load (i32.shl (local.get $i) (i32.const 3))))
+      (if (f64.ne (f64.sub (local.get $x) (local.get $x)) (f64.const 0)) (then (return (local.get $i))))
+      (local.set $i (i32.add (local.get $i) (i32.const 1)))
+      (br $singles)))
+    (i32.const -1)
+  )
 )

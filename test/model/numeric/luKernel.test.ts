@@ -66,6 +66,32 @@ describe('the WebAssembly SIMD trailing update of luFactor', () => {
     expect(message('wasm'), 'wasm path message vs typescript').toBe(viaTs);
   });
 
+  it('names the first non-finite entry as the TypeScript path does', () => {
+    const cases = [
+      { n: 100, bad: [4321, 5000] },
+      { n: 100, bad: [4320] },
+      { n: 65, bad: [65 * 65 - 1] },
+      { n: 64, bad: [0, 1] },
+    ];
+    for (const { n, bad } of cases) {
+      for (const value of [Number.POSITIVE_INFINITY, Number.NaN, Number.NEGATIVE_INFINITY]) {
+        const a = seededMatrix(n, 3, n);
+        for (const i of bad) a[i] = value;
+        const message = (path: 'typescript' | 'wasm') => {
+          try {
+            luFactor(Float64Array.from(a), n, new Int32Array(n), path);
+          } catch (e) {
+            return (e as Error).message;
+          }
+          return 'no error';
+        };
+        const expected = `luFactor: a[${bad[0]}]=${value} must be finite`;
+        expect(message('typescript'), `n=${n} bad=${bad} typescript`).toBe(expected);
+        expect(message('wasm'), `n=${n} bad=${bad} wasm`).toBe(expected);
+      }
+    }
+  });
+
   it('rejects an unknown path by name', () => {
     const a = Float64Array.from([2, 1, 1, 3]);
     expect(() => luFactor(a, 2, new Int32Array(2), 'gpu' as never)).toThrow(/path=gpu/);
