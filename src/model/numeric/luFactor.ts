@@ -34,8 +34,6 @@ import { ensureMemory } from './simdInstance';
 
 const OUTER_BLOCK = 32;
 const INNER_BLOCK = 8;
-/** Narrower block rows are solved in TypeScript (solveBlockRow): the call costs more than SIMD saves. */
-const KERNEL_ROW_MIN_COLUMNS = OUTER_BLOCK;
 /** Below this order the copy into the kernel's memory costs more than SIMD saves. */
 const WASM_MIN_N = 64;
 /**
@@ -178,8 +176,8 @@ function factorPanel(a: Float64Array, n: number, pivots: Int32Array, k0: number,
 }
 
 /**
- * U12 = L11^-1 A12 for rows k0..kEnd-1, columns kEnd..c1-1 (unit lower triangular, row by row); the
- * kernel, when given, does each row's groups of four on column pairs, the rest is done here.
+ * U12 = L11^-1 A12 for rows k0..kEnd-1, columns kEnd..c1-1 (unit lower triangular, row by row): in
+ * the kernel when given (one call for the whole block row), else here.
  */
 function solveBlockRow(
   a: Float64Array,
@@ -189,21 +187,8 @@ function solveBlockRow(
   c1: number,
   kernel: LuKernel | null,
 ): void {
-  // A row of a narrow block (the inner panels': at most OUTER_BLOCK - INNER_BLOCK columns) is a few
-  // dozen multiply-adds, less than a call into the kernel costs; both paths give the same bits.
-  const useKernel = kernel !== null && c1 - kEnd >= KERNEL_ROW_MIN_COLUMNS;
-  for (let i = k0 + 1; i < kEnd; i++) {
-    if (!useKernel) {
-      updateRow(a, n, i * n, k0, i, kEnd, c1);
-      continue;
-    }
-    kernel!.updateRow(n, i, k0, i, kEnd, c1);
-    const groupsEnd = k0 + 4 * Math.floor((i - k0) / 4);
-    const colsEven = kEnd + 2 * Math.floor((c1 - kEnd) / 2);
-    // The odd column (groups then single p, as updateRow), then the single p on the paired columns.
-    if (colsEven < c1) updateRow(a, n, i * n, k0, i, colsEven, c1);
-    if (groupsEnd < i) updateRow(a, n, i * n, groupsEnd, i, kEnd, colsEven);
-  }
+  if (kernel !== null) kernel.blockRow(n, k0, kEnd, c1);
+  else for (let i = k0 + 1; i < kEnd; i++) updateRow(a, n, i * n, k0, i, kEnd, c1);
 }
 
 /**

@@ -11,8 +11,8 @@ export interface LuKernel {
   memory: WebAssembly.Memory;
   /** A22 -= L21 U12 on the matrix at byte 0 (see luKernel.wat for the rows, columns and p covered). */
   update: (n: number, k0: number, kEnd: number, c1: number) => void;
-  /** Row i of the block-row solve: groups of four p from p0, columns j0.. in pairs (see luKernel.wat). */
-  updateRow: (n: number, i: number, p0: number, p1: number, j0: number, j1: number) => void;
+  /** The block-row solve U12 = L11^-1 A12 of rows k0..kEnd-1, columns kEnd..c1-1 (see luKernel.wat). */
+  blockRow: (n: number, k0: number, kEnd: number, c1: number) => void;
   /** Panel factorisation of columns k0..kEnd-1, pivots at byte `piv`: -1, or the singular column. */
   panel: (n: number, k0: number, kEnd: number, piv: number) => number;
   /** Index of the first element of the matrix at byte 0 (count values) that is not finite, or -1. */
@@ -26,8 +26,8 @@ export function luKernel(): LuKernel | null {
   const instance = simdInstance(LU_KERNEL_WASM_BASE64);
   kernel = instance === null ? null : (instance.exports as unknown as LuKernel);
   if (kernel !== null) {
-    const { memory, update, updateRow, panel, firstNonFinite } = kernel;
-    kernel = { memory, update, updateRow, panel, firstNonFinite };
+    const { memory, update, blockRow, panel, firstNonFinite } = kernel;
+    kernel = { memory, update, blockRow, panel, firstNonFinite };
   }
   return kernel;
 }

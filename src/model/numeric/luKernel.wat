@@ -117,46 +117,89 @@
       (br $rows)))
   )
 
-  ;; One row i: a[i][j] -= sum over p = p0 .. p0 + 4 floor((p1 - p0) / 4) - 1 of a[i][p] a[p][j], in
-  ;; groups of four summed left to right as above, for columns j0 .. j0 + 2 floor((j1 - j0) / 2) - 1.
-  ;; (The block-row solve U12 = L11^-1 A12, Golub & Van Loan alg. 3.1.3 row-oriented; the caller does
-  ;; the single p and the odd column.)
-  (func (export "updateRow") (param $n i32) (param $i i32) (param $p0 i32) (param $p1 i32) (param $j0 i32) (param $j1 i32)
-    (local $p i32) (local $n8 i32) (local $ri i32)
+  ;; Block row of U: U12 = L11^-1 A12 on rows k0 + 1 .. kEnd - 1, columns kEnd .. c1 - 1 (luFactor.ts,
+  ;; solveBlockRow; Golub & Van Loan alg. 3.1.3, row-oriented): row i gets, element by element,
+  ;;   a[i][j] -= ((l[i][p] u[p][j] + l[i][p+1] u[p+1][j]) + l[i][p+2] u[p+2][j]) + l[i][p+3] u[p+3][j]
+  ;; for the groups of four p from k0 below i, then a[i][j] -= l[i][p] u[p][j] for the single p left,
+  ;; as the TypeScript updateRow; columns two at a time, an odd last column alone.
+  (func (export "blockRow") (param $n i32) (param $k0 i32) (param $kEnd i32) (param $c1 i32)
+    (local $n8 i32) (local $i i32) (local $p i32) (local $ri i32) (local $lp i32)
     (local $r0 i32) (local $r1 i32) (local $r2 i32) (local $r3 i32)
-    (local $jb i32) (local $jp i32)
+    (local $jb i32) (local $jp i32) (local $je i32)
     (local $m0 v128) (local $m1 v128) (local $m2 v128) (local $m3 v128)
+    (local $f0 f64) (local $f1 f64) (local $f2 f64) (local $f3 f64)
     (local.set $n8 (i32.shl (local.get $n) (i32.const 3)))
-    (local.set $ri (i32.mul (local.get $i) (local.get $n8)))
-    (local.set $jp (i32.add (i32.shl (local.get $j0) (i32.const 3))
-       (i32.shl (i32.shr_u (i32.sub (local.get $j1) (local.get $j0)) (i32.const 1)) (i32.const 4))))
-    (local.set $p (local.get $p0))
-    (block $done_p (loop $ps
-      (br_if $done_p (i32.ge_s (i32.add (local.get $p) (i32.const 3)) (local.get $p1)))
-      (local.set $m0 (f64x2.splat (f64.load (i32.add (local.get $ri) (i32.shl (local.get $p) (i32.const 3))))))
-      (local.set $m1 (f64x2.splat (f64.load offset=8 (i32.add (local.get $ri) (i32.shl (local.get $p) (i32.const 3))))))
-      (local.set $m2 (f64x2.splat (f64.load offset=16 (i32.add (local.get $ri) (i32.shl (local.get $p) (i32.const 3))))))
-      (local.set $m3 (f64x2.splat (f64.load offset=24 (i32.add (local.get $ri) (i32.shl (local.get $p) (i32.const 3))))))
-      (local.set $r0 (i32.mul (local.get $p) (local.get $n8)))
-      (local.set $r1 (i32.add (local.get $r0) (local.get $n8)))
-      (local.set $r2 (i32.add (local.get $r1) (local.get $n8)))
-      (local.set $r3 (i32.add (local.get $r2) (local.get $n8)))
-      (local.set $jb (i32.shl (local.get $j0) (i32.const 3)))
-      (block $done_j (loop $js
-        (br_if $done_j (i32.ge_u (local.get $jb) (local.get $jp)))
-        (v128.store (i32.add (local.get $ri) (local.get $jb))
-          (f64x2.sub (v128.load (i32.add (local.get $ri) (local.get $jb)))
-            (f64x2.add (f64x2.add (f64x2.add
-                  (f64x2.mul (local.get $m0) (v128.load (i32.add (local.get $r0) (local.get $jb))))
-                  (f64x2.mul (local.get $m1) (v128.load (i32.add (local.get $r1) (local.get $jb)))))
-                (f64x2.mul (local.get $m2) (v128.load (i32.add (local.get $r2) (local.get $jb)))))
-              (f64x2.mul (local.get $m3) (v128.load (i32.add (local.get $r3) (local.get $jb)))))))
-        (local.set $jb (i32.add (local.get $jb) (i32.const 16)))
-        (br $js)))
-      (local.set $p (i32.add (local.get $p) (i32.const 4)))
-      (br $ps)))
+    (local.set $je (i32.shl (local.get $c1) (i32.const 3)))
+    (local.set $jp (i32.add (i32.shl (local.get $kEnd) (i32.const 3))
+      (i32.shl (i32.shr_u (i32.sub (local.get $c1) (local.get $kEnd)) (i32.const 1)) (i32.const 4))))
+    (local.set $i (i32.add (local.get $k0) (i32.const 1)))
+    (block $done_rows (loop $rows
+      (br_if $done_rows (i32.ge_s (local.get $i) (local.get $kEnd)))
+      (local.set $ri (i32.mul (local.get $i) (local.get $n8)))
+      (local.set $p (local.get $k0))
+      ;; groups of four p
+      (block $done_groups (loop $groups
+        (br_if $done_groups (i32.ge_s (i32.add (local.get $p) (i32.const 3)) (local.get $i)))
+        (local.set $lp (i32.add (local.get $ri) (i32.shl (local.get $p) (i32.const 3))))
+        (local.set $f0 (f64.load (local.get $lp)))
+        (local.set $f1 (f64.load offset=8 (local.get $lp)))
+        (local.set $f2 (f64.load offset=16 (local.get $lp)))
+        (local.set $f3 (f64.load offset=24 (local.get $lp)))
+        (local.set $m0 (f64x2.splat (local.get $f0)))
+        (local.set $m1 (f64x2.splat (local.get $f1)))
+        (local.set $m2 (f64x2.splat (local.get $f2)))
+        (local.set $m3 (f64x2.splat (local.get $f3)))
+        (local.set $r0 (i32.mul (local.get $p) (local.get $n8)))
+        (local.set $r1 (i32.add (local.get $r0) (local.get $n8)))
+        (local.set $r2 (i32.add (local.get $r1) (local.get $n8)))
+        (local.set $r3 (i32.add (local.get $r2) (local.get $n8)))
+        (local.set $jb (i32.shl (local.get $kEnd) (i32.const 3)))
+        (block $done_j (loop $js
+          (br_if $done_j (i32.ge_u (local.get $jb) (local.get $jp)))
+          (v128.store (i32.add (local.get $ri) (local.get $jb))
+            (f64x2.sub (v128.load (i32.add (local.get $ri) (local.get $jb)))
+              (f64x2.add (f64x2.add (f64x2.add
+                    (f64x2.mul (local.get $m0) (v128.load (i32.add (local.get $r0) (local.get $jb))))
+                    (f64x2.mul (local.get $m1) (v128.load (i32.add (local.get $r1) (local.get $jb)))))
+                  (f64x2.mul (local.get $m2) (v128.load (i32.add (local.get $r2) (local.get $jb)))))
+                (f64x2.mul (local.get $m3) (v128.load (i32.add (local.get $r3) (local.get $jb)))))))
+          (local.set $jb (i32.add (local.get $jb) (i32.const 16)))
+          (br $js)))
+        (if (i32.lt_u (local.get $jb) (local.get $je)) (then
+          (f64.store (i32.add (local.get $ri) (local.get $jb))
+            (f64.sub (f64.load (i32.add (local.get $ri) (local.get $jb)))
+              (f64.add (f64.add (f64.add
+                    (f64.mul (local.get $f0) (f64.load (i32.add (local.get $r0) (local.get $jb))))
+                    (f64.mul (local.get $f1) (f64.load (i32.add (local.get $r1) (local.get $jb)))))
+                  (f64.mul (local.get $f2) (f64.load (i32.add (local.get $r2) (local.get $jb)))))
+                (f64.mul (local.get $f3) (f64.load (i32.add (local.get $r3) (local.get $jb)))))))))
+        (local.set $p (i32.add (local.get $p) (i32.const 4)))
+        (br $groups)))
+      ;; single p
+      (block $done_singles (loop $singles
+        (br_if $done_singles (i32.ge_s (local.get $p) (local.get $i)))
+        (local.set $f0 (f64.load (i32.add (local.get $ri) (i32.shl (local.get $p) (i32.const 3)))))
+        (local.set $m0 (f64x2.splat (local.get $f0)))
+        (local.set $r0 (i32.mul (local.get $p) (local.get $n8)))
+        (local.set $jb (i32.shl (local.get $kEnd) (i32.const 3)))
+        (block $done_j1 (loop $js1
+          (br_if $done_j1 (i32.ge_u (local.get $jb) (local.get $jp)))
+          (v128.store (i32.add (local.get $ri) (local.get $jb))
+            (f64x2.sub (v128.load (i32.add (local.get $ri) (local.get $jb)))
+              (f64x2.mul (local.get $m0) (v128.load (i32.add (local.get $r0) (local.get $jb))))))
+          (local.set $jb (i32.add (local.get $jb) (i32.const 16)))
+          (br $js1)))
+        (if (i32.lt_u (local.get $jb) (local.get $je)) (then
+          (f64.store (i32.add (local.get $ri) (local.get $jb))
+            (f64.sub (f64.load (i32.add (local.get $ri) (local.get $jb)))
+              (f64.mul (local.get $f0) (f64.load (i32.add (local.get $r0) (local.get $jb))))))))
+        (local.set $p (i32.add (local.get $p) (i32.const 1)))
+        (br $singles)))
+      (local.set $i (i32.add (local.get $i) (i32.const 1)))
+      (br $rows)))
   )
-;; Unblocked partial-pivoting LU of columns k0 .. kEnd - 1, rows k0 .. n - 1 (luFactor.ts, factorPanel:
+
+  ;; Unblocked partial-pivoting LU of columns k0 .. kEnd - 1, rows k0 .. n - 1 (luFactor.ts, factorPanel:
   ;; Golub & Van Loan alg. 3.4.1), the same operations in the same order: pivot search by strict
   ;; comparison riding along with the elimination, whole-row interchanges, multipliers l = a[i][k] (1 / a[k][k]),
   ;; a[i][j] -= l a[k][j] where l != 0. pivots[k] (i32 at byte $piv + 4 k) is the row swapped with k.
