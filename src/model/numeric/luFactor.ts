@@ -35,7 +35,7 @@ import { ensureMemory } from './simdInstance';
 const OUTER_BLOCK = 32;
 const INNER_BLOCK = 8;
 /** Below this order the copy into the kernel's memory costs more than SIMD saves. */
-const WASM_MIN_N = 64;
+const WASM_MIN_N = 16;
 /**
  * Above this order 'auto' keeps to TypeScript: the kernel's memory (a copy of the matrix) only grows,
  * and a thread should not hold on to more than 32 MiB for it (n = 2048).

@@ -21,7 +21,7 @@ describe('the WebAssembly SIMD trailing update of luFactor', () => {
 
   it('gives the TypeScript path bit for bit: the same pivots and factors (tolerance 0), odd and even orders', () => {
     // Invariant of the design: every element receives the same IEEE-754 operations in the same order.
-    for (const n of [64, 65, 66, 67, 97, 130, 288]) {
+    for (const n of [1, 2, 5, 16, 17, 31, 33, 57, 64, 65, 66, 67, 97, 130, 288]) {
       for (const shift of [0, 0.5 * Math.sqrt(n)]) {
         const a = seededMatrix(n, 17 * n + 1, shift);
         const viaTs = Float64Array.from(a);
