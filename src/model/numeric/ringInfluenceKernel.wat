@@ -38,9 +38,10 @@
   )
 
   ;; A strip's rings (lower edge line: corner set $low at dz0; upper: $up at dz1) added into the two-row
-  ;; buffer from entry $o on, times $sign (+1 real strip, -1 ground image).
+  ;; buffer from entry $o on: added for the real strip, subtracted for the ground image ($image = 1;
+  ;; x - y is x + (-1) y exactly, as the TypeScript's sign * term).
   (func $strip (param $o i32) (param $cc i32) (param $low i32) (param $up i32)
-    (param $dz0 v128) (param $dz1 v128) (param $sign v128)
+    (param $dz0 v128) (param $dz1 v128) (param $image i32)
     (local $m i32) (local $k0 v128) (local $k1 v128) (local $dz0Sq v128) (local $dz1Sq v128)
     (local $r1x v128) (local $u1x v128) (local $r2x v128) (local $u2x v128)
     (local $c v128) (local $r0x v128) (local $r0z v128) (local $l2 v128)
@@ -82,12 +83,17 @@
         (v128.const i64x2 0 0)
         (f64x2.gt (local.get $dz0Sq)
           (f64x2.mul (f64x2.mul (f64x2.splat (f64.const 0x1.79ca10c924224p-67)) (local.get $r0)) (local.get $r0)))))
-      (v128.store (local.get $o) (f64x2.add (v128.load (local.get $o))
-        (f64x2.mul (local.get $sign) (f64x2.sub (f64x2.add (local.get $span) (local.get $upper)) (local.get $lower)))))
+      (local.set $r0 (f64x2.sub (f64x2.add (local.get $span) (local.get $upper)) (local.get $lower)))
+      (if (local.get $image)
+        (then (v128.store (local.get $o) (f64x2.sub (v128.load (local.get $o)) (local.get $r0))))
+        (else (v128.store (local.get $o) (f64x2.add (v128.load (local.get $o)) (local.get $r0)))))
       ;; the same segment is ring m - 1's trailing side
       (if (local.get $m) (then
-        (v128.store offset=0 (i32.sub (local.get $o) (i32.const 16))
-          (f64x2.sub (v128.load (i32.sub (local.get $o) (i32.const 16))) (f64x2.mul (local.get $sign) (local.get $span))))))
+        (if (local.get $image)
+          (then (v128.store (i32.sub (local.get $o) (i32.const 16))
+            (f64x2.add (v128.load (i32.sub (local.get $o) (i32.const 16))) (local.get $span))))
+          (else (v128.store (i32.sub (local.get $o) (i32.const 16))
+            (f64x2.sub (v128.load (i32.sub (local.get $o) (i32.const 16))) (local.get $span)))))))
       (local.set $low (i32.add (local.get $low) (i32.const 48)))
       (local.set $up (i32.add (local.get $up) (i32.const 48)))
       (local.set $o (i32.add (local.get $o) (i32.const 16)))
@@ -110,7 +116,9 @@
       (f64x2.gt (local.get $dz0Sq) (f64x2.mul (f64x2.splat (f64.const 0x1.79ca10c924224p-67))
         (f64x2.add (f64x2.mul (local.get $r0) (local.get $r0)) (local.get $dz0Sq))))))
     (local.set $o (i32.sub (local.get $o) (i32.const 16)))
-    (v128.store (local.get $o) (f64x2.add (v128.load (local.get $o)) (f64x2.mul (local.get $sign) (local.get $wake))))
+    (if (local.get $image)
+      (then (v128.store (local.get $o) (f64x2.sub (v128.load (local.get $o)) (local.get $wake))))
+      (else (v128.store (local.get $o) (f64x2.add (v128.load (local.get $o)) (local.get $wake)))))
   )
 
   (func (export "build")
@@ -159,7 +167,7 @@
         (call $corners (local.get $up) (i32.add (local.get $upperX) (local.get $nodes))
           (i32.add (local.get $cc) (i32.const 1)) (local.get $px) (local.get $dz1))
         (call $strip (local.get $b) (local.get $cc) (local.get $low) (local.get $up)
-          (local.get $dz0) (local.get $dz1) (f64x2.splat (f64.const 1)))
+          (local.get $dz0) (local.get $dz1) (i32.const 0))
         ;; the image strip: edge lines mirrored to z' = 2 g - z
         (if (local.get $ground) (then
           (local.set $idz0 (f64x2.sub (local.get $pz) (f64x2.splat (f64.sub (local.get $g2) (local.get $z0)))))
@@ -170,7 +178,7 @@
           (call $corners (local.get $imageUp) (i32.add (local.get $upperX) (local.get $nodes))
             (i32.add (local.get $cc) (i32.const 1)) (local.get $px) (local.get $idz1))
           (call $strip (local.get $b) (local.get $cc) (local.get $imageLow) (local.get $imageUp)
-            (local.get $idz0) (local.get $idz1) (f64x2.splat (f64.const -1)))))
+            (local.get $idz0) (local.get $idz1) (i32.const 1))))
         ;; shared corners and the same dz: the next strip's lower sets are these upper ones
         (local.set $carried (i32.and
           (i32.lt_u (i32.add (local.get $s) (i32.const 1)) (local.get $spanCount))
