@@ -15,14 +15,14 @@
  *        rows of A22 at a time against four rows of U12 (12 multipliers held in registers; every U12
  *        value loaded once serves three rows, and each A22 element is loaded and stored once per four
  *        rank-1 terms).
- * Two paths give the same bits: the panels of step 1, step 3 and the groups of four of step 2 run in
- * WebAssembly (luKernel.wat: SIMD with two f64 lanes; step 3 keeps a two-row by four-column tile in
- * registers for the whole block) where it is available, on a copy of the matrix in the kernel's
- * memory, and in plain TypeScript otherwise (`path` = 'typescript' forces it). Every element receives
- * the same IEEE-754 operations in the same order on both paths (groups of four rank-1 terms summed
- * left to right, then subtracted; then the single terms), so the factors and pivots are identical. Plain scalar TypeScript gets its speed from cutting loads and
- * stores per multiply-add (register tiling) and from short panels that stay in cache; measured with
- * `npm run bench` (see README, Performance). A different block size changes the rounding of the
+ * Two paths give the same bits: steps 1-3 run in WebAssembly (luKernel.wat: SIMD with two f64 lanes;
+ * step 3 keeps a two-row by four-column tile of A22 in registers for the whole block) where it is
+ * available, on a copy of the matrix in the kernel's memory, and in plain TypeScript otherwise
+ * (`path` = 'typescript' forces it). Every element receives the same IEEE-754 operations in the same
+ * order on both paths (groups of four rank-1 terms summed left to right, then subtracted; then the
+ * single terms), so the factors and pivots are identical. Plain scalar TypeScript gets its speed from
+ * cutting loads and stores per multiply-add (register tiling) and from short panels that stay in
+ * cache; measured with `npm run bench` (see README, Performance). A different block size changes the rounding of the
  * factors (summation order), not their accuracy.
  *
  * `pivots[k]` is the row swapped with row k at step k (LAPACK convention, 0-based), to be applied

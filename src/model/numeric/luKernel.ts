@@ -1,6 +1,6 @@
 /**
- * The WebAssembly SIMD trailing update and block-row solve of `luFactor` (source: luKernel.wat, bytes: luKernelWasm.ts),
- * instantiated once per thread on first use. Returns null where WebAssembly or its SIMD is missing, or
+ * The WebAssembly SIMD panel factorisation, block-row solve and trailing update of `luFactor` (source:
+ * luKernel.wat, bytes: luKernelWasm.ts), instantiated once per thread on first use. Returns null where WebAssembly or its SIMD is missing, or
  * where the page's Content-Security-Policy forbids compiling it: `luFactor` then runs the plain
  * TypeScript path, which gives the same bits.
  */
