@@ -3,7 +3,8 @@
  * bytes: ringInfluenceKernelWasm.ts), instantiated once per thread on first use; the inputs are copied
  * into its memory and the matrix out of it. Same arguments and the same bits as the TypeScript loops of
  * `ringInfluenceMatrix` (which checks the arguments and computes `shared`); false where WebAssembly SIMD
- * is missing or its memory cannot grow, and the caller then runs those loops.
+ * is missing, its memory cannot grow or the order is above WASM_MAX_N, and the caller then runs those
+ * loops.
  */
 import { RING_INFLUENCE_KERNEL_WASM_BASE64 } from './ringInfluenceKernelWasm';
 import { ensureMemory, simdInstance } from './simdInstance';
@@ -25,6 +26,12 @@ interface RingInfluenceKernel {
     work: number,
   ) => void;
 }
+
+/**
+ * Above this order the TypeScript loops run instead: the kernel's memory (a copy of the matrix) only
+ * grows, and a thread should not hold on to more than about 32 MiB for it (as luFactor's WASM_MAX_N).
+ */
+const WASM_MAX_N = 2048;
 
 let kernel: RingInfluenceKernel | null | undefined;
 
@@ -62,8 +69,9 @@ export function ringInfluenceWasm(
   shared: Uint8Array,
   out: Float64Array,
 ): boolean {
-  const k = ringInfluenceKernel();
   const spanCount = edgeZ.length - 1;
+  if (spanCount * chordCount > WASM_MAX_N) return false;
+  const k = ringInfluenceKernel();
   const at = layout(spanCount, chordCount);
   if (k === null || !ensureMemory(k.memory, at.end)) return false;
   const buffer = k.memory.buffer;
