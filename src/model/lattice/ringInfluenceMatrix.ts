@@ -174,7 +174,9 @@ export function ringInfluenceMatrix(
       return out;
     }
     if (path === 'wasm') {
-      throw new RangeError("ringInfluenceMatrix: path='wasm' but WebAssembly SIMD is not available here");
+      throw new RangeError(
+        "ringInfluenceMatrix: path='wasm' but the WebAssembly kernel cannot run (no SIMD here, no memory, or n > 2048)",
+      );
     }
   }
   const ground = Number.isFinite(groundZM);
