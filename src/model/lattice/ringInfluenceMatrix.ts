@@ -159,6 +159,9 @@ export function ringInfluenceMatrix(
   if (out.length < n * n) {
     throw new RangeError(`ringInfluenceMatrix: out.length=${out.length} must be at least ${n * n}`);
   }
+  if (path !== 'auto' && path !== 'typescript' && path !== 'wasm') {
+    throw new RangeError(`ringInfluenceMatrix: path=${String(path)} must be 'auto', 'typescript' or 'wasm'`);
+  }
   ensureScratch(cols, spanCount);
   for (let s = 0; s + 1 < spanCount; s++) {
     let same = 1;

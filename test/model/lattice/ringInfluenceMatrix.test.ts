@@ -114,4 +114,27 @@ describe('ringInfluenceMatrix', () => {
       ).toBe(-1);
     }
   });
+
+  it('rejects an unknown path by name', () => {
+    const l = buildWheelLattice({
+      radiusM: 0.311,
+      spanCount: 3,
+      chordCount: 2,
+      ground: false,
+      openAnnuliM: [],
+    });
+    const call = () =>
+      ringInfluenceMatrix(
+        l.edgeZ,
+        l.nodeLowerX,
+        l.nodeUpperX,
+        l.chordCount,
+        l.controlX,
+        l.controlZ,
+        l.groundZM,
+        new Float64Array(36),
+        'gpu' as never,
+      );
+    expect(call).toThrow(/path=gpu must be/);
+  });
 });
