@@ -15,7 +15,7 @@
  */
 import { buildWheelLattice } from '../src/model/lattice/buildWheelLattice';
 import { ringInfluenceMatrix } from '../src/model/lattice/ringInfluenceMatrix';
-import { timeIt } from './timing';
+import { timeWallAndCpu } from './cpuTime';
 
 const SEGMENT_FLOPS = 35;
 const WAKE_LEG_FLOPS = 13;
@@ -25,6 +25,7 @@ export interface InfluenceFigures {
   lattice: string;
   medianMs: number;
   gflops: number;
+  cpuGflops: number;
   executedGflops: number;
   typescriptMedianMs: number;
   typescriptGflops: number;
@@ -87,14 +88,15 @@ export function influenceFigures(): InfluenceFigures[] {
     const repeats = n > 500 ? 9 : 31;
     run('auto')(); // compile and tier up before timing
     run('typescript')();
-    const fast = timeIt(repeats, run('auto'));
-    const plain = timeIt(repeats, run('typescript'));
+    const fast = timeWallAndCpu(repeats, run('auto'));
+    const plain = timeWallAndCpu(repeats, run('typescript'));
     const gflops = (flops: number, ms: number) => +(flops / (ms * 1e-3) / 1e9).toFixed(2);
     return {
       n,
       lattice: label,
       medianMs: +fast.medianMs.toFixed(3),
       gflops: gflops(textbookFlops(l), fast.medianMs),
+      cpuGflops: gflops(textbookFlops(l), fast.medianCpuMs),
       executedGflops: gflops(executedFlops(l), fast.medianMs),
       typescriptMedianMs: +plain.medianMs.toFixed(3),
       typescriptGflops: gflops(textbookFlops(l), plain.medianMs),
