@@ -1,6 +1,7 @@
 """LAPACK's LU (dgetrf through scipy.linalg.lu_factor) on the matrices of `npm run bench`'s LU figure.
 
-Prints one JSON line: {"n": {"medianMs": .., "gflops": ..}, ..., "numpy": .., "scipy": .., "blas": ..}
+Prints one JSON line: {"n": {"medianMs": .., "gflops": .., "medianCpuMs": .., "cpuGflops": ..}, ...,
+"numpy": .., "scipy": .., "blas": ..} (wall time and this process's CPU time, medians)
 or {"skipped": "<reason>"} when numpy or scipy is missing. Run by bench/lapackLu.ts with one BLAS thread.
 """
 
@@ -42,14 +43,28 @@ for arg in sys.argv[1:]:
         values[i] = seed / 2147483648 - 0.5
     source = values.reshape(n, n) + n * np.eye(n)
     times = []
+    cpu = []
     checksum = 0.0
+    work = np.array(source, order="F")
+    sl.lu_factor(work, overwrite_a=True, check_finite=False)  # warm-up, as for ours
     for _ in range(repeats):
         work = np.array(source, order="F")
+        c0 = time.process_time()
         t0 = time.perf_counter()
         lu, piv = sl.lu_factor(work, overwrite_a=True, check_finite=False)
         times.append(time.perf_counter() - t0)
+        cpu.append(time.process_time() - c0)
         checksum += float(lu[n - 1, n - 1])
     times.sort()
+    cpu.sort()
     ms = times[len(times) // 2] * 1e3
-    out[str(n)] = {"medianMs": round(ms, 2), "gflops": round((2 / 3) * n**3 / (ms * 1e-3) / 1e9, 2), "checksum": checksum}
+    cpu_ms = cpu[len(cpu) // 2] * 1e3
+    flops = (2 / 3) * n**3
+    out[str(n)] = {
+        "medianMs": round(ms, 2),
+        "gflops": round(flops / (ms * 1e-3) / 1e9, 2),
+        "medianCpuMs": round(cpu_ms, 2),
+        "cpuGflops": round(flops / (cpu_ms * 1e-3) / 1e9, 2) if cpu_ms > 0 else None,
+        "checksum": checksum,
+    }
 print(json.dumps(out))

@@ -8,7 +8,10 @@ import { spawnSync } from 'node:child_process';
 import { fileURLToPath } from 'node:url';
 
 export interface LapackLu {
-  figures: Record<string, { medianMs: number; gflops: number }>;
+  figures: Record<
+    string,
+    { medianMs: number; gflops: number; medianCpuMs: number; cpuGflops: number | null }
+  >;
   info: Record<string, string>;
 }
 
@@ -33,7 +36,7 @@ export function lapackLu(sizes: { n: number; repeats: number }[]): LapackLu | { 
   const info: Record<string, string> = {};
   for (const [key, value] of Object.entries(parsed)) {
     if (typeof value === 'string') info[key] = value;
-    else figures[key] = value as { medianMs: number; gflops: number };
+    else figures[key] = value as LapackLu['figures'][string];
   }
   return { figures, info };
 }

@@ -22,7 +22,13 @@
  *
  * nodeLowerX / nodeUpperX: spanCount x (chordCount + 1) corner x positions on each strip's lower and
  * upper edge lines (see RingLattice).
+ *
+ * Two paths give the same bits: these loops in TypeScript, and the same operations in WebAssembly SIMD
+ * with two control points in the two lanes (numeric/ringInfluenceKernel.wat), used where available
+ * (`path` 'auto'; 'typescript' or 'wasm' force one).
  */
+import { ringInfluenceWasm } from '../numeric/ringInfluenceKernel';
+
 const CORE_RELATIVE = 1e-10;
 const CORE_SQ = CORE_RELATIVE * CORE_RELATIVE;
 const FOUR_PI = 4 * Math.PI;
@@ -137,6 +143,7 @@ export function ringInfluenceMatrix(
   controlZ: Float64Array,
   groundZM: number,
   out: Float64Array,
+  path: 'auto' | 'typescript' | 'wasm' = 'auto',
 ): Float64Array {
   const spanCount = edgeZ.length - 1;
   const n = spanCount * chordCount;
@@ -152,6 +159,9 @@ export function ringInfluenceMatrix(
   if (out.length < n * n) {
     throw new RangeError(`ringInfluenceMatrix: out.length=${out.length} must be at least ${n * n}`);
   }
+  if (path !== 'auto' && path !== 'typescript' && path !== 'wasm') {
+    throw new RangeError(`ringInfluenceMatrix: path=${String(path)} must be 'auto', 'typescript' or 'wasm'`);
+  }
   ensureScratch(cols, spanCount);
   for (let s = 0; s + 1 < spanCount; s++) {
     let same = 1;
@@ -159,6 +169,18 @@ export function ringInfluenceMatrix(
       if (nodeUpperX[s * cols + m] !== nodeLowerX[(s + 1) * cols + m]) same = 0;
     }
     shared[s] = same;
+  }
+  if (path !== 'typescript') {
+    if (
+      ringInfluenceWasm(edgeZ, nodeLowerX, nodeUpperX, chordCount, controlX, controlZ, groundZM, shared, out)
+    ) {
+      return out;
+    }
+    if (path === 'wasm') {
+      throw new RangeError(
+        "ringInfluenceMatrix: path='wasm' but the WebAssembly kernel cannot run (no SIMD here, no memory, or n > 2048)",
+      );
+    }
   }
   const ground = Number.isFinite(groundZM);
   const g2 = 2 * groundZM;

@@ -15,14 +15,14 @@
  *        rows of A22 at a time against four rows of U12 (12 multipliers held in registers; every U12
  *        value loaded once serves three rows, and each A22 element is loaded and stored once per four
  *        rank-1 terms).
- * Two paths give the same bits: step 3 and the groups of four of step 2 run in WebAssembly SIMD
- * (luKernel.wat, two f64 lanes) where it is available, on a copy of the matrix in the kernel's memory,
- * and in plain TypeScript otherwise (`path` = 'typescript' forces it). Every element receives the same
- * IEEE-754 operations in the same order on both paths (groups of four rank-1 terms summed left to
- * right, then subtracted; then the single terms), so
- * the factors and pivots are identical. Plain scalar TypeScript gets its speed from cutting loads and
- * stores per multiply-add (register tiling) and from short panels that stay in cache; measured with
- * `npm run bench` (see README, Performance). A different block size changes the rounding of the
+ * Two paths give the same bits: steps 1-3 run in WebAssembly (luKernel.wat: SIMD with two f64 lanes;
+ * step 3 keeps a two-row by four-column tile of A22 in registers for the whole block) where it is
+ * available, on a copy of the matrix in the kernel's memory, and in plain TypeScript otherwise
+ * (`path` = 'typescript' forces it). Every element receives the same IEEE-754 operations in the same
+ * order on both paths (groups of four rank-1 terms summed left to right, then subtracted; then the
+ * single terms), so the factors and pivots are identical. Plain scalar TypeScript gets its speed from
+ * cutting loads and stores per multiply-add (register tiling) and from short panels that stay in
+ * cache; measured with `npm run bench` (see README, Performance). A different block size changes the rounding of the
  * factors (summation order), not their accuracy.
  *
  * `pivots[k]` is the row swapped with row k at step k (LAPACK convention, 0-based), to be applied
@@ -30,13 +30,12 @@
  */
 
 import { type LuKernel, luKernel } from './luKernel';
+import { ensureMemory } from './simdInstance';
 
 const OUTER_BLOCK = 32;
 const INNER_BLOCK = 8;
-/** Narrower block rows are solved in TypeScript (solveBlockRow): the call costs more than SIMD saves. */
-const KERNEL_ROW_MIN_COLUMNS = OUTER_BLOCK;
 /** Below this order the copy into the kernel's memory costs more than SIMD saves. */
-const WASM_MIN_N = 64;
+const WASM_MIN_N = 16;
 /**
  * Above this order 'auto' keeps to TypeScript: the kernel's memory (a copy of the matrix) only grows,
  * and a thread should not hold on to more than 32 MiB for it (n = 2048).
@@ -55,11 +54,6 @@ export function luFactor(a: Float64Array, n: number, pivots: Int32Array, path: L
   if (pivots.length < n) {
     throw new RangeError(`luFactor: pivots.length=${pivots.length} must be at least n=${n}`);
   }
-  for (let i = 0; i < n * n; i++) {
-    if (!Number.isFinite(a[i]!)) {
-      throw new RangeError(`luFactor: a[${i}]=${a[i]} must be finite`);
-    }
-  }
   if (path !== 'auto' && path !== 'typescript' && path !== 'wasm') {
     throw new RangeError(`luFactor: path=${String(path)} must be 'auto', 'typescript' or 'wasm'`);
   }
@@ -68,34 +62,41 @@ export function luFactor(a: Float64Array, n: number, pivots: Int32Array, path: L
   if (path === 'wasm' && kernel === null) {
     throw new RangeError("luFactor: path='wasm' but WebAssembly SIMD is not available here");
   }
-  const bytes = n * n * 8;
-  const have = kernel === null ? 0 : kernel.memory.buffer.byteLength;
-  if (kernel !== null && have < bytes && !growMemory(kernel.memory, bytes - have) && path === 'wasm') {
+  // The matrix, then (from byte n n 8 + 64) two rows of multipliers packed by the kernel's update,
+  // then the pivots (i32) written by its panel factorisation.
+  const pivotsAt = n * n * 8 + 64 + 16 * OUTER_BLOCK;
+  const bytes = pivotsAt + 4 * n;
+  if (kernel !== null && !ensureMemory(kernel.memory, bytes) && path === 'wasm') {
     throw new RangeError(`luFactor: path='wasm' but the kernel's memory cannot grow to ${bytes} bytes`);
   }
   if (kernel === null || kernel.memory.buffer.byteLength < bytes) {
-    factorColumns(a, n, pivots, 0, n, OUTER_BLOCK, null);
+    for (let i = 0; i < n * n; i++) if (!Number.isFinite(a[i]!)) throw notFinite(a, i);
+    factorColumns(a, n, pivots, 0, n, OUTER_BLOCK, null, 0);
     return;
   }
   const work = new Float64Array(kernel.memory.buffer, 0, n * n);
   work.set(a.subarray(0, n * n));
-  factorColumns(work, n, pivots, 0, n, OUTER_BLOCK, kernel);
+  const bad = kernel.firstNonFinite(n * n);
+  if (bad >= 0) throw notFinite(a, bad);
+  factorColumns(work, n, pivots, 0, n, OUTER_BLOCK, kernel, pivotsAt);
   a.set(work);
+  pivots.set(new Int32Array(kernel.memory.buffer, pivotsAt, n));
 }
 
-/** Grows a WebAssembly memory by at least `extraBytes`; false when the engine refuses. */
-function growMemory(memory: WebAssembly.Memory, extraBytes: number): boolean {
-  try {
-    memory.grow(Math.ceil(extraBytes / 65536));
-    return true;
-  } catch {
-    return false;
-  }
+function notFinite(a: Float64Array, i: number): RangeError {
+  return new RangeError(`luFactor: a[${i}]=${a[i]} must be finite`);
+}
+
+function singular(k: number, big: number): RangeError {
+  return new RangeError(
+    `luFactor: matrix is singular or not finite: pivot column ${k} has largest |a|=${big} (must be finite and > 0)`,
+  );
 }
 
 /**
  * Blocked LU of columns c0..c1-1 (rows c0..n-1), block width `block` (steps 1-3 above); `kernel`
- * (null: TypeScript) does step 3, with `a` the view of its memory.
+ * (null: TypeScript) factorises the panels (its pivots from byte `pivotsAt`) and does step 3, with
+ * `a` the view of its memory.
  */
 function factorColumns(
   a: Float64Array,
@@ -105,22 +106,22 @@ function factorColumns(
   c1: number,
   block: number,
   kernel: LuKernel | null,
+  pivotsAt: number,
 ): void {
   for (let k0 = c0; k0 < c1; k0 += block) {
     const kEnd = Math.min(k0 + block, c1);
-    if (block > INNER_BLOCK) factorColumns(a, n, pivots, k0, kEnd, INNER_BLOCK, kernel);
-    else factorPanel(a, n, pivots, k0, kEnd);
+    if (block > INNER_BLOCK) factorColumns(a, n, pivots, k0, kEnd, INNER_BLOCK, kernel, pivotsAt);
+    else if (kernel === null) factorPanel(a, n, pivots, k0, kEnd);
+    else {
+      const k = kernel.panel(n, k0, kEnd, pivotsAt);
+      if (k >= 0) throw singular(k, new Float64Array(a.buffer, n * n * 8, 1)[0]!);
+    }
     if (kEnd === c1) break;
     solveBlockRow(a, n, k0, kEnd, c1, kernel);
     if (kernel === null || (kEnd - k0) % 4 !== 0) {
       updateTrailing(a, n, k0, kEnd, kEnd, n, kEnd, c1);
     } else {
-      // The kernel takes rows and columns in pairs; the odd column and the odd row are done here.
       kernel.update(n, k0, kEnd, c1);
-      const rowsEven = kEnd + 2 * Math.floor((n - kEnd) / 2);
-      const colsEven = kEnd + 2 * Math.floor((c1 - kEnd) / 2);
-      if (colsEven < c1) updateTrailing(a, n, k0, kEnd, kEnd, rowsEven, colsEven, c1);
-      if (rowsEven < n) updateTrailing(a, n, k0, kEnd, rowsEven, n, kEnd, c1);
     }
   }
 }
@@ -139,11 +140,7 @@ function factorPanel(a: Float64Array, n: number, pivots: Int32Array, k0: number,
     }
   }
   for (let k = k0; k < kEnd; k++) {
-    if (!(big > 0) || !Number.isFinite(big)) {
-      throw new RangeError(
-        `luFactor: matrix is singular or not finite: pivot column ${k} has largest |a|=${big} (must be finite and > 0)`,
-      );
-    }
+    if (!(big > 0) || !Number.isFinite(big)) throw singular(k, big);
     pivots[k] = p;
     const rk = k * n;
     if (p !== k) {
@@ -179,8 +176,8 @@ function factorPanel(a: Float64Array, n: number, pivots: Int32Array, k0: number,
 }
 
 /**
- * U12 = L11^-1 A12 for rows k0..kEnd-1, columns kEnd..c1-1 (unit lower triangular, row by row); the
- * kernel, when given, does each row's groups of four on column pairs, the rest is done here.
+ * U12 = L11^-1 A12 for rows k0..kEnd-1, columns kEnd..c1-1 (unit lower triangular, row by row): in
+ * the kernel when given (one call for the whole block row), else here.
  */
 function solveBlockRow(
   a: Float64Array,
@@ -190,21 +187,8 @@ function solveBlockRow(
   c1: number,
   kernel: LuKernel | null,
 ): void {
-  // A row of a narrow block (the inner panels': at most OUTER_BLOCK - INNER_BLOCK columns) is a few
-  // dozen multiply-adds, less than a call into the kernel costs; both paths give the same bits.
-  const useKernel = kernel !== null && c1 - kEnd >= KERNEL_ROW_MIN_COLUMNS;
-  for (let i = k0 + 1; i < kEnd; i++) {
-    if (!useKernel) {
-      updateRow(a, n, i * n, k0, i, kEnd, c1);
-      continue;
-    }
-    kernel!.updateRow(n, i, k0, i, kEnd, c1);
-    const groupsEnd = k0 + 4 * Math.floor((i - k0) / 4);
-    const colsEven = kEnd + 2 * Math.floor((c1 - kEnd) / 2);
-    // The odd column (groups then single p, as updateRow), then the single p on the paired columns.
-    if (colsEven < c1) updateRow(a, n, i * n, k0, i, colsEven, c1);
-    if (groupsEnd < i) updateRow(a, n, i * n, groupsEnd, i, kEnd, colsEven);
-  }
+  if (kernel !== null) kernel.blockRow(n, k0, kEnd, c1);
+  else for (let i = k0 + 1; i < kEnd; i++) updateRow(a, n, i * n, k0, i, kEnd, c1);
 }
 
 /**

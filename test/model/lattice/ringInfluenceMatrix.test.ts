@@ -40,8 +40,12 @@ function referenceEntry(l: RingLattice, i: number, j: number): number {
 describe('ringInfluenceMatrix', () => {
   // A covered wheel's lattice: strips follow the open annulus' circles, so some edge lines carry the same
   // corners on both sides and some do not (both paths of the kernel); and the plain disc (all shared).
-  for (const openAnnuliM of [[[0.03, 0.2]] as Array<[number, number]>, []]) {
-    it(`equals the ring-by-ring Biot-Savart sum, ground image included (open annuli ${JSON.stringify(openAnnuliM)}; tolerance 1e-13 max|A|)`, () => {
+  for (const [openAnnuliM, path] of [
+    [[[0.03, 0.2]], 'auto'],
+    [[], 'auto'],
+    [[[0.03, 0.2]], 'typescript'],
+  ] as Array<[Array<[number, number]>, 'auto' | 'typescript']>) {
+    it(`equals the ring-by-ring Biot-Savart sum, ground image included (open annuli ${JSON.stringify(openAnnuliM)}, path ${path}; tolerance 1e-13 max|A|)`, () => {
       const l = buildWheelLattice({ radiusM: 0.35, spanCount: 12, chordCount: 5, ground: true, openAnnuliM });
       const n = l.panelCount;
       const got = ringInfluenceMatrix(
@@ -53,6 +57,7 @@ describe('ringInfluenceMatrix', () => {
         l.controlZ,
         l.groundZM,
         new Float64Array(n * n),
+        path,
       );
       let scale = 0;
       for (let k = 0; k < n * n; k++) scale = Math.max(scale, Math.abs(got[k]!));
@@ -74,4 +79,62 @@ describe('ringInfluenceMatrix', () => {
       expect(Array.from(l.influence.subarray(0, n * n))).toEqual(Array.from(got));
     });
   }
+
+  it('gives the same bits on its WebAssembly SIMD and TypeScript paths (tolerance 0; odd and even orders, with and without ground)', () => {
+    // Invariant of the design: every entry receives the same IEEE-754 operations in the same order.
+    const cases = [
+      { spanCount: 24, chordCount: 12, ground: true, openAnnuliM: [[0.03, 0.22]] as Array<[number, number]> },
+      { spanCount: 5, chordCount: 3, ground: true, openAnnuliM: [[0.1, 0.2]] as Array<[number, number]> },
+      { spanCount: 7, chordCount: 5, ground: false, openAnnuliM: [] },
+      { spanCount: 3, chordCount: 1, ground: true, openAnnuliM: [] },
+    ];
+    for (const c of cases) {
+      const l = buildWheelLattice({ radiusM: 0.311, ...c });
+      const n = l.panelCount;
+      const run = (path: 'typescript' | 'wasm') =>
+        ringInfluenceMatrix(
+          l.edgeZ,
+          l.nodeLowerX,
+          l.nodeUpperX,
+          l.chordCount,
+          l.controlX,
+          l.controlZ,
+          l.groundZM,
+          new Float64Array(n * n),
+          path,
+        );
+      const viaTs = run('typescript');
+      const viaWasm = run('wasm');
+      let differing = -1;
+      for (let k = 0; k < n * n && differing < 0; k++) if (!Object.is(viaTs[k], viaWasm[k])) differing = k;
+      const at = Math.max(differing, 0);
+      expect(
+        differing,
+        `${JSON.stringify(c)}: first differing entry ${differing}: typescript=${viaTs[at]} wasm=${viaWasm[at]} tol=0`,
+      ).toBe(-1);
+    }
+  });
+
+  it('rejects an unknown path by name', () => {
+    const l = buildWheelLattice({
+      radiusM: 0.311,
+      spanCount: 3,
+      chordCount: 2,
+      ground: false,
+      openAnnuliM: [],
+    });
+    const call = () =>
+      ringInfluenceMatrix(
+        l.edgeZ,
+        l.nodeLowerX,
+        l.nodeUpperX,
+        l.chordCount,
+        l.controlX,
+        l.controlZ,
+        l.groundZM,
+        new Float64Array(36),
+        'gpu' as never,
+      );
+    expect(call).toThrow(/path=gpu must be/);
+  });
 });
