@@ -29,8 +29,8 @@ import { createServer } from 'node:net';
 import { availableParallelism, cpus, loadavg, tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { chromium, type Page } from 'playwright-core';
-import { collectGarbageEverywhere, samplePageRenderer, treePssBytes } from './pageMemory';
-import { waitQuiet } from './pageSettle';
+import { collectGarbageEverywhere, pageRenderers, samplePageRenderer, treePssBytes } from './pageMemory';
+import { processCpuMs, treeCpuMs, waitQuiet } from './pageSettle';
 import { median } from './timing';
 
 const ROOT = resolve(import.meta.dirname, '..');
@@ -215,12 +215,19 @@ async function main(): Promise<void> {
         const browserPid = browserServer.process().pid;
         const settleMs = SETTLE && browserPid ? await waitQuiet(browserPid) : 0;
         const sampler = browserPid ? samplePageRenderer(browserPid) : null;
+        const cpuBefore = browserPid ? treeCpuMs(browserPid) : Number.NaN;
         await page.goto(url);
         await page.waitForFunction(() => document.body.dataset.state === 'done', null, { timeout: 120_000 });
+        // CPU time of the first load (clock ticks of 10 ms): the page's renderer (its main thread, workers,
+        // compositor) since it started, and every Chromium process since the navigation.
+        const rendererCpuMs = browserPid
+          ? pageRenderers(browserPid).reduce((n, pid) => n + processCpuMs(pid), 0)
+          : Number.NaN;
+        const browserCpuMs = browserPid ? treeCpuMs(browserPid) - cpuBefore : Number.NaN;
         const first = await page.evaluate(() => Number(document.body.dataset.firstResultMs));
         const marks1 = await page.evaluate(() => (window as unknown as { __benchMarks: Marks }).__benchMarks);
         const done = marks1.states.find(([state]) => state === 'done')?.[2] ?? Number.NaN;
-        const breakdown = await firstLoadBreakdown(page);
+        const breakdown = { ...(await firstLoadBreakdown(page)), rendererCpuMs, browserCpuMs };
         breakdowns.push(breakdown);
 
         // One control change: the cover fraction, committed with Enter, to "done" again.

@@ -19,7 +19,7 @@ export function treeCpuMs(rootPid: number): number {
       const stat = readFileSync(`/proc/${name}/stat`, 'utf8');
       // Fields after the command name (which may hold spaces), from field 3 (state) on.
       const f = stat.slice(stat.lastIndexOf(')') + 2).split(' ');
-      const ppid = Number(f[1]);
+      const ppid = Number(f[1]); // f[11], f[12]: utime, stime in clock ticks
       ticks.set(Number(name), Number(f[11]) + Number(f[12]));
       const list = children.get(ppid) ?? [];
       list.push(Number(name));
@@ -36,6 +36,17 @@ export function treeCpuMs(rootPid: number): number {
     queue.push(...(children.get(pid) ?? []));
   }
   return sum * 10; // USER_HZ is 100 on Linux
+}
+
+/** CPU time (user + system, ms) of one process, all its threads. */
+export function processCpuMs(pid: number): number {
+  try {
+    const stat = readFileSync(`/proc/${pid}/stat`, 'utf8');
+    const f = stat.slice(stat.lastIndexOf(')') + 2).split(' ');
+    return (Number(f[11]) + Number(f[12])) * 10;
+  } catch {
+    return Number.NaN;
+  }
 }
 
 /**
