@@ -18,6 +18,9 @@
  *     worker has collected its garbage (CDP HeapProfiler.collectGarbage). PSS shares pages mapped by
  *     several processes among them, so it falls when other Chromium instances run on the machine; USS
  *     does not.
+ * and `firstLoad`, the first load step by step (firstLoadBreakdown below) with its CPU time.
+ * Each fresh browser is left to finish its own start-up before the navigation (pageSettle.ts; about 0.5 s
+ * of both cores here); COVERSWEEP_PAGE_BENCH_SETTLE=0 navigates at once, as the bench did before.
  * Medians of the runs are printed with the issue's targets beside them. COVERSWEEP_PAGE_BENCH_DIST=<dir>
  * serves a page built elsewhere (e.g. another commit's `vite build --outDir <dir>`), to compare trees in one
  * sitting. Needs /usr/bin/chromium (apt-get install -y chromium); says so and exits 0 when it is missing,

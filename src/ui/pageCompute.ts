@@ -1,10 +1,11 @@
 /**
- * The page's computing: for each state, its studies (pageStudies) run on the worker pool in two runs,
- * cancellable and superseded by any newer state. The first run solves the current design without its
- * grid-convergence lattices in a job of its own, first (its headline shows as soon as it lands, the
- * plots after the next frame), while the other workers take the family, the cover sweep, the baselines
- * and the current design with its uncertainty; the second run is the design map. Each run's results
- * land in PageResults as named-axis cubes and the host redraws.
+ * The page's computing: for each state, its studies (pageStudies) run on the worker pool in three
+ * stages, cancellable and superseded by any newer state: the current design first without its
+ * grid-convergence lattices (so its numbers show at once), then the family, the cover sweep, the
+ * baseline and the current design with its uncertainty in one run, then the design map. Each stage's
+ * results land in PageResults as named-axis cubes and the host redraws: the first numbers' headline at
+ * once, their plots after the next frame. Performance marks (`coversweep:*`) time the first load for the
+ * page bench.
  */
 import { caseAirDensity } from '../compute/caseFile';
 import type { SweepProgress } from '../compute/engine/runCases';
@@ -202,51 +203,54 @@ export class PageCompute {
 
     // The studies of stage 2 (below), planned now: when all but the current design are kept from an
     // earlier run, the current design's grid-convergence solve joins stage 1 on the other worker.
-    // One run for the current design and the sweeps: the current design first (study 0), exactly as its
-    // case file says but without the grid-convergence lattices (the same values, about half the cost),
-    // in a job of its own that the first free worker takes at once, so its numbers show as soon as they
-    // land; the family, drag vs cover, the baselines and the current design with its grid-convergence
-    // estimate meanwhile start on the other workers (cases of one surface share their factorisation).
     const b = studies.baseline;
-    const plans: StudyPlan[] = [studies.quick ?? studies.current, studies.family, studies.cover];
+    const plans: StudyPlan[] = [studies.family, studies.cover];
     if (b) plans.push(b.curve, b.cover, b.map);
     const firstOther = plans.length;
     plans.push(...others.map((o) => o.plan));
+    const early = studies.quick !== null && plans.every((p) => this.allKept(p));
     if (studies.quick) plans.push(studies.current);
     const gciStudy = studies.quick ? plans.length - 1 : -1;
 
+    // 1. The current design, exactly as its case file says, but first without the grid-convergence
+    //    lattices (the same values, about half the cost): its numbers show as soon as they land; the
+    //    uncertainty estimate follows (with stage 2, or beside this one when the rest is kept).
     let t1 = Number.NaN;
-    let shown = false;
-    let gciLanded = false;
-    const s2 = await this.run(plans, {
-      signal: ac.signal,
-      leadStudies: 1,
-      onProgress: (p) => {
-        if (shown) this.status(`Cover-fraction sweeps: ${p.casesDone}/${p.casesTotal} cases`, p);
+    const s1 = await this.run(
+      early ? [studies.quick!, studies.current] : [studies.quick ?? studies.current],
+      {
+        signal: ac.signal,
+        onCase: (landed) => {
+          if (landed.study !== 0 || !landed.cube || superseded()) return;
+          r.current = landed.cube;
+          t1 = this.showFirst(r);
+        },
       },
-      onCase: (landed) => {
-        if (!landed.cube || superseded()) return;
-        // The estimate with its uncertainty replaces the first pass (and is not replaced by it).
-        if (landed.study === 0 && gciLanded) return;
-        if (landed.study !== 0 && landed.study !== gciStudy) return;
-        gciLanded ||= landed.study === gciStudy;
-        r.current = landed.cube;
-        if (shown) return this.renderSoon();
-        shown = true;
-        t1 = this.showFirst(r);
-        this.stage('sweeps');
-        this.status('Cover-fraction sweeps…');
-      },
-    });
+    );
     if (superseded()) return;
-    if (s2.cancelled && !shown) return this.cancelled(r);
-    const first = s2.results[0]!;
+    if (s1.cancelled) return this.cancelled(r);
+    const first = s1.results[0]!;
     if (first.errors[0] !== null || first.landed[0] !== 1) {
       this.fail(`The model could not solve this design: ${first.errors[0] ?? 'unknown error'}`);
       return;
     }
+
+    // 2. The current design with its grid-convergence estimate, the family, drag vs cover and the
+    //    baseline, in one run (cases of one surface share their factorisation).
+    this.stage('sweeps');
+    const s2 = await this.run(plans, {
+      signal: ac.signal,
+      onProgress: (p) => this.status(`Cover-fraction sweeps: ${p.casesDone}/${p.casesTotal} cases`, p),
+      onCase: (landed) => {
+        if (landed.study === gciStudy && landed.cube && !superseded()) {
+          r.current = landed.cube;
+          this.renderSoon();
+        }
+      },
+    });
+    if (superseded()) return;
     const t2 = performance.now();
-    const [, family, cover, ...rest] = s2.results;
+    const [family, cover, ...rest] = s2.results;
     r.family = family!;
     r.cover = cover!;
     if (r.baseline) {

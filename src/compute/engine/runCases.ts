@@ -22,9 +22,6 @@ export interface RunCasesOptions {
   onOutcome?: (outcome: CaseOutcome) => void;
   jobsPerWorker?: number;
   now?: () => number;
-  /** The first `leadCases` cases go first, each in a job of its own, ahead of the planned jobs of the
-   * rest: the case a caller waits for starts at once on the first free worker, the others on the rest. */
-  leadCases?: number;
 }
 
 export interface RunCasesSummary {
@@ -47,20 +44,9 @@ export async function runCases(
 ): Promise<RunCasesSummary> {
   const now = options.now ?? (() => performance.now());
   const start = now();
-  const lead = runner.inOrder ? 0 : Math.min(cases.length, Math.max(0, options.leadCases ?? 0));
   const jobs: SolveJob[] = runner.inOrder
     ? cases.map((input, caseIndex) => ({ jobId: caseIndex, cases: [{ caseIndex, input }] }))
-    : [
-        ...cases
-          .slice(0, lead)
-          .map((input, caseIndex) => ({ jobId: caseIndex, cases: [{ caseIndex, input }] })),
-        ...planJobs(cases.slice(lead), { workers: runner.size, jobsPerWorker: options.jobsPerWorker }).map(
-          (job) => ({
-            jobId: job.jobId + lead,
-            cases: job.cases.map((c) => ({ caseIndex: c.caseIndex + lead, input: c.input })),
-          }),
-        ),
-      ];
+    : planJobs(cases, { workers: runner.size, jobsPerWorker: options.jobsPerWorker });
   const pointsTotal = cases.reduce((n, c) => n + c.points.length, 0);
   let casesDone = 0;
   let pointsDone = 0;

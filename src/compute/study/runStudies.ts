@@ -10,7 +10,7 @@ import { inputKey } from './inputKey';
 import type { OutcomeCache } from './outcomeCache';
 import type { AxisPick } from './resultCube';
 import { type CaseLanded, type StudyResult, studyLanding } from './studyLanding';
-import { isUnplanned, type StudyPlan } from './studyPlan';
+import type { StudyPlan } from './studyPlan';
 
 export type { CaseLanded, StudyResult };
 
@@ -27,9 +27,6 @@ export interface RunStudiesOptions {
   /** Solved cases kept across runs: a case whose exact input is kept lands from it (first, before any
    * solve) and is not solved again; every case solved by this run is kept. */
   cache?: OutcomeCache;
-  /** The cases of the first `leadStudies` studies that need a solve go first, each in a job of its own
-   * (runCases' leadCases), e.g. the design whose headline the page waits for. */
-  leadStudies?: number;
 }
 
 export interface StudiesOutcome {
@@ -48,15 +45,6 @@ export function caseCell(plan: StudyPlan, at: AxisPick): number {
     k = k * a.values.length + i;
   }
   return k;
-}
-
-/** How many of the cases to solve (`toSolve`, indices into the studies' planned inputs) belong to the
- * first `studies` plans. */
-function leadCount(plans: readonly StudyPlan[], studies: number, toSolve: readonly number[]): number {
-  const planned = plans
-    .slice(0, studies)
-    .reduce((n, p) => n + p.inputs.filter((input) => !isUnplanned(input)).length, 0);
-  return toSolve.filter((i) => i < planned).length;
 }
 
 export async function runStudies(
@@ -86,7 +74,6 @@ export async function runStudies(
     ...(options.jobsPerWorker !== undefined ? { jobsPerWorker: options.jobsPerWorker } : {}),
     ...(options.now ? { now: options.now } : {}),
     ...(options.reportStart ? { reportStart: true } : {}),
-    ...(options.leadStudies ? { leadCases: leadCount(plans, options.leadStudies, toSolve) } : {}),
     onOutcome: (o) => {
       const i = toSolve[o.caseIndex]!;
       if (cache && o.ok) cache.keep(keys[i]!, o);

@@ -1,7 +1,5 @@
 import { describe, expect, it } from 'vitest';
 import { InProcessRunner } from '../../../src/compute/engine/inProcessRunner';
-import type { JobRunner } from '../../../src/compute/engine/jobRunner';
-import type { SolveJob } from '../../../src/compute/engine/protocol';
 import { runSweep } from '../../../src/compute/engine/runSweep';
 import { WorkerPool } from '../../../src/compute/engine/workerPool';
 import { expandPlan } from '../../../src/compute/planFile';
@@ -103,41 +101,5 @@ describe('runStudies', () => {
     await expect(runStudies(new InProcessRunner(), [plan])).rejects.toThrow(
       /study test grid: 5 inputs for 6 case cells \(coverFraction 3 x rimDepth 2\)/,
     );
-  });
-
-  it('leadStudies: the cases of the first study go first, each in a job of its own, with the same bits', async () => {
-    const lead = gridStudy();
-    const one: StudyPlan = { ...lead, name: 'one design', caseAxes: [], inputs: [lead.inputs[3]!] };
-    const seen: SolveJob[][] = [];
-    const pool = new WorkerPool(inProcessSpawner().spawn, 2);
-    // A runner that records the jobs it is given and runs them on the pool.
-    const recording: JobRunner = {
-      size: pool.size,
-      run: (jobs, options) => {
-        seen.push([...jobs]);
-        return pool.run(jobs, options);
-      },
-    };
-    try {
-      const plain = await runStudies(recording, [one, lead]);
-      const led = await runStudies(recording, [one, lead], { leadStudies: 1 });
-      // Without it, the planner groups the design with the grid's case of the same surface.
-      expect(seen[0]!.some((job) => job.cases.length > 1 && job.cases.some((c) => c.caseIndex === 0))).toBe(
-        true,
-      );
-      expect(seen[1]![0]!.cases.map((c) => c.caseIndex)).toEqual([0]);
-      expect(
-        seen[1]!
-          .slice(1)
-          .flatMap((job) => job.cases.map((c) => c.caseIndex))
-          .sort((a, b) => a - b),
-      ).toEqual([1, 2, 3, 4, 5, 6]);
-      expect(new Set(seen[1]!.map((job) => job.jobId)).size).toBe(seen[1]!.length);
-      for (const s of [0, 1]) {
-        expect([...led.results[s]!.cube!.data], `study ${s}`).toEqual([...plain.results[s]!.cube!.data]);
-      }
-    } finally {
-      pool.close();
-    }
   });
 });
