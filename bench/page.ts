@@ -18,6 +18,9 @@
  *     worker has collected its garbage (CDP HeapProfiler.collectGarbage). PSS shares pages mapped by
  *     several processes among them, so it falls when other Chromium instances run on the machine; USS
  *     does not.
+ * and `firstLoad`, the first load step by step (firstLoadBreakdown below) with its CPU time.
+ * Each fresh browser is left to finish its own start-up before the navigation (pageSettle.ts; about 0.5 s
+ * of both cores here); COVERSWEEP_PAGE_BENCH_SETTLE=0 navigates at once, as the bench did before.
  * Medians of the runs are printed with the issue's targets beside them. COVERSWEEP_PAGE_BENCH_DIST=<dir>
  * serves a page built elsewhere (e.g. another commit's `vite build --outDir <dir>`), to compare trees in one
  * sitting. Needs /usr/bin/chromium (apt-get install -y chromium); says so and exits 0 when it is missing,
@@ -29,13 +32,16 @@ import { createServer } from 'node:net';
 import { availableParallelism, cpus, loadavg, tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { chromium, type Page } from 'playwright-core';
-import { collectGarbageEverywhere, samplePageRenderer, treePssBytes } from './pageMemory';
+import { collectGarbageEverywhere, pageRenderers, samplePageRenderer, treePssBytes } from './pageMemory';
+import { processCpuMs, treeCpuMs, waitQuiet } from './pageSettle';
 import { median } from './timing';
 
 const ROOT = resolve(import.meta.dirname, '..');
 const CHROMIUM = '/usr/bin/chromium';
 const VITE = join(ROOT, 'node_modules/vite/bin/vite.js');
 const RUNS = Math.max(1, Number(process.env.COVERSWEEP_PAGE_BENCH_RUNS ?? 5));
+/** Navigate once the fresh browser has finished starting (pageSettle.ts); 0: at once, as before. */
+const SETTLE = process.env.COVERSWEEP_PAGE_BENCH_SETTLE !== '0';
 const machine = { cores: availableParallelism(), cpu: cpus()[0]?.model ?? 'unknown', node: process.version };
 
 function print(name: string, figures: Record<string, unknown>): void {
@@ -75,13 +81,31 @@ const MARKS_SCRIPT = `
     new MutationObserver(() => {
       window.__benchMarks.states.push([document.body.dataset.state || '', document.body.dataset.stage || '', performance.now()]);
     }).observe(document.body, { attributes: true, attributeFilter: ['data-state', 'data-stage'] });
+    // The frame that paints the first headline figures: the animation frame after they enter the DOM.
+    const headline = document.getElementById('headline');
+    if (headline) {
+      const seen = new MutationObserver(() => {
+        if (!headline.querySelector('.value')) return;
+        seen.disconnect();
+        requestAnimationFrame(() => { window.__benchMarks.headlineFrame = performance.now(); });
+      });
+      seen.observe(headline, { childList: true, subtree: true });
+    }
   };
   if (document.body) watch(); else document.addEventListener('DOMContentLoaded', watch);
+  window.__benchLongTasks = [];
+  try {
+    new PerformanceObserver((list) => {
+      if (window.__benchMarks.states.some(([s]) => s === 'done')) return;
+      for (const e of list.getEntries()) window.__benchLongTasks.push(e.duration);
+    }).observe({ type: 'longtask', buffered: true });
+  } catch {}
 `;
 
 interface Marks {
   states: [string, string, number][];
   enter: number[];
+  headlineFrame?: number;
 }
 
 /** Type `value` into the control `field`, commit it with Enter, and return the ms from Enter to "done". */
@@ -103,6 +127,42 @@ async function editToDone(page: Page, field: string, value: string): Promise<num
   const enterAt = after.enter.at(-1) ?? Number.NaN;
   const doneMarks = after.states.slice(before).filter(([s]) => s === 'done');
   return Math.round((doneMarks[doneMarks.length - 1]?.[2] ?? Number.NaN) - enterAt);
+}
+
+/**
+ * The first load, step by step, in ms after navigation (medians printed as `firstLoad`): the document
+ * received and parsed, the page's script started, every sweep worker loaded and answering, the first
+ * solve posted, its answer in, the headline on screen, the plots, the map; and the main thread's long
+ * tasks (over 50 ms) from the navigation to the first "done": their count and summed length. From
+ * the page's performance marks (`coversweep:*`, pageCompute.ts and earlyPool.ts) and its navigation
+ * timing; a tree without the marks (before they were added) reports what its data-timings holds.
+ */
+async function firstLoadBreakdown(page: Page): Promise<Record<string, number>> {
+  return page.evaluate(() => {
+    const out: Record<string, number> = {};
+    const nav = performance.getEntriesByType('navigation')[0] as PerformanceNavigationTiming | undefined;
+    if (nav) {
+      out.responseEnd = nav.responseEnd;
+      out.domInteractive = nav.domInteractive;
+      out.domContentLoaded = nav.domContentLoadedEventEnd;
+    }
+    for (const m of performance.getEntriesByType('mark')) {
+      const name = m.name.replace(/^coversweep:/, '');
+      if (name !== m.name && out[name] === undefined) out[name] = m.startTime;
+    }
+    const t = JSON.parse(document.body.dataset.timings ?? '{}') as Record<string, number>;
+    out.script ??= t.scriptStartMs ?? Number.NaN;
+    out['workers-ready'] ??= t.workersReadyMs ?? Number.NaN;
+    out.compute ??= t.computeStartMs ?? Number.NaN;
+    out.headline ??= t.firstResultMs ?? Number.NaN;
+    out.headlineFrame =
+      (window as unknown as { __benchMarks: Marks }).__benchMarks.headlineFrame ?? Number.NaN;
+    const lt = (window as unknown as { __benchLongTasks?: number[] }).__benchLongTasks ?? [];
+    out.longTasks = lt.length;
+    out.longTaskMs = lt.reduce((a, b) => a + b, 0);
+    for (const k of Object.keys(out)) out[k] = Math.round(out[k]!);
+    return out;
+  });
 }
 
 async function main(): Promise<void> {
@@ -145,6 +205,7 @@ async function main(): Promise<void> {
     pageRendererPeakUssMB: number;
     pageRendererLiveUssMB: number;
   }[] = [];
+  const breakdowns: Record<string, number>[] = [];
   try {
     await waitForServer(url, server);
     for (let run = 0; run < RUNS; run++) {
@@ -155,12 +216,22 @@ async function main(): Promise<void> {
         const page = await browser.newPage({ viewport: { width: 1280, height: 800 } });
         await page.addInitScript(MARKS_SCRIPT);
         const browserPid = browserServer.process().pid;
+        const settleMs = SETTLE && browserPid ? await waitQuiet(browserPid) : 0;
         const sampler = browserPid ? samplePageRenderer(browserPid) : null;
+        const cpuBefore = browserPid ? treeCpuMs(browserPid) : Number.NaN;
         await page.goto(url);
         await page.waitForFunction(() => document.body.dataset.state === 'done', null, { timeout: 120_000 });
+        // CPU time of the first load (clock ticks of 10 ms): the page's renderer (its main thread, workers,
+        // compositor) since it started, and every Chromium process since the navigation.
+        const rendererCpuMs = browserPid
+          ? pageRenderers(browserPid).reduce((n, pid) => n + processCpuMs(pid), 0)
+          : Number.NaN;
+        const browserCpuMs = browserPid ? treeCpuMs(browserPid) - cpuBefore : Number.NaN;
         const first = await page.evaluate(() => Number(document.body.dataset.firstResultMs));
         const marks1 = await page.evaluate(() => (window as unknown as { __benchMarks: Marks }).__benchMarks);
         const done = marks1.states.find(([state]) => state === 'done')?.[2] ?? Number.NaN;
+        const breakdown = { ...(await firstLoadBreakdown(page)), rendererCpuMs, browserCpuMs };
+        breakdowns.push(breakdown);
 
         // One control change: the cover fraction, committed with Enter, to "done" again.
         const controlChangeMs = await editToDone(page, 'coverFraction', run % 2 === 0 ? '0.55' : '0.45');
@@ -196,7 +267,7 @@ async function main(): Promise<void> {
           pageRendererPeakUssMB: Math.round(peak.uss / 1e6),
           pageRendererLiveUssMB: Math.round(live.pageUss / 1e6),
         });
-        print('page-run', { run, ...rows.at(-1) });
+        print('page-run', { run, ...rows.at(-1), browserSettleMs: settleMs, firstLoad: breakdown });
       } finally {
         await browser.close();
         await browserServer.close();
@@ -207,6 +278,12 @@ async function main(): Promise<void> {
     if (!given) rmSync(dist, { recursive: true, force: true });
   }
   const pick = (k: keyof (typeof rows)[number]) => median(rows.map((r) => r[k]));
+  const firstLoad = Object.fromEntries(
+    [...new Set(breakdowns.flatMap((b) => Object.keys(b)))].map((k) => [
+      k,
+      median(breakdowns.map((b) => b[k] ?? Number.NaN)),
+    ]),
+  );
   print('page', {
     runs: rows.length,
     firstHeadlineMs: pick('firstHeadlineMs'),
@@ -227,6 +304,8 @@ async function main(): Promise<void> {
     memoryTargetMB: 300,
     rendererPssMB: pick('rendererPssMB'),
     chromiumAllProcessesPssMB: pick('pssMB'),
+    firstLoad,
+    browserSettled: SETTLE,
     loadAverage1min: Number(loadavg()[0]!.toFixed(2)),
     note: "medians; page clock from navigation; controlChangeMs edits the cover fraction (the map, family and cover sweep are kept from the first run), everyDesignChangeMs the tyre width (every design solved again), mapStageMs is the latter's design-map stage; pageRenderer* is the renderer process hosting the page and its dedicated workers, at rest 3 s after the edits, at its peak (sampled every 100 ms from the navigation) and live (USS once every page and worker collected its garbage); rendererPssMB sums every renderer process (spare ones included), chromiumAllProcessesPssMB every Chromium process; PSS falls when other Chromium instances share the pages, USS does not",
   });

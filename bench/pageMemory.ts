@@ -87,7 +87,7 @@ function rollupKb(pid: number, fields: readonly string[]): number {
 }
 
 /** The renderer processes under `rootPid` that host dedicated workers. */
-function pageRenderers(rootPid: number): number[] {
+export function pageRenderers(rootPid: number): number[] {
   const children = new Map<number, number[]>();
   for (const name of readdirSync('/proc')) {
     if (!/^\d+$/.test(name)) continue;

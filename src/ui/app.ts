@@ -267,12 +267,13 @@ export class App implements ComputeHost, ActionsHost, StudyHost, ReportHost {
     this.view3dGlue.firstNumbersShown();
   }
 
-  renderAll(opts: { light?: boolean } = {}): void {
+  renderAll(opts: { light?: boolean; headlineOnly?: boolean } = {}): void {
     const r = this.results;
     if (!r?.current) return;
     const ctx = presentOf(this.state, r);
     this.renderFlags(r);
     renderHeadline(byId('headline'), ctx, r);
+    if (opts.headlineOnly) return;
     const yawNotes = renderYawPlots(this.plots, ctx, r, this.dataGlue.overlaySource());
     renderCoverPlot(this.plots.dragCover, ctx, r);
     if (!opts.light) {

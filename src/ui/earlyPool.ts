@@ -11,6 +11,7 @@ import { overrideDeadline, watchSolver } from './watchdog';
 
 /** When the page's script started (ms after navigation start), for the timings the page reports. */
 export const scriptStartMs = performance.now();
+performance.mark('coversweep:script');
 
 export const liveWorkers = new Set<BrowserWorkerHandle>();
 
@@ -55,6 +56,7 @@ export let workersReadyMs = Number.NaN;
 export const poolWarm: Promise<void> = pool.warm().then(
   () => {
     workersReadyMs = performance.now();
+    performance.mark('coversweep:workers-ready');
   },
   () => undefined,
 );

@@ -3,7 +3,9 @@
  * stages, cancellable and superseded by any newer state: the current design first without its
  * grid-convergence lattices (so its numbers show at once), then the family, the cover sweep, the
  * baseline and the current design with its uncertainty in one run, then the design map. Each stage's
- * results land in PageResults as named-axis cubes and the host redraws.
+ * results land in PageResults as named-axis cubes and the host redraws: the first numbers' headline at
+ * once, their plots after the next frame. Performance marks (`coversweep:*`) time the first load for the
+ * page bench.
  */
 import { caseAirDensity } from '../compute/caseFile';
 import type { SweepProgress } from '../compute/engine/runCases';
@@ -32,7 +34,8 @@ export interface ComputeHost {
   readonly messages: Messages;
   /** The results on screen; each stage replaces them. */
   results: PageResults | null;
-  renderAll(opts?: { light?: boolean }): void;
+  /** light: the headline and the plots only (not the map and tables); headlineOnly: the headline only. */
+  renderAll(opts?: { light?: boolean; headlineOnly?: boolean }): void;
   /** A run's plots and map are drawn (or it was cancelled): the 3D view starts, or draws the new design. */
   firstNumbersShown(): void;
 }
@@ -89,6 +92,8 @@ export class PageCompute {
   private threeDPending = false;
   /** A redraw asked for while a stage runs (drawn at the next task unless the stage's end draws first). */
   private soon: ReturnType<typeof setTimeout> | null = null;
+  /** Whether that redraw is light (the headline and plots: the first numbers' plots) or everything. */
+  private soonLight = false;
 
   constructor(
     private readonly pool: WorkerPool,
@@ -194,6 +199,7 @@ export class PageCompute {
     this.status('Solving the current design…');
     this.stage('current');
     const started = performance.now();
+    performance.mark('coversweep:compute');
 
     // The studies of stage 2 (below), planned now: when all but the current design are kept from an
     // earlier run, the current design's grid-convergence solve joins stage 1 on the other worker.
@@ -260,6 +266,7 @@ export class PageCompute {
     if (s2.cancelled) return this.cancelled(r);
     // Drawn now unless the map is kept from an earlier run: then the map stage draws everything at once.
     if (!this.allKept(studies.map)) this.renderNow();
+    performance.mark('coversweep:plots');
 
     // 3. The design map (the longer sweep).
     this.stage('map');
@@ -275,6 +282,7 @@ export class PageCompute {
     if (superseded()) return;
     r.map = s3.results[0]!;
     this.renderNow();
+    performance.mark('coversweep:map');
     if (s3.cancelled) return this.cancelled(r);
     const failed = s2.failedCount + s3.failedCount;
     if (failed > 0) {
@@ -311,12 +319,18 @@ export class PageCompute {
   private showFirst(r: PageResults): number {
     this.host.results = r;
     const t1 = performance.now();
+    if (this.firstResultMs === null) performance.mark('coversweep:first-solved');
     this.host.messages.clear('model');
-    this.host.renderAll({ light: true });
+    // The headline now, the plots after the next frame: the browser paints the headline figures before
+    // the plots are built (their first drawing, with its layout, took 100-180 ms of this thread on this
+    // machine, and a task queued at once runs before the frame).
+    this.host.renderAll({ headlineOnly: true });
+    this.renderSoon(true, true);
     if (this.firstResultMs === null) {
-      // On screen: the figures and plots are drawn (the browser paints them at the next frame).
+      // On screen: the headline's figures are drawn (the browser paints them at the next frame).
       this.firstResultMs = performance.now();
       document.body.dataset.firstResultMs = this.firstResultMs.toFixed(0);
+      performance.mark('coversweep:headline');
     }
     // The 3D view (its module, a WebGL context, its own solve and frames of 100-200 ms on a software
     // renderer, all competing with the sweeps on a small machine) is drawn once the plots and the map
@@ -325,16 +339,26 @@ export class PageCompute {
     return t1;
   }
 
-  private renderSoon(): void {
-    this.soon ??= setTimeout(() => {
+  /**
+   * Redraw at the next task (`afterFrame`: once the next frame is painted; at most 100 ms later where no
+   * frame comes, as in a hidden tab): light (headline and plots) only if every request since was light.
+   */
+  private renderSoon(light = false, afterFrame = false): void {
+    this.soonLight = this.soon ? this.soonLight && light : light;
+    if (this.soon) return;
+    const draw = () => {
+      if (this.soon !== timer) return;
       this.soon = null;
-      this.host.renderAll();
-    }, 0);
+      this.host.renderAll({ light: this.soonLight });
+    };
+    const timer = setTimeout(draw, afterFrame ? 100 : 0);
+    this.soon = timer;
+    if (afterFrame) requestAnimationFrame(() => setTimeout(draw, 0));
   }
 
   private renderNow(): void {
     if (this.soon) clearTimeout(this.soon);
-    this.soon = null;
+    this.soon = null; // a frame's pending draw of it sees that and does nothing
     this.host.renderAll();
   }
 
