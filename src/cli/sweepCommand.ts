@@ -1,13 +1,14 @@
 /** `coversweep sweep PLAN.json`: a plan's cases through the study runner to a CSV or JSON file. */
 import { availableParallelism } from 'node:os';
 import { resolve } from 'node:path';
-import { type ResultDocument, solutionToDocument } from '../compute/caseFile';
+import { solutionToDocument } from '../compute/caseFile';
 import { InProcessRunner } from '../compute/engine/inProcessRunner';
 import type { JobRunner } from '../compute/engine/jobRunner';
 import type { SweepProgress } from '../compute/engine/runCases';
 import { WorkerPool } from '../compute/engine/workerPool';
 import { type ExpandedCase, type ExpandedPlan, parsePlanFile } from '../compute/planFile';
-import { csvHeader, documentCsvLines, errorCsvLine } from '../compute/resultTable';
+import { csvHeader, errorCsvLine } from '../compute/resultTable';
+import { packedCsvLines } from '../compute/resultTablePacked';
 import { commandLineStudy } from '../compute/study/commandLineStudy';
 import { type CaseLanded, runStudies } from '../compute/study/runStudies';
 import { OUT_OPTIONS, onePositional, openOutput, parseCommandArgs, readJsonFile } from './commandArgs';
@@ -47,17 +48,16 @@ export async function writeSweep(
       `{\n  "format": "coversweep-sweep",\n  "version": 1,\n  "varied_keys": ${JSON.stringify(keys)},\n  "point_count": ${plan.pointCount},\n  "runs": [`,
     );
   }
-  const render = (
-    position: number,
-    expanded: ExpandedCase,
-    document: ResultDocument | null,
-    error: string | null,
-  ): string => {
+  const render = (position: number, expanded: ExpandedCase, landed: CaseLanded): string => {
+    const { cube, surface, error } = landed;
     if (format === 'csv') {
-      return document
-        ? documentCsvLines(document, keys, expanded.varied)
+      // Straight from the packed rows: no point or document objects (the same text, resultTablePacked.ts).
+      return cube && surface
+        ? packedCsvLines(cube.data, cube.size, expanded.caseFile, keys, expanded.varied)
         : errorCsvLine(keys, expanded.varied, error ?? '');
     }
+    const document =
+      cube && surface ? solutionToDocument(expanded.caseFile, { surface, points: cube.points() }) : null;
     const run = document
       ? { index: expanded.index, varied: expanded.varied, result: document }
       : { index: expanded.index, varied: expanded.varied, error };
@@ -68,12 +68,10 @@ export async function writeSweep(
   // worker goes on solving, and the error is thrown once it has stopped.
   const stop = new AbortController();
   let failure: { error: unknown } | null = null;
-  const writeCase = ({ caseIndex: i, cube, surface, error }: CaseLanded): void => {
+  const writeCase = (landed: CaseLanded): void => {
     try {
-      const expanded = plan.cases[i]!;
-      const document =
-        cube && surface ? solutionToDocument(expanded.caseFile, { surface, points: cube.points() }) : null;
-      const text = render(i, expanded, document, error);
+      const i = landed.caseIndex;
+      const text = render(i, plan.cases[i]!, landed);
       if (i !== next) {
         spool.put(i, text);
         return;
