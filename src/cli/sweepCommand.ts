@@ -16,7 +16,7 @@ import { HELP, MAX_JOB_POINTS, MIN_CASES_FOR_POOL } from './commandHelp';
 import { CliInputError, type CliIo, EXIT_INPUT, EXIT_OK } from './io';
 import { nodeWorkerSpawner } from './nodeWorker';
 import { checkOutputPath, OutputTakenError } from './outputFile';
-import { prestartedSpawner } from './prestartedSpawner';
+import { type PrestartedSpawner, prestartedSpawner } from './prestartedSpawner';
 import { progressReporter } from './progress';
 import { refuseRepeatedOptions } from './refuseRepeatedOptions';
 import { SweepSpool } from './sweepSpool';
@@ -129,19 +129,24 @@ export async function writeSweep(
   return outcome.failedCount;
 }
 
-/** Open an atomic output file, naming any stale temporary files of a killed run it cleaned up. */
+interface SweepOptions {
+  path: string;
+  force: boolean;
+  outPath: string | undefined;
+  format: 'csv' | 'json';
+  workers: number | undefined;
+  values: { out?: string | undefined };
+}
 
-export async function commandSweep(args: string[], io: CliIo): Promise<number> {
+/** The sweep's options, checked (a usage error names the option and the rule), or 'help'. */
+function sweepOptions(args: string[], io: CliIo): SweepOptions | 'help' {
   refuseRepeatedOptions('sweep', args, ['out', 'workers']);
   const { values, positionals } = parseCommandArgs('sweep', {
     args,
     options: { ...OUT_OPTIONS, workers: { type: 'string' } },
     allowPositionals: true,
   });
-  if (values.help) {
-    io.stdout(HELP.sweep!);
-    return EXIT_OK;
-  }
+  if (values.help) return 'help';
   const path = onePositional('sweep', positionals, 'plan file');
   const force = values.force === true;
   const outPath = values.out === undefined ? undefined : resolve(io.cwd, values.out);
@@ -161,18 +166,37 @@ export async function commandSweep(args: string[], io: CliIo): Promise<number> {
       throw new CliInputError(`--workers ${values.workers}: must be a whole number from 0 to 64`);
     }
   }
-  // Workers asked for start now and boot while this thread reads the plan; those the plan does not
-  // need (fewer cases than workers) are ended once it is read.
-  const early = prestartedSpawner(nodeWorkerSpawner(io.workerEntry), workers ?? 0);
+  return { path, force, outPath, format, workers, values };
+}
+
+/** `early`: workers started ahead for a `--workers N` (sweepPrestart), released here if not used. */
+export async function commandSweep(
+  args: string[],
+  io: CliIo,
+  prestarted?: PrestartedSpawner,
+): Promise<number> {
+  let early = prestarted;
   let plan: ExpandedPlan;
+  let options: SweepOptions | 'help';
   try {
-    const parsed = parsePlanFile(readJsonFile(path, io.cwd, 'plan file'));
-    if (!parsed.ok) throw new CliInputError(`invalid plan file ${path}:`, parsed.errors);
+    options = sweepOptions(args, io);
+    if (options === 'help') {
+      prestarted?.release();
+      io.stdout(HELP.sweep!);
+      return EXIT_OK;
+    }
+    // Workers asked for start now (if they were not already) and boot while this thread reads the plan;
+    // those the plan does not need (fewer cases than workers) are ended once it is read.
+    early ??= prestartedSpawner(nodeWorkerSpawner(io.workerEntry), options.workers ?? 0);
+    const parsed = parsePlanFile(readJsonFile(options.path, io.cwd, 'plan file'));
+    if (!parsed.ok) throw new CliInputError(`invalid plan file ${options.path}:`, parsed.errors);
     plan = parsed.value;
   } catch (error) {
-    early.release();
+    early?.release();
     throw error;
   }
+  const { force, outPath, format, values } = options;
+  let workers = options.workers;
   const progress = progressReporter(io.stderr, io.stderrIsTTY);
   workers ??= plan.cases.length < MIN_CASES_FOR_POOL ? 0 : availableParallelism();
   workers = Math.min(workers, plan.cases.length);
