@@ -63,18 +63,46 @@ function packedLayout(): PackedLayout {
   return layout;
 }
 
-/** csvField of a number: its shortest round-trip text, empty when not finite (null in the document). */
-function num(x: number): string {
-  return x - x === 0 ? `${x}` : '';
+/**
+ * The lines are assembled as bytes in one reused buffer and decoded once per case: appending ~50
+ * short strings per row to a string made ropes whose flattening and garbage cost more than the
+ * number-to-text conversion itself. Every byte written is a code unit below 0x80 (digits, signs,
+ * '.', 'e', ',', flag codes), but the varied prefix, which is copied in as UTF-8.
+ */
+let bytes = new Uint8Array(1 << 16);
+
+function ensureBytes(size: number): void {
+  if (bytes.length < size) bytes = new Uint8Array(Math.max(size, 2 * bytes.length));
+}
+
+const COMMA = 44;
+const NEWLINE = 10;
+
+/** Write csvField(x) (the shortest round-trip text of a finite number, else nothing) and a comma at `at`. */
+function putNumber(x: number, at: number): number {
+  if (x - x === 0) {
+    const text = `${x}`;
+    for (let k = 0; k < text.length; k++) bytes[at++] = text.charCodeAt(k);
+  }
+  bytes[at] = COMMA;
+  return at + 1;
+}
+
+/** Write an ASCII string at `at`. */
+function putAscii(text: string, at: number): number {
+  for (let k = 0; k < text.length; k++) bytes[at++] = text.charCodeAt(k);
+  return at;
 }
 
 /** The flags cell of each flag bit set, as the document's flags joined with ';' (csvField applied). */
 const flagCells = new Map<number, string>();
+const decoder = new TextDecoder();
 
 function flagCell(bits: number): string {
   let cell = flagCells.get(bits);
   if (cell === undefined) {
     cell = csvField(FLAG_CODES.filter((_, bit) => (bits & (1 << bit)) !== 0).join(';'));
+    if (!/^[\x20-\x7e]*$/.test(cell)) throw new Error(`packedCsvLines: flag codes must be ASCII: ${cell}`);
     flagCells.set(bits, cell);
   }
   return cell;
@@ -99,15 +127,23 @@ export function packedCsvLines(
   const speed30MphMps = mphToMps(30);
   let prefix = '';
   for (const k of variedKeys) prefix += `${csvField(varied[k] ?? null)},`;
+  const prefixBytes = new TextEncoder().encode(prefix);
   const scalarCount = scalar.length;
   const componentCount = component.length;
-  let out = '';
+  // At most 24 characters and a comma per number ("-2.2250738585072014e-308"), the flags cell (ASCII
+  // codes, or quoted ones) and a newline per row.
+  const fieldCount = scalarCount + componentCount + 2;
+  const flagsMax = 2 * FLAG_CODES.join(';').length + 4;
+  ensureBytes(pointCount * (prefixBytes.length + 25 * fieldCount + flagsMax + 2));
+  const speeds = [referenceSpeedMps, speed30MphMps];
+  let at = 0;
   for (let i = 0, row = 0; i < pointCount; i++, row += COLUMN_COUNT) {
-    let line = prefix;
+    bytes.set(prefixBytes, at);
+    at += prefixBytes.length;
     for (let s = 0; s < scalarCount; s++) {
-      const at = scalar[s]!;
-      if (at >= 0) {
-        line += `${num(packed[row + at]!)},`;
+      const column = scalar[s]!;
+      if (column >= 0) {
+        at = putNumber(packed[row + column]!, at);
         continue;
       }
       const key = RESULT_SCALAR_KEYS[s];
@@ -117,19 +153,20 @@ export function packedCsvLines(
           ? pointYawDeg(caseFile, pointCount, i, packed[row + yawRad]!)
           : key === 'cda_axial_cm2'
             ? cdaM2 * 1e4
-            : dragAreaToGramsForce(
-                cdaM2,
-                key === 'axial_gf_ref' ? referenceSpeedMps : speed30MphMps,
-                packed[row + rho]!,
-              );
-      line += `${num(value)},`;
+            : dragAreaToGramsForce(cdaM2, speeds[key === 'axial_gf_ref' ? 0 : 1]!, packed[row + rho]!);
+      at = putNumber(value, at);
     }
     for (let c = 0; c < componentCount; c += 4) {
-      line += `${num(-packed[row + component[c]!]!)},${num(packed[row + component[c + 1]!]!)},`;
-      line += `${num(packed[row + component[c + 2]!]!)},${num(packed[row + component[c + 3]!]!)},`;
+      at = putNumber(-packed[row + component[c]!]!, at);
+      at = putNumber(packed[row + component[c + 1]!]!, at);
+      at = putNumber(packed[row + component[c + 2]!]!, at);
+      at = putNumber(packed[row + component[c + 3]!]!, at);
     }
-    line += `${num(packed[row + gciAxial]!)},${num(packed[row + gciSide]!)},`;
-    out += `${line}${flagCell(packed[row + flagBits]!)},\n`;
+    at = putNumber(packed[row + gciAxial]!, at);
+    at = putNumber(packed[row + gciSide]!, at);
+    at = putAscii(flagCell(packed[row + flagBits]!), at);
+    bytes[at++] = COMMA;
+    bytes[at++] = NEWLINE;
   }
-  return out;
+  return decoder.decode(bytes.subarray(0, at));
 }
