@@ -1,8 +1,8 @@
 // Preloaded into a benchmarked command-line process (`node --import ./bench/phaseMarks.mjs ...`): writes
 // one JSON line to stderr at exit with the times (ms since the process started) of its phases: each
 // worker thread created, online (its JavaScript runs), ready (its entry module has loaded and listens:
-// comlink's expose adds the port's message listener), its first and last message to the main thread
-// (the first is its first job's result), the output file moved into place (link or rename) and the exit.
+// comlink's expose adds the port's message listener), its first and last solve job's answer and how
+// many it gave, the output file moved into place (link or rename) and the exit.
 // Worker threads inherit the preload (Node passes execArgv on): there it reports its marks to the
 // main thread through a BroadcastChannel. Every time is read from one clock (Date.now: a worker's
 // performance.timeOrigin was seen 20 ms off the main thread's).
@@ -31,15 +31,18 @@ if (isMainThread) {
     constructor(...args) {
       const created = clock();
       super(...args);
-      const w = { created, online: null, ready: null, firstMessage: null, lastMessage: null };
+      const w = { created, online: null, ready: null, firstResult: null, lastResult: null, results: 0 };
       workers.set(this.threadId, w);
       this.once('online', () => {
         w.online = clock();
       });
-      this.on('message', () => {
+      this.on('message', (data) => {
+        // A solve job's answer (comlink's wire value of a JobResult); not the pool's closing messages.
+        if (!(data?.value && typeof data.value === 'object' && 'outcomes' in data.value)) return;
         const t = clock();
-        w.firstMessage ??= t;
-        w.lastMessage = t;
+        w.firstResult ??= t;
+        w.lastResult = t;
+        w.results++;
       });
     }
   };
@@ -57,8 +60,9 @@ if (isMainThread) {
       created: at(w.created),
       online: w.online === null ? null : at(w.online),
       ready: w.ready === null ? null : at(w.ready),
-      firstMessage: w.firstMessage === null ? null : at(w.firstMessage),
-      lastMessage: w.lastMessage === null ? null : at(w.lastMessage),
+      firstResult: w.firstResult === null ? null : at(w.firstResult),
+      lastResult: w.lastResult === null ? null : at(w.lastResult),
+      results: w.results,
     }));
     const moved = marks.moved === null ? null : at(marks.moved);
     process.stderr.write(`\n${JSON.stringify({ phases: { workers: list, moved, exit: at(clock()) } })}\n`);
