@@ -1,8 +1,8 @@
 // Preloaded into a benchmarked command-line process (`node --import ./bench/phaseMarks.mjs ...`): writes
 // one JSON line to stderr at exit with the times (ms since the process started) of its phases: each
 // worker thread created, online (its JavaScript runs), ready (its entry module has loaded and listens:
-// comlink's expose adds the port's message listener), its first and last solve job's answer and how
-// many it gave, the output file moved into place (link or rename) and the exit.
+// comlink's expose adds the port's message listener), its first solve job sent, its first and last
+// job's answer and how many it gave, the output file moved into place (link or rename) and the exit.
 // Worker threads inherit the preload (Node passes execArgv on): there it reports its marks to the
 // main thread through a BroadcastChannel. Every time is read from one clock (Date.now: a worker's
 // performance.timeOrigin was seen 20 ms off the main thread's).
@@ -31,11 +31,26 @@ if (isMainThread) {
     constructor(...args) {
       const created = clock();
       super(...args);
-      const w = { created, online: null, ready: null, firstResult: null, lastResult: null, results: 0 };
+      const w = {
+        created,
+        online: null,
+        ready: null,
+        firstJob: null,
+        firstResult: null,
+        lastResult: null,
+        results: 0,
+      };
       workers.set(this.threadId, w);
       this.once('online', () => {
         w.online = clock();
       });
+      const post = this.postMessage;
+      this.postMessage = (data, transfer) => {
+        // A solve job sent (comlink's call of solveJob), the first one marked.
+        if (w.firstJob === null && Array.isArray(data?.path) && data.path[0] === 'solveJob')
+          w.firstJob = clock();
+        return post.call(this, data, transfer);
+      };
       this.on('message', (data) => {
         // A solve job's answer (comlink's wire value of a JobResult); not the pool's closing messages.
         if (!(data?.value && typeof data.value === 'object' && 'outcomes' in data.value)) return;
@@ -60,6 +75,7 @@ if (isMainThread) {
       created: at(w.created),
       online: w.online === null ? null : at(w.online),
       ready: w.ready === null ? null : at(w.ready),
+      firstJob: w.firstJob === null ? null : at(w.firstJob),
       firstResult: w.firstResult === null ? null : at(w.firstResult),
       lastResult: w.lastResult === null ? null : at(w.lastResult),
       results: w.results,
