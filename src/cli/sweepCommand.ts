@@ -223,7 +223,8 @@ export async function commandSweep(
   }
   let file: ReturnType<typeof openOutput>;
   try {
-    file = openOutput(outPath, force, io);
+    // A sweep's output can be large: flushed in the background as it grows (see AtomicFile).
+    file = openOutput(outPath, force, io, true);
   } catch (error) {
     close();
     throw error;
@@ -258,6 +259,7 @@ export async function commandSweep(
   let failed = 0;
   try {
     failed = await writeSweep(plan, format, (text) => file.write(text), progress, pool, spool, pending);
+    await file.settled();
     file.commit();
   } catch (error) {
     if (error instanceof OutputTakenError) throw error;
