@@ -43,8 +43,8 @@ export default defineConfig({
     minify: false,
     rollupOptions: {
       // Each entry sits as deep in dist-cli/ as its source in the repository, so the sources' relative
-      // URLs (main.ts reads ../../package.json for --version) resolve to the same files.
-      input: { 'cli/main': 'src/cli/main.ts', 'workers/solver.node': 'workers/solver.node.ts' },
+      // URLs (commandLine.ts reads ../../package.json for --version) resolve to the same files.
+      input: { 'cli/main': 'src/cli/commandLine.ts', 'workers/solver.node': 'workers/solver.node.ts' },
       output: { format: 'es', entryFileNames: '[name].mjs', chunkFileNames: 'chunks/[name]-[hash].mjs' },
     },
   },

@@ -44,9 +44,10 @@ export function onePositional(command: string, positionals: string[], what: stri
   return positionals[0]!;
 }
 
-/** The atomic output file, reporting temporary files of killed runs it removed. */
-export function openOutput(path: string, force: boolean, io: CliIo): AtomicFile {
-  const file = new AtomicFile(path, force);
+/** The atomic output file, reporting temporary files of killed runs it removed (`flushInBackground`:
+ * see AtomicFile). */
+export function openOutput(path: string, force: boolean, io: CliIo, flushInBackground = false): AtomicFile {
+  const file = new AtomicFile(path, force, flushInBackground);
   for (const stale of file.removedStale) {
     io.stderr(`coversweep: removed ${stale}, a temporary file left by an earlier run that was killed\n`);
   }

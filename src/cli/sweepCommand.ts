@@ -1,13 +1,14 @@
 /** `coversweep sweep PLAN.json`: a plan's cases through the study runner to a CSV or JSON file. */
 import { availableParallelism } from 'node:os';
 import { resolve } from 'node:path';
-import { type ResultDocument, solutionToDocument } from '../compute/caseFile';
+import { solutionToDocument } from '../compute/caseFile';
 import { InProcessRunner } from '../compute/engine/inProcessRunner';
 import type { JobRunner } from '../compute/engine/jobRunner';
 import type { SweepProgress } from '../compute/engine/runCases';
 import { WorkerPool } from '../compute/engine/workerPool';
 import { type ExpandedCase, type ExpandedPlan, parsePlanFile } from '../compute/planFile';
-import { csvHeader, documentCsvLines, errorCsvLine } from '../compute/resultTable';
+import { csvHeader, errorCsvLine } from '../compute/resultTable';
+import { packedCsvLines } from '../compute/resultTablePacked';
 import { commandLineStudy } from '../compute/study/commandLineStudy';
 import { type CaseLanded, runStudies } from '../compute/study/runStudies';
 import { OUT_OPTIONS, onePositional, openOutput, parseCommandArgs, readJsonFile } from './commandArgs';
@@ -15,7 +16,7 @@ import { HELP, MAX_JOB_POINTS, MIN_CASES_FOR_POOL } from './commandHelp';
 import { CliInputError, type CliIo, EXIT_INPUT, EXIT_OK } from './io';
 import { nodeWorkerSpawner } from './nodeWorker';
 import { checkOutputPath, OutputTakenError } from './outputFile';
-import { prestartedSpawner } from './prestartedSpawner';
+import { type PrestartedSpawner, prestartedSpawner } from './prestartedSpawner';
 import { progressReporter } from './progress';
 import { refuseRepeatedOptions } from './refuseRepeatedOptions';
 import { SweepSpool } from './sweepSpool';
@@ -47,17 +48,16 @@ export async function writeSweep(
       `{\n  "format": "coversweep-sweep",\n  "version": 1,\n  "varied_keys": ${JSON.stringify(keys)},\n  "point_count": ${plan.pointCount},\n  "runs": [`,
     );
   }
-  const render = (
-    position: number,
-    expanded: ExpandedCase,
-    document: ResultDocument | null,
-    error: string | null,
-  ): string => {
+  const render = (position: number, expanded: ExpandedCase, landed: CaseLanded): string => {
+    const { cube, surface, error } = landed;
     if (format === 'csv') {
-      return document
-        ? documentCsvLines(document, keys, expanded.varied)
+      // Straight from the packed rows: no point or document objects (the same text, resultTablePacked.ts).
+      return cube && surface
+        ? packedCsvLines(cube.data, cube.size, expanded.caseFile, keys, expanded.varied)
         : errorCsvLine(keys, expanded.varied, error ?? '');
     }
+    const document =
+      cube && surface ? solutionToDocument(expanded.caseFile, { surface, points: cube.points() }) : null;
     const run = document
       ? { index: expanded.index, varied: expanded.varied, result: document }
       : { index: expanded.index, varied: expanded.varied, error };
@@ -68,12 +68,10 @@ export async function writeSweep(
   // worker goes on solving, and the error is thrown once it has stopped.
   const stop = new AbortController();
   let failure: { error: unknown } | null = null;
-  const writeCase = ({ caseIndex: i, cube, surface, error }: CaseLanded): void => {
+  const writeCase = (landed: CaseLanded): void => {
     try {
-      const expanded = plan.cases[i]!;
-      const document =
-        cube && surface ? solutionToDocument(expanded.caseFile, { surface, points: cube.points() }) : null;
-      const text = render(i, expanded, document, error);
+      const i = landed.caseIndex;
+      const text = render(i, plan.cases[i]!, landed);
       if (i !== next) {
         spool.put(i, text);
         return;
@@ -131,19 +129,24 @@ export async function writeSweep(
   return outcome.failedCount;
 }
 
-/** Open an atomic output file, naming any stale temporary files of a killed run it cleaned up. */
+interface SweepOptions {
+  path: string;
+  force: boolean;
+  outPath: string | undefined;
+  format: 'csv' | 'json';
+  workers: number | undefined;
+  values: { out?: string | undefined };
+}
 
-export async function commandSweep(args: string[], io: CliIo): Promise<number> {
+/** The sweep's options, checked (a usage error names the option and the rule), or 'help'. */
+function sweepOptions(args: string[], io: CliIo): SweepOptions | 'help' {
   refuseRepeatedOptions('sweep', args, ['out', 'workers']);
   const { values, positionals } = parseCommandArgs('sweep', {
     args,
     options: { ...OUT_OPTIONS, workers: { type: 'string' } },
     allowPositionals: true,
   });
-  if (values.help) {
-    io.stdout(HELP.sweep!);
-    return EXIT_OK;
-  }
+  if (values.help) return 'help';
   const path = onePositional('sweep', positionals, 'plan file');
   const force = values.force === true;
   const outPath = values.out === undefined ? undefined : resolve(io.cwd, values.out);
@@ -163,18 +166,37 @@ export async function commandSweep(args: string[], io: CliIo): Promise<number> {
       throw new CliInputError(`--workers ${values.workers}: must be a whole number from 0 to 64`);
     }
   }
-  // Workers asked for start now and boot while this thread reads the plan; those the plan does not
-  // need (fewer cases than workers) are ended once it is read.
-  const early = prestartedSpawner(nodeWorkerSpawner(io.workerEntry), workers ?? 0);
+  return { path, force, outPath, format, workers, values };
+}
+
+/** `early`: workers started ahead for a `--workers N` (sweepPrestart), released here if not used. */
+export async function commandSweep(
+  args: string[],
+  io: CliIo,
+  prestarted?: PrestartedSpawner,
+): Promise<number> {
+  let early = prestarted;
   let plan: ExpandedPlan;
+  let options: SweepOptions | 'help';
   try {
-    const parsed = parsePlanFile(readJsonFile(path, io.cwd, 'plan file'));
-    if (!parsed.ok) throw new CliInputError(`invalid plan file ${path}:`, parsed.errors);
+    options = sweepOptions(args, io);
+    if (options === 'help') {
+      prestarted?.release();
+      io.stdout(HELP.sweep!);
+      return EXIT_OK;
+    }
+    // Workers asked for start now (if they were not already) and boot while this thread reads the plan;
+    // those the plan does not need (fewer cases than workers) are ended once it is read.
+    early ??= prestartedSpawner(nodeWorkerSpawner(io.workerEntry), options.workers ?? 0);
+    const parsed = parsePlanFile(readJsonFile(options.path, io.cwd, 'plan file'));
+    if (!parsed.ok) throw new CliInputError(`invalid plan file ${options.path}:`, parsed.errors);
     plan = parsed.value;
   } catch (error) {
-    early.release();
+    early?.release();
     throw error;
   }
+  const { force, outPath, format, values } = options;
+  let workers = options.workers;
   const progress = progressReporter(io.stderr, io.stderrIsTTY);
   workers ??= plan.cases.length < MIN_CASES_FOR_POOL ? 0 : availableParallelism();
   workers = Math.min(workers, plan.cases.length);
@@ -201,7 +223,8 @@ export async function commandSweep(args: string[], io: CliIo): Promise<number> {
   }
   let file: ReturnType<typeof openOutput>;
   try {
-    file = openOutput(outPath, force, io);
+    // A sweep's output can be large: flushed in the background as it grows (see AtomicFile).
+    file = openOutput(outPath, force, io, true);
   } catch (error) {
     close();
     throw error;
@@ -236,6 +259,7 @@ export async function commandSweep(args: string[], io: CliIo): Promise<number> {
   let failed = 0;
   try {
     failed = await writeSweep(plan, format, (text) => file.write(text), progress, pool, spool, pending);
+    await file.settled();
     file.commit();
   } catch (error) {
     if (error instanceof OutputTakenError) throw error;

@@ -145,22 +145,18 @@ function resultRow(p: PointResult, referenceSpeedMps: number, yawDeg: number): R
 }
 
 /**
- * Yaw of point i in the file's degrees: the value as the case gave it (points are airspeed-major,
- * yaw fastest), so 7.5 deg does not come back as 7.499999999999999 after deg -> rad -> deg.
+ * Yaw of point i of `pointCount` in the file's degrees: the value as the case gave it (points are
+ * airspeed-major, yaw fastest), so 7.5 deg does not come back as 7.499999999999999 after deg -> rad ->
+ * deg; the model's angle converted back when the points are not the case's grid.
  */
-function pointYawDeg(caseFile: CaseFile, solution: WheelSolution, i: number): number {
+export function pointYawDeg(caseFile: CaseFile, pointCount: number, i: number, yawRad: number): number {
   const yaws = caseFile.conditions.yaw_deg;
-  const p = solution.points[i]!;
   const given = yaws[i % yaws.length];
   const expected = caseFile.conditions.airspeed_mps.length * yaws.length;
-  if (
-    solution.points.length === expected &&
-    given !== undefined &&
-    Math.abs(degToRad(given) - p.yawRad) <= 1e-12
-  ) {
+  if (pointCount === expected && given !== undefined && Math.abs(degToRad(given) - yawRad) <= 1e-12) {
     return given;
   }
-  return radToDeg(p.yawRad);
+  return radToDeg(yawRad);
 }
 
 /** The output document of `solve` for a normalised case and the model's solution. */
@@ -189,7 +185,7 @@ export function solutionToDocument(caseFile: CaseFile, solution: WheelSolution):
         : null,
     },
     results: solution.points.map((p, i) =>
-      resultRow(p, referenceSpeedMps, pointYawDeg(caseFile, solution, i)),
+      resultRow(p, referenceSpeedMps, pointYawDeg(caseFile, solution.points.length, i, p.yawRad)),
     ),
     reference_speed_mps: referenceSpeedMps,
     notes: [...RESULT_NOTES],

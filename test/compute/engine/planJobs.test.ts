@@ -36,6 +36,28 @@ describe('planJobs', () => {
     expect(planJobs(withTwins, { workers: 2, jobsPerWorker: 4 }).length).toBeGreaterThanOrEqual(8);
   });
 
+  it('makes the last jobs smaller, down to one group, and none larger than a uniform split', () => {
+    // 126 cases of one surface each (rim depths x cover fractions), as the standard sweep.
+    const many = smallSweep(
+      Array.from({ length: 21 }, (_, i) => i * 0.05),
+      [0.02, 0.035, 0.05, 0.065, 0.08, 0.09],
+    );
+    for (const workers of [1, 2, 4]) {
+      const sizes = planJobs(many, { workers, jobsPerWorker: 8 }).map((j) => j.cases.length);
+      const uniform = Math.ceil(many.length / (workers * 8));
+      expect(
+        sizes.reduce((a, b) => a + b, 0),
+        `workers ${workers}: ${sizes}`,
+      ).toBe(many.length);
+      expect(Math.max(...sizes), `workers ${workers}: ${sizes}`).toBeLessThanOrEqual(uniform);
+      expect(sizes.at(-1), `workers ${workers}: ${sizes}`).toBe(1);
+      // Non-increasing: the factoring rule only ever shrinks a job.
+      for (let k = 1; k < sizes.length; k++) {
+        expect(sizes[k], `workers ${workers}: ${sizes}`).toBeLessThanOrEqual(sizes[k - 1]!);
+      }
+    }
+  });
+
   it('keeps an invalid case (the worker reports its error)', () => {
     const bad = { ...cases[0]!, wheel: { ...cases[0]!.wheel, rimDepthM: 0.5 } };
     const jobs = planJobs([bad, ...cases], { workers: 1 });

@@ -1,0 +1,172 @@
+/**
+ * The result table's lines of one solved case written straight from its packed rows (a worker's
+ * Float64Array, columns.ts), with no PointResult or ResultDocument objects in between: the same text as
+ * documentCsvLines(solutionToDocument(caseFile, { surface, points: unpackPoints(packed) }), ...), field
+ * for field (the same derived quantities through the same functions, numbers through the same
+ * ECMA-262 Number::toString), at a fraction of the cost: a sweep's command line writes ~10^6 fields.
+ */
+import { pointYawDeg } from './case/resultDocument';
+import { type CaseFile, COMPONENT_KEYS, COMPONENT_NAMES, RESULT_SCALAR_KEYS } from './caseFile';
+import { COLUMN_COUNT, columnIndex } from './engine/columns';
+import { FLAG_CODES } from './engine/packPoints';
+import type { PlanValue } from './planFile';
+import { csvField } from './resultTable';
+import { dragAreaToGramsForce, kmhToMps, mphToMps } from './units';
+
+/** Where each CSV result column (but yaw_deg and the derived ones) reads its number in a packed row. */
+interface PackedLayout {
+  /** Packed column of each RESULT_SCALAR_KEYS entry that is a packed number as it is, else -1. */
+  scalar: Int32Array;
+  /** Packed columns of each component's fxN, fyN, fzN and axleTorqueNm, component by component. */
+  component: Int32Array;
+  cda: number;
+  rho: number;
+  yawRad: number;
+  gciAxial: number;
+  gciSide: number;
+  flagBits: number;
+}
+
+/** The CSV's result keys whose value is computed here, not read from one packed column. */
+const DERIVED = new Set<string>(['yaw_deg', 'cda_axial_cm2', 'axial_gf_ref', 'axial_gf_30mph']);
+/** COMPONENT_KEYS in the packed row's field names (the CSV's axial_N is -fxN). */
+const COMPONENT_FIELD_OF: Record<(typeof COMPONENT_KEYS)[number], string> = {
+  axial_N: 'fxN',
+  side_N: 'fyN',
+  vertical_N: 'fzN',
+  axle_torque_Nm: 'axleTorqueNm',
+};
+
+let layout: PackedLayout | null = null;
+
+function packedLayout(): PackedLayout {
+  if (layout) return layout;
+  // The row loop writes each component's four fields in this order, the first negated.
+  if (COMPONENT_KEYS.join() !== 'axial_N,side_N,vertical_N,axle_torque_Nm') {
+    throw new Error(`packedCsvLines: COMPONENT_KEYS changed (${COMPONENT_KEYS.join()}); update the row loop`);
+  }
+  const scalar = Int32Array.from(RESULT_SCALAR_KEYS, (k) => (DERIVED.has(k) ? -1 : columnIndex(k)));
+  const component = new Int32Array(COMPONENT_NAMES.length * COMPONENT_KEYS.length);
+  let o = 0;
+  for (const c of COMPONENT_NAMES)
+    for (const k of COMPONENT_KEYS) component[o++] = columnIndex(`${c}.${COMPONENT_FIELD_OF[k]}`);
+  layout = {
+    scalar,
+    component,
+    cda: columnIndex('cdaAxialM2'),
+    rho: columnIndex('rhoKgPerM3'),
+    yawRad: columnIndex('yawRad'),
+    gciAxial: columnIndex('uncertaintyAxialN'),
+    gciSide: columnIndex('uncertaintySideN'),
+    flagBits: columnIndex('flagBits'),
+  };
+  return layout;
+}
+
+/**
+ * The lines are assembled as bytes in one reused buffer and decoded once per case: appending ~50
+ * short strings per row to a string made ropes whose flattening and garbage cost more than the
+ * number-to-text conversion itself. Every byte written is a code unit below 0x80 (digits, signs,
+ * '.', 'e', ',', flag codes), but the varied prefix, which is copied in as UTF-8.
+ */
+let bytes = new Uint8Array(1 << 16);
+
+function ensureBytes(size: number): void {
+  if (bytes.length < size) bytes = new Uint8Array(Math.max(size, 2 * bytes.length));
+}
+
+const COMMA = 44;
+const NEWLINE = 10;
+
+/** Write csvField(x) (the shortest round-trip text of a finite number, else nothing) and a comma at `at`. */
+function putNumber(x: number, at: number): number {
+  if (x - x === 0) {
+    const text = `${x}`;
+    for (let k = 0; k < text.length; k++) bytes[at++] = text.charCodeAt(k);
+  }
+  bytes[at] = COMMA;
+  return at + 1;
+}
+
+/** Write an ASCII string at `at`. */
+function putAscii(text: string, at: number): number {
+  for (let k = 0; k < text.length; k++) bytes[at++] = text.charCodeAt(k);
+  return at;
+}
+
+/** The flags cell of each flag bit set, as the document's flags joined with ';' (csvField applied). */
+const flagCells = new Map<number, string>();
+const decoder = new TextDecoder();
+
+function flagCell(bits: number): string {
+  let cell = flagCells.get(bits);
+  if (cell === undefined) {
+    cell = csvField(FLAG_CODES.filter((_, bit) => (bits & (1 << bit)) !== 0).join(';'));
+    if (!/^[\x20-\x7e]*$/.test(cell)) throw new Error(`packedCsvLines: flag codes must be ASCII: ${cell}`);
+    flagCells.set(bits, cell);
+  }
+  return cell;
+}
+
+/**
+ * The CSV lines (no header) of a solved case of `caseFile` whose `pointCount` points are packed row by
+ * row in `packed`: one per point, its varied parameters first, then the result columns (resultTable.ts).
+ */
+export function packedCsvLines(
+  packed: Float64Array,
+  pointCount: number,
+  caseFile: CaseFile,
+  variedKeys: readonly string[],
+  varied: Readonly<Record<string, PlanValue>>,
+): string {
+  if (packed.length !== pointCount * COLUMN_COUNT) {
+    throw new RangeError(`packedCsvLines: ${packed.length} values are not ${pointCount} packed rows`);
+  }
+  const { scalar, component, cda, rho, yawRad, gciAxial, gciSide, flagBits } = packedLayout();
+  const referenceSpeedMps = kmhToMps(caseFile.conditions.reference_speed_kmh);
+  const speed30MphMps = mphToMps(30);
+  let prefix = '';
+  for (const k of variedKeys) prefix += `${csvField(varied[k] ?? null)},`;
+  const prefixBytes = new TextEncoder().encode(prefix);
+  const scalarCount = scalar.length;
+  const componentCount = component.length;
+  // At most 24 characters and a comma per number ("-2.2250738585072014e-308"), the flags cell (ASCII
+  // codes, or quoted ones) and a newline per row.
+  const fieldCount = scalarCount + componentCount + 2;
+  const flagsMax = 2 * FLAG_CODES.join(';').length + 4;
+  ensureBytes(pointCount * (prefixBytes.length + 25 * fieldCount + flagsMax + 2));
+  const speeds = [referenceSpeedMps, speed30MphMps];
+  let at = 0;
+  for (let i = 0, row = 0; i < pointCount; i++, row += COLUMN_COUNT) {
+    bytes.set(prefixBytes, at);
+    at += prefixBytes.length;
+    for (let s = 0; s < scalarCount; s++) {
+      const column = scalar[s]!;
+      if (column >= 0) {
+        at = putNumber(packed[row + column]!, at);
+        continue;
+      }
+      const key = RESULT_SCALAR_KEYS[s];
+      const cdaM2 = packed[row + cda]!;
+      const value =
+        key === 'yaw_deg'
+          ? pointYawDeg(caseFile, pointCount, i, packed[row + yawRad]!)
+          : key === 'cda_axial_cm2'
+            ? cdaM2 * 1e4
+            : dragAreaToGramsForce(cdaM2, speeds[key === 'axial_gf_ref' ? 0 : 1]!, packed[row + rho]!);
+      at = putNumber(value, at);
+    }
+    for (let c = 0; c < componentCount; c += 4) {
+      at = putNumber(-packed[row + component[c]!]!, at);
+      at = putNumber(packed[row + component[c + 1]!]!, at);
+      at = putNumber(packed[row + component[c + 2]!]!, at);
+      at = putNumber(packed[row + component[c + 3]!]!, at);
+    }
+    at = putNumber(packed[row + gciAxial]!, at);
+    at = putNumber(packed[row + gciSide]!, at);
+    at = putAscii(flagCell(packed[row + flagBits]!), at);
+    bytes[at++] = COMMA;
+    bytes[at++] = NEWLINE;
+  }
+  return decoder.decode(bytes.subarray(0, at));
+}
