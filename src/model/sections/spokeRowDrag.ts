@@ -88,18 +88,48 @@ export function spokeRowDrag(
   ) {
     throw rowInputError(refLengthM, spacingM, tangentialMps, normalMps, kinematicViscosityM2PerS, out);
   }
+  const nu = kinematicViscosityM2PerS;
   const ut = Math.abs(tangentialMps);
   const un = Math.abs(normalMps);
-  const speed = Math.sqrt(ut * ut + un * un);
+  spokeRowDragAt(
+    round,
+    thicknessToWidth,
+    refLengthM,
+    spacingM,
+    ut,
+    un,
+    Math.sqrt(ut * ut + un * un),
+    nu,
+    out,
+  );
+}
+
+/**
+ * spokeRowDrag's law for a caller that has checked the arguments and already holds the crossflow's
+ * magnitudes (the spokes' loads, once per revolution position): u_t = |tangential|, u_n = |normal| and
+ * speed = sqrt(u_t^2 + u_n^2), computed exactly so (the same operations, so the same bits as
+ * spokeRowDrag). No checks: the arguments are spokeRowDrag's, already valid. Writes out as spokeRowDrag.
+ */
+export function spokeRowDragAt(
+  round: boolean,
+  thicknessToWidth: number,
+  refLengthM: number,
+  spacingM: number,
+  ut: number,
+  un: number,
+  speed: number,
+  kinematicViscosityM2PerS: number,
+  out: Float64Array,
+): void {
   if (speed === 0) {
     out[0] = Number.NaN;
     out[1] = 1;
     out[2] = 0;
     return;
   }
-  const reFree = (speed * refLengthM) / kinematicViscosityM2PerS;
   if (ut === 0) {
     // Moving straight across the row: the wake of the spoke ahead never reaches the element.
+    const reFree = (speed * refLengthM) / kinematicViscosityM2PerS;
     out[0] = spokeSectionDrag(round, reFree, thicknessToWidth);
     out[1] = 1;
     out[2] = reFree;

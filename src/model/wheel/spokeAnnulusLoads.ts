@@ -1,4 +1,4 @@
-import { spokeRowDrag } from '../sections';
+import { spokeRowDrag, spokeRowDragAt } from '../sections';
 
 /** Revolution positions averaged (midpoint rule, spectrally accurate for a periodic integrand). */
 export const SPOKE_ANGLE_STEPS = 36;
@@ -60,12 +60,25 @@ export function spokeAnnulusLoads(
   const { round, thicknessRatio, refLengthM, vInPlaneMps, vNormalMps, nuM2PerS } = spokes;
   const spacing = spokes.spacingPerRadius * radiusM;
   const half = 0.5 * spokes.rhoKgPerM3;
+  const un = Math.abs(vNormalMps);
+  // The row's arguments are checked once here (spokeRowDrag throws naming the bad one), each position's
+  // crossflow below; the positions then take the unchecked law with the speed already at hand.
+  if (
+    !(refLengthM > 0 && refLengthM < Number.POSITIVE_INFINITY) ||
+    !(spacing > 0 && spacing < Number.POSITIVE_INFINITY) ||
+    !(nuM2PerS > 0 && nuM2PerS < Number.POSITIVE_INFINITY)
+  ) {
+    spokeRowDrag(round, thicknessRatio, refLengthM, spacing, spinMps, vNormalMps, nuM2PerS, row);
+  }
   for (let k = 0; k < SPOKE_ANGLE_STEPS; k++) {
     const ut = vInPlaneMps * sinTheta[k]! + spinMps;
     const speed = Math.sqrt(ut * ut + vNormalMps * vNormalMps);
     if (coefficients) coefficients[k] = 0;
     if (speed === 0) continue;
-    spokeRowDrag(round, thicknessRatio, refLengthM, spacing, ut, vNormalMps, nuM2PerS, row);
+    if (!(speed < Number.POSITIVE_INFINITY)) {
+      spokeRowDrag(round, thicknessRatio, refLengthM, spacing, ut, vNormalMps, nuM2PerS, row);
+    }
+    spokeRowDragAt(round, thicknessRatio, refLengthM, spacing, Math.abs(ut), un, speed, nuM2PerS, row);
     const re = row[2]!;
     if (row[1]! > 0 && re < out[3]!) out[3] = re;
     if (re > out[4]!) out[4] = re;
