@@ -12,6 +12,19 @@ for (let k = 0; k < SPOKE_ANGLE_STEPS; k++) {
   sinTheta[k] = Math.sin(theta);
   cosTheta[k] = Math.cos(theta);
 }
+/** For each position, an earlier one with the very same sin(theta) (so the same crossflow and section
+ * law to the bit: mirror positions about the vertical where the sines round alike), or -1. */
+const sameSineAs = new Int8Array(SPOKE_ANGLE_STEPS).fill(-1);
+for (let k = 0; k < SPOKE_ANGLE_STEPS; k++) {
+  for (let j = 0; j < k; j++) {
+    if (sinTheta[j] === sinTheta[k]) {
+      sameSineAs[k] = j;
+      break;
+    }
+  }
+}
+/** Each position's 0.5 rho Cd L x shielding x weight in the current call (for sameSineAs). */
+const perSpeedAt = new Float64Array(SPOKE_ANGLE_STEPS);
 
 /** A wheel's spoke section and the air, fixed for one flow point. */
 export interface SpokeRow {
@@ -75,14 +88,22 @@ export function spokeAnnulusLoads(
     const speed = Math.sqrt(ut * ut + vNormalMps * vNormalMps);
     if (coefficients) coefficients[k] = 0;
     if (speed === 0) continue;
-    if (!(speed < Number.POSITIVE_INFINITY)) {
-      spokeRowDrag(round, thicknessRatio, refLengthM, spacing, ut, vNormalMps, nuM2PerS, row);
+    const same = sameSineAs[k]!;
+    let perSpeed: number;
+    if (same >= 0) {
+      // The same crossflow as position `same`: the same law's answer (its Reynolds numbers already met).
+      perSpeed = perSpeedAt[same]!;
+    } else {
+      if (!(speed < Number.POSITIVE_INFINITY)) {
+        spokeRowDrag(round, thicknessRatio, refLengthM, spacing, ut, vNormalMps, nuM2PerS, row);
+      }
+      spokeRowDragAt(round, thicknessRatio, refLengthM, spacing, Math.abs(ut), un, speed, nuM2PerS, row);
+      const re = row[2]!;
+      if (row[1]! > 0 && re < out[3]!) out[3] = re;
+      if (re > out[4]!) out[4] = re;
+      perSpeed = half * row[0]! * row[1]! * refLengthM * weightM;
+      perSpeedAt[k] = perSpeed;
     }
-    spokeRowDragAt(round, thicknessRatio, refLengthM, spacing, Math.abs(ut), un, speed, nuM2PerS, row);
-    const re = row[2]!;
-    if (row[1]! > 0 && re < out[3]!) out[3] = re;
-    if (re > out[4]!) out[4] = re;
-    const perSpeed = half * row[0]! * row[1]! * refLengthM * weightM;
     if (coefficients) coefficients[k] = perSpeed;
     const ft = perSpeed * speed * ut;
     out[0] -= sinTheta[k]! * ft;

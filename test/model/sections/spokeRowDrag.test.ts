@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { cylinderDrag, spokeRowDrag, tandemDragRatio } from '../../../src/model/sections';
+import { cylinderDrag, spokeRowDrag, spokeRowDragAt, tandemDragRatio } from '../../../src/model/sections';
 
 const nu = 1.46e-5;
 const d = 0.002;
@@ -61,5 +61,36 @@ describe('spokeRowDrag', () => {
     expect(() => spokeRowDrag(true, 1, d, 0.06, Number.NaN, 0, nu, out)).toThrow(/crossflow/);
     expect(() => spokeRowDrag(true, 1, d, 0.06, 1, 0, 0, out)).toThrow(/kinematicViscosity/);
     expect(() => spokeRowDrag(true, 1, d, 0.06, 1, 0, nu, new Float64Array(2))).toThrow(/out/);
+  });
+
+  it('spokeRowDragAt, given the magnitudes and speed, gives the bits of spokeRowDrag', () => {
+    // The unchecked form the spokes' loads call per revolution position: the same operations, so the
+    // same bits (exact equality), on and off the wake, across the row, round and bladed, stalled.
+    const at = new Float64Array(3);
+    for (const [round, ratio] of [
+      [true, 1],
+      [false, 0.4],
+    ] as const) {
+      for (const [s, ut, un] of [
+        [0.06, 12, 0],
+        [0.01, -5, 0.3],
+        [0.03, 20, -2],
+        [0.006, 0.8, 0.1],
+        [0.06, 0, 5],
+        [0.06, 10, 10],
+        [0.02, 1e-7, 0],
+      ] as const) {
+        spokeRowDrag(round, ratio, d, s, ut, un, nu, out);
+        const a = Math.abs(ut);
+        const b = Math.abs(un);
+        spokeRowDragAt(round, ratio, d, s, a, b, Math.sqrt(a * a + b * b), nu, at);
+        for (let i = 0; i < 3; i++) {
+          expect(
+            Object.is(at[i], out[i]),
+            `round=${round} s=${s} ut=${ut} un=${un} [${i}] got=${at[i]} expected=${out[i]} tol=0`,
+          ).toBe(true);
+        }
+      }
+    }
   });
 });
