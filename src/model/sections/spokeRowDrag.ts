@@ -141,12 +141,18 @@ export function spokeRowDragAt(
   let cd = 0;
   let ratio = 1;
   for (let step = 0; step < FIXED_POINT_STEPS; step++) {
+    const reShielded = (shielded * refLengthM) / kinematicViscosityM2PerS;
     // A spoke fully stalled in the wake still has a tiny speed: keep Re > 0 for the section law.
-    const re = Math.max((shielded * refLengthM) / kinematicViscosityM2PerS, 1e-6);
-    cd = spokeSectionDrag(round, re, thicknessToWidth);
+    cd = spokeSectionDrag(round, Math.max(reShielded, 1e-6), thicknessToWidth);
     ratio = tandemDragRatio(distance, offset, cd * refLengthM, refLengthM);
-    // Off the wake the shielded speed is the free one to 1e-6: Cd would not move.
-    if (ratio >= 1 - 1e-6) break;
+    // Off the wake the shielded speed is the free one to 1e-6: Cd would not move. The shielded speed
+    // is then the one just used, and so is its Reynolds number.
+    if (ratio >= 1 - 1e-6) {
+      out[0] = cd;
+      out[1] = ratio;
+      out[2] = reShielded;
+      return;
+    }
     shielded = speed * Math.sqrt(ratio);
   }
   out[0] = cd;
