@@ -1,5 +1,5 @@
 import { CYLINDER_RE_RANGE, plateReattachment } from '../sections';
-import { attainableEdgeThrust, roundEdgeSuctionLimit } from './attainableEdgeThrust';
+import { attainableEdgeThrustAt, roundEdgeSuctionLimit } from './attainableEdgeThrust';
 import { addForceAt, emptyLoads } from './componentLoads';
 import { frictionLoads } from './frictionLoads';
 import { hubLoads } from './hubLoads';
@@ -67,9 +67,10 @@ function surfaceLoads(
   for (let strip = 0; strip < coeff.tyreEdgeShare.length; strip++) {
     const theory = coeff.tyreEdgeShare[strip]! * suction * attachedFraction;
     if (theory === 0) continue;
-    const bound = attainableEdgeThrust(
+    const bound = attainableEdgeThrustAt(
       q,
-      point.yawRad,
+      c,
+      s,
       edgeRadiusM,
       discRadiusM,
       zEdges[strip]!,
