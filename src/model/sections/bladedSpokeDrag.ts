@@ -21,7 +21,19 @@ import { cylinderDrag } from './cylinderDrag';
 const LOG_TC = Float64Array.of(Math.log(0.125), Math.log(0.25), Math.log(0.5), 0);
 const LOG_RATIO = Float64Array.of(Math.log(0.25 / 1.2), Math.log(0.35 / 1.2), Math.log(0.6 / 1.2), 0);
 
+/** The last section's t/c and its ratio: a wheel's spokes keep one section over a whole sweep, so the
+ * table lookup (a logarithm and an exponential) runs once per section, not at every evaluation. */
+let lastThicknessToWidth = Number.NaN;
+let lastRatio = Number.NaN;
+
 function ellipseToCircleRatio(thicknessToWidth: number): number {
+  if (thicknessToWidth === lastThicknessToWidth) return lastRatio;
+  lastRatio = interpolatedRatio(thicknessToWidth);
+  lastThicknessToWidth = thicknessToWidth;
+  return lastRatio;
+}
+
+function interpolatedRatio(thicknessToWidth: number): number {
   const x = Math.log(thicknessToWidth);
   let i = 0;
   while (i < LOG_TC.length - 2 && x > LOG_TC[i + 1]!) i++;

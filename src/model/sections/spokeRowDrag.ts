@@ -88,18 +88,48 @@ export function spokeRowDrag(
   ) {
     throw rowInputError(refLengthM, spacingM, tangentialMps, normalMps, kinematicViscosityM2PerS, out);
   }
+  const nu = kinematicViscosityM2PerS;
   const ut = Math.abs(tangentialMps);
   const un = Math.abs(normalMps);
-  const speed = Math.sqrt(ut * ut + un * un);
+  spokeRowDragAt(
+    round,
+    thicknessToWidth,
+    refLengthM,
+    spacingM,
+    ut,
+    un,
+    Math.sqrt(ut * ut + un * un),
+    nu,
+    out,
+  );
+}
+
+/**
+ * spokeRowDrag's law for a caller that has checked the arguments and already holds the crossflow's
+ * magnitudes (the spokes' loads, once per revolution position): u_t = |tangential|, u_n = |normal| and
+ * speed = sqrt(u_t^2 + u_n^2), computed exactly so (the same operations, so the same bits as
+ * spokeRowDrag). No checks: the arguments are spokeRowDrag's, already valid. Writes out as spokeRowDrag.
+ */
+export function spokeRowDragAt(
+  round: boolean,
+  thicknessToWidth: number,
+  refLengthM: number,
+  spacingM: number,
+  ut: number,
+  un: number,
+  speed: number,
+  kinematicViscosityM2PerS: number,
+  out: Float64Array,
+): void {
   if (speed === 0) {
     out[0] = Number.NaN;
     out[1] = 1;
     out[2] = 0;
     return;
   }
-  const reFree = (speed * refLengthM) / kinematicViscosityM2PerS;
   if (ut === 0) {
     // Moving straight across the row: the wake of the spoke ahead never reaches the element.
+    const reFree = (speed * refLengthM) / kinematicViscosityM2PerS;
     out[0] = spokeSectionDrag(round, reFree, thicknessToWidth);
     out[1] = 1;
     out[2] = reFree;
@@ -111,12 +141,18 @@ export function spokeRowDrag(
   let cd = 0;
   let ratio = 1;
   for (let step = 0; step < FIXED_POINT_STEPS; step++) {
+    const reShielded = (shielded * refLengthM) / kinematicViscosityM2PerS;
     // A spoke fully stalled in the wake still has a tiny speed: keep Re > 0 for the section law.
-    const re = Math.max((shielded * refLengthM) / kinematicViscosityM2PerS, 1e-6);
-    cd = spokeSectionDrag(round, re, thicknessToWidth);
+    cd = spokeSectionDrag(round, Math.max(reShielded, 1e-6), thicknessToWidth);
     ratio = tandemDragRatio(distance, offset, cd * refLengthM, refLengthM);
-    // Off the wake the shielded speed is the free one to 1e-6: Cd would not move.
-    if (ratio >= 1 - 1e-6) break;
+    // Off the wake the shielded speed is the free one to 1e-6: Cd would not move. The shielded speed
+    // is then the one just used, and so is its Reynolds number.
+    if (ratio >= 1 - 1e-6) {
+      out[0] = cd;
+      out[1] = ratio;
+      out[2] = reShielded;
+      return;
+    }
     shielded = speed * Math.sqrt(ratio);
   }
   out[0] = cd;

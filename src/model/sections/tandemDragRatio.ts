@@ -77,5 +77,8 @@ export function tandemDragRatio(
   // Beyond TAIL_CUTOFF half-value widths the Gaussian deficit is below 2e-5 of its centre value: the
   // follower stands outside the wake (a stated truncation, far below the law's own accuracy).
   if (y - h >= TAIL_CUTOFF * halfValueWidth) return 1;
+  // On the centre line the two Gauss points sit at -h and h, where the even profile gives the same
+  // bits (negation is exact): their mean is either one, one exponential saved.
+  if (y === 0) return dragShare(centre, halfValueWidth, h);
   return 0.5 * (dragShare(centre, halfValueWidth, y - h) + dragShare(centre, halfValueWidth, y + h));
 }

@@ -1,5 +1,5 @@
 import { CYLINDER_RE_RANGE, plateReattachment } from '../sections';
-import { attainableEdgeThrust, roundEdgeSuctionLimit } from './attainableEdgeThrust';
+import { attainableEdgeThrustAt, roundEdgeSuctionLimit } from './attainableEdgeThrust';
 import { addForceAt, emptyLoads } from './componentLoads';
 import { frictionLoads } from './frictionLoads';
 import { hubLoads } from './hubLoads';
@@ -7,15 +7,15 @@ import { RIM_SECTION_RE_RANGE, rimTyreLoads, rimTyreSection } from './rimTyreLoa
 import { spokeLoads } from './spokeLoads';
 import { steeringMoment } from './steeringAxis';
 import type { SurfaceCoefficients } from './surfaceCoefficients';
-import {
-  COMPONENT_NAMES,
-  type ComponentLoads,
-  type ComponentName,
-  type FlowConditions,
-  type ModelOptions,
-  type PointResult,
-  type SteeringGeometry,
-  type WheelGeometry,
+import type {
+  ComponentLoads,
+  ComponentName,
+  ConvergenceEstimate,
+  FlowConditions,
+  ModelOptions,
+  PointResult,
+  SteeringGeometry,
+  WheelGeometry,
 } from './types';
 import { VALIDITY } from './validity';
 import type { WheelRadii } from './wheelRadii';
@@ -67,9 +67,10 @@ function surfaceLoads(
   for (let strip = 0; strip < coeff.tyreEdgeShare.length; strip++) {
     const theory = coeff.tyreEdgeShare[strip]! * suction * attachedFraction;
     if (theory === 0) continue;
-    const bound = attainableEdgeThrust(
+    const bound = attainableEdgeThrustAt(
       q,
-      point.yawRad,
+      c,
+      s,
       edgeRadiusM,
       discRadiusM,
       zEdges[strip]!,
@@ -83,6 +84,23 @@ function surfaceLoads(
     addForceAt(vortex, 0, (theory - thrust) * sign, 0, x, 0, z);
   }
   return negative;
+}
+
+/** The components' sums: x, y and z force, x and z moment, axle torque. */
+const totals = new Float64Array(6);
+
+function addTotals(l: ComponentLoads): void {
+  totals[0] += l.fxN;
+  totals[1] += l.fyN;
+  totals[2] += l.fzN;
+  totals[3] += l.mxNm;
+  totals[4] += l.mzNm;
+  totals[5] += l.axleTorqueNm;
+}
+
+/** A convergence estimate beyond the trusted lattice uncertainty (none given: not flagged). */
+function notConverged(e: ConvergenceEstimate | null | undefined): boolean {
+  return !!e && (!Number.isFinite(e.gciRelative) || e.gciRelative > VALIDITY.maxGciRelative);
 }
 
 /**
@@ -100,8 +118,15 @@ export function assemblePoint(
 ): PointResult {
   const R = radii.outerRadiusM;
   const area = Math.PI * R * R;
-  const components = {} as Record<ComponentName, ComponentLoads>;
-  for (const name of COMPONENT_NAMES) components[name] = emptyLoads();
+  // One literal in COMPONENT_NAMES' order: every result's components share one shape.
+  const components: Record<ComponentName, ComponentLoads> = {
+    surface: emptyLoads(),
+    vortex: emptyLoads(),
+    spokes: emptyLoads(),
+    rim_tyre: emptyLoads(),
+    friction: emptyLoads(),
+    hub: emptyLoads(),
+  };
   const flags: string[] = [];
   const tyreRadius = 0.5 * wheel.tyreWidthM;
   const section = rimTyreSection(wheel, radii);
@@ -115,21 +140,20 @@ export function assemblePoint(
   frictionLoads(wheel, radii, point, components.friction);
   hubLoads(wheel, radii, point, options, components.hub);
 
-  let fx = 0;
-  let fy = 0;
-  let fz = 0;
-  let mx = 0;
-  let mz = 0;
-  let torque = 0;
-  for (const name of COMPONENT_NAMES) {
-    const l = components[name];
-    fx += l.fxN;
-    fy += l.fyN;
-    fz += l.fzN;
-    mx += l.mxNm;
-    mz += l.mzNm;
-    torque += l.axleTorqueNm;
-  }
+  // Summed in COMPONENT_NAMES' order.
+  totals.fill(0);
+  addTotals(components.surface);
+  addTotals(components.vortex);
+  addTotals(components.spokes);
+  addTotals(components.rim_tyre);
+  addTotals(components.friction);
+  addTotals(components.hub);
+  const fx = totals[0]!;
+  const fy = totals[1]!;
+  const fz = totals[2]!;
+  const mx = totals[3]!;
+  const mz = totals[4]!;
+  const torque = totals[5]!;
   const beta = point.yawRad;
   const cb = Math.cos(beta);
   const sb = Math.sin(beta);
@@ -165,8 +189,7 @@ export function assemblePoint(
   ) {
     flags.push('rim_reynolds_beyond_range');
   }
-  const conv = [coeff.normalSlopeConvergence, coeff.suctionSlopeConvergence];
-  if (conv.some((e) => e && (!Number.isFinite(e.gciRelative) || e.gciRelative > VALIDITY.maxGciRelative))) {
+  if (notConverged(coeff.normalSlopeConvergence) || notConverged(coeff.suctionSlopeConvergence)) {
     flags.push('lattice_not_converged');
   }
   const gciN = coeff.normalSlopeConvergence?.gciRelative ?? Number.NaN;

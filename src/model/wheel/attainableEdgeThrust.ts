@@ -51,6 +51,23 @@ export function attainableEdgeThrust(
   z1M: number,
   suctionLimit: number,
 ): number {
+  const c = Math.cos(yawRad);
+  const s = Math.sin(yawRad);
+  return attainableEdgeThrustAt(dynamicPressurePa, c, s, edgeRadiusM, discRadiusM, z0M, z1M, suctionLimit);
+}
+
+/** attainableEdgeThrust with cos(beta) and sin(beta) given (a point's strips share them): the same
+ * checks and operations, so the same bits. */
+export function attainableEdgeThrustAt(
+  dynamicPressurePa: number,
+  c: number,
+  s: number,
+  edgeRadiusM: number,
+  discRadiusM: number,
+  z0M: number,
+  z1M: number,
+  suctionLimit: number,
+): number {
   if (!(dynamicPressurePa >= 0) || !Number.isFinite(dynamicPressurePa)) {
     throw new RangeError(`dynamicPressurePa=${dynamicPressurePa}: must be finite and >= 0`);
   }
@@ -62,8 +79,6 @@ export function attainableEdgeThrust(
     throw new RangeError(`strip [${z0M}, ${z1M}] m: must satisfy -R <= z0 <= z1 <= R (R = ${R})`);
   }
   if (!(suctionLimit >= 0)) throw new RangeError(`suctionLimit=${suctionLimit}: must be >= 0`);
-  const c = Math.cos(yawRad);
-  const s = Math.sin(yawRad);
   const h = z1M - z0M;
   const normalPart = h - (z1M * z1M * z1M - z0M * z0M * z0M) / (3 * R * R);
   return suctionLimit * dynamicPressurePa * edgeRadiusM * (c * c * normalPart + s * s * h);

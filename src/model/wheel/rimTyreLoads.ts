@@ -1,5 +1,5 @@
 import { planeWakeDeficit, splitterPlateCylinderDrag } from '../sections';
-import { addForceAt, clearLoads } from './componentLoads';
+import { clearLoads } from './componentLoads';
 import type { ComponentLoads, FlowConditions, ModelOptions, WheelGeometry } from './types';
 import type { WheelRadii } from './wheelRadii';
 
@@ -10,6 +10,62 @@ for (let k = 0; k < ANGLE_STEPS; k++) {
   const theta = ((k + 0.5) * 2 * Math.PI) / ANGLE_STEPS;
   sinTheta[k] = Math.sin(theta);
   cosTheta[k] = Math.cos(theta);
+}
+
+/** Most yaw angles whose rear-arc shielding is kept for one ring (a sweep has tens). */
+const SHIELDING_CACHE_LIMIT = 256;
+/** The ring the kept shieldings belong to: its drag length Cd t and force radius (NaN: none yet). */
+const shieldingRing = Float64Array.of(Number.NaN, Number.NaN);
+/** Kept shieldings by yaw angle, for in-plane flow toward -x (flow from the front, index 0) or +x (1). */
+const shieldingByYaw = [new Map<number, Float64Array>(), new Map<number, Float64Array>()];
+/** Arrays handed out since the ring changed (reused for the next ring). */
+const shieldingPool: Float64Array[] = [];
+let shieldingUsed = 0;
+
+/**
+ * The factor (1 - deficit)^2 on each revolution position's drag coefficient: on the arc downstream (for
+ * flow sign `flowSign` of V cos(beta)) the front arc's plane far wake (planeWakeDeficit) 2 x_f behind it,
+ * drifted sideways by 2 x_f |tan(beta)|; 1 upstream. It depends on the ring (drag length, radius) and the
+ * yaw angle only, not on the airspeed or the air: kept per ring and yaw, so a sweep's airspeeds share it.
+ * The array is owned here: read it, do not keep or change it.
+ */
+function rearArcShielding(dragLengthM: number, rMid: number, yawRad: number, flowSign: number): Float64Array {
+  if (!(dragLengthM === shieldingRing[0] && rMid === shieldingRing[1])) {
+    shieldingByYaw[0]!.clear();
+    shieldingByYaw[1]!.clear();
+    shieldingUsed = 0;
+    shieldingRing[0] = dragLengthM;
+    shieldingRing[1] = rMid;
+  }
+  const kept = flowSign === 1 ? shieldingByYaw[0]! : flowSign === -1 ? shieldingByYaw[1]! : undefined;
+  const known = kept?.get(yawRad);
+  if (known) return known;
+  if (kept && kept.size >= SHIELDING_CACHE_LIMIT) {
+    shieldingByYaw[0]!.clear();
+    shieldingByYaw[1]!.clear();
+    shieldingUsed = 0;
+  }
+  // A flow sign other than +-1 (NaN input) is not kept: a fresh array.
+  let factors = kept ? shieldingPool[shieldingUsed] : new Float64Array(ANGLE_STEPS);
+  if (!factors) {
+    factors = new Float64Array(ANGLE_STEPS);
+    shieldingPool.push(factors);
+  }
+  if (kept) shieldingUsed++;
+  const drift = Math.abs(Math.tan(yawRad));
+  for (let k = 0; k < ANGLE_STEPS; k++) {
+    const c = cosTheta[k]!;
+    // The flow runs from the front arc to the rear one (for V cos(beta) > 0; mirrored otherwise).
+    if (c * flowSign < 0) {
+      const distance = 2 * rMid * Math.abs(c);
+      const deficit = planeWakeDeficit(distance, distance * drift, dragLengthM);
+      factors[k] = (1 - deficit) * (1 - deficit);
+    } else {
+      factors[k] = 1;
+    }
+  }
+  kept?.set(yawRad, factors);
+  return factors;
 }
 
 /** Section Reynolds numbers (on the section's thickness) where the subcritical section data hold:
@@ -82,23 +138,39 @@ export function rimTyreLoads(
   const reynolds = (rho * Math.abs(vInPlane) * t) / mu;
   if (reynolds === 0) return { reynolds };
   const cdSection = splitterPlateCylinderDrag(section.plateLengthM / t) * options.profileDragFactor;
-  const drift = Math.abs(Math.tan(point.yawRad));
   const dragLength = cdSection * t;
   const rMid = section.forceRadiusM;
   const arc = (rMid * 2 * Math.PI) / ANGLE_STEPS;
+  const shielding = rearArcShielding(dragLength, rMid, point.yawRad, Math.sign(vInPlane));
+  // The sums of addForceAt (force at (rMid cos, 0, rMid sin)), in the same order, kept in locals.
+  let fx = 0;
+  let fy = 0;
+  let fz = 0;
+  let mx = 0;
+  let my = 0;
+  let mz = 0;
   for (let k = 0; k < ANGLE_STEPS; k++) {
     const c = cosTheta[k]!;
     const ur = -vInPlane * c;
-    let cd = cdSection;
-    // The flow runs from the front arc to the rear one (for vInPlane > 0; mirrored otherwise).
-    const downstream = c * Math.sign(vInPlane) < 0;
-    if (downstream) {
-      const distance = 2 * rMid * Math.abs(c);
-      const deficit = planeWakeDeficit(distance, distance * drift, dragLength);
-      cd *= (1 - deficit) * (1 - deficit);
-    }
+    // The rear arc's elements stand in the front arc's wake (1 on the front arc: cd unchanged).
+    const cd = cdSection * shielding[k]!;
     const f = 0.5 * rho * cd * t * Math.abs(ur) * ur * arc;
-    addForceAt(out, f * c, 0, f * sinTheta[k]!, rMid * c, 0, rMid * sinTheta[k]!);
+    const forceX = f * c;
+    const forceZ = f * sinTheta[k]!;
+    const x = rMid * c;
+    const z = rMid * sinTheta[k]!;
+    fx += forceX;
+    fy += 0;
+    fz += forceZ;
+    mx += 0 * forceZ - z * 0;
+    my += z * forceX - x * forceZ;
+    mz += x * 0 - 0 * forceX;
   }
+  out.fxN = fx;
+  out.fyN = fy;
+  out.fzN = fz;
+  out.mxNm = mx;
+  out.myNm = my;
+  out.mzNm = mz;
   return { reynolds };
 }

@@ -1,4 +1,4 @@
-import { spokeRowDrag } from '../sections';
+import { spokeRowDrag, spokeRowDragAt } from '../sections';
 
 /** Revolution positions averaged (midpoint rule, spectrally accurate for a periodic integrand). */
 export const SPOKE_ANGLE_STEPS = 36;
@@ -12,6 +12,19 @@ for (let k = 0; k < SPOKE_ANGLE_STEPS; k++) {
   sinTheta[k] = Math.sin(theta);
   cosTheta[k] = Math.cos(theta);
 }
+/** For each position, an earlier one with the very same sin(theta) (so the same crossflow and section
+ * law to the bit: mirror positions about the vertical where the sines round alike), or -1. */
+const sameSineAs = new Int8Array(SPOKE_ANGLE_STEPS).fill(-1);
+for (let k = 0; k < SPOKE_ANGLE_STEPS; k++) {
+  for (let j = 0; j < k; j++) {
+    if (sinTheta[j] === sinTheta[k]) {
+      sameSineAs[k] = j;
+      break;
+    }
+  }
+}
+/** Each position's 0.5 rho Cd L x shielding x weight in the current call (for sameSineAs). */
+const perSpeedAt = new Float64Array(SPOKE_ANGLE_STEPS);
 
 /** A wheel's spoke section and the air, fixed for one flow point. */
 export interface SpokeRow {
@@ -60,16 +73,37 @@ export function spokeAnnulusLoads(
   const { round, thicknessRatio, refLengthM, vInPlaneMps, vNormalMps, nuM2PerS } = spokes;
   const spacing = spokes.spacingPerRadius * radiusM;
   const half = 0.5 * spokes.rhoKgPerM3;
+  const un = Math.abs(vNormalMps);
+  // The row's arguments are checked once here (spokeRowDrag throws naming the bad one), each position's
+  // crossflow below; the positions then take the unchecked law with the speed already at hand.
+  if (
+    !(refLengthM > 0 && refLengthM < Number.POSITIVE_INFINITY) ||
+    !(spacing > 0 && spacing < Number.POSITIVE_INFINITY) ||
+    !(nuM2PerS > 0 && nuM2PerS < Number.POSITIVE_INFINITY)
+  ) {
+    spokeRowDrag(round, thicknessRatio, refLengthM, spacing, spinMps, vNormalMps, nuM2PerS, row);
+  }
   for (let k = 0; k < SPOKE_ANGLE_STEPS; k++) {
     const ut = vInPlaneMps * sinTheta[k]! + spinMps;
     const speed = Math.sqrt(ut * ut + vNormalMps * vNormalMps);
     if (coefficients) coefficients[k] = 0;
     if (speed === 0) continue;
-    spokeRowDrag(round, thicknessRatio, refLengthM, spacing, ut, vNormalMps, nuM2PerS, row);
-    const re = row[2]!;
-    if (row[1]! > 0 && re < out[3]!) out[3] = re;
-    if (re > out[4]!) out[4] = re;
-    const perSpeed = half * row[0]! * row[1]! * refLengthM * weightM;
+    const same = sameSineAs[k]!;
+    let perSpeed: number;
+    if (same >= 0) {
+      // The same crossflow as position `same`: the same law's answer (its Reynolds numbers already met).
+      perSpeed = perSpeedAt[same]!;
+    } else {
+      if (!(speed < Number.POSITIVE_INFINITY)) {
+        spokeRowDrag(round, thicknessRatio, refLengthM, spacing, ut, vNormalMps, nuM2PerS, row);
+      }
+      spokeRowDragAt(round, thicknessRatio, refLengthM, spacing, Math.abs(ut), un, speed, nuM2PerS, row);
+      const re = row[2]!;
+      if (row[1]! > 0 && re < out[3]!) out[3] = re;
+      if (re > out[4]!) out[4] = re;
+      perSpeed = half * row[0]! * row[1]! * refLengthM * weightM;
+      perSpeedAt[k] = perSpeed;
+    }
     if (coefficients) coefficients[k] = perSpeed;
     const ft = perSpeed * speed * ut;
     out[0] -= sinTheta[k]! * ft;

@@ -24,6 +24,22 @@ function loadsAt(spokes: SpokeRow, radiusM: number, spinMps: number): void {
   spokeAnnulusLoads(spokes, radiusM, spinMps, 1, sums, coefficients);
 }
 
+/** g(x) of the swirl balance (see spokeElementSwirl), from the loads at the frozen coefficients; leaves
+ * those loads in `frozen`. A plain function, not a closure made per element. */
+function swirlResidual(
+  spokes: SpokeRow,
+  radiusM: number,
+  spinMps: number,
+  x: number,
+  delta: number,
+  torqueScale: number,
+  perTorque: number,
+): number {
+  frozen.fill(0);
+  spokeAnnulusLoadsFrozen(spokes, radiusM, spinMps * (1 - x), coefficients, frozen);
+  return 1 - (1 - x) * (1 - delta) - Math.max(0, frozen[2]! * torqueScale) * perTorque;
+}
+
 /**
  * The loads of the spokes at one radius and the swirl of the air they meet, from the angular-momentum
  * balance of the whole spoke cage, solved consistently with the spokes' drag law.
@@ -78,8 +94,10 @@ export function spokeElementSwirl(
 ): void {
   const spin = omegaRadPerS * radiusM;
   loadsAt(spokes, radiusM, spin);
-  out.fill(0, 0, 3);
-  out.set(sums.subarray(0, 5), 3);
+  out[0] = 0;
+  out[1] = 0;
+  out[2] = 0;
+  for (let i = 0; i < 5; i++) out[3 + i] = sums[i]!;
   // A spin below 1e-9 of the airspeed puts no swirl worth solving into the air (and its row geometry
   // underflows).
   if (!(spin > 1e-9 * airspeedMps) || !(spin > 0) || !(torqueScale > 0)) return;
@@ -104,18 +122,13 @@ export function spokeElementSwirl(
   if (mean0 <= delta) return;
   // Newton from x = 0 with the torque's slope, then secant steps on g, each g from the loads at frozen
   // drag coefficients and shielding (spokeAnnulusLoadsFrozen); the root stays in [0, mean0].
-  const g = (x: number) => {
-    frozen.fill(0);
-    spokeAnnulusLoadsFrozen(spokes, radiusM, spin * (1 - x), coefficients, frozen);
-    return 1 - (1 - x) * (1 - delta) - Math.max(0, frozen[2]! * torqueScale) * perTorque;
-  };
   let xPrev = 0;
   let gPrev = delta - mean0;
   let x = Math.min(
     mean0,
     (mean0 - delta) / (1 - delta + spin * Math.max(0, sums[7]! * torqueScale) * perTorque),
   );
-  let gx = g(x);
+  let gx = swirlResidual(spokes, radiusM, spin, x, delta, torqueScale, perTorque);
   for (let step = 0; step < MAX_STEPS && Math.abs(gx) > TOLERANCE; step++) {
     let next = x - (gx * (x - xPrev)) / (gx - gPrev);
     // Keep to the bracket [0, mean0] (g(0) < 0 <= g(mean0)); bisect toward it should the secant leave it.
@@ -123,7 +136,7 @@ export function spokeElementSwirl(
     xPrev = x;
     gPrev = gx;
     x = next;
-    gx = g(x);
+    gx = swirlResidual(spokes, radiusM, spin, x, delta, torqueScale, perTorque);
   }
   out[0] = x;
   out[1] = 1 - (1 - x) * (1 - delta);

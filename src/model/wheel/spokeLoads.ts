@@ -1,8 +1,8 @@
 import { clearLoads } from './componentLoads';
 import { SPOKE_ANGLE_STEPS } from './spokeAnnulusLoads';
 import { spokeElementSwirl } from './spokeElementSwirl';
-import { spokeElements } from './spokeElements';
-import { spokeRowOf } from './spokeRowOf';
+import { spokeElementTable } from './spokeElementTable';
+import { emptySpokeRow, setSpokeRow } from './spokeRowOf';
 import type { ComponentLoads, FlowConditions, ModelOptions, WheelGeometry } from './types';
 import type { WheelRadii } from './wheelRadii';
 
@@ -10,6 +10,8 @@ import type { WheelRadii } from './wheelRadii';
 const sums = new Float64Array(5);
 /** spokeElementSwirl's answer: extra swirl, mean swirl, plane swirl, the element's loads at unit length. */
 const element = new Float64Array(8);
+/** The spoke row of the current point (filled in place). */
+const spokes = emptySpokeRow();
 
 export interface SpokeLoadsReport {
   /** Smallest and largest section Reynolds number met (for validity flags). */
@@ -56,13 +58,13 @@ export function spokeLoads(
   clearLoads(out);
   const report = { reynoldsMin: Number.POSITIVE_INFINITY, reynoldsMax: 0 };
   if (wheel.spokeCount === 0) return { reynoldsMin: Number.NaN, reynoldsMax: Number.NaN };
-  const spokes = spokeRowOf(wheel, point);
+  setSpokeRow(wheel, point, spokes);
   const omega = point.groundSpeedMps / radii.outerRadiusM;
-  const elements = spokeElements(wheel, radii, options);
+  const elements = spokeElementTable(wheel, radii, options);
   const perSpoke = (wheel.spokeCount / SPOKE_ANGLE_STEPS) * options.profileDragFactor;
   sums.fill(0);
   sums[3] = Number.POSITIVE_INFINITY;
-  for (let e = 0; e < elements.radiusM.length; e++) {
+  for (let e = 0; e < elements.count; e++) {
     const weight = elements.weightM[e]!;
     // The element's loads with the swirl of the whole cage (spokeElementSwirl): where it exceeds the
     // merged wake's, the spokes meet the rotation slowed by the extra swirl fraction.

@@ -67,4 +67,19 @@ describe('bladedSpokeDrag', () => {
     expect(() => bladedSpokeDrag(1e3, 1.5)).toThrow(/thicknessToWidth/);
     expect(() => bladedSpokeDrag(-5, 0.5)).toThrow(/reynolds/);
   });
+
+  it('gives the same bits whichever section was evaluated before (the kept t/c lookup)', () => {
+    // The table lookup is kept for the last t/c; each value, asked for after another section and
+    // again after its own, must be the same to the bit (exact equality).
+    const sections = [0.45, 0.1, 0.3, 1, 0.125];
+    const first = sections.map((tc, i) => {
+      bladedSpokeDrag(2e3, sections[(i + 1) % sections.length]!);
+      return bladedSpokeDrag(1.5e3, tc);
+    });
+    sections.forEach((tc, i) => {
+      const again = bladedSpokeDrag(1.5e3, tc);
+      expect(Object.is(again, first[i]), `t/c=${tc} got=${again} expected=${first[i]} tol=0`).toBe(true);
+      expect(Object.is(bladedSpokeDrag(1.5e3, tc), first[i]), `t/c=${tc} repeated`).toBe(true);
+    });
+  });
 });

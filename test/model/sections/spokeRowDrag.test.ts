@@ -1,5 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import { cylinderDrag, spokeRowDrag, tandemDragRatio } from '../../../src/model/sections';
+import {
+  cylinderDrag,
+  spokeRowDrag,
+  spokeRowDragAt,
+  spokeSectionDrag,
+  tandemDragRatio,
+} from '../../../src/model/sections';
 
 const nu = 1.46e-5;
 const d = 0.002;
@@ -61,5 +67,64 @@ describe('spokeRowDrag', () => {
     expect(() => spokeRowDrag(true, 1, d, 0.06, Number.NaN, 0, nu, out)).toThrow(/crossflow/);
     expect(() => spokeRowDrag(true, 1, d, 0.06, 1, 0, 0, out)).toThrow(/kinematicViscosity/);
     expect(() => spokeRowDrag(true, 1, d, 0.06, 1, 0, nu, new Float64Array(2))).toThrow(/out/);
+  });
+
+  it('spokeRowDrag and spokeRowDragAt give the bits of the fixed point as first written', () => {
+    // The loop as first written (two steps, the Reynolds number of the shielded speed computed after
+    // it), transcribed here over the published laws; spokeRowDragAt, the unchecked form the spokes'
+    // loads call with the magnitudes and speed at hand, and spokeRowDrag give the same bits (exact
+    // equality), on and off the wake, across the row, round and bladed, nearly stalled.
+    const firstWritten = (round: boolean, ratio: number, s: number, utSigned: number, unSigned: number) => {
+      const ut = Math.abs(utSigned);
+      const un = Math.abs(unSigned);
+      const speed = Math.sqrt(ut * ut + un * un);
+      const reFree = (speed * d) / nu;
+      if (ut === 0) return [spokeSectionDrag(round, reFree, ratio), 1, reFree];
+      const distance = (s * ut) / speed;
+      const offset = (s * un) / speed;
+      let shielded = speed;
+      let cd = 0;
+      let r = 1;
+      for (let step = 0; step < 2; step++) {
+        const re = Math.max((shielded * d) / nu, 1e-6);
+        cd = spokeSectionDrag(round, re, ratio);
+        r = tandemDragRatio(distance, offset, cd * d, d);
+        if (r >= 1 - 1e-6) break;
+        shielded = speed * Math.sqrt(r);
+      }
+      return [cd, r, (shielded * d) / nu];
+    };
+    const at = new Float64Array(3);
+    for (const [round, ratio] of [
+      [true, 1],
+      [false, 0.4],
+    ] as const) {
+      for (const [s, ut, un] of [
+        [0.06, 12, 0],
+        [0.01, -5, 0.3],
+        [0.03, 20, -2],
+        [0.006, 0.8, 0.1],
+        [0.06, 0, 5],
+        [0.06, 10, 10],
+        [0.03, 10, 1.5],
+        [0.02, 1e-7, 0],
+      ] as const) {
+        const expected = firstWritten(round, ratio, s, ut, un);
+        spokeRowDrag(round, ratio, d, s, ut, un, nu, out);
+        const a = Math.abs(ut);
+        const b = Math.abs(un);
+        spokeRowDragAt(round, ratio, d, s, a, b, Math.sqrt(a * a + b * b), nu, at);
+        for (let i = 0; i < 3; i++) {
+          const label = `round=${round} s=${s} ut=${ut} un=${un} [${i}]`;
+          expect(Object.is(out[i], expected[i]), `${label} got=${out[i]} expected=${expected[i]} tol=0`).toBe(
+            true,
+          );
+          expect(
+            Object.is(at[i], expected[i]),
+            `${label} At got=${at[i]} expected=${expected[i]} tol=0`,
+          ).toBe(true);
+        }
+      }
+    }
   });
 });

@@ -39,4 +39,33 @@ describe('tandemDragRatio', () => {
     expect(() => tandemDragRatio(1, 0, -1, 1)).toThrow(/dragLengthM/);
     expect(() => tandemDragRatio(1, 0, 1, 0)).toThrow(/followerWidthM/);
   });
+
+  it('on the centre line gives the bits of the two-point mean it shortens', () => {
+    // The law as written before the centre-line shortcut: 2-point Gauss-Legendre mean of (1 - u1/U)^2
+    // over the follower's width with Schlichting's plane wake (0.98, 0.25, Gaussian); exact equality.
+    const mean = (x: number, cdL: number, w: number) => {
+      const root = Math.sqrt(x * cdL);
+      const centre = (0.98 * cdL) / root;
+      const b = 0.25 * root;
+      const h = 0.5 * w * (1 / Math.sqrt(3));
+      const share = (y: number) => {
+        const eta = y / b;
+        const u = 1 - Math.min(1, centre * Math.exp(-Math.LN2 * eta * eta));
+        return u * u;
+      };
+      return 0.5 * (share(0 - h) + share(0 + h));
+    };
+    for (const [x, cdL, w] of [
+      [0.1, 0.012, 0.01],
+      [0.05, 0.0022, 0.002],
+      [0.004, 0.0024, 0.002],
+      [2, 1e-4, 0.001],
+    ] as const) {
+      const got = tandemDragRatio(x, 0, cdL, w);
+      const expected = mean(x, cdL, w);
+      expect(Object.is(got, expected), `x=${x} CdL=${cdL} w=${w} got=${got} expected=${expected} tol=0`).toBe(
+        true,
+      );
+    }
+  });
 });

@@ -1,5 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { attainableEdgeThrust, roundEdgeSuctionLimit } from '../../../src/model/wheel/attainableEdgeThrust';
+import {
+  attainableEdgeThrust,
+  attainableEdgeThrustAt,
+  roundEdgeSuctionLimit,
+} from '../../../src/model/wheel/attainableEdgeThrust';
 
 describe('roundEdgeSuctionLimit', () => {
   it("is a subcritical cylinder's minimum pressure -1.2 and the supercritical -2.4", () => {
@@ -37,5 +41,24 @@ describe('attainableEdgeThrust', () => {
     expect(() => attainableEdgeThrust(-1, 0, 0.01, 0.3, 0, 0.1, 1)).toThrow(RangeError);
     expect(() => attainableEdgeThrust(1, 0, 0.01, 0.3, 0.2, 0.1, 1)).toThrow(RangeError);
     expect(() => attainableEdgeThrust(1, 0, 0, 0.3, 0, 0.1, 1)).toThrow(RangeError);
+  });
+
+  it('attainableEdgeThrustAt, given cos and sin of the yaw, gives the bits of attainableEdgeThrust', () => {
+    // The form a point's strips share (cos and sin taken once per point): exact equality, and the same checks.
+    for (const yaw of [0, 0.1, -0.35, 0.52]) {
+      for (const [z0, z1] of [
+        [-0.3, -0.25],
+        [-0.05, 0.02],
+        [0.2, 0.3],
+      ] as const) {
+        const got = attainableEdgeThrustAt(88, Math.cos(yaw), Math.sin(yaw), 0.0125, 0.3, z0, z1, 1.2);
+        const expected = attainableEdgeThrust(88, yaw, 0.0125, 0.3, z0, z1, 1.2);
+        expect(
+          Object.is(got, expected),
+          `yaw=${yaw} [${z0}, ${z1}] got=${got} expected=${expected} tol=0`,
+        ).toBe(true);
+      }
+    }
+    expect(() => attainableEdgeThrustAt(1, 1, 0, 0.01, 0.3, 0.2, 0.1, 1)).toThrow(RangeError);
   });
 });

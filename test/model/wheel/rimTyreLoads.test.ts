@@ -1,9 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { splitterPlateCylinderDrag } from '../../../src/model/sections';
+import { planeWakeDeficit, splitterPlateCylinderDrag } from '../../../src/model/sections';
 import { DEFAULT_MODEL_OPTIONS, DEMO_WHEEL, wheelRadii } from '../../../src/model/wheel';
-import { emptyLoads } from '../../../src/model/wheel/componentLoads';
+import { addForceAt, emptyLoads } from '../../../src/model/wheel/componentLoads';
 import { rimTyreLoads, rimTyreSection } from '../../../src/model/wheel/rimTyreLoads';
-import type { WheelGeometry } from '../../../src/model/wheel/types';
+import type { FlowConditions, WheelGeometry } from '../../../src/model/wheel/types';
 
 const RHO = 1.2;
 const MU = 1.8e-5;
@@ -58,5 +58,63 @@ describe('rimTyreLoads', () => {
     const at0 = axialAt(wheel, 0);
     const at10 = axialAt(wheel, (10 * Math.PI) / 180);
     expect(at10, `0 deg ${at0} N, 10 deg ${at10} N`).toBeGreaterThan(at0);
+  });
+
+  it('gives the bits of the loop that computes every wake at every point, in any order of points', () => {
+    // The loop as first written: each rear-arc element's wake deficit evaluated at each point (no
+    // shielding kept per ring and yaw), forces added with addForceAt; exact equality over interleaved
+    // rings, yaw angles (a reversed in-plane flow too) and airspeeds.
+    const loop = (wheel: WheelGeometry, p: FlowConditions) => {
+      const out = emptyLoads();
+      const section = rimTyreSection(wheel, wheelRadii(wheel));
+      const t = section.thicknessM;
+      const vInPlane = p.airspeedMps * Math.cos(p.yawRad);
+      const cdSection =
+        splitterPlateCylinderDrag(section.plateLengthM / t) * DEFAULT_MODEL_OPTIONS.profileDragFactor;
+      const drift = Math.abs(Math.tan(p.yawRad));
+      const dragLength = cdSection * t;
+      const rMid = section.forceRadiusM;
+      const arc = (rMid * 2 * Math.PI) / 72;
+      for (let k = 0; k < 72; k++) {
+        const theta = ((k + 0.5) * 2 * Math.PI) / 72;
+        const c = Math.cos(theta);
+        const sn = Math.sin(theta);
+        const ur = -vInPlane * c;
+        let cd = cdSection;
+        if (c * Math.sign(vInPlane) < 0) {
+          const distance = 2 * rMid * Math.abs(c);
+          const deficit = planeWakeDeficit(distance, distance * drift, dragLength);
+          cd *= (1 - deficit) * (1 - deficit);
+        }
+        const f = 0.5 * p.rhoKgPerM3 * cd * t * Math.abs(ur) * ur * arc;
+        addForceAt(out, f * c, 0, f * sn, rMid * c, 0, rMid * sn);
+      }
+      return out;
+    };
+    const wheels = [
+      { ...DEMO_WHEEL },
+      { ...DEMO_WHEEL, rimDepthM: 0.08 },
+      { ...DEMO_WHEEL, coverFraction: 0.5 },
+    ];
+    for (let i = 0; i < 40; i++) {
+      const wheel = wheels[(i * 5) % 3]!;
+      const yawDeg = [0, 2.5, 10, 20, 170][i % 5]!;
+      const p = {
+        airspeedMps: [6, 13.41, 9][i % 3]!,
+        yawRad: (yawDeg * Math.PI) / 180,
+        groundSpeedMps: 9,
+        rhoKgPerM3: RHO,
+        muPaS: MU,
+      };
+      const got = emptyLoads();
+      rimTyreLoads(wheel, wheelRadii(wheel), p, DEFAULT_MODEL_OPTIONS, got);
+      const expected = loop(wheel, p);
+      for (const key of Object.keys(expected) as (keyof typeof expected)[]) {
+        expect(
+          Object.is(got[key], expected[key]),
+          `ring ${(i * 5) % 3} yaw=${yawDeg} V=${p.airspeedMps} ${key} got=${got[key]} expected=${expected[key]} tol=0`,
+        ).toBe(true);
+      }
+    }
   });
 });

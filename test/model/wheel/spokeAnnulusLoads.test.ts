@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { spokeRowDrag } from '../../../src/model/sections';
 import { DEMO_WHEEL } from '../../../src/model/wheel';
 import {
   SPOKE_ANGLE_STEPS,
@@ -65,5 +66,75 @@ describe('spokeAnnulusLoads and spokeAnnulusLoadsFrozen', () => {
     spokeAnnulusLoadsFrozen(spokes, r, slower, coefficients, frozen);
     const rel = Math.abs(frozen[2]! / full[2]! - 1);
     expect(rel, `got=${frozen[2]} expected=${full[2]} tol(rel)=2e-3`).toBeLessThanOrEqual(2e-3);
+  });
+
+  it('give the bits of the plain loop over spokeRowDrag at every revolution position', () => {
+    // The loop as first written (spokeRowDrag checked and evaluated at each of the positions, no
+    // position's answer reused): the same sums and coefficients, exact equality; round and bladed, at
+    // yaw, without yaw (no through-flow) and with a reversed in-plane flow.
+    const plain = (
+      row: typeof spokes,
+      radiusM: number,
+      spinMps: number,
+      sums: Float64Array,
+      co: Float64Array,
+    ) => {
+      const law = new Float64Array(3);
+      for (let k = 0; k < SPOKE_ANGLE_STEPS; k++) {
+        const theta = ((k + 0.5) * 2 * Math.PI) / SPOKE_ANGLE_STEPS;
+        const sinT = Math.sin(theta);
+        const cosT = Math.cos(theta);
+        const ut = row.vInPlaneMps * sinT + spinMps;
+        const speed = Math.sqrt(ut * ut + row.vNormalMps * row.vNormalMps);
+        co[k] = 0;
+        if (speed === 0) continue;
+        const s = row.spacingPerRadius * radiusM;
+        spokeRowDrag(row.round, row.thicknessRatio, row.refLengthM, s, ut, row.vNormalMps, row.nuM2PerS, law);
+        if (law[1]! > 0 && law[2]! < sums[3]!) sums[3] = law[2]!;
+        if (law[2]! > sums[4]!) sums[4] = law[2]!;
+        const perSpeed = 0.5 * row.rhoKgPerM3 * law[0]! * law[1]! * row.refLengthM * 0.7;
+        co[k] = perSpeed;
+        const ft = perSpeed * speed * ut;
+        sums[0] -= sinT * ft;
+        sums[1] += cosT * ft;
+        sums[2] += radiusM * ft;
+        const slope = perSpeed * (speed + (ut * ut) / speed);
+        sums[5] -= sinT * slope;
+        sums[6] += cosT * slope;
+        sums[7] += radiusM * slope;
+      }
+    };
+    for (const wheel of [DEMO_WHEEL, { ...DEMO_WHEEL, spokeSection: 'bladed' as const }]) {
+      for (const [yawRad, v] of [
+        [0, 12],
+        [0.2, 8],
+        [0.5, 13],
+        [3, 10],
+      ] as const) {
+        const row = spokeRowOf(wheel, { ...point, yawRad, airspeedMps: v });
+        for (const spinMps of [0.4 * v, spin, 2 * v]) {
+          const got = new Float64Array(8);
+          const expected = new Float64Array(8);
+          got[3] = expected[3] = Number.POSITIVE_INFINITY;
+          const gotCo = new Float64Array(SPOKE_ANGLE_STEPS);
+          const expectedCo = new Float64Array(SPOKE_ANGLE_STEPS);
+          spokeAnnulusLoads(row, r, spinMps, 0.7, got, gotCo);
+          plain(row, r, spinMps, expected, expectedCo);
+          const label = `${wheel.spokeSection} yaw=${yawRad} V=${v} spin=${spinMps}`;
+          for (let i = 0; i < 8; i++) {
+            expect(
+              Object.is(got[i], expected[i]),
+              `${label} [${i}] got=${got[i]} expected=${expected[i]} tol=0`,
+            ).toBe(true);
+          }
+          for (let k = 0; k < SPOKE_ANGLE_STEPS; k++) {
+            expect(
+              Object.is(gotCo[k], expectedCo[k]),
+              `${label} coefficient ${k} got=${gotCo[k]} expected=${expectedCo[k]}`,
+            ).toBe(true);
+          }
+        }
+      }
+    }
   });
 });

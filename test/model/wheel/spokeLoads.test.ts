@@ -3,7 +3,12 @@ import { MARTIN_WHEEL_ROTATION_AREA } from '../../../src/compute/validation/refe
 import { cylinderDrag, tandemDragRatio } from '../../../src/model/sections';
 import { DEFAULT_MODEL_OPTIONS, DEMO_WHEEL, wheelRadii } from '../../../src/model/wheel';
 import { emptyLoads } from '../../../src/model/wheel/componentLoads';
+import { SPOKE_ANGLE_STEPS } from '../../../src/model/wheel/spokeAnnulusLoads';
+import { spokeElementSwirl } from '../../../src/model/wheel/spokeElementSwirl';
+import { spokeElements } from '../../../src/model/wheel/spokeElements';
 import { spokeLoads } from '../../../src/model/wheel/spokeLoads';
+import { spokeRowOf } from '../../../src/model/wheel/spokeRowOf';
+import type { FlowConditions, WheelGeometry } from '../../../src/model/wheel/types';
 
 const rho = 1.225;
 const mu = 1.79e-5;
@@ -191,6 +196,56 @@ describe('spokeLoads', () => {
     for (const yaw of [10, 15, 20]) {
       const got = axial(yaw) / a0;
       expect(got, `yaw=${yaw} axial ratio got=${got} expected >= 0.95`).toBeGreaterThanOrEqual(0.95);
+    }
+  });
+
+  it('gives the bits of the per-point path whatever the order of designs and points', () => {
+    // The path before the per-design table and the filled-in spoke row: spokeElements and spokeRowOf
+    // made afresh at each point, the same element sums; exact equality, with the designs and points
+    // interleaved as a page or a data comparison may ask for them.
+    const perPoint = (w: WheelGeometry, p: FlowConditions) => {
+      const r = wheelRadii(w);
+      const elements = spokeElements(w, r, DEFAULT_MODEL_OPTIONS);
+      const row = spokeRowOf(w, p);
+      const perSpoke = (w.spokeCount / SPOKE_ANGLE_STEPS) * DEFAULT_MODEL_OPTIONS.profileDragFactor;
+      const el = new Float64Array(8);
+      let fx = 0;
+      let fz = 0;
+      let torque = 0;
+      for (let e = 0; e < elements.radiusM.length; e++) {
+        const omega = p.groundSpeedMps / r.outerRadiusM;
+        spokeElementSwirl(row, elements.radiusM[e]!, omega, p.airspeedMps, perSpoke * elements.share[e]!, el);
+        fx += el[3]! * elements.weightM[e]!;
+        fz += el[4]! * elements.weightM[e]!;
+        torque += el[5]! * elements.weightM[e]!;
+      }
+      return [fx * perSpoke, fz * perSpoke, torque * perSpoke];
+    };
+    const designs = [
+      { ...wheel, coverFraction: 0.3 },
+      { ...wheel, coverFraction: 0.3, coverSides: 1 as const, spokeSection: 'bladed' as const },
+      { ...wheel, rimDepthM: 0.08, spokeCount: 28 },
+    ];
+    for (let i = 0; i < 12; i++) {
+      const w = designs[(i * 7) % designs.length]!;
+      const p = {
+        airspeedMps: 6 + (i % 4) * 2.5,
+        yawRad: ((i % 5) * 4 * Math.PI) / 180,
+        groundSpeedMps: (6 + (i % 4) * 2.5) * (i % 3 === 2 ? 0.8 : 1),
+        rhoKgPerM3: rho,
+        muPaS: mu,
+      };
+      const got = emptyLoads();
+      spokeLoads(w, wheelRadii(w), p, DEFAULT_MODEL_OPTIONS, got);
+      const expected = perPoint(w, p);
+      const label = `design ${(i * 7) % designs.length} V=${p.airspeedMps} yaw=${p.yawRad}`;
+      for (const [name, g, x] of [
+        ['fx', got.fxN, expected[0]],
+        ['fz', got.fzN, expected[1]],
+        ['torque', got.axleTorqueNm, expected[2]],
+      ] as const) {
+        expect(Object.is(g, x), `${label}: ${name} got=${g} expected=${x} tol=0`).toBe(true);
+      }
     }
   });
 });
