@@ -37,6 +37,22 @@ function referenceEntry(l: RingLattice, i: number, j: number): number {
   return v;
 }
 
+/** The lattice's influence matrix computed afresh by ringInfluenceMatrix on `path`. */
+function influenceOf(l: RingLattice, path: 'auto' | 'typescript' | 'wasm'): Float64Array {
+  const n = l.panelCount;
+  return ringInfluenceMatrix(
+    l.edgeZ,
+    l.nodeLowerX,
+    l.nodeUpperX,
+    l.chordCount,
+    l.controlX,
+    l.controlZ,
+    l.groundZM,
+    new Float64Array(n * n),
+    path,
+  );
+}
+
 describe('ringInfluenceMatrix', () => {
   // A covered wheel's lattice: strips follow the open annulus' circles, so some edge lines carry the same
   // corners on both sides and some do not (both paths of the kernel); and the plain disc (all shared).
@@ -48,17 +64,7 @@ describe('ringInfluenceMatrix', () => {
     it(`equals the ring-by-ring Biot-Savart sum, ground image included (open annuli ${JSON.stringify(openAnnuliM)}, path ${path}; tolerance 1e-13 max|A|)`, () => {
       const l = buildWheelLattice({ radiusM: 0.35, spanCount: 12, chordCount: 5, ground: true, openAnnuliM });
       const n = l.panelCount;
-      const got = ringInfluenceMatrix(
-        l.edgeZ,
-        l.nodeLowerX,
-        l.nodeUpperX,
-        l.chordCount,
-        l.controlX,
-        l.controlZ,
-        l.groundZM,
-        new Float64Array(n * n),
-        path,
-      );
+      const got = influenceOf(l, path);
       let scale = 0;
       for (let k = 0; k < n * n; k++) scale = Math.max(scale, Math.abs(got[k]!));
       // Rounding level: the kernel's closed forms and the reference's general segment law round differently.
@@ -91,20 +97,8 @@ describe('ringInfluenceMatrix', () => {
     for (const c of cases) {
       const l = buildWheelLattice({ radiusM: 0.311, ...c });
       const n = l.panelCount;
-      const run = (path: 'typescript' | 'wasm') =>
-        ringInfluenceMatrix(
-          l.edgeZ,
-          l.nodeLowerX,
-          l.nodeUpperX,
-          l.chordCount,
-          l.controlX,
-          l.controlZ,
-          l.groundZM,
-          new Float64Array(n * n),
-          path,
-        );
-      const viaTs = run('typescript');
-      const viaWasm = run('wasm');
+      const viaTs = influenceOf(l, 'typescript');
+      const viaWasm = influenceOf(l, 'wasm');
       let differing = -1;
       for (let k = 0; k < n * n && differing < 0; k++) if (!Object.is(viaTs[k], viaWasm[k])) differing = k;
       const at = Math.max(differing, 0);
@@ -123,18 +117,7 @@ describe('ringInfluenceMatrix', () => {
       ground: false,
       openAnnuliM: [],
     });
-    const call = () =>
-      ringInfluenceMatrix(
-        l.edgeZ,
-        l.nodeLowerX,
-        l.nodeUpperX,
-        l.chordCount,
-        l.controlX,
-        l.controlZ,
-        l.groundZM,
-        new Float64Array(36),
-        'gpu' as never,
-      );
+    const call = () => influenceOf(l, 'gpu' as never);
     expect(call).toThrow(/path=gpu must be/);
   });
 });
