@@ -142,7 +142,8 @@ export function rimTyreLoads(
   const rMid = section.forceRadiusM;
   const arc = (rMid * 2 * Math.PI) / ANGLE_STEPS;
   const shielding = rearArcShielding(dragLength, rMid, point.yawRad, Math.sign(vInPlane));
-  // The sums of addForceAt (force at (rMid cos, 0, rMid sin)), in the same order, kept in locals.
+  // The sums of addForceAt (force at (rMid cos, 0, rMid sin)), in the same order, kept in locals. The
+  // zero terms stay: they keep addForceAt's signed zeros and NaN propagation, so the bits are the same.
   let fx = 0;
   let fy = 0;
   let fz = 0;
