@@ -12,18 +12,20 @@ for (let k = 0; k < SPOKE_ANGLE_STEPS; k++) {
   sinTheta[k] = Math.sin(theta);
   cosTheta[k] = Math.cos(theta);
 }
-/** For each position, an earlier one with the very same sin(theta) (so the same crossflow and section
- * law to the bit: mirror positions about the vertical where the sines round alike), or -1. */
-const sameSineAs = new Int8Array(SPOKE_ANGLE_STEPS).fill(-1);
+/** For each position, its mirror image about the vertical (theta -> pi - theta) when that one comes
+ * earlier in the loop, else -1. Mirror positions have equal sines in exact arithmetic; where the
+ * crossflow u_t = V cos(beta) sin(theta) + spin computed at both comes out the very same number (the
+ * sines equal, or their last-bit difference lost in the sum), so does everything the section law takes
+ * (u_t, u_n, |u|): the earlier position's answer serves, to the bit. */
+const mirrorOf = new Int8Array(SPOKE_ANGLE_STEPS).fill(-1);
 for (let k = 0; k < SPOKE_ANGLE_STEPS; k++) {
-  for (let j = 0; j < k; j++) {
-    if (sinTheta[j] === sinTheta[k]) {
-      sameSineAs[k] = j;
-      break;
-    }
-  }
+  // theta_k = (k + 1/2) 2 pi / STEPS; pi - theta_k is theta_(STEPS/2 - 1 - k), taken modulo 2 pi.
+  const m = (((SPOKE_ANGLE_STEPS / 2 - 1 - k) % SPOKE_ANGLE_STEPS) + SPOKE_ANGLE_STEPS) % SPOKE_ANGLE_STEPS;
+  if (m < k) mirrorOf[k] = m;
 }
-/** Each position's 0.5 rho Cd L x shielding x weight in the current call (for sameSineAs). */
+/** Each position's crossflow u_t and 0.5 rho Cd L x shielding x weight in the current call (for
+ * mirrorOf). */
+const utAt = new Float64Array(SPOKE_ANGLE_STEPS);
 const perSpeedAt = new Float64Array(SPOKE_ANGLE_STEPS);
 
 /** A wheel's spoke section and the air, fixed for one flow point. */
@@ -87,12 +89,16 @@ export function spokeAnnulusLoads(
     const ut = vInPlaneMps * sinTheta[k]! + spinMps;
     const speed = Math.sqrt(ut * ut + vNormalMps * vNormalMps);
     if (coefficients) coefficients[k] = 0;
-    if (speed === 0) continue;
-    const same = sameSineAs[k]!;
+    if (speed === 0) {
+      // No law evaluated here: a later mirror must not take an earlier call's answer.
+      utAt[k] = Number.NaN;
+      continue;
+    }
+    const mirror = mirrorOf[k]!;
     let perSpeed: number;
-    if (same >= 0) {
-      // The same crossflow as position `same`: the same law's answer (its Reynolds numbers already met).
-      perSpeed = perSpeedAt[same]!;
+    if (mirror >= 0 && utAt[mirror] === ut) {
+      // The same crossflow as the mirror position: the same law's answer (its Reynolds numbers already met).
+      perSpeed = perSpeedAt[mirror]!;
     } else {
       if (!(speed < Number.POSITIVE_INFINITY)) {
         spokeRowDrag(round, thicknessRatio, refLengthM, spacing, ut, vNormalMps, nuM2PerS, row);
@@ -103,6 +109,7 @@ export function spokeAnnulusLoads(
       if (re > out[4]!) out[4] = re;
       perSpeed = half * row[0]! * row[1]! * refLengthM * weightM;
       perSpeedAt[k] = perSpeed;
+      utAt[k] = ut;
     }
     if (coefficients) coefficients[k] = perSpeed;
     const ft = perSpeed * speed * ut;
