@@ -9,7 +9,7 @@ export {
 } from './plateReattachment';
 export { rowWakeTransportSpeed } from './rowWakeTransportSpeed';
 export { SPLITTER_PLATE_MAX_RATIO, splitterPlateCylinderDrag } from './splitterPlateCylinderDrag';
-export { spokeRowDrag, spokeRowDragAt } from './spokeRowDrag';
+export { spokeRowDrag, spokeRowDragAll, spokeRowDragAt } from './spokeRowDrag';
 export { spokeSectionDrag } from './spokeSectionDrag';
 export { streamlineSectionDrag } from './streamlineSectionDrag';
 export { tandemDragRatio } from './tandemDragRatio';

@@ -104,11 +104,15 @@ export function spokeRowDrag(
   );
 }
 
+/** spokeRowDragAt's single entry for spokeRowDragAll. */
+const oneUt = new Float64Array(1);
+const oneSpeed = new Float64Array(1);
+
 /**
  * spokeRowDrag's law for a caller that has checked the arguments and already holds the crossflow's
- * magnitudes (the spokes' loads, once per revolution position): u_t = |tangential|, u_n = |normal| and
- * speed = sqrt(u_t^2 + u_n^2), computed exactly so (the same operations, so the same bits as
- * spokeRowDrag). No checks: the arguments are spokeRowDrag's, already valid. Writes out as spokeRowDrag.
+ * magnitudes: u_t = |tangential|, u_n = |normal| and speed = sqrt(u_t^2 + u_n^2), computed exactly so
+ * (the same operations, so the same bits as spokeRowDrag). No checks: the arguments are spokeRowDrag's,
+ * already valid. Writes out as spokeRowDrag. One entry of spokeRowDragAll.
  */
 export function spokeRowDragAt(
   round: boolean,
@@ -121,41 +125,105 @@ export function spokeRowDragAt(
   kinematicViscosityM2PerS: number,
   out: Float64Array,
 ): void {
-  if (speed === 0) {
-    out[0] = Number.NaN;
-    out[1] = 1;
-    out[2] = 0;
-    return;
+  oneUt[0] = ut;
+  oneSpeed[0] = speed;
+  spokeRowDragAll(
+    round,
+    thicknessToWidth,
+    refLengthM,
+    spacingM,
+    oneUt,
+    un,
+    oneSpeed,
+    1,
+    kinematicViscosityM2PerS,
+    out,
+  );
+}
+
+/** spokeRowDragAll's scratch: each entry's distance behind and offset from the wake of the spoke
+ * ahead, its shielded speed between steps, and the entries still iterating (grown on demand). */
+let distanceAt = new Float64Array(64);
+let offsetAt = new Float64Array(64);
+let shieldedAt = new Float64Array(64);
+let pending = new Int32Array(64);
+
+/**
+ * The law of spokeRowDrag for `count` crossflows of one row at once, for a caller that has checked the
+ * arguments (the spokes' loads: the revolution positions of one radius): entry i has u_t = ut[i] (>= 0),
+ * u_n = un (>= 0, one through-flow for all) and speed[i] = sqrt(u_t^2 + u_n^2), and gets its drag
+ * coefficient, drag ratio and Reynolds number in out[3 i], out[3 i + 1], out[3 i + 2] (spokeRowDrag's
+ * out, entry after entry). Each entry's fixed point is the same operations on the same numbers as
+ * spokeRowDrag's (so the same bits); they run step by step over all entries, and within a step the
+ * section law over all entries before the wake law: the entries are independent, so the processor
+ * overlaps their long chains of dependent operations (a cube root, exponentials, square roots and
+ * divisions in turn) instead of waiting on each in turn. No checks.
+ */
+export function spokeRowDragAll(
+  round: boolean,
+  thicknessToWidth: number,
+  refLengthM: number,
+  spacingM: number,
+  ut: Float64Array,
+  un: number,
+  speed: Float64Array,
+  count: number,
+  kinematicViscosityM2PerS: number,
+  out: Float64Array,
+): void {
+  if (pending.length < count) {
+    distanceAt = new Float64Array(count);
+    offsetAt = new Float64Array(count);
+    shieldedAt = new Float64Array(count);
+    pending = new Int32Array(count);
   }
-  if (ut === 0) {
-    // Moving straight across the row: the wake of the spoke ahead never reaches the element.
-    const reFree = (speed * refLengthM) / kinematicViscosityM2PerS;
-    out[0] = spokeSectionDrag(round, reFree, thicknessToWidth);
-    out[1] = 1;
-    out[2] = reFree;
-    return;
-  }
-  const distance = (spacingM * ut) / speed;
-  const offset = (spacingM * un) / speed;
-  let shielded = speed;
-  let cd = 0;
-  let ratio = 1;
-  for (let step = 0; step < FIXED_POINT_STEPS; step++) {
-    const reShielded = (shielded * refLengthM) / kinematicViscosityM2PerS;
-    // A spoke fully stalled in the wake still has a tiny speed: keep Re > 0 for the section law.
-    cd = spokeSectionDrag(round, Math.max(reShielded, 1e-6), thicknessToWidth);
-    ratio = tandemDragRatio(distance, offset, cd * refLengthM, refLengthM);
-    // Off the wake the shielded speed is the free one to 1e-6: Cd would not move. The shielded speed
-    // is then the one just used, and so is its Reynolds number.
-    if (ratio >= 1 - 1e-6) {
-      out[0] = cd;
-      out[1] = ratio;
-      out[2] = reShielded;
-      return;
+  const nu = kinematicViscosityM2PerS;
+  let open = 0;
+  for (let i = 0; i < count; i++) {
+    const s = speed[i]!;
+    const t = ut[i]!;
+    if (s === 0) {
+      out[3 * i] = Number.NaN;
+      out[3 * i + 1] = 1;
+      out[3 * i + 2] = 0;
+    } else if (t === 0) {
+      // Moving straight across the row: the wake of the spoke ahead never reaches the element.
+      const reFree = (s * refLengthM) / nu;
+      out[3 * i] = spokeSectionDrag(round, reFree, thicknessToWidth);
+      out[3 * i + 1] = 1;
+      out[3 * i + 2] = reFree;
+    } else {
+      distanceAt[i] = (spacingM * t) / s;
+      offsetAt[i] = (spacingM * un) / s;
+      shieldedAt[i] = s;
+      pending[open++] = i;
     }
-    shielded = speed * Math.sqrt(ratio);
   }
-  out[0] = cd;
-  out[1] = ratio;
-  out[2] = (shielded * refLengthM) / kinematicViscosityM2PerS;
+  for (let step = 0; step < FIXED_POINT_STEPS && open > 0; step++) {
+    for (let p = 0; p < open; p++) {
+      const i = pending[p]!;
+      const reShielded = (shieldedAt[i]! * refLengthM) / nu;
+      out[3 * i + 2] = reShielded;
+      // A spoke fully stalled in the wake still has a tiny speed: keep Re > 0 for the section law.
+      out[3 * i] = spokeSectionDrag(round, Math.max(reShielded, 1e-6), thicknessToWidth);
+    }
+    let still = 0;
+    for (let p = 0; p < open; p++) {
+      const i = pending[p]!;
+      const ratio = tandemDragRatio(distanceAt[i]!, offsetAt[i]!, out[3 * i]! * refLengthM, refLengthM);
+      out[3 * i + 1] = ratio;
+      // Off the wake the shielded speed is the free one to 1e-6: Cd would not move. The shielded speed
+      // is then the one just used, and so is its Reynolds number (out[3 i + 2] already).
+      if (!(ratio >= 1 - 1e-6)) {
+        shieldedAt[i] = speed[i]! * Math.sqrt(ratio);
+        pending[still++] = i;
+      }
+    }
+    open = still;
+  }
+  // Entries still in the wake after the last step: the Reynolds number of their last shielded speed.
+  for (let p = 0; p < open; p++) {
+    const i = pending[p]!;
+    out[3 * i + 2] = (shieldedAt[i]! * refLengthM) / nu;
+  }
 }

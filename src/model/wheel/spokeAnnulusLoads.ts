@@ -1,4 +1,4 @@
-import { spokeRowDrag, spokeRowDragAt } from '../sections';
+import { spokeRowDrag, spokeRowDragAll } from '../sections';
 
 /** Revolution positions averaged (midpoint rule, spectrally accurate for a periodic integrand). */
 export const SPOKE_ANGLE_STEPS = 36;
@@ -23,10 +23,17 @@ for (let k = 0; k < SPOKE_ANGLE_STEPS; k++) {
   const m = (((SPOKE_ANGLE_STEPS / 2 - 1 - k) % SPOKE_ANGLE_STEPS) + SPOKE_ANGLE_STEPS) % SPOKE_ANGLE_STEPS;
   if (m < k) mirrorOf[k] = m;
 }
-/** Each position's crossflow u_t and 0.5 rho Cd L x shielding x weight in the current call (for
- * mirrorOf). */
+/** The current call's positions: crossflow u_t and |u|, and the law entry whose answer each takes (-1:
+ * none, no crossflow). */
 const utAt = new Float64Array(SPOKE_ANGLE_STEPS);
-const perSpeedAt = new Float64Array(SPOKE_ANGLE_STEPS);
+const speedAt = new Float64Array(SPOKE_ANGLE_STEPS);
+const entryOf = new Int8Array(SPOKE_ANGLE_STEPS);
+/** The law's entries (spokeRowDragAll): u_t >= 0 and |u| in, Cd, shielding and Reynolds number out,
+ * then 0.5 rho Cd L x shielding x weight. */
+const lawUt = new Float64Array(SPOKE_ANGLE_STEPS);
+const lawSpeed = new Float64Array(SPOKE_ANGLE_STEPS);
+const lawOut = new Float64Array(3 * SPOKE_ANGLE_STEPS);
+const perSpeedOf = new Float64Array(SPOKE_ANGLE_STEPS);
 
 /** A wheel's spoke section and the air, fixed for one flow point. */
 export interface SpokeRow {
@@ -85,32 +92,48 @@ export function spokeAnnulusLoads(
   ) {
     spokeRowDrag(round, thicknessRatio, refLengthM, spacing, spinMps, vNormalMps, nuM2PerS, row);
   }
+  // The crossflow at each position; the law's entries are the positions whose crossflow is new.
+  let entries = 0;
   for (let k = 0; k < SPOKE_ANGLE_STEPS; k++) {
     const ut = vInPlaneMps * sinTheta[k]! + spinMps;
     const speed = Math.sqrt(ut * ut + vNormalMps * vNormalMps);
-    if (coefficients) coefficients[k] = 0;
+    utAt[k] = ut;
+    speedAt[k] = speed;
     if (speed === 0) {
-      // No law evaluated here: a later mirror must not take an earlier call's answer.
-      utAt[k] = Number.NaN;
+      entryOf[k] = -1;
       continue;
     }
     const mirror = mirrorOf[k]!;
-    let perSpeed: number;
-    if (mirror >= 0 && utAt[mirror] === ut) {
-      // The same crossflow as the mirror position: the same law's answer (its Reynolds numbers already met).
-      perSpeed = perSpeedAt[mirror]!;
-    } else {
-      if (!(speed < Number.POSITIVE_INFINITY)) {
-        spokeRowDrag(round, thicknessRatio, refLengthM, spacing, ut, vNormalMps, nuM2PerS, row);
-      }
-      spokeRowDragAt(round, thicknessRatio, refLengthM, spacing, Math.abs(ut), un, speed, nuM2PerS, row);
-      const re = row[2]!;
-      if (row[1]! > 0 && re < out[3]!) out[3] = re;
-      if (re > out[4]!) out[4] = re;
-      perSpeed = half * row[0]! * row[1]! * refLengthM * weightM;
-      perSpeedAt[k] = perSpeed;
-      utAt[k] = ut;
+    if (mirror >= 0 && entryOf[mirror]! >= 0 && utAt[mirror] === ut) {
+      // The same crossflow as the mirror position: the same law's answer (its Reynolds numbers met there).
+      entryOf[k] = entryOf[mirror]!;
+      continue;
     }
+    if (!(speed < Number.POSITIVE_INFINITY)) {
+      spokeRowDrag(round, thicknessRatio, refLengthM, spacing, ut, vNormalMps, nuM2PerS, row);
+    }
+    lawUt[entries] = Math.abs(ut);
+    lawSpeed[entries] = speed;
+    entryOf[k] = entries++;
+  }
+  // The law at every entry at once (spokeRowDragAll: the same bits as one position at a time).
+  spokeRowDragAll(round, thicknessRatio, refLengthM, spacing, lawUt, un, lawSpeed, entries, nuM2PerS, lawOut);
+  for (let j = 0; j < entries; j++) {
+    const re = lawOut[3 * j + 2]!;
+    if (lawOut[3 * j + 1]! > 0 && re < out[3]!) out[3] = re;
+    if (re > out[4]!) out[4] = re;
+    perSpeedOf[j] = half * lawOut[3 * j]! * lawOut[3 * j + 1]! * refLengthM * weightM;
+  }
+  // The sums in position order.
+  for (let k = 0; k < SPOKE_ANGLE_STEPS; k++) {
+    const entry = entryOf[k]!;
+    if (entry < 0) {
+      if (coefficients) coefficients[k] = 0;
+      continue;
+    }
+    const ut = utAt[k]!;
+    const speed = speedAt[k]!;
+    const perSpeed = perSpeedOf[entry]!;
     if (coefficients) coefficients[k] = perSpeed;
     const ft = perSpeed * speed * ut;
     out[0] -= sinTheta[k]! * ft;
