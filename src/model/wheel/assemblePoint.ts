@@ -141,7 +141,8 @@ export function assemblePoint(
   hubLoads(wheel, radii, point, options, components.hub);
 
   // Summed in COMPONENT_NAMES' order.
-  totals.fill(0);
+  // Zeroed entry by entry, not by fill() (a builtin call per point).
+  for (let i = 0; i < 6; i++) totals[i] = 0;
   addTotals(components.surface);
   addTotals(components.vortex);
   addTotals(components.spokes);

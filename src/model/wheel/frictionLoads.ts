@@ -24,7 +24,10 @@ export function frictionLoads(
   const vInPlane = point.airspeedMps * Math.cos(point.yawRad);
   const q = 0.5 * rho * vInPlane * vInPlane;
   const omega = point.groundSpeedMps / radii.outerRadiusM;
-  sums.fill(0);
+  // Zeroed entry by entry, not by fill() (a builtin call per point).
+  sums[0] = 0;
+  sums[1] = 0;
+  sums[2] = 0;
   addFace(0, radii.rimInnerRadiusM, radii.outerRadiusM, 2, rho, mu, vInPlane, q, omega);
   if (radii.coverOuterRadiusM > radii.coverInnerRadiusM) {
     addFace(

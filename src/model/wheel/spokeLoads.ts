@@ -62,7 +62,8 @@ export function spokeLoads(
   const omega = point.groundSpeedMps / radii.outerRadiusM;
   const elements = spokeElementTable(wheel, radii, options);
   const perSpoke = (wheel.spokeCount / SPOKE_ANGLE_STEPS) * options.profileDragFactor;
-  sums.fill(0);
+  // Zeroed entry by entry, not by fill() (a builtin call per point).
+  for (let i = 0; i < 5; i++) sums[i] = 0;
   sums[3] = Number.POSITIVE_INFINITY;
   for (let e = 0; e < elements.count; e++) {
     const weight = elements.weightM[e]!;
