@@ -1,12 +1,43 @@
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { spokeRowDrag } from '../../../src/model/sections';
 import { DEMO_WHEEL } from '../../../src/model/wheel';
 import {
   SPOKE_ANGLE_STEPS,
+  type SpokeRow,
   spokeAnnulusLoads,
   spokeAnnulusLoadsFrozen,
 } from '../../../src/model/wheel/spokeAnnulusLoads';
 import { spokeRowOf } from '../../../src/model/wheel/spokeRowOf';
+
+/** The loop as first written (spokeRowDrag checked and evaluated at each of the positions, no
+ * position's answer reused), for an element of 0.7 m. */
+function plain(row: SpokeRow, radiusM: number, spinMps: number, sums: Float64Array, co: Float64Array): void {
+  const law = new Float64Array(3);
+  for (let k = 0; k < SPOKE_ANGLE_STEPS; k++) {
+    const theta = ((k + 0.5) * 2 * Math.PI) / SPOKE_ANGLE_STEPS;
+    const sinT = Math.sin(theta);
+    const cosT = Math.cos(theta);
+    const ut = row.vInPlaneMps * sinT + spinMps;
+    const speed = Math.sqrt(ut * ut + row.vNormalMps * row.vNormalMps);
+    co[k] = 0;
+    if (speed === 0) continue;
+    const s = row.spacingPerRadius * radiusM;
+    spokeRowDrag(row.round, row.thicknessRatio, row.refLengthM, s, ut, row.vNormalMps, row.nuM2PerS, law);
+    if (law[1]! > 0 && law[2]! < sums[3]!) sums[3] = law[2]!;
+    if (law[2]! > sums[4]!) sums[4] = law[2]!;
+    const perSpeed = 0.5 * row.rhoKgPerM3 * law[0]! * law[1]! * row.refLengthM * 0.7;
+    co[k] = perSpeed;
+    const ft = perSpeed * speed * ut;
+    sums[0] -= sinT * ft;
+    sums[1] += cosT * ft;
+    sums[2] += radiusM * ft;
+    const slope = perSpeed * (speed + (ut * ut) / speed);
+    sums[5] -= sinT * slope;
+    sums[6] += cosT * slope;
+    sums[7] += radiusM * slope;
+  }
+}
 
 const point = { airspeedMps: 12, yawRad: 0.2, groundSpeedMps: 12, rhoKgPerM3: 1.225, muPaS: 1.7894e-5 };
 const spokes = spokeRowOf(DEMO_WHEEL, point);
@@ -72,38 +103,6 @@ describe('spokeAnnulusLoads and spokeAnnulusLoadsFrozen', () => {
     // The loop as first written (spokeRowDrag checked and evaluated at each of the positions, no
     // position's answer reused): the same sums and coefficients, exact equality; round and bladed, at
     // yaw, without yaw (no through-flow) and with a reversed in-plane flow.
-    const plain = (
-      row: typeof spokes,
-      radiusM: number,
-      spinMps: number,
-      sums: Float64Array,
-      co: Float64Array,
-    ) => {
-      const law = new Float64Array(3);
-      for (let k = 0; k < SPOKE_ANGLE_STEPS; k++) {
-        const theta = ((k + 0.5) * 2 * Math.PI) / SPOKE_ANGLE_STEPS;
-        const sinT = Math.sin(theta);
-        const cosT = Math.cos(theta);
-        const ut = row.vInPlaneMps * sinT + spinMps;
-        const speed = Math.sqrt(ut * ut + row.vNormalMps * row.vNormalMps);
-        co[k] = 0;
-        if (speed === 0) continue;
-        const s = row.spacingPerRadius * radiusM;
-        spokeRowDrag(row.round, row.thicknessRatio, row.refLengthM, s, ut, row.vNormalMps, row.nuM2PerS, law);
-        if (law[1]! > 0 && law[2]! < sums[3]!) sums[3] = law[2]!;
-        if (law[2]! > sums[4]!) sums[4] = law[2]!;
-        const perSpeed = 0.5 * row.rhoKgPerM3 * law[0]! * law[1]! * row.refLengthM * 0.7;
-        co[k] = perSpeed;
-        const ft = perSpeed * speed * ut;
-        sums[0] -= sinT * ft;
-        sums[1] += cosT * ft;
-        sums[2] += radiusM * ft;
-        const slope = perSpeed * (speed + (ut * ut) / speed);
-        sums[5] -= sinT * slope;
-        sums[6] += cosT * slope;
-        sums[7] += radiusM * slope;
-      }
-    };
     for (const wheel of [DEMO_WHEEL, { ...DEMO_WHEEL, spokeSection: 'bladed' as const }]) {
       for (const [yawRad, v] of [
         [0, 12],
@@ -136,5 +135,56 @@ describe('spokeAnnulusLoads and spokeAnnulusLoadsFrozen', () => {
         }
       }
     }
+  });
+
+  it('give the bits of the plain loop on varied rows, radii, spins and yaws (mirror positions, no crossflow)', () => {
+    // The positions share law evaluations (mirror positions whose crossflow comes out the same number)
+    // and evaluate the law at all positions at once: exact equality with the plain loop, over round and
+    // bladed rows, any yaw (reversed in-plane flow included), spins from a standstill up, and calls
+    // where one position meets no crossflow at all (no yaw, the spin cancelling the freestream's
+    // crossflow there). Calls follow one another: nothing a call leaves behind may change the next.
+    fc.assert(
+      fc.property(
+        fc.boolean(),
+        fc.double({ min: 0.3, max: 1, noNaN: true }),
+        fc.double({ min: 0.5, max: 30, noNaN: true }),
+        fc.oneof(fc.constant(0), fc.double({ min: -Math.PI, max: Math.PI, noNaN: true })),
+        fc.double({ min: 0.02, max: 0.32, noNaN: true }),
+        fc.double({ min: -3, max: 3, noNaN: true }),
+        fc.option(fc.integer({ min: 0, max: SPOKE_ANGLE_STEPS - 1 })),
+        (round, thickness, v, yawRad, radiusM, spinRatio, stalledAt) => {
+          const wheel = round
+            ? DEMO_WHEEL
+            : { ...DEMO_WHEEL, spokeSection: 'bladed' as const, spokeThicknessM: thickness * 0.0022 };
+          const yaw = stalledAt === null ? yawRad : 0;
+          const row = spokeRowOf(wheel, { ...point, yawRad: yaw, airspeedMps: v });
+          const spinMps =
+            stalledAt === null
+              ? spinRatio * v
+              : -(row.vInPlaneMps * Math.sin(((stalledAt + 0.5) * 2 * Math.PI) / SPOKE_ANGLE_STEPS));
+          const got = new Float64Array(8);
+          const expected = new Float64Array(8);
+          got[3] = expected[3] = Number.POSITIVE_INFINITY;
+          const gotCo = new Float64Array(SPOKE_ANGLE_STEPS);
+          const expectedCo = new Float64Array(SPOKE_ANGLE_STEPS);
+          spokeAnnulusLoads(row, radiusM, spinMps, 0.7, got, gotCo);
+          plain(row, radiusM, spinMps, expected, expectedCo);
+          const label = `round=${round} V=${v} yaw=${yaw} r=${radiusM} spin=${spinMps}`;
+          for (let i = 0; i < 8; i++) {
+            expect(
+              Object.is(got[i], expected[i]),
+              `${label} [${i}] got=${got[i]} expected=${expected[i]}`,
+            ).toBe(true);
+          }
+          for (let k = 0; k < SPOKE_ANGLE_STEPS; k++) {
+            expect(
+              Object.is(gotCo[k], expectedCo[k]),
+              `${label} coefficient ${k} got=${gotCo[k]} expected=${expectedCo[k]}`,
+            ).toBe(true);
+          }
+        },
+      ),
+      { numRuns: 400 },
+    );
   });
 });
