@@ -146,6 +146,31 @@ export function packedCsvLines(
   variedKeys: readonly string[],
   varied: Readonly<Record<string, PlanValue>>,
 ): string {
+  // The length first: writeRows may put a larger buffer in `bytes`.
+  const length = writeRows(packed, pointCount, caseFile, variedKeys, varied);
+  return decoder.decode(bytes.subarray(0, length));
+}
+
+/** packedCsvLines's text as UTF-8 bytes (a copy of its own): for a file, with no string in between. */
+export function packedCsvBytes(
+  packed: Float64Array,
+  pointCount: number,
+  caseFile: CaseFile,
+  variedKeys: readonly string[],
+  varied: Readonly<Record<string, PlanValue>>,
+): Uint8Array {
+  const length = writeRows(packed, pointCount, caseFile, variedKeys, varied);
+  return bytes.slice(0, length);
+}
+
+/** Write packedCsvLines's text at the start of `bytes`; returns its length in bytes. */
+function writeRows(
+  packed: Float64Array,
+  pointCount: number,
+  caseFile: CaseFile,
+  variedKeys: readonly string[],
+  varied: Readonly<Record<string, PlanValue>>,
+): number {
   if (packed.length !== pointCount * COLUMN_COUNT) {
     throw new RangeError(`packedCsvLines: ${packed.length} values are not ${pointCount} packed rows`);
   }
@@ -204,5 +229,5 @@ export function packedCsvLines(
     bytes[at++] = COMMA;
     bytes[at++] = NEWLINE;
   }
-  return decoder.decode(bytes.subarray(0, at));
+  return at;
 }
