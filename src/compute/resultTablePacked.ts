@@ -139,16 +139,8 @@ function flagCell(bits: number): string {
  * The CSV lines (no header) of a solved case of `caseFile` whose `pointCount` points are packed row by
  * row in `packed`: one per point, its varied parameters first, then the result columns (resultTable.ts).
  */
-export function packedCsvLines(
-  packed: Float64Array,
-  pointCount: number,
-  caseFile: CaseFile,
-  variedKeys: readonly string[],
-  varied: Readonly<Record<string, PlanValue>>,
-): string {
-  // The length first: writeRows may put a larger buffer in `bytes`.
-  const length = writeRows(packed, pointCount, caseFile, variedKeys, varied);
-  return decoder.decode(bytes.subarray(0, length));
+export function packedCsvLines(...args: Parameters<typeof packedCsvBytes>): string {
+  return decoder.decode(packedCsvBytes(...args));
 }
 
 /** packedCsvLines's text as UTF-8 bytes (a copy of its own): for a file, with no string in between. */
@@ -159,18 +151,6 @@ export function packedCsvBytes(
   variedKeys: readonly string[],
   varied: Readonly<Record<string, PlanValue>>,
 ): Uint8Array {
-  const length = writeRows(packed, pointCount, caseFile, variedKeys, varied);
-  return bytes.slice(0, length);
-}
-
-/** Write packedCsvLines's text at the start of `bytes`; returns its length in bytes. */
-function writeRows(
-  packed: Float64Array,
-  pointCount: number,
-  caseFile: CaseFile,
-  variedKeys: readonly string[],
-  varied: Readonly<Record<string, PlanValue>>,
-): number {
   if (packed.length !== pointCount * COLUMN_COUNT) {
     throw new RangeError(`packedCsvLines: ${packed.length} values are not ${pointCount} packed rows`);
   }
@@ -229,5 +209,5 @@ function writeRows(
     bytes[at++] = COMMA;
     bytes[at++] = NEWLINE;
   }
-  return at;
+  return bytes.slice(0, at);
 }
