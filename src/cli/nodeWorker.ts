@@ -35,8 +35,8 @@ let compileOnOwnThread = false;
  * array helpers inlined, escape analysis on the whole graph) took 0.3-0.6 s of each solver thread's
  * CPU, and again after each deoptimisation: a cold thread's largest start-up cost. Measured with perf
  * on 2-worker sweeps of the standard plan (2026-12-02, load 5-10, 4 alternating runs each): compile
- * time of the whole process 1.5-1.9 s without the filter, 0.8-1.0 s with it; CPU time of the process
- * (under perf) 5.9-7.0 s against 5.1-6.4 s. Code runs the same
+ * time of the whole process 1.5-1.9 s without the filter, 0.8-1.05 s with it; CPU time of the process
+ * (under perf) 5.9-7.0 s against 5.1-6.8 s. Code runs the same
  * operations in every tier (no fused multiply-add in V8), so the numbers keep their bits.
  * test/cli/nodeWorker.test.ts checks that the model still has a function by this name.
  */
