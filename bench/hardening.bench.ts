@@ -57,8 +57,9 @@ async function streamedSweep(cases: number, pointsPerCase: number): Promise<void
   const failed = await writeSweep(
     parsed.value,
     'csv',
-    (text) => {
-      writeSync(fd, text);
+    (chunk) => {
+      if (typeof chunk === 'string') writeSync(fd, chunk);
+      else writeSync(fd, chunk);
     },
     () => {
       peak = Math.max(peak, rss());

@@ -45,8 +45,9 @@ const t0 = performance.now();
 const failed = await writeSweep(
   parsed.value,
   'csv',
-  (text) => {
-    writeSync(fd, text);
+  (chunk) => {
+    if (typeof chunk === 'string') writeSync(fd, chunk);
+    else writeSync(fd, chunk);
   },
   undefined,
   pool,

@@ -4,4 +4,4 @@
  */
 export { HELP } from './commandHelp';
 export { main } from './commandLine';
-export { writeSweep } from './sweepCommand';
+export { chunkText, writeSweep } from './sweepCommand';

@@ -175,8 +175,8 @@ export class AtomicFile {
     }
   }
 
-  /** Write one whole chunk (e.g. a case's rows). On failure nothing of the chunk counts. */
-  write(text: string): void {
+  /** Write one whole chunk (e.g. a case's rows, text or UTF-8 bytes). On failure nothing of the chunk counts. */
+  write(text: string | Uint8Array): void {
     if (this.fd === null) throw new Error(`AtomicFile ${this.path}: write after close`);
     let written: number;
     try {

@@ -8,7 +8,7 @@ import type { SweepProgress } from '../compute/engine/runCases';
 import { WorkerPool } from '../compute/engine/workerPool';
 import { type ExpandedCase, type ExpandedPlan, parsePlanFile } from '../compute/planFile';
 import { csvHeader, errorCsvLine } from '../compute/resultTable';
-import { packedCsvLines } from '../compute/resultTablePacked';
+import { packedCsvBytes } from '../compute/resultTablePacked';
 import { commandLineStudy } from '../compute/study/commandLineStudy';
 import { type CaseLanded, runStudies } from '../compute/study/runStudies';
 import { OUT_OPTIONS, onePositional, openOutput, parseCommandArgs, readJsonFile } from './commandArgs';
@@ -19,22 +19,31 @@ import { checkOutputPath, OutputTakenError } from './outputFile';
 import { type PrestartedSpawner, prestartedSpawner } from './prestartedSpawner';
 import { progressReporter } from './progress';
 import { refuseRepeatedOptions } from './refuseRepeatedOptions';
-import { SweepSpool } from './sweepSpool';
+import { type SweepChunk, SweepSpool } from './sweepSpool';
 
 /** Cases landed but not yet written (see writeSweep); `flush` writes them now. */
 export interface PendingCases {
   flush: () => void;
 }
 
+export type { SweepChunk };
+
+const chunkDecoder = new TextDecoder();
+
+/** A chunk of writeSweep's output as text. */
+export function chunkText(chunk: SweepChunk): string {
+  return typeof chunk === 'string' ? chunk : chunkDecoder.decode(chunk);
+}
+
 /** Write a sweep's results as CSV or as a JSON list of documents to `sink`, streaming case by case in
- * plan order. The plan runs as one study (commandLineStudy) on `runner`: a worker pool, or this thread.
+ * plan order. A CSV case's rows come as UTF-8 bytes (no string is made of them), the rest as text. The plan runs as one study (commandLineStudy) on `runner`: a worker pool, or this thread.
  * Cases that finish before their turn are rendered at once and held in `spool`
  * (on disk, see SweepSpool) until then; an interrupted caller can drain the spool so every finished case
  * is written. Each sink call is one whole case (or the header/footer). Returns how many cases failed. */
 export async function writeSweep(
   plan: ExpandedPlan,
   format: 'csv' | 'json',
-  sink: (text: string) => void,
+  sink: (chunk: SweepChunk) => void,
   onProgress?: (progress: SweepProgress) => void,
   runner: JobRunner = new InProcessRunner(),
   spool: SweepSpool = new SweepSpool(),
@@ -48,12 +57,12 @@ export async function writeSweep(
       `{\n  "format": "coversweep-sweep",\n  "version": 1,\n  "varied_keys": ${JSON.stringify(keys)},\n  "point_count": ${plan.pointCount},\n  "runs": [`,
     );
   }
-  const render = (position: number, expanded: ExpandedCase, landed: CaseLanded): string => {
+  const render = (position: number, expanded: ExpandedCase, landed: CaseLanded): SweepChunk => {
     const { cube, surface, error } = landed;
     if (format === 'csv') {
       // Straight from the packed rows: no point or document objects (the same text, resultTablePacked.ts).
       return cube && surface
-        ? packedCsvLines(cube.data, cube.size, expanded.caseFile, keys, expanded.varied)
+        ? packedCsvBytes(cube.data, cube.size, expanded.caseFile, keys, expanded.varied)
         : errorCsvLine(keys, expanded.varied, error ?? '');
     }
     const document =
@@ -216,7 +225,7 @@ export async function commandSweep(
   };
   if (outPath === undefined) {
     try {
-      return finish(await writeSweep(plan, format, io.stdout, progress, pool));
+      return finish(await writeSweep(plan, format, (chunk) => io.stdout(chunkText(chunk)), progress, pool));
     } finally {
       close();
     }
@@ -238,7 +247,7 @@ export async function commandSweep(
     pending.flush();
     let drained = '';
     try {
-      const held = spool.drainTo((text) => file.write(text));
+      const held = spool.drainTo((chunk) => file.write(chunk));
       if (held > 0) drained = ` (${held} case(s) finished out of turn follow the gap)`;
     } catch {
       drained = ' (some cases finished out of turn could not be added)';
@@ -258,7 +267,7 @@ export async function commandSweep(
   process.once('SIGTERM', onSignal);
   let failed = 0;
   try {
-    failed = await writeSweep(plan, format, (text) => file.write(text), progress, pool, spool, pending);
+    failed = await writeSweep(plan, format, (chunk) => file.write(chunk), progress, pool, spool, pending);
     await file.settled();
     file.commit();
   } catch (error) {

@@ -75,22 +75,49 @@ function ensureBytes(size: number): void {
   if (bytes.length < size) bytes = new Uint8Array(Math.max(size, 2 * bytes.length));
 }
 
+/**
+ * A case's numbers, row after row, turned into text by one JSON.stringify: JSON writes a finite number
+ * as ECMA-262 Number::toString, the same text as csvField (ECMA-262, SerializeJSONProperty: "If value
+ * is finite, return ! ToString(value)"; -0 gives "0" in both), straight into its output, where a
+ * template string per number made a string per number (about 0.7 million of them in a standard
+ * sweep) and their garbage. A non-finite number comes out as "null" and is dropped (csvField's empty
+ * field). `values` stays an array of doubles, reused; `text` holds the JSON's ASCII bytes.
+ */
+const values: number[] = [];
+let text = new Uint8Array(1 << 16);
+const encoder = new TextEncoder();
+
 const COMMA = 44;
 const NEWLINE = 10;
-
-/** Write csvField(x) (the shortest round-trip text of a finite number, else nothing) and a comma at `at`. */
-function putNumber(x: number, at: number): number {
-  if (x - x === 0) {
-    const text = `${x}`;
-    for (let k = 0; k < text.length; k++) bytes[at++] = text.charCodeAt(k);
-  }
-  bytes[at] = COMMA;
-  return at + 1;
-}
+const CLOSE_BRACKET = 93;
+/** 'n', the first letter of "null", the one letter of the JSON of a number array that is no number's. */
+const LETTER_N = 110;
 
 /** Write an ASCII string at `at`. */
-function putAscii(text: string, at: number): number {
-  for (let k = 0; k < text.length; k++) bytes[at++] = text.charCodeAt(k);
+function putAscii(ascii: string, at: number): number {
+  for (let k = 0; k < ascii.length; k++) bytes[at++] = ascii.charCodeAt(k);
+  return at;
+}
+
+/**
+ * Copy the next `fields` numbers of the JSON text from `from` (each with its comma, a "null" as an
+ * empty field) to `at` in the output. Returns where the copy ended in the output; `cursor.next` is
+ * where the next row's numbers start in the text.
+ */
+function copyFields(from: number, fields: number, at: number, cursor: { next: number }): number {
+  let k = from;
+  for (let seen = 0; seen < fields; k++) {
+    const c = text[k]!;
+    if (c === COMMA || c === CLOSE_BRACKET) {
+      bytes[at++] = COMMA;
+      seen++;
+    } else if (c === LETTER_N) {
+      k += 3;
+    } else {
+      bytes[at++] = c;
+    }
+  }
+  cursor.next = k;
   return at;
 }
 
@@ -112,13 +139,18 @@ function flagCell(bits: number): string {
  * The CSV lines (no header) of a solved case of `caseFile` whose `pointCount` points are packed row by
  * row in `packed`: one per point, its varied parameters first, then the result columns (resultTable.ts).
  */
-export function packedCsvLines(
+export function packedCsvLines(...args: Parameters<typeof packedCsvBytes>): string {
+  return decoder.decode(packedCsvBytes(...args));
+}
+
+/** packedCsvLines's text as UTF-8 bytes (a copy of its own): for a file, with no string in between. */
+export function packedCsvBytes(
   packed: Float64Array,
   pointCount: number,
   caseFile: CaseFile,
   variedKeys: readonly string[],
   varied: Readonly<Record<string, PlanValue>>,
-): string {
+): Uint8Array {
   if (packed.length !== pointCount * COLUMN_COUNT) {
     throw new RangeError(`packedCsvLines: ${packed.length} values are not ${pointCount} packed rows`);
   }
@@ -136,37 +168,46 @@ export function packedCsvLines(
   const flagsMax = 2 * FLAG_CODES.join(';').length + 4;
   ensureBytes(pointCount * (prefixBytes.length + 25 * fieldCount + flagsMax + 2));
   const speeds = [referenceSpeedMps, speed30MphMps];
-  let at = 0;
+  // The numbers of every row, in the columns' order.
+  let v = 0;
   for (let i = 0, row = 0; i < pointCount; i++, row += COLUMN_COUNT) {
-    bytes.set(prefixBytes, at);
-    at += prefixBytes.length;
     for (let s = 0; s < scalarCount; s++) {
       const column = scalar[s]!;
       if (column >= 0) {
-        at = putNumber(packed[row + column]!, at);
+        values[v++] = packed[row + column]!;
         continue;
       }
       const key = RESULT_SCALAR_KEYS[s];
       const cdaM2 = packed[row + cda]!;
-      const value =
+      values[v++] =
         key === 'yaw_deg'
           ? pointYawDeg(caseFile, pointCount, i, packed[row + yawRad]!)
           : key === 'cda_axial_cm2'
             ? cdaM2 * 1e4
             : dragAreaToGramsForce(cdaM2, speeds[key === 'axial_gf_ref' ? 0 : 1]!, packed[row + rho]!);
-      at = putNumber(value, at);
     }
     for (let c = 0; c < componentCount; c += 4) {
-      at = putNumber(-packed[row + component[c]!]!, at);
-      at = putNumber(packed[row + component[c + 1]!]!, at);
-      at = putNumber(packed[row + component[c + 2]!]!, at);
-      at = putNumber(packed[row + component[c + 3]!]!, at);
+      values[v++] = -packed[row + component[c]!]!;
+      values[v++] = packed[row + component[c + 1]!]!;
+      values[v++] = packed[row + component[c + 2]!]!;
+      values[v++] = packed[row + component[c + 3]!]!;
     }
-    at = putNumber(packed[row + gciAxial]!, at);
-    at = putNumber(packed[row + gciSide]!, at);
+    values[v++] = packed[row + gciAxial]!;
+    values[v++] = packed[row + gciSide]!;
+  }
+  values.length = v;
+  const json = JSON.stringify(values);
+  if (text.length < json.length) text = new Uint8Array(Math.max(json.length, 2 * text.length));
+  encoder.encodeInto(json, text);
+  const cursor = { next: 1 };
+  let at = 0;
+  for (let i = 0, row = 0; i < pointCount; i++, row += COLUMN_COUNT) {
+    bytes.set(prefixBytes, at);
+    at += prefixBytes.length;
+    at = copyFields(cursor.next, fieldCount, at, cursor);
     at = putAscii(flagCell(packed[row + flagBits]!), at);
     bytes[at++] = COMMA;
     bytes[at++] = NEWLINE;
   }
-  return decoder.decode(bytes.subarray(0, at));
+  return bytes.slice(0, at);
 }

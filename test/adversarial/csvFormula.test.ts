@@ -6,7 +6,7 @@
  * written CSV that a spreadsheet would still read as a formula.
  */
 import { afterAll, describe, expect, it } from 'vitest';
-import { writeSweep } from '../../src/cli/main';
+import { chunkText, writeSweep } from '../../src/cli/main';
 import { expandPlan } from '../../src/compute/planFile';
 import { csvField, parseCsvLine } from '../../src/compute/resultTable';
 import { mulberry32 } from '../../src/model/random';
@@ -83,7 +83,7 @@ describe('CSV formula safety', () => {
     if (!plan.ok) throw new Error(plan.errors.join('\n'));
     let out = '';
     await writeSweep(plan.value, 'csv', (t) => {
-      out += t;
+      out += chunkText(t);
     });
     // Rows split on line ends outside quotes.
     const records: string[] = [];

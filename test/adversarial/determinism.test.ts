@@ -4,7 +4,7 @@
  * bytes, CSV and JSON, in this process and on 1 and 2 worker threads.
  */
 import { afterAll, describe, expect, it } from 'vitest';
-import { writeSweep } from '../../src/cli/main';
+import { chunkText, writeSweep } from '../../src/cli/main';
 import { nodeWorkerSpawner } from '../../src/cli/nodeWorker';
 import { WorkerPool } from '../../src/compute/engine/workerPool';
 import { expandPlan } from '../../src/compute/planFile';
@@ -31,7 +31,7 @@ describe('determinism across worker counts', () => {
             plan.value,
             format,
             (t) => {
-              text += t;
+              text += chunkText(t);
             },
             undefined,
             pool,

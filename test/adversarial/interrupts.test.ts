@@ -9,7 +9,7 @@ import { existsSync, mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSy
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
-import { writeSweep } from '../../src/cli/main';
+import { chunkText, writeSweep } from '../../src/cli/main';
 import { expandPlan } from '../../src/compute/planFile';
 import { mulberry32 } from '../../src/model/random';
 import { BIN, cliProcess } from './cliProcess';
@@ -84,7 +84,7 @@ describe('interrupted pooled sweeps keep every finished case', () => {
     if (!expanded.ok) throw new Error(expanded.errors.join('\n'));
     let reference = '';
     await writeSweep(expanded.value, 'csv', (t) => {
-      reference += t;
+      reference += chunkText(t);
     });
     const referenceRows = new Set(reference.split('\n').slice(1, -1));
     const random = mulberry32(1403);

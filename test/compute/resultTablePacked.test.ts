@@ -4,7 +4,7 @@ import { COLUMN_COUNT, columnIndex } from '../../src/compute/engine/columns';
 import { FLAG_CODES, packPoints, unpackPoints } from '../../src/compute/engine/packPoints';
 import type { PlanValue } from '../../src/compute/planFile';
 import { documentCsvLines } from '../../src/compute/resultTable';
-import { packedCsvLines } from '../../src/compute/resultTablePacked';
+import { packedCsvBytes, packedCsvLines } from '../../src/compute/resultTablePacked';
 import { solveWheel } from '../../src/model/wheel';
 
 // The invariant held here: the packed path writes exactly the text of the document path it replaces in
@@ -71,6 +71,21 @@ describe('packedCsvLines: the CSV lines of a case straight from its packed rows'
     // Two points of a three-point grid: yaw from the model's angle, as the document does.
     const two = edited.subarray(COLUMN_COUNT);
     expect(packedCsvLines(two, 2, caseFile, [], {})).toBe(documentPath(two, 2, caseFile, surface, [], {}));
+  });
+
+  it('writes the same text as bytes, and for a case larger than every one before (its buffer grows)', () => {
+    const { caseFile, surface, packed } = solved({
+      conditions: { airspeed_mps: [10], yaw_deg: [0, 5, 10] },
+      model: { lattice_span: 8, lattice_chord: 6, grid_convergence: false },
+    });
+    const rows = 1000;
+    const big = new Float64Array(rows * COLUMN_COUNT);
+    for (let r = 0; r < rows; r++)
+      big.set(packed.subarray((r % 3) * COLUMN_COUNT, ((r % 3) + 1) * COLUMN_COUNT), r * COLUMN_COUNT);
+    const expected = documentPath(big, rows, caseFile, surface, ['k'], { k: 'é' });
+    expect(new TextDecoder().decode(packedCsvBytes(big, rows, caseFile, ['k'], { k: 'é' }))).toBe(expected);
+    const larger = Float64Array.from({ length: 2 * big.length }, (_, j) => big[j % big.length]!);
+    expect(packedCsvLines(larger, 2 * rows, caseFile, ['k'], { k: 'é' })).toBe(expected + expected);
   });
 
   it('refuses packed data that is not whole rows', () => {

@@ -10,7 +10,7 @@ import { mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'n
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
-import { writeSweep } from '../../src/cli/main';
+import { chunkText, writeSweep } from '../../src/cli/main';
 import { InProcessRunner } from '../../src/compute/engine/inProcessRunner';
 import { solveJob } from '../../src/compute/engine/solveJob';
 import { expandPlan } from '../../src/compute/planFile';
@@ -115,7 +115,7 @@ describe('nothing lost at the command line', () => {
       expanded.value,
       'csv',
       (text) => {
-        csv += text;
+        csv += chunkText(text);
       },
       undefined,
       runner,

@@ -8,13 +8,35 @@ export interface PlanJobsOptions {
   jobsPerWorker?: number;
 }
 
-function caseSurfaceKey(input: WheelInput): string {
+interface CaseKeys {
+  /** The boundary condition's key (surfaceKey): cases with equal keys share one factorisation. */
+  surface: string;
+  /** The lattice's geometry: cases with equal keys share one influence matrix (a worker's cache). */
+  lattice: string;
+}
+
+function caseKeys(input: WheelInput): CaseKeys {
   try {
     const p = input.points[0];
     const ratio = p ? p.groundSpeedMps / p.airspeedMps : 1;
-    return surfaceKey(input.wheel, wheelRadii(input.wheel), input.options, ratio);
+    const radii = wheelRadii(input.wheel);
+    const { options } = input;
+    // What the wheel's lattices are built from (buildWheelLattice's radius, counts, ground and region
+    // circles); a fixed lattice does not follow the regions.
+    const lattice = [
+      radii.outerRadiusM,
+      options.ground,
+      options.latticeSpanCount,
+      options.latticeChordCount,
+      options.gridConvergence,
+      ...(options.fixedLattice
+        ? ['fixed']
+        : [radii.rimInnerRadiusM, radii.hubRadiusM, radii.coverInnerRadiusM, radii.coverOuterRadiusM]),
+    ].join('|');
+    return { surface: surfaceKey(input.wheel, radii, input.options, ratio), lattice };
   } catch {
-    return '~invalid'; // the worker reports the model's own message for this case
+    // The worker reports the model's own message for this case.
+    return { surface: '~invalid', lattice: '~invalid' };
   }
 }
 
@@ -26,11 +48,13 @@ function caseSurfaceKey(input: WheelInput): string {
 const CASE_SETUP_POINTS = 200;
 
 /**
- * Group a sweep's cases into jobs so expensive work is done once: cases are ordered by their surface
- * key (lattice geometry first, so a worker's cached influence matrix keeps serving, then the boundary
- * condition, so one factorisation serves every case, yaw angle and speed that share it), cases with equal
- * keys never split across jobs, and whole groups are packed into jobs of at most 1 / (workers x
- * jobsPerWorker) of the work each. Towards the end the jobs get smaller (each at most the work left over
+ * Group a sweep's cases into jobs so expensive work is done once: cases with equal surface keys (one
+ * boundary condition: one factorisation serves every case, yaw angle and speed that share it) form a
+ * group that never splits across jobs; groups whose lattices have the same geometry sit next to each
+ * other (a worker's cached influence matrix keeps serving them); otherwise groups keep the cases'
+ * order (each by its first case), so jobs finish roughly in the order a caller writes results (a
+ * command-line sweep holds a case that finishes before its turn, and writes it at its turn). Whole
+ * groups are packed into jobs of at most 1 / (workers x jobsPerWorker) of the work each. Towards the end the jobs get smaller (each at most the work left over
  * 2 x workers, down to one group: "factoring", Hummel, Schonberg & Flynn 1992), so the workers finish
  * together instead of one waiting for the other's last large job. Deterministic: the same cases give the
  * same jobs.
@@ -39,16 +63,24 @@ export function planJobs(cases: readonly WheelInput[], options: PlanJobsOptions)
   const { workers, jobsPerWorker = 8 } = options;
   if (!(Number.isInteger(workers) && workers >= 1))
     throw new RangeError(`workers must be an integer >= 1, got ${workers}`);
-  const keys = cases.map(caseSurfaceKey);
-  const order = cases
-    .map((_, i) => i)
-    .sort((a, b) => (keys[a]! < keys[b]! ? -1 : keys[a]! > keys[b]! ? 1 : a - b));
-  const groups: number[][] = [];
-  for (const i of order) {
-    const last = groups[groups.length - 1];
-    if (last && keys[last[0]!] === keys[i]) last.push(i);
-    else groups.push([i]);
-  }
+  // Groups by surface key, each listed where its first case is; then each lattice geometry's groups
+  // together, where the geometry's first case is (a stable sort keeps the cases' order otherwise).
+  const byKey = new Map<string, number[]>();
+  const latticeRank = new Map<string, number>();
+  const groupLattice = new Map<number[], number>();
+  cases.forEach((input, i) => {
+    const keys = caseKeys(input);
+    const group = byKey.get(keys.surface);
+    if (group) {
+      group.push(i);
+      return;
+    }
+    const created = [i];
+    byKey.set(keys.surface, created);
+    if (!latticeRank.has(keys.lattice)) latticeRank.set(keys.lattice, latticeRank.size);
+    groupLattice.set(created, latticeRank.get(keys.lattice)!);
+  });
+  const groups = [...byKey.values()].sort((a, b) => groupLattice.get(a)! - groupLattice.get(b)!);
   const weightOf = (group: readonly number[]) =>
     group.reduce((w, i) => w + cases[i]!.points.length + CASE_SETUP_POINTS, 0);
   const weights = groups.map(weightOf);

@@ -63,4 +63,22 @@ describe('planJobs', () => {
     const jobs = planJobs([bad, ...cases], { workers: 1 });
     expect(jobs.flatMap((j) => j.cases).some((c) => c.caseIndex === 0)).toBe(true);
   });
+
+  it("deals designs with lattices of their own in the cases' order (results land about in turn)", () => {
+    // Every cover fraction and rim depth moves the region circles the lattice follows.
+    const order = planJobs(cases, { workers: 2 }).flatMap((j) => j.cases.map((c) => c.caseIndex));
+    expect(order).toEqual(cases.map((_, i) => i));
+  });
+
+  it('puts the boundary conditions of one lattice geometry next to each other, first come first', () => {
+    // Other spoke counts change the boundary condition (surface key) but not the lattice.
+    const [a, b] = cases;
+    const spokes = (c: (typeof cases)[number], n: number) => ({ ...c, wheel: { ...c.wheel, spokeCount: n } });
+    const mixed = [spokes(a!, 24), spokes(b!, 24), spokes(a!, 28), spokes(b!, 28), spokes(a!, 24)];
+    const order = planJobs(mixed, { workers: 1, jobsPerWorker: 5 }).flatMap((j) =>
+      j.cases.map((c) => c.caseIndex),
+    );
+    // a/24 with its twin (case 4), a/28, then b's two.
+    expect(order).toEqual([0, 4, 2, 1, 3]);
+  });
 });
