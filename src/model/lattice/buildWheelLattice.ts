@@ -20,6 +20,10 @@ export interface WheelLatticeOptions {
   /** Chordwise clustering c in [0, 1] (default 0, even): within each interval panel edge q of k sits at
    * the fraction (1 - c) q / k + c (1 - cos(pi q / k)) / 2, closer together at the interval's ends. */
   chordClustering?: number;
+  /** Supplies the array the influence matrix is written into, given its entry count n^2 (every entry
+   * is overwritten, so its old contents do not matter): the lattice cache hands back the arrays of
+   * lattices it has evicted, sparing a fresh n x n allocation per lattice. Default: a new array. */
+  influenceArray?: (entries: number) => Float64Array;
 }
 
 export interface WheelLattice extends RingLattice {
@@ -173,7 +177,12 @@ export function buildWheelLattice(options: WheelLatticeOptions): WheelLattice {
     }
   }
   const groundZM = ground ? -R : Number.NaN;
-  const influence = new Float64Array(n * n);
+  const influence = options.influenceArray?.(n * n) ?? new Float64Array(n * n);
+  if (influence.length !== n * n) {
+    throw new RangeError(
+      `buildWheelLattice: influenceArray gave ${influence.length} entries, not n*n=${n * n}`,
+    );
+  }
   ringInfluenceMatrix(edgeZ, nodeLowerX, nodeUpperX, chordCount, controlX, controlZ, groundZM, influence);
   return {
     spanCount: strips,

@@ -30,7 +30,7 @@
  */
 
 import { type LuKernel, luKernel } from './luKernel';
-import { LU_OUTER_BLOCK as OUTER_BLOCK, LU_WASM_MAX_N, LU_WASM_MIN_N, luPivotsAt } from './luWorkspace';
+import { LU_WASM_MAX_N, LU_WASM_MIN_N, luPivotsAt, LU_OUTER_BLOCK as OUTER_BLOCK } from './luWorkspace';
 import { ensureMemory } from './simdInstance';
 
 const INNER_BLOCK = 8;
@@ -51,7 +51,9 @@ export function luFactor(a: Float64Array, n: number, pivots: Int32Array, path: L
     throw new RangeError(`luFactor: path=${String(path)} must be 'auto', 'typescript' or 'wasm'`);
   }
   const kernel =
-    path === 'typescript' || (path === 'auto' && (n < LU_WASM_MIN_N || n > LU_WASM_MAX_N)) ? null : luKernel();
+    path === 'typescript' || (path === 'auto' && (n < LU_WASM_MIN_N || n > LU_WASM_MAX_N))
+      ? null
+      : luKernel();
   if (path === 'wasm' && kernel === null) {
     throw new RangeError("luFactor: path='wasm' but WebAssembly SIMD is not available here");
   }
