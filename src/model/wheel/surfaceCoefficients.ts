@@ -76,6 +76,33 @@ export function surfaceSolution(
   return { lattice, openness, solidShare, solution };
 }
 
+/** The slopes of one lattice's solution: Kp, Ki, Kd and the suction slope Kt = Kp - Kp^2 Ki - Kd. */
+function slopesOf(s: LatticeSolution, n: number) {
+  return {
+    kp: s.normalSlope,
+    ki: s.inducedDragFactor,
+    kd: s.porousDragSlope,
+    kt: s.normalSlope - s.normalSlope * s.normalSlope * s.inducedDragFactor - s.porousDragSlope,
+    cx: s.centreX,
+    cz: s.centreZ,
+    n,
+  };
+}
+
+/** The slopes on a coarser lattice of a convergence study: where the suction sits is not asked there. */
+function slopesOn(
+  wheel: WheelGeometry,
+  radii: WheelRadii,
+  options: ModelOptions,
+  rotationRatio: number,
+  spanCount: number,
+  chordCount: number,
+) {
+  const { lattice, solution } = surfaceSolution(wheel, radii, options, rotationRatio, spanCount, chordCount);
+  return slopesOf(solution, lattice.panelCount);
+}
+
+/** The slopes on the finest lattice, with where its suction sits (edgeSuctionShares). */
 function coefficientsOn(
   wheel: WheelGeometry,
   radii: WheelRadii,
@@ -97,19 +124,7 @@ function coefficientsOn(
     edgeX[strip] = lattice.boundX[strip * lattice.chordCount]!;
     edgeZ[strip] = lattice.boundZ[strip * lattice.chordCount]!;
   }
-  return {
-    shares,
-    stripEdgeZ: lattice.edgeZ,
-    edgeX,
-    edgeZ,
-    kp: s.normalSlope,
-    ki: s.inducedDragFactor,
-    kd: s.porousDragSlope,
-    kt: s.normalSlope - s.normalSlope * s.normalSlope * s.inducedDragFactor - s.porousDragSlope,
-    cx: s.centreX,
-    cz: s.centreZ,
-    n: lattice.panelCount,
-  };
+  return { ...slopesOf(s, lattice.panelCount), shares, stripEdgeZ: lattice.edgeZ, edgeX, edgeZ };
 }
 
 /** The observed order used in the index is capped at 1: porous rings converge at about first order
@@ -171,7 +186,7 @@ export function surfaceCoefficients(
   let normalConv: ConvergenceEstimate | null = null;
   let suctionConv: ConvergenceEstimate | null = null;
   if (options.gridConvergence) {
-    const medium = coefficientsOn(
+    const medium = slopesOn(
       wheel,
       radii,
       options,
@@ -179,7 +194,7 @@ export function surfaceCoefficients(
       Math.max(4, Math.round(span / 1.5)),
       Math.max(2, Math.round(chord / 1.5)),
     );
-    const coarse = coefficientsOn(
+    const coarse = slopesOn(
       wheel,
       radii,
       options,
