@@ -89,34 +89,8 @@ function slopesOf(s: LatticeSolution, n: number) {
   };
 }
 
-/** The slopes on a coarser lattice of a convergence study: where the suction sits is not asked there. */
-function slopesOn(
-  wheel: WheelGeometry,
-  radii: WheelRadii,
-  options: ModelOptions,
-  rotationRatio: number,
-  spanCount: number,
-  chordCount: number,
-) {
-  const { lattice, solution } = surfaceSolution(wheel, radii, options, rotationRatio, spanCount, chordCount);
-  return slopesOf(solution, lattice.panelCount);
-}
-
 /** The slopes on the finest lattice, with where its suction sits (edgeSuctionShares). */
-function coefficientsOn(
-  wheel: WheelGeometry,
-  radii: WheelRadii,
-  options: ModelOptions,
-  rotationRatio: number,
-  spanCount: number,
-  chordCount: number,
-) {
-  const {
-    lattice,
-    openness,
-    solidShare,
-    solution: s,
-  } = surfaceSolution(wheel, radii, options, rotationRatio, spanCount, chordCount);
+function coefficientsOn({ lattice, openness, solidShare, solution: s }: ReturnType<typeof surfaceSolution>) {
   const shares = edgeSuctionShares(lattice, s.gamma, openness, solidShare);
   const edgeX = new Float64Array(lattice.spanCount);
   const edgeZ = new Float64Array(lattice.spanCount);
@@ -182,26 +156,24 @@ export function surfaceCoefficients(
 ): SurfaceCoefficients {
   const span = options.latticeSpanCount;
   const chord = options.latticeChordCount;
-  const fine = coefficientsOn(wheel, radii, options, rotationRatio, span, chord);
+  const fine = coefficientsOn(surfaceSolution(wheel, radii, options, rotationRatio, span, chord));
   let normalConv: ConvergenceEstimate | null = null;
   let suctionConv: ConvergenceEstimate | null = null;
   if (options.gridConvergence) {
-    const medium = slopesOn(
-      wheel,
-      radii,
-      options,
-      rotationRatio,
-      Math.max(4, Math.round(span / 1.5)),
-      Math.max(2, Math.round(chord / 1.5)),
-    );
-    const coarse = slopesOn(
-      wheel,
-      radii,
-      options,
-      rotationRatio,
-      Math.max(4, Math.round(span / 2.25)),
-      Math.max(2, Math.round(chord / 2.25)),
-    );
+    // The coarser lattices give their slopes only: where the suction sits is read on the finest.
+    const slopesOn = (factor: number) => {
+      const { lattice, solution } = surfaceSolution(
+        wheel,
+        radii,
+        options,
+        rotationRatio,
+        Math.max(4, Math.round(span / factor)),
+        Math.max(2, Math.round(chord / factor)),
+      );
+      return slopesOf(solution, lattice.panelCount);
+    };
+    const medium = slopesOn(1.5);
+    const coarse = slopesOn(2.25);
     const area = Math.PI * radii.outerRadiusM * radii.outerRadiusM;
     const h = [fine.n, medium.n, coarse.n].map((n) => Math.sqrt(area / n));
     normalConv = estimate(h, [fine.kp, medium.kp, coarse.kp]);
