@@ -34,6 +34,11 @@ export function assembleSystem(
     throw new RangeError(`assembleSystem: out.length=${m.length} must be at least n*n=${n * n}`);
   }
   const a = lattice.influence;
+  if (a.length < n * n) {
+    throw new RangeError(
+      `assembleSystem: the influence matrix has ${a.length} entries, not n*n=${n * n} (a lattice the cache has evicted?)`,
+    );
+  }
   const chordCount = lattice.chordCount;
   for (let i = 0; i < n; i++) {
     const o = openness[i]!;

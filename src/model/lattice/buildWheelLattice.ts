@@ -1,5 +1,7 @@
+import { allocateByLength } from './allocateByLength';
 import { ringInfluenceMatrix } from './ringInfluenceMatrix';
 import type { RingLattice } from './types';
+import { wheelStripStations } from './wheelStripStations';
 
 export interface WheelLatticeOptions {
   radiusM: number;
@@ -18,6 +20,10 @@ export interface WheelLatticeOptions {
   /** Chordwise clustering c in [0, 1] (default 0, even): within each interval panel edge q of k sits at
    * the fraction (1 - c) q / k + c (1 - cos(pi q / k)) / 2, closer together at the interval's ends. */
   chordClustering?: number;
+  /** Supplies the array the influence matrix is written into, given its entry count n^2 (every entry
+   * is overwritten, so its old contents do not matter): the lattice cache hands back the arrays of
+   * lattices it has evicted, sparing a fresh n x n allocation per lattice. Default: a new array. */
+  influenceArray?: (entries: number) => Float64Array;
 }
 
 export interface WheelLattice extends RingLattice {
@@ -73,107 +79,15 @@ export function buildWheelLattice(options: WheelLatticeOptions): WheelLattice {
   if (!(cluster >= 0 && cluster <= 1)) {
     throw new RangeError(`buildWheelLattice: chordClustering=${cluster} must be in [0, 1]`);
   }
-  const isOpen = (r: number): boolean => annuli.some(([a, b]) => r > a && r < b);
-  const circles = [...new Set(annuli.flat())]
-    .filter((r) => r > 0 && r < R * (1 - 1e-9))
-    .sort((a, b) => b - a);
-  // The spacing's parameter u in [0, 1] and its inverse (see buildDiscLattice).
-  const zOf = (u: number): number =>
-    ground ? R * (-1 + 2 * Math.sin((Math.PI * u) / 2)) : R * Math.sin((Math.PI * (2 * u - 1)) / 2);
-  const uOf = (z: number): number =>
-    ground
-      ? (2 / Math.PI) * Math.asin(Math.min(1, (z / R + 1) / 2))
-      : 0.5 + Math.asin(Math.max(-1, Math.min(1, z / R))) / Math.PI;
+  const warped = wheelStripStations(R, spanCount, ground, annuli);
+  const { strips, circleCount, circles, edgeZ } = warped;
+  const controlStation = warped.controlZ;
 
-  // Strip edges: the N + 1 regular stations, warped so that the tops and bottoms of the region
-  // circles fall on stations: each required parameter takes the nearest free station and the map
-  // between anchors is linear, keeping the strip count and a smooth spacing.
-  const required = [...new Set(circles.flatMap((r) => [uOf(-r), uOf(r)]))]
-    .filter((u) => u > 1e-12 && u < 1 - 1e-12)
-    .sort((a, b) => a - b);
-  // Strips per zone between consecutive required parameters: in proportion to the zone's length in
-  // the parameter, at least one each (largest remainder), so the spacing stays close to the regular one.
-  // The zone between the bottom and top of the innermost circle needs two: a single strip there would
-  // have the circle's top and bottom as its edge lines, where its crossings are both at x = 0, leaving
-  // a panel of zero chord with its control point on its own bound vortex (a singular system). Like
-  // the chord count, the strip count is raised when the regions need more strips than asked.
-  const anchorU = [0, ...required, 1];
-  const innermost = circles.length > 0 ? circles[circles.length - 1]! : Number.NaN;
-  const middle = anchorU.findIndex((u, j) => u === uOf(-innermost) && anchorU[j + 1] === uOf(innermost));
-  const strips = Math.max(spanCount, anchorU.length - 1 + (middle >= 0 ? 1 : 0));
-  const zoneStrips = allocate(
-    anchorU.slice(1).map((u, j) => u - anchorU[j]!),
-    strips,
-  );
-  if (middle >= 0 && zoneStrips[middle]! < 2) {
-    let widest = middle === 0 ? 1 : 0;
-    for (let j = 0; j < zoneStrips.length; j++) {
-      if (j !== middle && zoneStrips[j]! > zoneStrips[widest]!) widest = j;
-    }
-    zoneStrips[widest]!--;
-    zoneStrips[middle]!++;
-  }
-  const anchorK: number[] = [0];
-  for (const count of zoneStrips) anchorK.push(anchorK[anchorK.length - 1]! + count);
-  const warp = (t: number): number => {
-    // t in station units [0, N]; linear between anchors.
-    let a = 0;
-    while (a < anchorK.length - 2 && t > anchorK[a + 1]!) a++;
-    const k0 = anchorK[a]!;
-    const k1 = anchorK[a + 1]!;
-    return anchorU[a]! + ((t - k0) / (k1 - k0)) * (anchorU[a + 1]! - anchorU[a]!);
-  };
-  const uniqueU = Array.from({ length: strips + 1 }, (_, k) => warp(k));
-  const controlU = Array.from({ length: strips }, (_, k) => warp(k + 0.5));
-  const edgeZ = new Float64Array(strips + 1);
-  uniqueU.forEach((u, k) => {
-    edgeZ[k] = k === 0 ? -R : k === strips ? R : zOf(u);
-  });
-
-  const half = (radius: number, z: number): number => {
-    const q = radius * radius - z * z;
-    return q > 0 ? Math.sqrt(q) : 0;
-  };
-  // Crossing x positions (descending, leading edge first) of a strip's circles on its two edge lines.
-  // A region circle's crossings are scaled so the strip's trapezoid holds the circle's exact area
-  // between the lines (area of a circular segment: integral of sqrt(r^2 - z^2) dz, elementary
-  // calculus), so the regions keep their areas however coarse the strips; the disc's own edge keeps
-  // the disc lattice's corners.
-  const halfArea = (radius: number, z: number): number => {
-    const c = Math.max(-radius, Math.min(radius, z));
-    return 0.5 * (c * half(radius, c) + radius * radius * Math.asin(c / radius));
-  };
-  const crossingsOf = (crossed: number[], z0: number, z1: number): [number[], number[]] => {
-    const front0: number[] = [];
-    const front1: number[] = [];
-    for (const r of crossed) {
-      const x0 = half(r, z0);
-      const x1 = half(r, z1);
-      const trapezoid = 0.5 * (x0 + x1) * (z1 - z0);
-      const exact = halfArea(r, z1) - halfArea(r, z0);
-      const k = trapezoid > 0 ? exact / trapezoid : 1;
-      front0.push(x0 * k);
-      front1.push(x1 * k);
-    }
-    const line = (edge: number, front: number[]) => [
-      edge,
-      ...front,
-      ...[...front].reverse().map((x) => -x),
-      -edge,
-    ];
-    return [line(half(R, z0), front0), line(half(R, z1), front1)];
-  };
-
-  // Per strip: control station, crossed circles, panel allocation; the chord count fits the worst strip.
-  const controlStation = new Float64Array(strips);
-  const crossedOf: number[][] = [];
+  // Per strip: the crossed circles (those with r > |z| at the control station: a prefix of the
+  // descending list), panel allocation; the chord count fits the worst strip.
   let chordCount = options.chordCount;
   for (let s = 0; s < strips; s++) {
-    const zc = zOf(controlU[s]!);
-    controlStation[s] = zc;
-    const crossed = circles.filter((r) => r > Math.abs(zc));
-    crossedOf.push(crossed);
-    chordCount = Math.max(chordCount, 2 * crossed.length + 1);
+    chordCount = Math.max(chordCount, 2 * crossedCount(circles, circleCount, controlStation[s]!) + 1);
   }
   const cols = chordCount + 1;
   const n = strips * chordCount;
@@ -190,26 +104,30 @@ export function buildWheelLattice(options: WheelLatticeOptions): WheelLattice {
   const areaM2 = new Float64Array(n);
   const spanWidthM = new Float64Array(n);
   const chordLengthM = new Float64Array(n);
-  const lower = new Float64Array(cols);
-  const upper = new Float64Array(cols);
+  ensureStripScratch(cols, 2 * circleCount + 2);
+  const lower = stripLower;
+  const upper = stripUpper;
+  const atLower = crossLower;
+  const atUpper = crossUpper;
+  const lengths = intervalLength;
+  const counts = intervalCount;
 
   for (let s = 0; s < strips; s++) {
     const z0 = edgeZ[s]!;
     const z1 = edgeZ[s + 1]!;
     const zc = controlStation[s]!;
     const t = (zc - z0) / (z1 - z0);
-    const crossed = crossedOf[s]!;
-    const [atLower, atUpper] = crossingsOf(crossed, z0, z1);
+    const crossed = crossedCount(circles, circleCount, zc);
+    crossings(R, circles, crossed, z0, z1, atLower, atUpper);
     // Interval lengths at the control station, on the strip's trapezoid, weighted by region.
-    const intervals = atLower.length - 1;
-    const lengths = new Array<number>(intervals);
+    const intervals = 2 * crossed + 1;
     for (let j = 0; j < intervals; j++) {
       const a = (1 - t) * atLower[j]! + t * atUpper[j]!;
       const b = (1 - t) * atLower[j + 1]! + t * atUpper[j + 1]!;
       const mid = 0.5 * (a + b);
-      lengths[j] = Math.max(0, a - b) * (isOpen(Math.sqrt(mid * mid + zc * zc)) ? openWeight : 1);
+      lengths[j] = Math.max(0, a - b) * (isOpen(annuli, Math.sqrt(mid * mid + zc * zc)) ? openWeight : 1);
     }
-    const counts = allocate(lengths, chordCount);
+    allocateByLength(lengths, intervals, chordCount, counts);
     // Panel edges on both edge lines.
     let c = 0;
     for (let j = 0; j < intervals; j++) {
@@ -224,8 +142,10 @@ export function buildWheelLattice(options: WheelLatticeOptions): WheelLattice {
     lower[chordCount] = atLower[intervals]!;
     upper[chordCount] = atUpper[intervals]!;
     const nodes = s * cols;
-    panelEdgeLowerX.set(lower.subarray(0, cols), nodes);
-    panelEdgeUpperX.set(upper.subarray(0, cols), nodes);
+    for (let m = 0; m < cols; m++) {
+      panelEdgeLowerX[nodes + m] = lower[m]!;
+      panelEdgeUpperX[nodes + m] = upper[m]!;
+    }
     for (let m = 0; m < chordCount; m++) {
       nodeLowerX[nodes + m] = lower[m]! - 0.25 * (lower[m]! - lower[m + 1]!);
       nodeUpperX[nodes + m] = upper[m]! - 0.25 * (upper[m]! - upper[m + 1]!);
@@ -257,7 +177,12 @@ export function buildWheelLattice(options: WheelLatticeOptions): WheelLattice {
     }
   }
   const groundZM = ground ? -R : Number.NaN;
-  const influence = new Float64Array(n * n);
+  const influence = options.influenceArray?.(n * n) ?? new Float64Array(n * n);
+  if (influence.length !== n * n) {
+    throw new RangeError(
+      `buildWheelLattice: influenceArray gave ${influence.length} entries, not n*n=${n * n}`,
+    );
+  }
   ringInfluenceMatrix(edgeZ, nodeLowerX, nodeUpperX, chordCount, controlX, controlZ, groundZM, influence);
   return {
     spanCount: strips,
@@ -287,17 +212,90 @@ export function buildWheelLattice(options: WheelLatticeOptions): WheelLattice {
   };
 }
 
-/** Share `total` panels among intervals in proportion to length, at least one each (largest remainder). */
-function allocate(lengths: number[], total: number): number[] {
-  const k = lengths.length;
-  const sum = lengths.reduce((a, b) => a + b, 0);
-  const spare = total - k;
-  const ideal = lengths.map((l) => (sum > 0 ? (l / sum) * spare : spare / k));
-  const counts = ideal.map((x) => 1 + Math.floor(x));
-  let left = total - counts.reduce((a, b) => a + b, 0);
-  const order = ideal
-    .map((x, j) => [x - Math.floor(x), j] as const)
-    .sort((a, b) => b[0] - a[0] || a[1] - b[1]);
-  for (let q = 0; left > 0; q = (q + 1) % k, left--) counts[order[q]![1]]!++;
-  return counts;
+// Module-private scratch (grown on demand, never returned): per strip the circles' crossings on both
+// edge lines, the interval lengths and panel counts, and the panel edges on both lines.
+let crossLower = new Float64Array(16);
+let crossUpper = new Float64Array(16);
+let intervalLength = new Float64Array(16);
+let intervalCount = new Float64Array(16);
+let stripLower = new Float64Array(64);
+let stripUpper = new Float64Array(64);
+
+function ensureStripScratch(cols: number, crossingCount: number): void {
+  if (stripLower.length < cols) {
+    stripLower = new Float64Array(cols);
+    stripUpper = new Float64Array(cols);
+  }
+  if (crossLower.length < crossingCount) {
+    crossLower = new Float64Array(crossingCount);
+    crossUpper = new Float64Array(crossingCount);
+    intervalLength = new Float64Array(crossingCount);
+    intervalCount = new Float64Array(crossingCount);
+  }
+}
+
+/** Whether radius r lies inside one of the open annuli (strictly). */
+function isOpen(annuli: ReadonlyArray<readonly [number, number]>, r: number): boolean {
+  for (let i = 0; i < annuli.length; i++) {
+    const annulus = annuli[i]!;
+    if (r > annulus[0] && r < annulus[1]) return true;
+  }
+  return false;
+}
+
+/** Number of the descending circles (the first circleCount) with r > |zc|: they come first. */
+function crossedCount(circles: Float64Array, circleCount: number, zc: number): number {
+  let crossed = 0;
+  while (crossed < circleCount && circles[crossed]! > Math.abs(zc)) crossed++;
+  return crossed;
+}
+
+function half(radius: number, z: number): number {
+  const q = radius * radius - z * z;
+  return q > 0 ? Math.sqrt(q) : 0;
+}
+
+function halfArea(radius: number, z: number): number {
+  const c = Math.max(-radius, Math.min(radius, z));
+  return 0.5 * (c * half(radius, c) + radius * radius * Math.asin(c / radius));
+}
+
+/**
+ * Crossing x positions (descending, leading edge first) of a strip's `crossed` circles on its two edge
+ * lines, 2 crossed + 2 values each: the disc's edge, the circles' fronts, their backs, the disc's
+ * back. A region circle's crossings are scaled so the strip's trapezoid holds the circle's exact area
+ * between the lines (area of a circular segment: integral of sqrt(r^2 - z^2) dz, elementary
+ * calculus), so the regions keep their areas however coarse the strips; the disc's own edge keeps
+ * the disc lattice's corners.
+ */
+function crossings(
+  R: number,
+  circles: Float64Array,
+  crossed: number,
+  z0: number,
+  z1: number,
+  atLower: Float64Array,
+  atUpper: Float64Array,
+): void {
+  const last = 2 * crossed + 1;
+  for (let j = 0; j < crossed; j++) {
+    const r = circles[j]!;
+    const x0 = half(r, z0);
+    const x1 = half(r, z1);
+    const trapezoid = 0.5 * (x0 + x1) * (z1 - z0);
+    const exact = halfArea(r, z1) - halfArea(r, z0);
+    const k = trapezoid > 0 ? exact / trapezoid : 1;
+    const front0 = x0 * k;
+    const front1 = x1 * k;
+    atLower[1 + j] = front0;
+    atUpper[1 + j] = front1;
+    atLower[last - 1 - j] = -front0;
+    atUpper[last - 1 - j] = -front1;
+  }
+  const edge0 = half(R, z0);
+  const edge1 = half(R, z1);
+  atLower[0] = edge0;
+  atUpper[0] = edge1;
+  atLower[last] = -edge0;
+  atUpper[last] = -edge1;
 }

@@ -30,17 +30,10 @@
  */
 
 import { type LuKernel, luKernel } from './luKernel';
+import { LU_WASM_MAX_N, LU_WASM_MIN_N, luPivotsAt, LU_OUTER_BLOCK as OUTER_BLOCK } from './luWorkspace';
 import { ensureMemory } from './simdInstance';
 
-const OUTER_BLOCK = 32;
 const INNER_BLOCK = 8;
-/** Below this order the copy into the kernel's memory costs more than SIMD saves. */
-const WASM_MIN_N = 16;
-/**
- * Above this order 'auto' keeps to TypeScript: the kernel's memory (a copy of the matrix) only grows,
- * and a thread should not hold on to more than 32 MiB for it (n = 2048).
- */
-const WASM_MAX_N = 2048;
 
 export type LuPath = 'auto' | 'typescript' | 'wasm';
 
@@ -58,14 +51,21 @@ export function luFactor(a: Float64Array, n: number, pivots: Int32Array, path: L
     throw new RangeError(`luFactor: path=${String(path)} must be 'auto', 'typescript' or 'wasm'`);
   }
   const kernel =
-    path === 'typescript' || (path === 'auto' && (n < WASM_MIN_N || n > WASM_MAX_N)) ? null : luKernel();
+    path === 'typescript' || (path === 'auto' && (n < LU_WASM_MIN_N || n > LU_WASM_MAX_N))
+      ? null
+      : luKernel();
   if (path === 'wasm' && kernel === null) {
     throw new RangeError("luFactor: path='wasm' but WebAssembly SIMD is not available here");
   }
   // The matrix, then (from byte n n 8 + 64) two rows of multipliers packed by the kernel's update,
   // then the pivots (i32) written by its panel factorisation.
-  const pivotsAt = n * n * 8 + 64 + 16 * OUTER_BLOCK;
+  const pivotsAt = luPivotsAt(n);
   const bytes = pivotsAt + 4 * n;
+  // `a` may be the kernel's own matrix (luWorkspace): factorised where it lies, no copy in or out.
+  const inPlace = kernel !== null && a.buffer === kernel.memory.buffer;
+  if (inPlace && (a.byteOffset !== 0 || kernel.memory.buffer.byteLength < bytes)) {
+    throw new RangeError("luFactor: a view of the kernel's memory must be luWorkspace(n)'s");
+  }
   if (kernel !== null && !ensureMemory(kernel.memory, bytes) && path === 'wasm') {
     throw new RangeError(`luFactor: path='wasm' but the kernel's memory cannot grow to ${bytes} bytes`);
   }
@@ -74,12 +74,12 @@ export function luFactor(a: Float64Array, n: number, pivots: Int32Array, path: L
     factorColumns(a, n, pivots, 0, n, OUTER_BLOCK, null, 0);
     return;
   }
-  const work = new Float64Array(kernel.memory.buffer, 0, n * n);
-  work.set(a.subarray(0, n * n));
+  const work = inPlace ? a : new Float64Array(kernel.memory.buffer, 0, n * n);
+  if (!inPlace) work.set(a.subarray(0, n * n));
   const bad = kernel.firstNonFinite(n * n);
   if (bad >= 0) throw notFinite(a, bad);
   factorColumns(work, n, pivots, 0, n, OUTER_BLOCK, kernel, pivotsAt);
-  a.set(work);
+  if (!inPlace) a.set(work);
   pivots.set(new Int32Array(kernel.memory.buffer, pivotsAt, n));
 }
 

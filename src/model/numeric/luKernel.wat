@@ -208,7 +208,7 @@
   (func (export "panel") (param $n i32) (param $k0 i32) (param $kEnd i32) (param $piv i32) (result i32)
     (local $n8 i32) (local $k i32) (local $p i32) (local $i i32) (local $j i32) (local $next i32) (local $nextP i32)
     (local $rk i32) (local $rp i32) (local $ri i32) (local $end i32)
-    (local $big f64) (local $nextBig f64) (local $v f64) (local $inv f64) (local $l f64) (local $t v128)
+    (local $big f64) (local $nextBig f64) (local $v f64) (local $inv f64) (local $l f64) (local $t v128) (local $lv v128)
     (local.set $n8 (i32.shl (local.get $n) (i32.const 3)))
     (local.set $p (local.get $k0))
     (local.set $big (f64.abs (f64.load (i32.add (i32.mul (local.get $k0) (local.get $n8)) (i32.shl (local.get $k0) (i32.const 3))))))
@@ -256,14 +256,21 @@
         (local.set $l (f64.mul (f64.load (i32.add (local.get $ri) (i32.shl (local.get $k) (i32.const 3)))) (local.get $inv)))
         (f64.store (i32.add (local.get $ri) (i32.shl (local.get $k) (i32.const 3))) (local.get $l))
         (if (f64.ne (local.get $l) (f64.const 0)) (then
+          ;; two columns at a time (each lane the scalar operations: l a[k][j], then the subtraction),
+          ;; an odd last column alone
+          (local.set $lv (f64x2.splat (local.get $l)))
           (local.set $j (local.get $next))
-          (block $done_j (loop $js
-            (br_if $done_j (i32.ge_s (local.get $j) (local.get $kEnd)))
+          (block $done_j2 (loop $js2
+            (br_if $done_j2 (i32.ge_s (i32.add (local.get $j) (i32.const 1)) (local.get $kEnd)))
+            (v128.store (i32.add (local.get $ri) (i32.shl (local.get $j) (i32.const 3)))
+              (f64x2.sub (v128.load (i32.add (local.get $ri) (i32.shl (local.get $j) (i32.const 3))))
+                (f64x2.mul (local.get $lv) (v128.load (i32.add (local.get $rk) (i32.shl (local.get $j) (i32.const 3)))))))
+            (local.set $j (i32.add (local.get $j) (i32.const 2)))
+            (br $js2)))
+          (if (i32.lt_s (local.get $j) (local.get $kEnd)) (then
             (f64.store (i32.add (local.get $ri) (i32.shl (local.get $j) (i32.const 3)))
               (f64.sub (f64.load (i32.add (local.get $ri) (i32.shl (local.get $j) (i32.const 3))))
-                (f64.mul (local.get $l) (f64.load (i32.add (local.get $rk) (i32.shl (local.get $j) (i32.const 3)))))))
-            (local.set $j (i32.add (local.get $j) (i32.const 1)))
-            (br $js)))))
+                (f64.mul (local.get $l) (f64.load (i32.add (local.get $rk) (i32.shl (local.get $j) (i32.const 3)))))))))))
         (if (i32.lt_s (local.get $next) (local.get $kEnd)) (then
           (local.set $v (f64.abs (f64.load (i32.add (local.get $ri) (i32.shl (local.get $next) (i32.const 3))))))
           (if (i32.or (i32.eq (local.get $i) (local.get $next)) (f64.gt (local.get $v) (local.get $nextBig)))

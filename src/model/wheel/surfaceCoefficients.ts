@@ -76,20 +76,21 @@ export function surfaceSolution(
   return { lattice, openness, solidShare, solution };
 }
 
-function coefficientsOn(
-  wheel: WheelGeometry,
-  radii: WheelRadii,
-  options: ModelOptions,
-  rotationRatio: number,
-  spanCount: number,
-  chordCount: number,
-) {
-  const {
-    lattice,
-    openness,
-    solidShare,
-    solution: s,
-  } = surfaceSolution(wheel, radii, options, rotationRatio, spanCount, chordCount);
+/** The slopes of one lattice's solution: Kp, Ki, Kd and the suction slope Kt = Kp - Kp^2 Ki - Kd. */
+function slopesOf(s: LatticeSolution, n: number) {
+  return {
+    kp: s.normalSlope,
+    ki: s.inducedDragFactor,
+    kd: s.porousDragSlope,
+    kt: s.normalSlope - s.normalSlope * s.normalSlope * s.inducedDragFactor - s.porousDragSlope,
+    cx: s.centreX,
+    cz: s.centreZ,
+    n,
+  };
+}
+
+/** The slopes on the finest lattice, with where its suction sits (edgeSuctionShares). */
+function coefficientsOn({ lattice, openness, solidShare, solution: s }: ReturnType<typeof surfaceSolution>) {
   const shares = edgeSuctionShares(lattice, s.gamma, openness, solidShare);
   const edgeX = new Float64Array(lattice.spanCount);
   const edgeZ = new Float64Array(lattice.spanCount);
@@ -97,19 +98,7 @@ function coefficientsOn(
     edgeX[strip] = lattice.boundX[strip * lattice.chordCount]!;
     edgeZ[strip] = lattice.boundZ[strip * lattice.chordCount]!;
   }
-  return {
-    shares,
-    stripEdgeZ: lattice.edgeZ,
-    edgeX,
-    edgeZ,
-    kp: s.normalSlope,
-    ki: s.inducedDragFactor,
-    kd: s.porousDragSlope,
-    kt: s.normalSlope - s.normalSlope * s.normalSlope * s.inducedDragFactor - s.porousDragSlope,
-    cx: s.centreX,
-    cz: s.centreZ,
-    n: lattice.panelCount,
-  };
+  return { ...slopesOf(s, lattice.panelCount), shares, stripEdgeZ: lattice.edgeZ, edgeX, edgeZ };
 }
 
 /** The observed order used in the index is capped at 1: porous rings converge at about first order
@@ -167,26 +156,24 @@ export function surfaceCoefficients(
 ): SurfaceCoefficients {
   const span = options.latticeSpanCount;
   const chord = options.latticeChordCount;
-  const fine = coefficientsOn(wheel, radii, options, rotationRatio, span, chord);
+  const fine = coefficientsOn(surfaceSolution(wheel, radii, options, rotationRatio, span, chord));
   let normalConv: ConvergenceEstimate | null = null;
   let suctionConv: ConvergenceEstimate | null = null;
   if (options.gridConvergence) {
-    const medium = coefficientsOn(
-      wheel,
-      radii,
-      options,
-      rotationRatio,
-      Math.max(4, Math.round(span / 1.5)),
-      Math.max(2, Math.round(chord / 1.5)),
-    );
-    const coarse = coefficientsOn(
-      wheel,
-      radii,
-      options,
-      rotationRatio,
-      Math.max(4, Math.round(span / 2.25)),
-      Math.max(2, Math.round(chord / 2.25)),
-    );
+    // The coarser lattices give their slopes only: where the suction sits is read on the finest.
+    const slopesOn = (factor: number) => {
+      const { lattice, solution } = surfaceSolution(
+        wheel,
+        radii,
+        options,
+        rotationRatio,
+        Math.max(4, Math.round(span / factor)),
+        Math.max(2, Math.round(chord / factor)),
+      );
+      return slopesOf(solution, lattice.panelCount);
+    };
+    const medium = slopesOn(1.5);
+    const coarse = slopesOn(2.25);
     const area = Math.PI * radii.outerRadiusM * radii.outerRadiusM;
     const h = [fine.n, medium.n, coarse.n].map((n) => Math.sqrt(area / n));
     normalConv = estimate(h, [fine.kp, medium.kp, coarse.kp]);

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { luFactor } from '../../../src/model/numeric/luFactor';
 import { luSolve } from '../../../src/model/numeric/luSolve';
+import { luWorkspace } from '../../../src/model/numeric/luWorkspace';
 import { matVec, norm2, seededMatrix, seededUniform } from './seeded';
 
 const EPS = Number.EPSILON;
@@ -216,5 +217,30 @@ describe('luFactor', () => {
     expect(() => luFactor(Float64Array.from([1, Number.NaN, 0, 1]), 2, new Int32Array(2))).toThrow(
       /singular|finite/,
     );
+  });
+
+  it("factorises luWorkspace's matrix where it lies to the bits of a copy's factors and pivots (tolerance 0)", () => {
+    for (const n of [16, 45, 97, 288]) {
+      const work = luWorkspace(n);
+      if (work === null) return; // no WebAssembly SIMD here: luFactor runs TypeScript on any array
+      const a = seededMatrix(n, 7 * n + 1, 0.5);
+      const copy = Float64Array.from(a);
+      const copyPivots = new Int32Array(n);
+      luFactor(copy, n, copyPivots);
+      work.set(a);
+      const pivots = new Int32Array(n);
+      luFactor(work, n, pivots);
+      expect(pivots).toEqual(copyPivots);
+      expect(Buffer.from(work.buffer, 0, 8 * n * n).equals(Buffer.from(copy.buffer))).toBe(true);
+      // And solves from there: the bits of the copy's solution.
+      const b = Float64Array.from({ length: n }, (_, i) => Math.sin(i + 1));
+      const x = luSolve(work, n, pivots, Float64Array.from(b));
+      expect(x).toEqual(luSolve(copy, n, copyPivots, Float64Array.from(b)));
+    }
+    expect(luWorkspace(8)).toBeNull(); // below the kernel's order luFactor keeps to TypeScript
+    const work = luWorkspace(20);
+    if (work === null) return;
+    const offset = new Float64Array(work.buffer, 8, 16 * 16);
+    expect(() => luFactor(offset, 16, new Int32Array(16))).toThrow(/luWorkspace/);
   });
 });
