@@ -10,16 +10,15 @@
 import { caseAirDensity } from '../compute/caseFile';
 import type { SweepProgress } from '../compute/engine/runCases';
 import type { WorkerPool } from '../compute/engine/workerPool';
-import { baselineInput, baselineStudy } from '../compute/study/baselineStudy';
 import { inputKey } from '../compute/study/inputKey';
 import { OutcomeCache } from '../compute/study/outcomeCache';
 import { type PageStudies, pageStudies } from '../compute/study/pageStudies';
 import { type RunStudiesOptions, runStudies, type StudiesOutcome } from '../compute/study/runStudies';
 import { isUnplanned, type StudyPlan } from '../compute/study/studyPlan';
 import type { AppState } from './appState';
-import { pinnedBaselines, referenceIndex } from './baselines/pinnedBaselines';
 import { scriptStartMs, workersReadyMs } from './earlyPool';
 import type { Messages } from './messages';
+import { computeKey, otherBaselineCurves } from './pageComputeKey';
 import type { OtherBaseline, PageResults } from './views/pageResults';
 import { byId } from './views/present';
 
@@ -28,55 +27,23 @@ type Phase = 'computing' | 'done' | 'error';
 /** What the kept solved designs may hold: about 20 states of the default page's studies. */
 const SOLVED_BUDGET_BYTES = 8e6;
 
+/** light: the headline and the plots only (not the map and tables); headlineOnly: the headline only;
+ * mapOnly: the design map and its table only (the rest is drawn from the same results). */
+export interface RenderOptions {
+  light?: boolean;
+  headlineOnly?: boolean;
+  mapOnly?: boolean;
+}
+
 /** What the computing needs of the page. */
 export interface ComputeHost {
   readonly state: AppState;
   readonly messages: Messages;
   /** The results on screen; each stage replaces them. */
   results: PageResults | null;
-  /** light: the headline and the plots only (not the map and tables); headlineOnly: the headline only. */
-  renderAll(opts?: { light?: boolean; headlineOnly?: boolean }): void;
+  renderAll(opts?: RenderOptions): void;
   /** A run's plots and map are drawn (or it was cancelled): the 3D view starts, or draws the new design. */
   firstNumbersShown(): void;
-}
-
-/** What a state's results depend on: a change elsewhere (units, tabs, map colours) only redraws. */
-export function computeKey(s: AppState): string {
-  const v = s.view;
-  return JSON.stringify([
-    s.case,
-    s.baseline,
-    s.baselines ?? null,
-    v.familyFractions,
-    v.coverPlotYawsDeg,
-    v.coverPlotSpeedsMps,
-    v.mapYawDeg,
-    v.mapMaxRimDepthM,
-  ]);
-}
-
-/** The yaw curves of the pinned baselines other than the reference (whose curve pageStudies plans). */
-function otherBaselineCurves(state: AppState): OtherBaseline[] {
-  const c = state.case;
-  const ref = referenceIndex(state);
-  return pinnedBaselines(state).flatMap((b, index) =>
-    index === ref
-      ? []
-      : [
-          {
-            index,
-            case: b,
-            plan: baselineStudy(
-              `yaw curves ${index + 1}`,
-              baselineInput(b, c),
-              c,
-              [c.conditions.airspeed_mps[0]!],
-              c.conditions.yaw_deg,
-            ),
-            curve: null,
-          },
-        ],
-  );
 }
 
 export class PageCompute {
@@ -264,13 +231,13 @@ export class PageCompute {
     const gci = gciStudy >= 0 ? s2.results[gciStudy]! : null;
     if (gci?.cube && gci.landed[0] === 1 && gci.errors[0] === null) r.current = gci.cube;
     if (s2.cancelled) return this.cancelled(r);
-    // Drawn now unless the map is kept from an earlier run: then the map stage draws everything at once.
-    if (!this.allKept(studies.map)) this.renderNow();
-    performance.mark('coversweep:plots');
 
-    // 3. The design map (the longer sweep).
+    // 3. The design map (the longer sweep), posted to the workers before the plots are drawn, so that
+    //    they solve it while this thread draws. The plots are drawn now unless the map is kept from an
+    //    earlier run: then the map stage draws everything at once.
     this.stage('map');
-    const s3 = await this.run([studies.map], {
+    const drawPlots = !this.allKept(studies.map);
+    const mapRun = this.run([studies.map], {
       signal: ac.signal,
       onProgress: (p) => {
         const left = Number.isFinite(p.remainingMs)
@@ -279,9 +246,18 @@ export class PageCompute {
         this.status(`Design map: ${p.casesDone}/${p.casesTotal} designs${left}`, p);
       },
     });
+    if (drawPlots) {
+      // The run's first jobs are posted by promise callbacks: a task later they are with the workers.
+      await new Promise((resolve) => setTimeout(resolve, 0));
+      if (superseded()) return;
+      this.renderNow();
+    }
+    performance.mark('coversweep:plots');
+    const s3 = await mapRun;
     if (superseded()) return;
     r.map = s3.results[0]!;
-    this.renderNow();
+    if (drawPlots) this.host.renderAll({ mapOnly: true });
+    else this.renderNow();
     performance.mark('coversweep:map');
     if (s3.cancelled) return this.cancelled(r);
     const failed = s2.failedCount + s3.failedCount;
