@@ -124,15 +124,12 @@ export class DataTable {
     // The rows already in the table are kept and only their changed texts set (a table redrawn with new
     // numbers in the same shape, as each stage of the page's computing does, builds no new elements).
     const rows = tbody.rows;
+    if (rows.length > 0 && rows[0]!.cells.length !== this.columns.length) tbody.replaceChildren();
     while (rows.length > last - first) rows[rows.length - 1]!.remove();
     const fragment = document.createDocumentFragment();
     for (let i = first; i < last; i++) {
       const r = this.rowAt(i);
       let tr: HTMLTableRowElement | undefined = rows[i - first];
-      if (tr && tr.cells.length !== this.columns.length) {
-        tr.remove();
-        tr = undefined;
-      }
       const fresh = !tr;
       if (!tr) tr = document.createElement('tr');
       this.columns.forEach((col, k) => {

@@ -188,11 +188,26 @@ export class PageCompute {
     const progress: Progress = { phase: 'current', sweeps: 0, map: 0 };
     let results: StudyResult[] = [];
     let t1 = Number.NaN;
+    const takeSweeps = (sofar: StudyResult[]) => {
+      const [family, cover, ...rest] = sofar.slice(firstSweep);
+      r.family = family!;
+      r.cover = cover!;
+      if (r.baseline) {
+        r.baseline.curve = rest[0]!;
+        r.baseline.cover = rest[1]!;
+        r.baseline.map = rest[2]!;
+      }
+      others.forEach((o, k) => {
+        o.curve = sofar[firstSweep + (b ? 5 : 2) + k]!;
+      });
+    };
     const whole = this.run(plans, {
       signal: ac.signal,
       stages,
       onStageDone: (k, sofar) => {
         results = sofar;
+        // The sweeps on screen as soon as they are in (at once when kept: the first plots show them).
+        if (k === 2 && !superseded()) takeSweeps(sofar);
         settle[k]![0]();
       },
       onProgress: (p) => showProgress(progress, sweeps, studies.map, p),
@@ -221,7 +236,10 @@ export class PageCompute {
     const cancelled = async () => {
       const out = await whole;
       if (superseded()) return;
-      if (r.current) r.map = out.results[mapStudy]!;
+      if (r.current) {
+        takeSweeps(out.results);
+        r.map = out.results[mapStudy]!;
+      }
       this.cancelled(r);
     };
 
@@ -240,17 +258,6 @@ export class PageCompute {
     await Promise.all([stages.includes(1) ? stageDone[1] : null, stageDone[2]]);
     if (superseded()) return;
     const t2 = performance.now();
-    const [family, cover, ...rest] = results.slice(firstSweep);
-    r.family = family!;
-    r.cover = cover!;
-    if (r.baseline) {
-      r.baseline.curve = rest[0]!;
-      r.baseline.cover = rest[1]!;
-      r.baseline.map = rest[2]!;
-    }
-    others.forEach((o, k) => {
-      o.curve = results[firstSweep + (b ? 5 : 2) + k]!;
-    });
     const gci = gciStudy >= 0 ? results[gciStudy]! : null;
     if (gci?.cube && gci.landed[0] === 1 && gci.errors[0] === null) r.current = gci.cube;
     if (ac.signal.aborted) return cancelled();
