@@ -128,6 +128,9 @@ async function main(): Promise<void> {
         const traceStart = await page.evaluate(() => performance.now());
         await edit(page, 'tyreWidthMm', run % 2 === 0 ? '26' : '24');
         const buffer = await browser.stopTracing();
+        const timings = JSON.parse(
+          (await page.evaluate(() => document.body.dataset.timings)) ?? '{}',
+        ) as Record<string, number>;
         const { traceEvents } = JSON.parse(buffer.toString('utf8')) as { traceEvents: TraceEvent[] };
         const names = new Map<string, string>();
         for (const e of traceEvents) {
@@ -214,6 +217,7 @@ async function main(): Promise<void> {
             bench: 'page-trace',
             run,
             traceStartMs: Math.round(traceStart),
+            mapStageMs: timings.mapMs,
             marksMs: Object.fromEntries(order.map(([k, v]) => [k, Math.round((v - t0) / 1000)])),
             total: { ms: Math.round((tEnd - t0) / 1000), threads: threadTimes(traceEvents, names, t0, tEnd) },
             stages,

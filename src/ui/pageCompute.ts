@@ -1,11 +1,12 @@
 /**
- * The page's computing: for each state, its studies (pageStudies) run on the worker pool in three
- * stages, cancellable and superseded by any newer state: the current design first without its
- * grid-convergence lattices (so its numbers show at once), then the family, the cover sweep, the
- * baseline and the current design with its uncertainty in one run, then the design map. Each stage's
- * results land in PageResults as named-axis cubes and the host redraws: the first numbers' headline at
- * once, their plots after the next frame. Performance marks (`coversweep:*`) time the first load for the
- * page bench.
+ * The page's computing: for each state, its studies (pageStudies) run on the worker pool in one run of
+ * four stages, dealt in order (runStudies' stages), cancellable and superseded by any newer state: the
+ * current design first without its grid-convergence lattices (so its numbers show at once), then with
+ * them (its uncertainty), then the family, the cover sweep and the baselines, then the design map. Each
+ * stage's results land in PageResults as named-axis cubes and the host redraws: the first numbers'
+ * headline at once, their plots after the next frame, the plots with the sweeps while the workers solve
+ * the map, and the map alone when it lands. Performance marks (`coversweep:*`) time the stages for the
+ * page bench and bench/pageTrace.ts.
  */
 import { caseAirDensity } from '../compute/caseFile';
 import type { WorkerPool } from '../compute/engine/workerPool';
