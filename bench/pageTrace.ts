@@ -8,11 +8,12 @@
  * A diagnostic, printed, never a timed test; like bench:page it serves a build (COVERSWEEP_PAGE_BENCH_DIST
  * or a fresh `vite build`) and needs /usr/bin/chromium.
  */
-import { type ChildProcess, execFileSync, spawn } from 'node:child_process';
-import { mkdtempSync, rmSync } from 'node:fs';
-import { loadavg, tmpdir } from 'node:os';
+import { spawn } from 'node:child_process';
+import { rmSync } from 'node:fs';
+import { loadavg } from 'node:os';
 import { join, resolve } from 'node:path';
 import { chromium, type Page } from 'playwright-core';
+import { pageBuild, waitForServer } from './previewServer';
 
 const ROOT = resolve(import.meta.dirname, '..');
 const CHROMIUM = '/usr/bin/chromium';
@@ -30,19 +31,6 @@ interface TraceEvent {
   tid: number;
   cat?: string;
   args?: { name?: string; data?: Record<string, unknown> };
-}
-
-async function waitForServer(url: string, child: ChildProcess): Promise<void> {
-  for (let i = 0; i < 300; i++) {
-    if (child.exitCode !== null) throw new Error('vite preview exited early');
-    try {
-      if ((await fetch(url)).ok) return;
-    } catch {
-      // not up yet
-    }
-    await new Promise((ok) => setTimeout(ok, 100));
-  }
-  throw new Error(`vite preview did not answer at ${url}`);
 }
 
 async function edit(page: Page, field: string, value: string): Promise<void> {
@@ -88,18 +76,7 @@ function threadTimes(events: TraceEvent[], names: Map<string, string>, t0: numbe
 }
 
 async function main(): Promise<void> {
-  const given = process.env.COVERSWEEP_PAGE_BENCH_DIST;
-  const dist = given ? resolve(given) : mkdtempSync(join(tmpdir(), 'coversweep-page-trace-'));
-  if (!given) {
-    execFileSync(
-      process.execPath,
-      [VITE, 'build', '--outDir', dist, '--emptyOutDir', '--logLevel', 'error'],
-      {
-        cwd: ROOT,
-        stdio: 'inherit',
-      },
-    );
-  }
+  const { dist, given } = pageBuild('coversweep-page-trace-');
   const server = spawn(
     process.execPath,
     [VITE, 'preview', '--outDir', dist, '--host', '127.0.0.1', '--port', String(PORT), '--strictPort'],
