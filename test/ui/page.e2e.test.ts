@@ -37,24 +37,20 @@ interface Inspect {
 
 /**
  * In the page, the moment its body's data-stage is the sweeps or the design map while it computes (a
- * mutation observer: polling can miss a short stage on a loaded machine), crash a sweep worker (the
- * page's test hook) or press Cancel. Resolves with true once done, or with the state and stage the run
- * ended in first.
+ * mutation observer: polling can miss a short stage on a loaded machine), press Cancel. Resolves with
+ * true once pressed, or with the state and stage the run ended in first.
  */
-function atSweepsOrMap(page: Page, act: 'crash' | 'cancel'): Promise<boolean | string> {
+function cancelAtSweepsOrMap(page: Page): Promise<boolean | string> {
   return page.evaluate(
-    (what) =>
+    () =>
       new Promise<boolean | string>((resolve) => {
         const body = document.body;
         const check = () => {
           const stage = body.dataset.stage ?? '';
           if (body.dataset.state === 'computing' && (stage === 'sweeps' || stage === 'map')) {
             observer.disconnect();
-            if (what === 'crash') resolve((window as unknown as Inspect).coversweep.crashWorker());
-            else {
-              document.getElementById('cancel')!.click();
-              resolve(true);
-            }
+            document.getElementById('cancel')!.click();
+            resolve(true);
           } else if (body.dataset.state === 'done' || body.dataset.state === 'error') {
             observer.disconnect();
             resolve(`${body.dataset.state} ${stage}`);
@@ -64,7 +60,6 @@ function atSweepsOrMap(page: Page, act: 'crash' | 'cancel'): Promise<boolean | s
         observer.observe(body, { attributes: true, attributeFilter: ['data-state', 'data-stage'] });
         check();
       }),
-    act,
   );
 }
 
@@ -516,14 +511,29 @@ describe.skipIf(!haveBrowser && !requireBrowser)('web page in headless Chromium'
   it('finishes the design map with the same numbers when a worker crashes mid-sweep; Cancel keeps finished results', async () => {
     expect(undisturbedMap.length).toBe(66);
     const context = await browser.newContext({ viewport: { width: 1280, height: 800 } });
-    const page = await open(context);
     // A sweep worker dies while the sweeps and the design map run (the page's test hook, as a real crash
     // would). The map's jobs follow the sweeps' in one run, so the crash lands on the map's jobs or on
-    // jobs before them. The crash is made by a mutation observer the moment the stage starts: polling
-    // could miss the stages on a loaded machine (once the map stage alone was long enough to poll for).
-    const crashed = await atSweepsOrMap(page, 'crash');
-    expect(crashed, 'the sweeps and the map ended before a worker could be crashed').toBe(true);
+    // jobs before them. A mutation observer set before the page loads makes the crash the moment the
+    // sweeps start: polling could miss the stages on a loaded machine (once the map stage alone was long
+    // enough to poll for), and on a quiet one the first load may be done before the page's load event.
+    await context.addInitScript(() => {
+      const w = window as unknown as Inspect & { __crashed?: boolean };
+      const watch = () => {
+        const observer = new MutationObserver(() => {
+          const stage = document.body.dataset.stage ?? '';
+          if (document.body.dataset.state !== 'computing' || !(stage === 'sweeps' || stage === 'map')) return;
+          observer.disconnect();
+          w.__crashed = w.coversweep.crashWorker();
+        });
+        observer.observe(document.body, { attributes: true, attributeFilter: ['data-state', 'data-stage'] });
+      };
+      if (document.body) watch();
+      else document.addEventListener('DOMContentLoaded', watch);
+    });
+    const page = await open(context);
     expect(await settled(page)).toBe('done');
+    const crashed = await page.evaluate(() => (window as unknown as { __crashed?: boolean }).__crashed);
+    expect(crashed, 'the sweeps and the map ended before a worker could be crashed').toBe(true);
     expect(await page.locator('#status-text').textContent()).toMatch(/^Done in/);
     expect(await column(page, 'table-map', 'Axial drag')).toEqual(undisturbedMap);
 
@@ -533,7 +543,7 @@ describe.skipIf(!haveBrowser && !requireBrowser)('web page in headless Chromium'
     expect(
       await page.evaluate(() => (window as unknown as Inspect).coversweep.state().case.wheel.tyre_width_m),
     ).toBe(0.026);
-    const cancelled = await atSweepsOrMap(page, 'cancel');
+    const cancelled = await cancelAtSweepsOrMap(page);
     expect(cancelled, 'the sweeps and the map ended before Cancel could be pressed').toBe(true);
     expect(await settled(page)).toBe('done');
     expect(await page.locator('#status-text').textContent()).toContain('Cancelled');
