@@ -26,14 +26,15 @@
  * sitting. Needs /usr/bin/chromium (apt-get install -y chromium); says so and exits 0 when it is missing,
  * like the browser tests.
  */
-import { type ChildProcess, execFileSync, spawn } from 'node:child_process';
-import { existsSync, mkdtempSync, rmSync } from 'node:fs';
+import { spawn } from 'node:child_process';
+import { existsSync, rmSync } from 'node:fs';
 import { createServer } from 'node:net';
-import { availableParallelism, cpus, loadavg, tmpdir } from 'node:os';
+import { availableParallelism, cpus, loadavg } from 'node:os';
 import { join, resolve } from 'node:path';
 import { chromium, type Page } from 'playwright-core';
 import { collectGarbageEverywhere, pageRenderers, samplePageRenderer, treePssBytes } from './pageMemory';
 import { processCpuMs, treeCpuMs, waitQuiet } from './pageSettle';
+import { pageBuild, waitForServer } from './previewServer';
 import { median } from './timing';
 
 const ROOT = resolve(import.meta.dirname, '..');
@@ -58,19 +59,6 @@ function freePort(): Promise<number> {
       srv.close(() => ok(port));
     });
   });
-}
-
-async function waitForServer(url: string, child: ChildProcess): Promise<void> {
-  for (let i = 0; i < 300; i++) {
-    if (child.exitCode !== null) throw new Error('vite preview exited early');
-    try {
-      if ((await fetch(url)).ok) return;
-    } catch {
-      // not up yet
-    }
-    await new Promise((ok) => setTimeout(ok, 100));
-  }
-  throw new Error(`vite preview did not answer at ${url}`);
 }
 
 /** Marks the page's own timeline: each data-state/data-stage change and the Enter key that commits an edit. */
@@ -171,18 +159,7 @@ async function main(): Promise<void> {
     return;
   }
   // COVERSWEEP_PAGE_BENCH_DIST: serve a page built elsewhere (another commit's `vite build`) instead.
-  const given = process.env.COVERSWEEP_PAGE_BENCH_DIST;
-  const dist = given ? resolve(given) : mkdtempSync(join(tmpdir(), 'coversweep-page-bench-'));
-  if (!given) {
-    execFileSync(
-      process.execPath,
-      [VITE, 'build', '--outDir', dist, '--emptyOutDir', '--logLevel', 'error'],
-      {
-        cwd: ROOT,
-        stdio: 'inherit',
-      },
-    );
-  }
+  const { dist, given } = pageBuild('coversweep-page-bench-');
   const port = await freePort();
   const server = spawn(
     process.execPath,

@@ -8,7 +8,6 @@
  */
 import { validateCase } from '../compute/caseFile';
 import type { WorkerPool } from '../compute/engine/workerPool';
-import { FLAG_MESSAGES } from '../compute/study/modelResults';
 import { type AppState, nameErrors } from './appState';
 import { pinCurrent } from './baselines/pinnedBaselines';
 import { Controls } from './controls';
@@ -26,7 +25,7 @@ import { LinePlot } from './linePlot';
 import { Messages } from './messages';
 import { onlyDataChanged } from './onlyDataChanged';
 import { type ActionsHost, wirePageActions } from './pageActions';
-import { type ComputeHost, PageCompute } from './pageCompute';
+import { type ComputeHost, PageCompute, type RenderOptions } from './pageCompute';
 import { PageStore } from './pageStore';
 import { showTabPanel, wireTabs } from './pageTabs';
 import type { ReportHost, ReportPlotName } from './report/reportTypes';
@@ -40,11 +39,12 @@ import { type TabId, type ViewState, validateView } from './viewState';
 import { renderBaselineList } from './views/baselineList';
 import { renderCoverPlot } from './views/coverPlot';
 import { wireFigureActions } from './views/figureActions';
+import { renderFlags } from './views/flagsMessage';
 import { renderHeadline } from './views/headline';
 import { MapPick } from './views/mapPick';
 import { MapRide } from './views/mapRide';
 import { renderMap } from './views/mapView';
-import { allPoints, type PageResults } from './views/pageResults';
+import type { PageResults } from './views/pageResults';
 import { PageTables } from './views/pageTables';
 import { byId, plotDiv, presentOf } from './views/present';
 import { renderYawPlots } from './views/yawPlots';
@@ -267,11 +267,18 @@ export class App implements ComputeHost, ActionsHost, StudyHost, ReportHost {
     this.view3dGlue.firstNumbersShown();
   }
 
-  renderAll(opts: { light?: boolean; headlineOnly?: boolean } = {}): void {
+  renderAll(opts: RenderOptions = {}): void {
     const r = this.results;
     if (!r?.current) return;
     const ctx = presentOf(this.state, r);
-    this.renderFlags(r);
+    if (opts.mapOnly) {
+      // The map landed on results whose headline, plots and other tables are drawn: the map's parts only.
+      this.mapRide.update(this.state);
+      renderMap(this.designMap, ctx, r);
+      this.tables?.renderMap(ctx, r);
+      return;
+    }
+    renderFlags(this.messages, r);
     renderHeadline(byId('headline'), ctx, r);
     if (opts.headlineOnly) return;
     const yawNotes = renderYawPlots(this.plots, ctx, r, this.dataGlue.overlaySource());
@@ -288,21 +295,6 @@ export class App implements ComputeHost, ActionsHost, StudyHost, ReportHost {
       );
     }
     byId('plot-notes').textContent = notes.join(' ');
-  }
-
-  private renderFlags(r: PageResults): void {
-    const flags = new Set<string>();
-    for (const p of allPoints(r)) for (const f of p.flags) flags.add(f);
-    if (flags.size === 0) {
-      this.messages.clear('flags');
-      return;
-    }
-    this.messages.show(
-      'warning',
-      'Some points of this design are outside the model’s validity range (flagged in the tables):',
-      [...flags].map((f) => FLAG_MESSAGES[f] ?? f),
-      'flags',
-    );
   }
 
   // -------------------------------------------------------------------------------------------

@@ -21,13 +21,34 @@ const DIVERGING: Rgb[] = [
   [168, 44, 40],
 ];
 
-function ramp(stops: Rgb[], t: number): Rgb {
+/** Where the last located `t` fell: the lower stop's index and the fraction towards the next stop. */
+let stopIndex = 0;
+let stopFraction = 0;
+
+/** Locate `t` (0..1, clamped; NaN: the middle) between the stops (into stopIndex, stopFraction). */
+function locate(stops: Rgb[], t: number): void {
   const x = (Number.isFinite(t) ? Math.min(1, Math.max(0, t)) : 0.5) * (stops.length - 1);
-  const k = Math.min(stops.length - 2, Math.floor(x));
-  const f = x - k;
-  const a = stops[k]!;
-  const b = stops[k + 1]!;
+  stopIndex = Math.min(stops.length - 2, Math.floor(x));
+  stopFraction = x - stopIndex;
+}
+
+function ramp(stops: Rgb[], t: number): Rgb {
+  locate(stops, t);
+  const a = stops[stopIndex]!;
+  const b = stops[stopIndex + 1]!;
+  const f = stopFraction;
   return [a[0] + (b[0] - a[0]) * f, a[1] + (b[1] - a[1]) * f, a[2] + (b[2] - a[2]) * f];
+}
+
+/** ramp() written into out[o..o+2] (the same arithmetic, without an array per call). */
+function rampInto(stops: Rgb[], t: number, out: Uint8ClampedArray, o: number): void {
+  locate(stops, t);
+  const a = stops[stopIndex]!;
+  const b = stops[stopIndex + 1]!;
+  const f = stopFraction;
+  out[o] = a[0] + (b[0] - a[0]) * f;
+  out[o + 1] = a[1] + (b[1] - a[1]) * f;
+  out[o + 2] = a[2] + (b[2] - a[2]) * f;
 }
 
 export interface ColourScale {
@@ -35,6 +56,8 @@ export interface ColourScale {
   hi: number;
   diverging: boolean;
   rgb(value: number): Rgb;
+  /** rgb(value) written into a pixel buffer at `offset` (the map's image: no array per pixel). */
+  rgbInto(value: number, out: Uint8ClampedArray, offset: number): void;
 }
 
 /** A scale over [lo, hi]; a diverging scale is made symmetric about zero. */
@@ -53,6 +76,7 @@ export function colourScale(lo: number, hi: number, diverging: boolean): ColourS
     hi,
     diverging,
     rgb: (v) => ramp(diverging ? DIVERGING : SEQUENTIAL, (v - lo) / (hi - lo)),
+    rgbInto: (v, out, o) => rampInto(diverging ? DIVERGING : SEQUENTIAL, (v - lo) / (hi - lo), out, o),
   };
 }
 

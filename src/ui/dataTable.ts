@@ -40,6 +40,8 @@ export class DataTable {
   private sortColumn = -1;
   private sortAscending = true;
   private page = 0;
+  /** The columns and sort the header row shows. */
+  private headKey = '';
 
   constructor(
     container: HTMLElement,
@@ -114,8 +116,48 @@ export class DataTable {
   }
 
   private draw(): void {
-    const thead = this.element.tHead!;
+    this.drawHead();
     const tbody = this.element.tBodies[0]!;
+    const n = this.source.count;
+    const first = this.page * PAGE_ROWS;
+    const last = Math.min(n, first + PAGE_ROWS);
+    // The rows already in the table are kept and only their changed texts set (a table redrawn with new
+    // numbers in the same shape, as each stage of the page's computing does, builds no new elements).
+    const rows = tbody.rows;
+    if (rows.length > 0 && rows[0]!.cells.length !== this.columns.length) tbody.replaceChildren();
+    while (rows.length > last - first) rows[rows.length - 1]!.remove();
+    const fragment = document.createDocumentFragment();
+    for (let i = first; i < last; i++) {
+      const r = this.rowAt(i);
+      let tr: HTMLTableRowElement | undefined = rows[i - first];
+      const fresh = !tr;
+      if (!tr) tr = document.createElement('tr');
+      this.columns.forEach((col, k) => {
+        const cell = this.source.cell(r, k);
+        let td = tr.cells[k];
+        if (!td) {
+          td = document.createElement(k === 0 ? 'th' : 'td');
+          if (k === 0) (td as HTMLTableCellElement).scope = 'row';
+          tr.append(td);
+        }
+        const text =
+          typeof cell === 'number' ? fixed(cell, col.decimals ?? 3) : cell === null ? '—' : String(cell);
+        if (td.textContent !== text) td.textContent = text;
+        const className = typeof cell === 'number' ? 'num' : '';
+        if (td.className !== className) td.className = className;
+      });
+      if (fresh) fragment.append(tr);
+    }
+    tbody.append(fragment);
+    this.drawPager(first, last, n);
+  }
+
+  /** The header row: built again only when the columns or the sort changed. */
+  private drawHead(): void {
+    const thead = this.element.tHead!;
+    const key = JSON.stringify([this.columns.map((c) => c.header), this.sortColumn, this.sortAscending]);
+    if (key === this.headKey && thead.rows.length > 0) return;
+    this.headKey = key;
     const headRow = document.createElement('tr');
     this.columns.forEach((col, k) => {
       const th = document.createElement('th');
@@ -142,26 +184,6 @@ export class DataTable {
       headRow.append(th);
     });
     thead.replaceChildren(headRow);
-    const n = this.source.count;
-    const first = this.page * PAGE_ROWS;
-    const last = Math.min(n, first + PAGE_ROWS);
-    const fragment = document.createDocumentFragment();
-    for (let i = first; i < last; i++) {
-      const r = this.rowAt(i);
-      const tr = document.createElement('tr');
-      this.columns.forEach((col, k) => {
-        const cell = this.source.cell(r, k);
-        const td = document.createElement(k === 0 ? 'th' : 'td');
-        if (k === 0) (td as HTMLTableCellElement).scope = 'row';
-        td.textContent =
-          typeof cell === 'number' ? fixed(cell, col.decimals ?? 3) : cell === null ? '—' : String(cell);
-        if (typeof cell === 'number') td.className = 'num';
-        tr.append(td);
-      });
-      fragment.append(tr);
-    }
-    tbody.replaceChildren(fragment);
-    this.drawPager(first, last, n);
   }
 
   private drawPager(first: number, last: number, n: number): void {

@@ -47,6 +47,8 @@ export class DesignMap {
   private readonly observer: ResizeObserver;
   /** The plot area of the last drawing (CSS pixels), for turning a click into a grid cell. */
   private box: { left: number; top: number; pw: number; ph: number } | null = null;
+  /** The container's width (CSS pixels) when the resize observer last looked; null before it has. */
+  private observedWidth: number | null = null;
 
   /** `pixelRatio`: canvas pixels per CSS pixel (default: the screen's; the printable report asks for more). */
   constructor(
@@ -57,7 +59,12 @@ export class DesignMap {
     this.canvas.setAttribute('role', 'img');
     this.canvas.className = 'map-canvas';
     container.append(this.canvas);
-    this.observer = new ResizeObserver(() => this.draw());
+    // The container's width is read here, where the layout is fresh, and kept: a drawing for new numbers
+    // then forces no layout of the page (reading it in draw did, each time the page had just changed).
+    this.observer = new ResizeObserver(() => {
+      this.observedWidth = this.container.clientWidth;
+      this.draw();
+    });
     this.observer.observe(container);
   }
 
@@ -76,7 +83,7 @@ export class DesignMap {
   }
 
   draw(): void {
-    const width = Math.max(320, Math.floor(this.container.clientWidth));
+    const width = Math.max(320, Math.floor(this.observedWidth ?? this.container.clientWidth));
     const height = Math.max(260, Math.min(480, Math.round(width * 0.8)));
     const dpr = this.pixelRatio ?? (window.devicePixelRatio || 1);
     this.canvas.width = Math.round(width * dpr);
@@ -126,29 +133,31 @@ export class DesignMap {
     const iw = Math.max(1, Math.round(pw * dpr));
     const ih = Math.max(1, Math.round(ph * dpr));
     const image = ctx.createImageData(iw, ih);
+    // Each column's grid cell and fraction, found once for every row.
+    const cellOf = new Int32Array(iw);
+    const fxOf = new Float64Array(iw);
+    for (let c = 0; c < iw; c++) {
+      const gx = ((c + 0.5) / iw) * (nx - 1);
+      cellOf[c] = Math.min(nx - 2, Math.floor(gx));
+      fxOf[c] = gx - cellOf[c]!;
+    }
+    const pixels = image.data;
     for (let r = 0; r < ih; r++) {
       const gy = (1 - (r + 0.5) / ih) * (ny - 1);
       const j = Math.min(ny - 2, Math.floor(gy));
       const fy = gy - j;
       for (let c = 0; c < iw; c++) {
-        const gx = ((c + 0.5) / iw) * (nx - 1);
-        const i = Math.min(nx - 2, Math.floor(gx));
-        const fx = gx - i;
+        const i = cellOf[c]!;
+        const fx = fxOf[c]!;
         const a = d.colour[j * nx + i]!;
         const b = d.colour[j * nx + i + 1]!;
         const cc = d.colour[(j + 1) * nx + i + 1]!;
         const dd = d.colour[(j + 1) * nx + i]!;
         const v = (a * (1 - fx) + b * fx) * (1 - fy) + (dd * (1 - fx) + cc * fx) * fy;
         const o = (r * iw + c) * 4;
-        if (Number.isFinite(v)) {
-          const rgb = scale.rgb(v);
-          image.data[o] = rgb[0];
-          image.data[o + 1] = rgb[1];
-          image.data[o + 2] = rgb[2];
-        } else {
-          image.data[o] = image.data[o + 1] = image.data[o + 2] = 200;
-        }
-        image.data[o + 3] = 255;
+        if (Number.isFinite(v)) scale.rgbInto(v, pixels, o);
+        else pixels[o] = pixels[o + 1] = pixels[o + 2] = 200;
+        pixels[o + 3] = 255;
       }
     }
     ctx.putImageData(image, Math.round(left * dpr), Math.round(top * dpr));

@@ -54,6 +54,24 @@ export interface PlotSpec {
 const BEYOND_FILL = 'rgba(120, 120, 120, 0.13)';
 const BEYOND_HATCH = 'rgba(90, 90, 90, 0.22)';
 
+/** The ranges of a yaw axis beyond the trusted yaw (shaded), none for another axis. */
+function beyondOf(spec: PlotSpec): Array<[number, number]> {
+  const finiteXs = spec.xs.filter(Number.isFinite);
+  return spec.xIsYawDeg && finiteXs.length > 0
+    ? beyondYawIntervals(Math.min(...finiteXs), Math.max(...finiteXs))
+    : [];
+}
+
+/**
+ * What a plot built from `spec` depends on besides its numbers (the x values, the series' values and
+ * the marker lines, which the draw hook reads from the spec drawn): axes, series styles, bands, the
+ * shaded yaw ranges and whether points are marked (by the count of x values).
+ */
+function shapeOf(spec: PlotSpec): string {
+  const { title: _t, xs, series, markerX: _m, markersX: _ms, ...axes } = spec;
+  return JSON.stringify([axes, xs.length, series.map(({ values: _v, ...style }) => style), beyondOf(spec)]);
+}
+
 const AXIS_FONT = '11px system-ui, -apple-system, "Segoe UI", sans-serif';
 const LABEL_FONT = '12px system-ui, -apple-system, "Segoe UI", sans-serif';
 
@@ -65,6 +83,8 @@ export class LinePlot {
   private lastWidth = 0;
   /** The spec drawn last, as text: a render of the same spec at the same width keeps the plot. */
   private drawnSpec = '';
+  /** The drawn spec without its numbers (shapeOf): a spec of the same shape only sets the plot's data. */
+  private drawnShape = '';
   /** The note under the plot when part of its yaw range is beyond the trusted range (also in PNGs). */
   private beyondNote: string | null = null;
 
@@ -102,13 +122,20 @@ export class LinePlot {
     // The page redraws every figure at the end of a run; a plot whose numbers did not change (e.g. the
     // yaw plots when the design map lands) is kept instead of built again (40-70 ms of uPlot per redraw).
     const text = JSON.stringify(spec);
-    if (this.plot && text === this.drawnSpec && this.width() === this.lastWidth) return;
+    const sameWidth = this.plot !== null && this.width() === this.lastWidth;
+    if (sameWidth && text === this.drawnSpec) return;
     this.drawnSpec = text;
     this.spec = spec;
     this.container.setAttribute(
       'aria-label',
       `${spec.title}: ${spec.series.map((s) => s.label).join(', ')} against ${spec.xLabel}. The numbers are in the matching table.`,
     );
+    // Only the numbers changed (a new design's curves on the same axes and series): uPlot draws the new
+    // data into the plot it has (scales found again as a new plot would) instead of building one.
+    if (sameWidth && shapeOf(spec) === this.drawnShape) {
+      this.plot!.setData([spec.xs, ...spec.series.map((s) => s.values)]);
+      return;
+    }
     this.build();
   }
 
@@ -119,6 +146,7 @@ export class LinePlot {
     if (w <= 0) return;
     this.plot?.destroy();
     this.lastWidth = w;
+    this.drawnShape = shapeOf(spec);
     const hasY2 = spec.series.some((s) => s.scale === 'y2');
     const axisCommon = {
       font: AXIS_FONT,
@@ -147,12 +175,7 @@ export class LinePlot {
         size: 58,
       });
     }
-    const markerX = spec.markerX;
-    const finiteXs = spec.xs.filter(Number.isFinite);
-    const beyond =
-      spec.xIsYawDeg && finiteXs.length > 0
-        ? beyondYawIntervals(Math.min(...finiteXs), Math.max(...finiteXs))
-        : [];
+    const beyond = beyondOf(spec);
     const opts: uPlot.Options = {
       width: w,
       height: this.height,
@@ -197,10 +220,13 @@ export class LinePlot {
         ],
         draw: [
           (u: uPlot) => {
+            // The spec of the numbers drawn (render may have set new data into this plot).
+            const drawn = this.spec ?? spec;
+            const markerX = drawn.markerX;
             const lines: Array<[number, string, number[]]> = [];
             if (markerX !== undefined && markerX !== null)
               lines.push([markerX, 'rgba(20, 20, 20, 0.55)', [4, 4]]);
-            for (const x of spec.markersX?.xs ?? []) lines.push([x, spec.markersX!.colour, [2, 3]]);
+            for (const x of drawn.markersX?.xs ?? []) lines.push([x, drawn.markersX!.colour, [2, 3]]);
             if (lines.length === 0) return;
             const ctx = u.ctx;
             ctx.save();

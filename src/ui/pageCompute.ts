@@ -1,25 +1,30 @@
 /**
- * The page's computing: for each state, its studies (pageStudies) run on the worker pool in three
- * stages, cancellable and superseded by any newer state: the current design first without its
- * grid-convergence lattices (so its numbers show at once), then the family, the cover sweep, the
- * baseline and the current design with its uncertainty in one run, then the design map. Each stage's
- * results land in PageResults as named-axis cubes and the host redraws: the first numbers' headline at
- * once, their plots after the next frame. Performance marks (`coversweep:*`) time the first load for the
- * page bench.
+ * The page's computing: for each state, its studies (pageStudies) run on the worker pool in one run of
+ * four stages, dealt in order (runStudies' stages), cancellable and superseded by any newer state: the
+ * current design first without its grid-convergence lattices (so its numbers show at once), then with
+ * them (its uncertainty), then the family, the cover sweep and the baselines, then the design map. Each
+ * stage's results land in PageResults as named-axis cubes and the host redraws: the first numbers'
+ * headline at once, their plots after the next frame, the plots with the sweeps while the workers solve
+ * the map, and the map alone when it lands. Performance marks (`coversweep:*`) time the stages for the
+ * page bench and bench/pageTrace.ts.
  */
 import { caseAirDensity } from '../compute/caseFile';
-import type { SweepProgress } from '../compute/engine/runCases';
 import type { WorkerPool } from '../compute/engine/workerPool';
-import { baselineInput, baselineStudy } from '../compute/study/baselineStudy';
 import { inputKey } from '../compute/study/inputKey';
 import { OutcomeCache } from '../compute/study/outcomeCache';
 import { type PageStudies, pageStudies } from '../compute/study/pageStudies';
-import { type RunStudiesOptions, runStudies, type StudiesOutcome } from '../compute/study/runStudies';
+import {
+  type RunStudiesOptions,
+  runStudies,
+  type StudiesOutcome,
+  type StudyResult,
+} from '../compute/study/runStudies';
 import { isUnplanned, type StudyPlan } from '../compute/study/studyPlan';
 import type { AppState } from './appState';
-import { pinnedBaselines, referenceIndex } from './baselines/pinnedBaselines';
 import { scriptStartMs, workersReadyMs } from './earlyPool';
 import type { Messages } from './messages';
+import { computeKey, otherBaselineCurves } from './pageComputeKey';
+import { type Progress, showProgress, showStatus } from './pageStatus';
 import type { OtherBaseline, PageResults } from './views/pageResults';
 import { byId } from './views/present';
 
@@ -28,55 +33,23 @@ type Phase = 'computing' | 'done' | 'error';
 /** What the kept solved designs may hold: about 20 states of the default page's studies. */
 const SOLVED_BUDGET_BYTES = 8e6;
 
+/** light: the headline and the plots only (not the map and tables); headlineOnly: the headline only;
+ * mapOnly: the design map and its table only (the rest is drawn from the same results). */
+export interface RenderOptions {
+  light?: boolean;
+  headlineOnly?: boolean;
+  mapOnly?: boolean;
+}
+
 /** What the computing needs of the page. */
 export interface ComputeHost {
   readonly state: AppState;
   readonly messages: Messages;
   /** The results on screen; each stage replaces them. */
   results: PageResults | null;
-  /** light: the headline and the plots only (not the map and tables); headlineOnly: the headline only. */
-  renderAll(opts?: { light?: boolean; headlineOnly?: boolean }): void;
+  renderAll(opts?: RenderOptions): void;
   /** A run's plots and map are drawn (or it was cancelled): the 3D view starts, or draws the new design. */
   firstNumbersShown(): void;
-}
-
-/** What a state's results depend on: a change elsewhere (units, tabs, map colours) only redraws. */
-export function computeKey(s: AppState): string {
-  const v = s.view;
-  return JSON.stringify([
-    s.case,
-    s.baseline,
-    s.baselines ?? null,
-    v.familyFractions,
-    v.coverPlotYawsDeg,
-    v.coverPlotSpeedsMps,
-    v.mapYawDeg,
-    v.mapMaxRimDepthM,
-  ]);
-}
-
-/** The yaw curves of the pinned baselines other than the reference (whose curve pageStudies plans). */
-function otherBaselineCurves(state: AppState): OtherBaseline[] {
-  const c = state.case;
-  const ref = referenceIndex(state);
-  return pinnedBaselines(state).flatMap((b, index) =>
-    index === ref
-      ? []
-      : [
-          {
-            index,
-            case: b,
-            plan: baselineStudy(
-              `yaw curves ${index + 1}`,
-              baselineInput(b, c),
-              c,
-              [c.conditions.airspeed_mps[0]!],
-              c.conditions.yaw_deg,
-            ),
-            curve: null,
-          },
-        ],
-  );
 }
 
 export class PageCompute {
@@ -132,20 +105,6 @@ export class PageCompute {
     }, delayMs);
   }
 
-  private status(text: string, progress: SweepProgress | null = null): void {
-    byId('status-text').textContent = text;
-    const bar = byId<HTMLProgressElement>('progress');
-    const cancel = byId('cancel');
-    if (progress) {
-      bar.hidden = false;
-      bar.max = Math.max(1, progress.pointsTotal);
-      bar.value = progress.pointsDone;
-      cancel.hidden = false;
-    } else {
-      bar.hidden = true;
-    }
-  }
-
   /**
    * runStudies on the pool, one run at a time: WorkerPool.run is not re-entrant (a cancelled run
    * terminates its busy workers, which a second run may already be waiting on), so each run waits
@@ -196,101 +155,132 @@ export class PageCompute {
     };
     const superseded = () => this.abort !== ac;
     byId('cancel').hidden = false;
-    this.status('Solving the current design…');
+    showStatus('Solving the current design…');
     this.stage('current');
     const started = performance.now();
     performance.mark('coversweep:compute');
 
-    // The studies of stage 2 (below), planned now: when all but the current design are kept from an
-    // earlier run, the current design's grid-convergence solve joins stage 1 on the other worker.
+    // One run deals every study's jobs, stage by stage: 0. the current design exactly as its case file
+    // says but without the grid-convergence lattices (the same values, about half the cost), shown as
+    // soon as it lands; 1. the current design with them (its uncertainty); 2. the family, drag vs cover
+    // and the baselines (cases of one surface share their factorisation); 3. the design map. A worker
+    // done with one stage's jobs takes the next stage's, so neither waits for the other's last job, and
+    // the map is solved while this thread draws the plots.
     const b = studies.baseline;
-    const plans: StudyPlan[] = [studies.family, studies.cover];
-    if (b) plans.push(b.curve, b.cover, b.map);
-    const firstOther = plans.length;
-    plans.push(...others.map((o) => o.plan));
-    const early = studies.quick !== null && plans.every((p) => this.allKept(p));
-    if (studies.quick) plans.push(studies.current);
-    const gciStudy = studies.quick ? plans.length - 1 : -1;
-
-    // 1. The current design, exactly as its case file says, but first without the grid-convergence
-    //    lattices (the same values, about half the cost): its numbers show as soon as they land; the
-    //    uncertainty estimate follows (with stage 2, or beside this one when the rest is kept).
+    const sweeps: StudyPlan[] = [studies.family, studies.cover];
+    if (b) sweeps.push(b.curve, b.cover, b.map);
+    sweeps.push(...others.map((o) => o.plan));
+    const plans = [studies.quick ?? studies.current, ...(studies.quick ? [studies.current] : [])];
+    const gciStudy = studies.quick ? 1 : -1;
+    const firstSweep = plans.length;
+    plans.push(...sweeps, studies.map);
+    const mapStudy = plans.length - 1;
+    const stages = plans.map((_, k) => (k === 0 ? 0 : k === gciStudy ? 1 : k === mapStudy ? 3 : 2));
+    const settle: Array<[() => void, (error: unknown) => void]> = [];
+    const stageDone = [0, 1, 2, 3].map((k) => {
+      const p = new Promise<void>((resolve, reject) => {
+        settle[k] = [resolve, reject];
+      });
+      p.catch(() => undefined); // a stage not waited for must not be an unhandled rejection
+      return p;
+    });
+    // Drawn when the sweeps land unless the map is kept from an earlier run: then all at once with it.
+    const drawPlots = !this.allKept(studies.map);
+    const progress: Progress = { phase: 'current', sweeps: 0, map: 0 };
+    let results: StudyResult[] = [];
     let t1 = Number.NaN;
-    const s1 = await this.run(
-      early ? [studies.quick!, studies.current] : [studies.quick ?? studies.current],
-      {
-        signal: ac.signal,
-        onCase: (landed) => {
-          if (landed.study !== 0 || !landed.cube || superseded()) return;
-          r.current = landed.cube;
-          t1 = this.showFirst(r);
-        },
-      },
-    );
-    if (superseded()) return;
-    if (s1.cancelled) return this.cancelled(r);
-    const first = s1.results[0]!;
-    if (first.errors[0] !== null || first.landed[0] !== 1) {
-      this.fail(`The model could not solve this design: ${first.errors[0] ?? 'unknown error'}`);
-      return;
-    }
-
-    // 2. The current design with its grid-convergence estimate, the family, drag vs cover and the
-    //    baseline, in one run (cases of one surface share their factorisation).
-    this.stage('sweeps');
-    const s2 = await this.run(plans, {
+    const takeSweeps = (sofar: StudyResult[]) => {
+      const [family, cover, ...rest] = sofar.slice(firstSweep);
+      r.family = family!;
+      r.cover = cover!;
+      if (r.baseline) {
+        r.baseline.curve = rest[0]!;
+        r.baseline.cover = rest[1]!;
+        r.baseline.map = rest[2]!;
+      }
+      others.forEach((o, k) => {
+        o.curve = sofar[firstSweep + (b ? 5 : 2) + k]!;
+      });
+    };
+    const whole = this.run(plans, {
       signal: ac.signal,
-      onProgress: (p) => this.status(`Cover-fraction sweeps: ${p.casesDone}/${p.casesTotal} cases`, p),
-      onCase: (landed) => {
-        if (landed.study === gciStudy && landed.cube && !superseded()) {
-          r.current = landed.cube;
+      stages,
+      onStageDone: (k, sofar) => {
+        results = sofar;
+        // The sweeps on screen as soon as they are in (at once when kept: the first plots show them).
+        if (k === 2 && !superseded()) takeSweeps(sofar);
+        settle[k]![0]();
+      },
+      onProgress: (p) => showProgress(progress, sweeps, studies.map, p),
+      onCase: (c) => {
+        if (c.study >= firstSweep) progress[c.study === mapStudy ? 'map' : 'sweeps']++;
+        if (!c.cube || superseded()) return;
+        if (c.study === 0) {
+          r.current = c.cube;
+          t1 = this.showFirst(r);
+        } else if (c.study === gciStudy && r.current) {
+          r.current = c.cube;
           this.renderSoon();
         }
       },
     });
+    // The run's end (a cancel, or an error it throws) ends every stage's wait.
+    whole.then(
+      () => {
+        for (const [resolve] of settle) resolve();
+      },
+      (error: unknown) => {
+        for (const [, reject] of settle) reject(error);
+      },
+    );
+    // A cancel (the button) ends the run: what landed stays on screen.
+    const cancelled = async () => {
+      const out = await whole;
+      if (superseded()) return;
+      if (r.current) {
+        takeSweeps(out.results);
+        r.map = out.results[mapStudy]!;
+      }
+      this.cancelled(r);
+    };
+
+    await stageDone[0];
+    if (superseded()) return;
+    if (ac.signal.aborted) return cancelled();
+    const first = results[0]!;
+    if (first.errors[0] !== null || first.landed[0] !== 1) {
+      ac.abort();
+      this.fail(`The model could not solve this design: ${first.errors[0] ?? 'unknown error'}`);
+      return;
+    }
+    progress.phase = 'sweeps';
+    this.stage('sweeps');
+    // (Without grid convergence there is no stage 1.)
+    await Promise.all([stages.includes(1) ? stageDone[1] : null, stageDone[2]]);
     if (superseded()) return;
     const t2 = performance.now();
-    const [family, cover, ...rest] = s2.results;
-    r.family = family!;
-    r.cover = cover!;
-    if (r.baseline) {
-      r.baseline.curve = rest[0]!;
-      r.baseline.cover = rest[1]!;
-      r.baseline.map = rest[2]!;
-    }
-    others.forEach((o, k) => {
-      o.curve = s2.results[firstOther + k]!;
-    });
-    const gci = gciStudy >= 0 ? s2.results[gciStudy]! : null;
+    const gci = gciStudy >= 0 ? results[gciStudy]! : null;
     if (gci?.cube && gci.landed[0] === 1 && gci.errors[0] === null) r.current = gci.cube;
-    if (s2.cancelled) return this.cancelled(r);
-    // Drawn now unless the map is kept from an earlier run: then the map stage draws everything at once.
-    if (!this.allKept(studies.map)) this.renderNow();
-    performance.mark('coversweep:plots');
+    if (ac.signal.aborted) return cancelled();
 
-    // 3. The design map (the longer sweep).
+    // The plots now (the workers are on the map's jobs), unless the map is kept: then with the map.
+    progress.phase = 'map';
     this.stage('map');
-    const s3 = await this.run([studies.map], {
-      signal: ac.signal,
-      onProgress: (p) => {
-        const left = Number.isFinite(p.remainingMs)
-          ? `, about ${(p.remainingMs / 1000).toFixed(1)} s left`
-          : '';
-        this.status(`Design map: ${p.casesDone}/${p.casesTotal} designs${left}`, p);
-      },
-    });
+    if (drawPlots) this.renderNow();
+    performance.mark('coversweep:plots');
+    const out = await whole;
     if (superseded()) return;
-    r.map = s3.results[0]!;
-    this.renderNow();
+    r.map = out.results[mapStudy]!;
+    if (drawPlots) this.host.renderAll({ mapOnly: true });
+    else this.renderNow();
     performance.mark('coversweep:map');
-    if (s3.cancelled) return this.cancelled(r);
-    const failed = s2.failedCount + s3.failedCount;
-    if (failed > 0) {
-      const first = [...s2.results, ...s3.results].flatMap((x) => x.errors).find((e) => e !== null) ?? '';
+    if (out.cancelled) return this.cancelled(r);
+    if (out.failedCount > 0) {
+      const error = out.results.flatMap((x) => x.errors).find((e) => e !== null) ?? '';
       this.host.messages.show(
         'warning',
-        `${failed} swept design(s) could not be solved and are left blank.`,
-        [first],
+        `${out.failedCount} swept design(s) could not be solved and are left blank.`,
+        [error],
         'sweep',
       );
     } else {
@@ -307,7 +297,7 @@ export class PageCompute {
       mapMs: Math.round(t3 - t2),
     });
     const seconds = ((t3 - started) / 1000).toFixed(2);
-    this.status(`Done in ${seconds} s on ${this.pool.size} worker${this.pool.size > 1 ? 's' : ''}.`);
+    showStatus(`Done in ${seconds} s on ${this.pool.size} worker${this.pool.size > 1 ? 's' : ''}.`);
     byId('cancel').hidden = true;
     this.abort = null;
     this.stage('done');
@@ -381,7 +371,7 @@ export class PageCompute {
   private cancelled(r: PageResults): void {
     this.host.results = r.current ? r : this.host.results;
     this.renderNow();
-    this.status('Cancelled: the sweeps are incomplete. Change any control to compute again.');
+    showStatus('Cancelled: the sweeps are incomplete. Change any control to compute again.');
     byId('cancel').hidden = true;
     this.abort = null;
     this.lastComputeKey = '';
@@ -391,7 +381,7 @@ export class PageCompute {
 
   private fail(message: string): void {
     this.host.messages.show('error', message, [], 'model');
-    this.status('Stopped: see the message above.');
+    showStatus('Stopped: see the message above.');
     byId('cancel').hidden = true;
     this.abort = null;
     this.setPhase('error');

@@ -35,6 +35,34 @@ interface Inspect {
   __xss?: number;
 }
 
+/**
+ * In the page, the moment its body's data-stage is the sweeps or the design map while it computes (a
+ * mutation observer: polling can miss a short stage on a loaded machine), press Cancel. Resolves with
+ * true once pressed, or with the state and stage the run ended in first.
+ */
+function cancelAtSweepsOrMap(page: Page): Promise<boolean | string> {
+  return page.evaluate(
+    () =>
+      new Promise<boolean | string>((resolve) => {
+        const body = document.body;
+        const check = () => {
+          const stage = body.dataset.stage ?? '';
+          if (body.dataset.state === 'computing' && (stage === 'sweeps' || stage === 'map')) {
+            observer.disconnect();
+            document.getElementById('cancel')!.click();
+            resolve(true);
+          } else if (body.dataset.state === 'done' || body.dataset.state === 'error') {
+            observer.disconnect();
+            resolve(`${body.dataset.state} ${stage}`);
+          }
+        };
+        const observer = new MutationObserver(check);
+        observer.observe(body, { attributes: true, attributeFilter: ['data-state', 'data-stage'] });
+        check();
+      }),
+  );
+}
+
 const ROOT = resolve(__dirname, '../..');
 const CHROMIUM = '/usr/bin/chromium';
 const OUT = join(ROOT, 'test-results');
@@ -483,39 +511,40 @@ describe.skipIf(!haveBrowser && !requireBrowser)('web page in headless Chromium'
   it('finishes the design map with the same numbers when a worker crashes mid-sweep; Cancel keeps finished results', async () => {
     expect(undisturbedMap.length).toBe(66);
     const context = await browser.newContext({ viewport: { width: 1280, height: 800 } });
+    // A sweep worker dies while the sweeps and the design map run (the page's test hook, as a real crash
+    // would). The map's jobs follow the sweeps' in one run, so the crash lands on the map's jobs or on
+    // jobs before them. A mutation observer set before the page loads makes the crash the moment the
+    // sweeps start: polling could miss the stages on a loaded machine (once the map stage alone was long
+    // enough to poll for), and on a quiet one the first load may be done before the page's load event.
+    await context.addInitScript(() => {
+      const w = window as unknown as Inspect & { __crashed?: boolean };
+      const watch = () => {
+        const observer = new MutationObserver(() => {
+          const stage = document.body.dataset.stage ?? '';
+          if (document.body.dataset.state !== 'computing' || !(stage === 'sweeps' || stage === 'map')) return;
+          observer.disconnect();
+          w.__crashed = w.coversweep.crashWorker();
+        });
+        observer.observe(document.body, { attributes: true, attributeFilter: ['data-state', 'data-stage'] });
+      };
+      if (document.body) watch();
+      else document.addEventListener('DOMContentLoaded', watch);
+    });
     const page = await open(context);
-    // A sweep worker dies while the design map runs (the page's test hook, as a real crash would).
-    await page.waitForFunction(
-      // ('loading' until the page has read its autosave and started computing.)
-      () =>
-        document.body.dataset.stage === 'map' ||
-        (document.body.dataset.state !== 'computing' && document.body.dataset.state !== 'loading'),
-      null,
-      { timeout: 45_000 },
-    );
-    const crashed = await page.evaluate(
-      () =>
-        document.body.dataset.stage === 'map' &&
-        document.body.dataset.state === 'computing' &&
-        (window as unknown as Inspect).coversweep.crashWorker(),
-    );
-    expect(crashed, 'the map sweep ended before a worker could be crashed').toBe(true);
     expect(await settled(page)).toBe('done');
+    const crashed = await page.evaluate(() => (window as unknown as { __crashed?: boolean }).__crashed);
+    expect(crashed, 'the sweeps and the map ended before a worker could be crashed').toBe(true);
     expect(await page.locator('#status-text').textContent()).toMatch(/^Done in/);
     expect(await column(page, 'table-map', 'Axial drag')).toEqual(undisturbedMap);
 
-    // Cancel during the next design map: what finished stays, the page stays usable. (The tyre width
-    // changes every design of the map; a cover-fraction edit would find the map kept from this run.)
+    // Cancel during the next sweeps or design map: what finished stays, the page stays usable. (The tyre
+    // width changes every design of the map; a cover-fraction edit would find the map kept from this run.)
     await setNumberControl(page, 'tyreWidthMm', '26');
-    await page.waitForFunction(
-      () =>
-        (window as unknown as Inspect).coversweep.state().case.wheel.tyre_width_m === 0.026 &&
-        document.body.dataset.stage === 'map' &&
-        document.body.dataset.state === 'computing',
-      null,
-      { timeout: 45_000 },
-    );
-    await page.click('#cancel');
+    expect(
+      await page.evaluate(() => (window as unknown as Inspect).coversweep.state().case.wheel.tyre_width_m),
+    ).toBe(0.026);
+    const cancelled = await cancelAtSweepsOrMap(page);
+    expect(cancelled, 'the sweeps and the map ended before Cancel could be pressed').toBe(true);
     expect(await settled(page)).toBe('done');
     expect(await page.locator('#status-text').textContent()).toContain('Cancelled');
     expect(await page.locator('#headline .value').count()).toBe(6);

@@ -22,6 +22,12 @@ export interface RunCasesOptions {
   onOutcome?: (outcome: CaseOutcome) => void;
   jobsPerWorker?: number;
   now?: () => number;
+  /**
+   * Each case's stage (0, 1, ...): the jobs of stage 0 are dealt first, then those of stage 1, and so
+   * on, each stage planned on its own, in one run, so a worker that finishes its last job of a stage
+   * takes the next stage's first job instead of waiting for the other workers (default: one stage).
+   */
+  stageOf?: readonly number[];
 }
 
 export interface RunCasesSummary {
@@ -44,9 +50,7 @@ export async function runCases(
 ): Promise<RunCasesSummary> {
   const now = options.now ?? (() => performance.now());
   const start = now();
-  const jobs: SolveJob[] = runner.inOrder
-    ? cases.map((input, caseIndex) => ({ jobId: caseIndex, cases: [{ caseIndex, input }] }))
-    : planJobs(cases, { workers: runner.size, jobsPerWorker: options.jobsPerWorker });
+  const jobs = stagedJobs(runner, cases, options);
   const pointsTotal = cases.reduce((n, c) => n + c.points.length, 0);
   let casesDone = 0;
   let pointsDone = 0;
@@ -84,4 +88,30 @@ export async function runCases(
     },
   });
   return { cancelled: summary.cancelled, failedCount, workersReplaced: summary.workersReplaced };
+}
+
+/**
+ * The run's jobs, stage by stage (stageOf; one stage by default): one job per case in order for a
+ * runner that runs in order, else planJobs over each stage's cases, renumbered to one list.
+ */
+function stagedJobs(runner: JobRunner, cases: readonly WheelInput[], options: RunCasesOptions): SolveJob[] {
+  const stageOf = options.stageOf;
+  if (stageOf && stageOf.length !== cases.length)
+    throw new RangeError(`stageOf has ${stageOf.length} entries for ${cases.length} cases`);
+  const stages = [...new Set(stageOf ?? [0])].sort((a, b) => a - b);
+  const jobs: SolveJob[] = [];
+  for (const stage of stages) {
+    const members = cases.map((_, i) => i).filter((i) => (stageOf ? stageOf[i] === stage : true));
+    const planned: SolveJob[] = runner.inOrder
+      ? members.map((i) => ({ jobId: 0, cases: [{ caseIndex: i, input: cases[i]! }] }))
+      : planJobs(
+          members.map((i) => cases[i]!),
+          { workers: runner.size, jobsPerWorker: options.jobsPerWorker },
+        ).map((job) => ({
+          jobId: 0,
+          cases: job.cases.map(({ caseIndex, input }) => ({ caseIndex: members[caseIndex]!, input })),
+        }));
+    for (const job of planned) jobs.push({ ...job, jobId: jobs.length });
+  }
+  return jobs;
 }

@@ -27,6 +27,13 @@ export interface RunStudiesOptions {
   /** Solved cases kept across runs: a case whose exact input is kept lands from it (first, before any
    * solve) and is not solved again; every case solved by this run is kept. */
   cache?: OutcomeCache;
+  /** Each plan's stage (runCases' stageOf: the cases of stage 0 are dealt first, then stage 1...);
+   * default: one stage. */
+  stages?: readonly number[];
+  /** Called once every case of a stage has landed (kept, solved or failed), with the results so far;
+   * a stage whose cases are all kept is done before any solve. Not called for a cancelled run's
+   * unfinished stages. */
+  onStageDone?: (stage: number, results: StudyResult[]) => void;
 }
 
 export interface StudiesOutcome {
@@ -52,16 +59,32 @@ export async function runStudies(
   plans: readonly StudyPlan[],
   options: RunStudiesOptions = {},
 ): Promise<StudiesOutcome> {
+  if (options.stages && options.stages.length !== plans.length)
+    throw new RangeError(`stages has ${options.stages.length} entries for ${plans.length} studies`);
   const landing = studyLanding(plans, options.keep ?? true, options.onCase);
   const { results, inputs } = landing;
+  // Each planned case's stage, and the cases of each stage still to land.
+  const stageOf = landing.studyOf.map((s) => options.stages?.[s] ?? 0);
+  const left = new Map<number, number>((options.stages ?? [0]).map((stage) => [stage, 0]));
+  for (const stage of stageOf) left.set(stage, left.get(stage)! + 1);
+  const landed = (i: number) => {
+    const stage = stageOf[i]!;
+    const n = left.get(stage)! - 1;
+    left.set(stage, n);
+    if (n === 0) options.onStageDone?.(stage, results);
+  };
+  for (const [stage, n] of [...left].sort((a, b) => a[0] - b[0]))
+    if (n === 0) options.onStageDone?.(stage, results);
   // Cases kept from an earlier run land now; the rest are solved (and kept).
   const cache = options.cache;
   const keys = cache ? inputs.map(inputKey) : [];
   const toSolve: number[] = [];
   inputs.forEach((_, i) => {
     const hit = cache?.take(keys[i]!, i);
-    if (hit) landing.land(hit);
-    else toSolve.push(i);
+    if (hit) {
+      landing.land(hit);
+      landed(i);
+    } else toSolve.push(i);
   });
   if (toSolve.length === 0) {
     const cancelled = options.signal?.aborted ?? false;
@@ -74,10 +97,12 @@ export async function runStudies(
     ...(options.jobsPerWorker !== undefined ? { jobsPerWorker: options.jobsPerWorker } : {}),
     ...(options.now ? { now: options.now } : {}),
     ...(options.reportStart ? { reportStart: true } : {}),
+    ...(options.stages ? { stageOf: toSolve.map((i) => stageOf[i]!) } : {}),
     onOutcome: (o) => {
       const i = toSolve[o.caseIndex]!;
       if (cache && o.ok) cache.keep(keys[i]!, o);
       landing.land({ ...o, caseIndex: i });
+      landed(i);
     },
   });
   const failedCount = landing.unplannedCount + summary.failedCount;

@@ -32,6 +32,8 @@ export interface StudyLanding {
   results: StudyResult[];
   /** One list of model inputs over every study (the planned cases), in order. */
   inputs: WheelInput[];
+  /** The study (its position in the list given) of each of `inputs`. */
+  studyOf: number[];
   /** Cases the planners could not plan (landed already as failed). */
   unplannedCount: number;
   /** Land an outcome of inputs[outcome.caseIndex] in its study's cube. */
@@ -92,6 +94,7 @@ export function studyLanding(
   return {
     results,
     inputs,
+    studyOf: owner.map(([study]) => study),
     unplannedCount: unplanned.length,
     land: (outcome) => {
       const [s, k] = owner[outcome.caseIndex]!;

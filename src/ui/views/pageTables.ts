@@ -2,6 +2,7 @@
 import { DataTable } from '../dataTable';
 import { tableExportButtons } from '../export/tableExportButtons';
 import { renderCurrentTables } from './currentTables';
+import { renderMapTable } from './mapTable';
 import type { PageResults } from './pageResults';
 import type { Present } from './present';
 import { renderSweepTables } from './sweepTables';
@@ -49,5 +50,11 @@ export class PageTables {
   render(ctx: Present, r: PageResults): void {
     renderCurrentTables(this.tables, ctx, r);
     renderSweepTables(this.tables, ctx, r);
+    renderMapTable(this.tables, ctx, r);
+  }
+
+  /** The design map's grid only (the map landed; the other tables show what they showed). */
+  renderMap(ctx: Present, r: PageResults): void {
+    renderMapTable(this.tables, ctx, r);
   }
 }

@@ -1,14 +1,12 @@
-/** The sweeps' tables: the covering-fraction family, the cover sweep and the design map grid. */
+/** The sweeps' tables: the covering-fraction family and the cover sweep (the map's grid: mapTable.ts). */
 import type { Cell, TableColumn } from '../dataTable';
-import { fmt, speedFromMps, toDisplay, unitShort } from '../displayUnits';
-import { OUTPUTS, type OutputKey } from '../outputs';
-import { mapCells } from './mapSources';
+import { fmt, speedFromMps, toDisplay } from '../displayUnits';
 import { axisOf, casePoints, type PageResults, pointAt } from './pageResults';
-import { conditionsText, display, type Present } from './present';
+import type { Present } from './present';
 import { type Tables, tableFormat } from './tableFormat';
 
 export function renderSweepTables(tables: Tables, ctx: Present, r: PageResults): void {
-  const { u, fu, fd, ad, sp, c, yaws } = tableFormat(ctx);
+  const { u, fu, fd, sp, yaws } = tableFormat(ctx);
   // Family.
   const fr = axisOf(r.studies.family, 'coverFraction');
   const famColumns: TableColumn[] = [
@@ -79,48 +77,4 @@ export function renderSweepTables(tables: Tables, ctx: Present, r: PageResults):
     });
   });
   tables.get('table-cover')!.setData(coverColumns, coverRows);
-  // Map.
-  const v = ctx.state.view;
-  const mapKeys: OutputKey[] = [
-    ...new Set<OutputKey>([v.mapColour, v.mapContour, 'axial', 'side', 'steering', 'power']),
-  ];
-  const mapColumns: TableColumn[] = [
-    { header: 'Covered fraction', decimals: 2 },
-    { header: 'Rim depth, mm', decimals: 1 },
-    ...mapKeys.map((k) => ({
-      header: `${OUTPUTS[k].label}, ${unitShort(OUTPUTS[k].kind, u)}`,
-      decimals:
-        OUTPUTS[k].kind === 'force'
-          ? fd
-          : OUTPUTS[k].kind === 'moment'
-            ? 4
-            : OUTPUTS[k].kind === 'area'
-              ? ad
-              : 2,
-    })),
-    // The conditions the grid was computed at, on every row, so an exported CSV says them itself.
-    { header: 'Yaw, deg', decimals: 2 },
-    { header: 'Airspeed, m/s', decimals: 3 },
-    { header: 'Air density, kg/m³', decimals: 4 },
-  ];
-  const mapYawDeg = axisOf(r.studies.map, 'yaw')[0]!;
-  const mapSpeedMps = c.conditions.airspeed_mps[0]!;
-  const mapRows: Cell[][] = [];
-  for (const cell of mapCells(r)) {
-    const p = cell.point;
-    if (!p) continue;
-    mapRows.push([
-      cell.coverFraction,
-      cell.rimDepthM * 1000,
-      ...mapKeys.map((key) => display(ctx, OUTPUTS[key], p)),
-      mapYawDeg,
-      mapSpeedMps,
-      r.rhoKgPerM3,
-    ]);
-  }
-  const mapTable = tables.get('table-map')!;
-  mapTable.setCaption(
-    `Design map grid at ${fmt(mapYawDeg)}° yaw, ${conditionsText(ctx, mapSpeedMps, r.rhoKgPerM3)}`,
-  );
-  mapTable.setData(mapColumns, mapRows);
 }

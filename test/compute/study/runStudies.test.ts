@@ -1,9 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import { InProcessRunner } from '../../../src/compute/engine/inProcessRunner';
+import type { JobRunner } from '../../../src/compute/engine/jobRunner';
+import type { SolveJob } from '../../../src/compute/engine/protocol';
 import { runSweep } from '../../../src/compute/engine/runSweep';
 import { WorkerPool } from '../../../src/compute/engine/workerPool';
 import { expandPlan } from '../../../src/compute/planFile';
 import { commandLineStudy } from '../../../src/compute/study/commandLineStudy';
+import { OutcomeCache } from '../../../src/compute/study/outcomeCache';
 import { runStudies } from '../../../src/compute/study/runStudies';
 import type { StudyPlan } from '../../../src/compute/study/studyPlan';
 import { smallSweep } from '../engine/fixtures';
@@ -94,6 +97,71 @@ describe('runStudies', () => {
     expect(out.results[0]!.errors[0]).toBe('wheel: a stand-in planning failure');
     const v = out.results[0]!.cube!.pick({ coverFraction: 0, rimDepth: 0 }).column('axialN').values();
     expect([...v].every(Number.isNaN)).toBe(true);
+  });
+
+  it('deals the jobs stage by stage in one run, says when each stage has landed, same bits as one stage', async () => {
+    const a = gridStudy();
+    const b: StudyPlan = { ...gridStudy(), name: 'second' };
+    const c: StudyPlan = { ...gridStudy(), name: 'third' };
+    // A pool that records the order it is given the jobs in (and runs them on two workers).
+    const pool = new WorkerPool(inProcessSpawner().spawn, 2);
+    const dealt: SolveJob[][] = [];
+    const recording: JobRunner = {
+      size: pool.size,
+      run: (jobs, options) => {
+        dealt.push([...jobs]);
+        return pool.run(jobs, options);
+      },
+    };
+    try {
+      const order: string[] = [];
+      const out = await runStudies(recording, [a, b, c], {
+        stages: [1, 0, 1],
+        onCase: (k) => order.push(`case ${k.study}`),
+        onStageDone: (stage, results) => {
+          order.push(`stage ${stage}`);
+          // Every case of the stage has landed when it is said to be done.
+          const studies = stage === 0 ? [1] : [0, 2];
+          for (const s of studies) expect([...results[s]!.landed].every((x) => x === 1)).toBe(true);
+        },
+      });
+      // One run: study b's six cases (stage 0) dealt first, then a's and c's.
+      expect(dealt.length).toBe(1);
+      const cases = dealt[0]!.flatMap((job) => job.cases.map((x) => x.caseIndex));
+      expect(new Set(cases.slice(0, 6))).toEqual(new Set([6, 7, 8, 9, 10, 11]));
+      expect(cases.length).toBe(18);
+      expect(order.filter((x) => x.startsWith('stage'))).toEqual(['stage 0', 'stage 1']);
+      expect(order.indexOf('stage 1')).toBe(order.length - 1);
+      const plain = await runStudies(new InProcessRunner(), [a]);
+      for (const r of out.results) expect([...r.cube!.data]).toEqual([...plain.results[0]!.cube!.data]);
+    } finally {
+      pool.close();
+    }
+  });
+
+  it('says at once that a stage whose cases are all kept is done, before any solve', async () => {
+    const a = gridStudy();
+    const b: StudyPlan = {
+      ...gridStudy(),
+      name: 'second',
+      inputs: smallSweep().map((x) => ({ ...x, points: x.points.slice(0, 1) })),
+    };
+    b.pointAxes = [
+      { name: 'airspeed', unit: 'm/s', values: [8] },
+      { name: 'yaw', unit: 'deg', values: [0] },
+    ];
+    const cache = new OutcomeCache(1e6);
+    await runStudies(new InProcessRunner(), [a], { cache });
+    const order: string[] = [];
+    await runStudies(new InProcessRunner(), [b, a], {
+      cache,
+      stages: [0, 1],
+      onCase: (k) => order.push(`case ${k.study}`),
+      onStageDone: (stage) => order.push(`stage ${stage}`),
+    });
+    // Study a (stage 1) is kept: it lands and is done before study b (stage 0) is solved.
+    expect(order.slice(0, 7)).toEqual([...new Array(6).fill('case 1'), 'stage 1']);
+    expect(order.slice(7)).toEqual([...new Array(6).fill('case 0'), 'stage 0']);
   });
 
   it('refuses a plan whose inputs do not fill its axes', async () => {
