@@ -28,20 +28,6 @@ const WORKER_LIMITS = { maxYoungGenerationSizeMb: 8 };
  */
 let compileOnOwnThread = false;
 
-/**
- * Functions TurboFan leaves alone (V8's --turbo-filter; one name, the leading '-' excludes it; they run
- * in Maglev's code instead). buildWheelLattice (src/model/lattice) is called a few hundred times per
- * sweep (three lattices per design, 1-2 ms each), yet its TurboFan compile (the builder's closures and
- * array helpers inlined, escape analysis on the whole graph) took 0.3-0.6 s of each solver thread's
- * CPU, and again after each deoptimisation: a cold thread's largest start-up cost. Measured with perf
- * on 2-worker sweeps of the standard plan (2026-12-02, load 5-10, 4 alternating runs each): compile
- * time of the whole process 1.5-1.9 s without the filter, 0.8-1.05 s with it; CPU time of the process
- * (under perf) 5.9-7.0 s against 5.1-6.8 s. Code runs the same
- * operations in every tier (no fused multiply-add in V8), so the numbers keep their bits.
- * test/cli/nodeWorker.test.ts checks that the model still has a function by this name.
- */
-export const SOLVER_TURBOFAN_EXCLUDED = 'buildWheelLattice';
-
 /** How long an idle worker asked to end may take to end by itself before it is terminated. */
 const RETIRE_GRACE_MS = 2000;
 
@@ -66,7 +52,6 @@ const RETIRE_GRACE_MS = 2000;
 export function nodeWorkerSpawner(compiledEntry?: string): SpawnWorker {
   if (!compileOnOwnThread) {
     setFlagsFromString('--no-concurrent-recompilation');
-    setFlagsFromString(`--turbo-filter=-${SOLVER_TURBOFAN_EXCLUDED}`);
     compileOnOwnThread = true;
   }
   return (): WorkerHandle => {

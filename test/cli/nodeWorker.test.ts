@@ -1,10 +1,9 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { nodeWorkerSpawner, SOLVER_TURBOFAN_EXCLUDED } from '../../src/cli/nodeWorker';
+import { nodeWorkerSpawner } from '../../src/cli/nodeWorker';
 import { runSweep } from '../../src/compute/engine/runSweep';
 import { type SpawnWorker, WorkerPool } from '../../src/compute/engine/workerPool';
 import { parseRideFile, solveRide } from '../../src/compute/ride/index';
-import { buildWheelLattice } from '../../src/model/lattice/buildWheelLattice';
 import { smallSweep } from '../compute/engine/fixtures';
 
 // Real Node worker_threads running the TypeScript worker entry (through tsx). Start-up is ~1 s each.
@@ -82,11 +81,4 @@ describe('solver pool on Node worker threads', () => {
     expect(out.value.curvesReused).toBe(false);
     expect(out.value.document).toEqual(solveRide(parsed.value));
   }, 60_000);
-});
-
-describe('V8 flags of the solver threads', () => {
-  it('keeps TurboFan off a function the model still has (a renamed one would be optimised again)', () => {
-    // --turbo-filter matches the function's own name; the compiled bundle keeps the source names.
-    expect(buildWheelLattice.name).toBe(SOLVER_TURBOFAN_EXCLUDED);
-  });
 });
