@@ -112,26 +112,7 @@ describe('spokeAnnulusLoads and spokeAnnulusLoadsFrozen', () => {
       ] as const) {
         const row = spokeRowOf(wheel, { ...point, yawRad, airspeedMps: v });
         for (const spinMps of [0.4 * v, spin, 2 * v]) {
-          const got = new Float64Array(8);
-          const expected = new Float64Array(8);
-          got[3] = expected[3] = Number.POSITIVE_INFINITY;
-          const gotCo = new Float64Array(SPOKE_ANGLE_STEPS);
-          const expectedCo = new Float64Array(SPOKE_ANGLE_STEPS);
-          spokeAnnulusLoads(row, r, spinMps, 0.7, got, gotCo);
-          plain(row, r, spinMps, expected, expectedCo);
-          const label = `${wheel.spokeSection} yaw=${yawRad} V=${v} spin=${spinMps}`;
-          for (let i = 0; i < 8; i++) {
-            expect(
-              Object.is(got[i], expected[i]),
-              `${label} [${i}] got=${got[i]} expected=${expected[i]} tol=0`,
-            ).toBe(true);
-          }
-          for (let k = 0; k < SPOKE_ANGLE_STEPS; k++) {
-            expect(
-              Object.is(gotCo[k], expectedCo[k]),
-              `${label} coefficient ${k} got=${gotCo[k]} expected=${expectedCo[k]}`,
-            ).toBe(true);
-          }
+          expectPlainBits(row, r, spinMps, `${wheel.spokeSection} yaw=${yawRad} V=${v} spin=${spinMps}`);
         }
       }
     }
@@ -162,29 +143,43 @@ describe('spokeAnnulusLoads and spokeAnnulusLoadsFrozen', () => {
             stalledAt === null
               ? spinRatio * v
               : -(row.vInPlaneMps * Math.sin(((stalledAt + 0.5) * 2 * Math.PI) / SPOKE_ANGLE_STEPS));
-          const got = new Float64Array(8);
-          const expected = new Float64Array(8);
-          got[3] = expected[3] = Number.POSITIVE_INFINITY;
-          const gotCo = new Float64Array(SPOKE_ANGLE_STEPS);
-          const expectedCo = new Float64Array(SPOKE_ANGLE_STEPS);
-          spokeAnnulusLoads(row, radiusM, spinMps, 0.7, got, gotCo);
-          plain(row, radiusM, spinMps, expected, expectedCo);
-          const label = `round=${round} V=${v} yaw=${yaw} r=${radiusM} spin=${spinMps}`;
-          for (let i = 0; i < 8; i++) {
-            expect(
-              Object.is(got[i], expected[i]),
-              `${label} [${i}] got=${got[i]} expected=${expected[i]}`,
-            ).toBe(true);
-          }
-          for (let k = 0; k < SPOKE_ANGLE_STEPS; k++) {
-            expect(
-              Object.is(gotCo[k], expectedCo[k]),
-              `${label} coefficient ${k} got=${gotCo[k]} expected=${expectedCo[k]}`,
-            ).toBe(true);
-          }
+          expectPlainBits(
+            row,
+            radiusM,
+            spinMps,
+            `round=${round} V=${v} yaw=${yaw} r=${radiusM} spin=${spinMps}`,
+          );
         },
       ),
       { numRuns: 400 },
     );
   });
 });
+
+/** spokeAnnulusLoads against the plain loop (`plain`), sums and coefficients equal to the bit. */
+function expectPlainBits(
+  row: ReturnType<typeof spokeRowOf>,
+  radiusM: number,
+  spinMps: number,
+  label: string,
+): void {
+  const got = new Float64Array(8);
+  const expected = new Float64Array(8);
+  got[3] = expected[3] = Number.POSITIVE_INFINITY;
+  const gotCo = new Float64Array(SPOKE_ANGLE_STEPS);
+  const expectedCo = new Float64Array(SPOKE_ANGLE_STEPS);
+  spokeAnnulusLoads(row, radiusM, spinMps, 0.7, got, gotCo);
+  plain(row, radiusM, spinMps, expected, expectedCo);
+  for (let i = 0; i < 8; i++) {
+    expect(
+      Object.is(got[i], expected[i]),
+      `${label} [${i}] got=${got[i]} expected=${expected[i]} tol=0`,
+    ).toBe(true);
+  }
+  for (let k = 0; k < SPOKE_ANGLE_STEPS; k++) {
+    expect(
+      Object.is(gotCo[k], expectedCo[k]),
+      `${label} coefficient ${k} got=${gotCo[k]} expected=${expectedCo[k]} tol=0`,
+    ).toBe(true);
+  }
+}
