@@ -171,7 +171,8 @@ async function main(): Promise<void> {
             .sort((a, b) => b[1] - a[1])
             .map(([k, v]) => [k, Math.round(v)]),
         );
-        // Every thread's outermost tasks over 2 ms from the sweeps' end to the map, as start+length (ms).
+        // Every thread's outermost tasks over 2 ms from the edit's compute mark to the map, as start+length
+        // (ms from that mark), so the workers' idle gaps show.
         const lanes: Record<string, string[]> = {};
         const laneEnd = new Map<string, number>();
         for (const e of [...traceEvents].sort((a, b) => a.ts - b.ts)) {
@@ -180,10 +181,8 @@ async function main(): Promise<void> {
           if (!(who.startsWith('worker') || who === 'CrRendererMain')) continue;
           if (e.ts < (laneEnd.get(who) ?? -1)) continue;
           laneEnd.set(who, e.ts + (e.dur ?? 0));
-          if (e.ts + (e.dur ?? 0) < tSweeps || e.ts > tEnd || (e.dur ?? 0) < 2000) continue;
-          (lanes[who] ??= []).push(
-            `${Math.round((e.ts - tSweeps) / 1000)}+${Math.round((e.dur ?? 0) / 1000)}`,
-          );
+          if (e.ts + (e.dur ?? 0) < t0 || e.ts > tEnd || (e.dur ?? 0) < 2000) continue;
+          (lanes[who] ??= []).push(`${Math.round((e.ts - t0) / 1000)}+${Math.round((e.dur ?? 0) / 1000)}`);
         }
         console.log(
           JSON.stringify({

@@ -14,11 +14,19 @@ export interface PoolOptions {
 
 export type { PoolRunOptions, PoolRunSummary, SpawnWorker, TaskOutcome, TaskRunOptions, WorkerHandle };
 
+/** Jobs a worker holds at once while the queue is long: the one it solves and the next two (the page's
+ * short jobs, 5-20 ms, outlast one queued job behind a 20-45 ms draw of the plots; measured by trace). */
+const PREFETCH_DEPTH = 3;
+
 /**
  * A fixed-size pool of solver workers, free of environment code. Jobs are dealt dynamically (a free
- * worker takes the next job), so uneven jobs balance. A worker that dies or throws is replaced and its
- * job retried once on a fresh worker; a job that fails twice is reported through onJobFailed and the run
- * goes on. Cancelling stops dealing and terminates busy workers at once (they are respawned on the next
+ * worker takes the next job), so uneven jobs balance. While more jobs wait than there are workers, each
+ * worker also holds the next jobs in its message queue (PREFETCH_DEPTH), so it starts one the moment
+ * it ends one, without waiting for this thread to read the answer and send more: on the page, this thread
+ * draws while the workers solve, and a long draw left both workers idle (measured in a trace of a
+ * tyre-width edit: 30-250 ms per worker). A worker that dies or throws is replaced and its job retried
+ * once on a fresh worker (a job queued behind it goes back to the queue, not charged); a job that fails
+ * twice is reported through onJobFailed and the run goes on. Cancelling stops dealing and terminates busy workers at once (they are respawned on the next
  * run): every finished job has already been delivered through onJobDone.
  *
  * Tasks (runTask: the 3D view's field, a ride, a design study, the map's ride objectives, the reference
@@ -108,16 +116,40 @@ export class WorkerPool implements JobRunner {
     };
     signal?.addEventListener('abort', onAbort, { once: true });
 
-    const lane = async (slot: number): Promise<void> => {
+    // A worker retired by one of its lanes (its job failed) ends the other lane's wait on it: that lane's
+    // job goes back to the queue uncharged, as it never ran or was not the one that failed.
+    const retiredOf = new Map<
+      WorkerHandle,
+      { promise: Promise<'retired'>; resolve: () => void; resolved: boolean }
+    >();
+    const retiredSignal = (w: WorkerHandle): Promise<'retired'> => {
+      let r = retiredOf.get(w);
+      if (!r) {
+        let resolve: () => void = () => undefined;
+        const promise = new Promise<'retired'>((ok) => {
+          resolve = () => ok('retired');
+        });
+        r = { promise, resolve, resolved: false };
+        retiredOf.set(w, r);
+      }
+      return r.promise;
+    };
+    const workerCount = this.workers.length;
+    // depth 0 takes every job; lane d > 0 only while more than d jobs per worker wait, so toward the end
+    // no worker holds queued jobs while another has none.
+    const lane = async (slot: number, depth: number): Promise<void> => {
       while (!cancelled) {
+        if (depth > 0 && queue.length <= depth * workerCount) return;
         const next = queue.shift();
         if (!next) return;
         const w = this.worker(slot);
-        let outcome: JobResult | 'cancelled' | Error;
+        const retired = retiredSignal(w);
+        let outcome: JobResult | 'cancelled' | 'retired' | Error;
         try {
-          outcome = await settleFirst<JobResult, 'cancelled'>(w.api.solveJob(next.job), [
+          outcome = await settleFirst<JobResult, 'cancelled' | 'retired'>(w.api.solveJob(next.job), [
             w.failed,
             cancelPromise,
+            retired,
           ]);
         } catch (err) {
           outcome = err instanceof Error ? err : new Error(String(err));
@@ -126,7 +158,14 @@ export class WorkerPool implements JobRunner {
           this.replace(slot, w);
           return;
         }
+        if (outcome === 'retired' || (outcome instanceof Error && retiredOf.get(w)?.resolved)) {
+          queue.unshift(next);
+          continue;
+        }
         if (outcome instanceof Error) {
+          const r = retiredOf.get(w)!;
+          r.resolved = true;
+          r.resolve();
           this.replace(slot, w);
           replaced++;
           if (next.attempt === 0) queue.push({ job: next.job, attempt: 1 });
@@ -137,7 +176,13 @@ export class WorkerPool implements JobRunner {
       }
     };
     try {
-      if (!cancelled) await Promise.all(this.workers.map((_, slot) => lane(slot)));
+      if (!cancelled) {
+        const lanes: Promise<void>[] = [];
+        for (let slot = 0; slot < workerCount; slot++) {
+          for (let depth = 0; depth < PREFETCH_DEPTH; depth++) lanes.push(lane(slot, depth));
+        }
+        await Promise.all(lanes);
+      }
     } finally {
       signal?.removeEventListener('abort', onAbort);
     }

@@ -13,6 +13,7 @@ import {
   DirectionalLight,
   Group,
   HemisphereLight,
+  type Object3D,
   PerspectiveCamera,
   Scene,
   WebGLRenderer,
@@ -108,12 +109,29 @@ export function createWheelView(container: HTMLElement, initialLayers: Partial<V
   const legendInfo = { limit: 1, saturatedLow: false, saturatedHigh: false, nPerM: 1, side: 0, axial: 0 };
   const layerScene: LayerScene = { groups, cues, addLabel: overlay.addLabel, legend: legendInfo };
 
+  // The last design's objects, out of the scene and disposed only after the next render: three.js keeps
+  // a shader program while a material uses it, so the new layers' materials (the same kinds) find their
+  // programs compiled instead of linking them again (measured: linking took about 90 ms of the page's
+  // thread per redraw in software WebGL, and as long again in the GPU process).
+  let retired: Object3D[] = [];
+  const disposeRetired = () => {
+    for (const o of retired) disposeTree(o);
+    retired = [];
+  };
+  const retire = (g: Group) => {
+    for (const child of [...g.children]) {
+      g.remove(child);
+      retired.push(child);
+    }
+  };
+
   // ---- rendering on demand ----
   let pending = 0;
   const renderNow = () => {
     pending = 0;
     for (const key of Object.keys(groups) as (keyof ViewLayers)[]) groups[key].visible = state[key];
     renderer.render(scene, camera);
+    disposeRetired();
     overlay.placeLabels(camera);
   };
   const requestRender = () => {
@@ -158,8 +176,8 @@ export function createWheelView(container: HTMLElement, initialLayers: Partial<V
     const first = field === null || Math.abs(f.radii.outerRadiusM - radius) > 1e-9;
     field = f;
     radius = f.radii.outerRadiusM;
-    for (const g of Object.values(groups)) clearGroup(g);
-    clearGroup(cues);
+    for (const g of Object.values(groups)) retire(g);
+    retire(cues);
     overlay.clearLabels();
     for (const build of BUILDERS) build(f, layerScene);
     overlay.fillLegend(f, legendInfo);
@@ -188,6 +206,7 @@ export function createWheelView(container: HTMLElement, initialLayers: Partial<V
     observer.disconnect();
     controls.removeEventListener('change', requestRender);
     controls.dispose();
+    disposeRetired();
     for (const g of Object.values(groups)) clearGroup(g);
     clearGroup(cues);
     disposeTree(scene);
