@@ -81,6 +81,8 @@ export class LinePlot {
   private readonly holder: HTMLDivElement;
   private readonly observer: ResizeObserver;
   private lastWidth = 0;
+  /** The container's width at the ResizeObserver's last call (null before its first). */
+  private observedWidth: number | null = null;
   /** The spec drawn last, as text: a render of the same spec at the same width keeps the plot. */
   private drawnSpec = '';
   /** The drawn spec without its numbers (shapeOf): a spec of the same shape only sets the plot's data. */
@@ -95,8 +97,12 @@ export class LinePlot {
     this.holder = document.createElement('div');
     this.holder.className = 'plot-holder';
     container.append(this.holder);
+    // The container's width is read where the layout is fresh (here, after the browser's layout) and kept:
+    // reading it in render() forced a layout of the page before each plot's drawing, each time the page had
+    // just changed (the headline, the legends, the previous plot).
     this.observer = new ResizeObserver(() => {
-      const w = this.width();
+      this.observedWidth = Math.floor(this.container.clientWidth);
+      const w = this.observedWidth;
       if (this.plot && w !== this.lastWidth && w > 0) {
         const crossed = w < 560 !== this.lastWidth < 560;
         this.lastWidth = w;
@@ -110,7 +116,7 @@ export class LinePlot {
   }
 
   private width(): number {
-    return Math.floor(this.container.clientWidth);
+    return this.observedWidth ?? Math.floor(this.container.clientWidth);
   }
 
   /** What the plot currently shows (a copy). */
