@@ -4,7 +4,7 @@
  * Figures are medians of repeated runs where cheap; the machine may be shared and noisy.
  */
 import { spawnSync } from 'node:child_process';
-import { mkdtempSync, symlinkSync } from 'node:fs';
+import { mkdtempSync, readFileSync, symlinkSync } from 'node:fs';
 import { availableParallelism, cpus, loadavg, tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { luFactor } from '../src/model/numeric';
@@ -134,8 +134,16 @@ function yawCurveIn(root: string, label: string): void {
 // With COVERSWEEP_BENCH_BASELINE=<git ref> the same sweep of that commit runs in the same bench run,
 // interleaved with this tree's (A, B, A, B), from a temporary git worktree sharing node_modules: the
 // way to measure what a change costs on a shared, noisy machine.
-function sweepIn(dir: string, workers: number, entry: string, label: string): void {
-  const child = spawnSync('npx', ['tsx', '--expose-gc', 'bench/standardSweep.ts', String(workers), entry], {
+function sweepIn(dir: string, workers: number, entry: string, label: string, mode = ''): void {
+  const args = [
+    'tsx',
+    '--expose-gc',
+    'bench/standardSweep.ts',
+    String(workers),
+    entry,
+    ...(mode ? [mode] : []),
+  ];
+  const child = spawnSync('npx', args, {
     cwd: dir,
     encoding: 'utf8',
     stdio: ['ignore', 'pipe', 'inherit'],
@@ -167,6 +175,12 @@ function sweepIn(dir: string, workers: number, entry: string, label: string): vo
       sweepIn('.', workers, entry, 'current');
       if (baseline) sweepIn(baseline.dir, workers, baseline.entry, `baseline ${baselineRef}`);
     }
+    // The design map of the issue's target: the 126 designs with their yaw curves at one speed, on every
+    // core, as the page solves a map (no convergence lattices); the model work alone, without the page.
+    sweepIn('.', cores, entry, 'current', 'map');
+    // (A baseline from before this bench existed has no map mode: its script would run the whole sweep.)
+    if (baseline && readFileSync(join(baseline.dir, 'bench/standardSweep.ts'), 'utf8').includes("'map'"))
+      sweepIn(baseline.dir, cores, baseline.entry, `baseline ${baselineRef}`, 'map');
     // --- The command line as a whole process: start-up and the standard plan, compiled (and the
     // baseline's compiled command line, interleaved) against tsx ----
     benchWholeProcess(print, baseline ? { label: `baseline ${baselineRef}`, dir: baseline.dir } : undefined);

@@ -12,16 +12,19 @@ import { DEFAULT_MODEL_OPTIONS, DEFAULT_STEERING, DEMO_WHEEL, type WheelInput } 
 
 const workers = Number(process.argv[2]);
 const entry = process.argv[3];
-if (!(workers >= 1) || !entry) throw new Error('usage: standardSweep.ts WORKERS COMPILED_WORKER.mjs');
+// `map`: the same 126 designs as a design map with its yaw curves at one speed (13.41 m/s, the 41 yaw
+// angles), solved as the page solves its map's designs: without the grid-convergence lattices.
+const mapMode = process.argv[4] === 'map';
+if (!(workers >= 1) || !entry) throw new Error('usage: standardSweep.ts WORKERS COMPILED_WORKER.mjs [map]');
 const deg = Math.PI / 180;
 const cases: WheelInput[] = [];
 for (let i = 0; i <= 20; i++) {
   for (const depthMm of [20, 35, 50, 65, 80, 90]) {
     cases.push({
       wheel: { ...DEMO_WHEEL, coverFraction: i * 0.05, rimDepthM: depthMm / 1000 },
-      options: { ...DEFAULT_MODEL_OPTIONS },
+      options: { ...DEFAULT_MODEL_OPTIONS, ...(mapMode ? { gridConvergence: false } : {}) },
       steering: DEFAULT_STEERING,
-      points: [6, 8, 10, 13.41].flatMap((speed) =>
+      points: (mapMode ? [13.41] : [6, 8, 10, 13.41]).flatMap((speed) =>
         Array.from({ length: 41 }, (_, k) => ({
           airspeedMps: speed,
           yawRad: k * 0.5 * deg,
@@ -57,7 +60,7 @@ pool.close();
 const checksum = out.solutions.reduce((s, sol) => s + (sol?.points[0]?.axialN ?? 0), 0);
 console.log(
   JSON.stringify({
-    bench: 'standard_sweep',
+    bench: mapMode ? 'design_map_126' : 'standard_sweep',
     cases: cases.length,
     points,
     workers,
