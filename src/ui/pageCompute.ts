@@ -20,6 +20,7 @@ import {
   type StudyResult,
 } from '../compute/study/runStudies';
 import { isUnplanned, type StudyPlan } from '../compute/study/studyPlan';
+import { AfterRest } from './afterRest';
 import type { AppState } from './appState';
 import { scriptStartMs, workersReadyMs } from './earlyPool';
 import type { Messages } from './messages';
@@ -29,10 +30,6 @@ import type { OtherBaseline, PageResults } from './views/pageResults';
 import { byId } from './views/present';
 
 type Phase = 'computing' | 'done' | 'error';
-
-/** How long the inputs rest after a run before the 3D view draws it (redraw3d): longer than the gap
- * between a slider's or a keyboard's edits, short beside the view's own drawing. */
-const THREE_D_REST_MS = 250;
 
 /** What the kept solved designs may hold: about 20 states of the default page's studies. */
 const SOLVED_BUDGET_BYTES = 8e6;
@@ -67,8 +64,9 @@ export class PageCompute {
   private readonly solved = new OutcomeCache(SOLVED_BUDGET_BYTES);
   /** Whether the 3D view waits to draw this run's design (at the end of the run, or its cancel). */
   private threeDPending = false;
-  /** The 3D view's redraw, waiting for the inputs to rest (redraw3d). */
-  private threeDTimer: ReturnType<typeof setTimeout> | null = null;
+  /** The 3D view's redraw, after the inputs rest 250 ms: longer than the gap between a slider's or a
+   * keyboard's edits, short beside the view's own drawing (redraw3d). */
+  private readonly threeD = new AfterRest(250);
   /** A redraw asked for while a stage runs (drawn at the next task unless the stage's end draws first). */
   private soon: ReturnType<typeof setTimeout> | null = null;
   /** Whether that redraw is light (the headline and plots: the first numbers' plots) or everything. */
@@ -103,7 +101,7 @@ export class PageCompute {
   /** Compute the current state after `delayMs` (0: at once; edits in between restart the wait). */
   schedule(delayMs: number): void {
     if (this.timer) clearTimeout(this.timer);
-    this.cancel3dRedraw();
+    this.threeD.disarm();
     this.lastComputeKey = computeKey(this.host.state);
     this.setPhase('computing');
     this.timer = setTimeout(() => {
@@ -137,7 +135,7 @@ export class PageCompute {
   }
 
   private async computeStages(): Promise<void> {
-    this.cancel3dRedraw();
+    this.threeD.disarm();
     this.abort?.abort();
     const ac = new AbortController();
     this.abort = ac;
@@ -365,30 +363,15 @@ export class PageCompute {
     return plan.inputs.every((input) => !isUnplanned(input) && this.solved.has(inputKey(input)));
   }
 
-  /**
-   * Redraw the 3D view if this run's numbers are not in it yet, once the inputs have rested for
-   * THREE_D_REST_MS: an edit in that time (a slider dragged, a number typed) starts its run first and the
-   * view waits for that run's end. Its start-up (a WebGL context and shader programs: one 240 ms task of
-   * this thread and as much in the GPU process in software rendering) and each redraw (its field solved on
-   * a task worker, then drawn) otherwise ran beside the next edit's run and held the sweep workers idle
-   * while this thread could not deal them jobs (a trace of a tyre-width edit after a cover edit: workers
-   * idle 230 ms, the edit done in 500-700 ms instead of 330-440 ms).
-   */
+  /** Redraw the 3D view if this run's numbers are not in it yet, once the inputs have rested (AfterRest:
+   * an edit first starts its run, and the view waits for that run's end). */
   private redraw3d(): void {
     if (!this.threeDPending) return;
-    this.cancel3dRedraw();
-    this.threeDTimer = setTimeout(() => {
-      this.threeDTimer = null;
+    this.threeD.arm(() => {
       if (!this.threeDPending || this.abort !== null || this.timer !== null) return;
       this.threeDPending = false;
       this.host.firstNumbersShown();
-    }, THREE_D_REST_MS);
-  }
-
-  /** An edit came: the 3D view waits for its run's end (threeDPending stays set). */
-  private cancel3dRedraw(): void {
-    if (this.threeDTimer) clearTimeout(this.threeDTimer);
-    this.threeDTimer = null;
+    });
   }
 
   private stage(name: 'current' | 'sweeps' | 'map' | 'done'): void {
