@@ -64,9 +64,9 @@ export class PageCompute {
   private readonly solved = new OutcomeCache(SOLVED_BUDGET_BYTES);
   /** Whether the 3D view waits to draw this run's design (at the end of the run, or its cancel). */
   private threeDPending = false;
-  /** The 3D view's redraw, after the inputs rest 250 ms: longer than the gap between a slider's or a
-   * keyboard's edits, short beside the view's own drawing (redraw3d). */
-  private readonly threeD = new AfterRest(250);
+  /** The 3D view's redraws, after the inputs rest 250 ms: longer than the gap between a slider's or a
+   * keyboard's edits, short beside the view's own drawing; its start-up at once (redraw3d). */
+  private readonly threeD = new AfterRest(250, true);
   /** A redraw asked for while a stage runs (drawn at the next task unless the stage's end draws first). */
   private soon: ReturnType<typeof setTimeout> | null = null;
   /** Whether that redraw is light (the headline and plots: the first numbers' plots) or everything. */

@@ -41,6 +41,18 @@ describe('AfterRest (the 3D view waits for the inputs to rest)', () => {
     expect(second).toHaveBeenCalledTimes(1);
   });
 
+  it('with firstAtOnce, runs the first call at once and waits for the rest from the second on', () => {
+    const rest = new AfterRest(250, true);
+    const fn = vi.fn();
+    rest.arm(fn);
+    expect(fn).toHaveBeenCalledTimes(1);
+    rest.arm(fn);
+    vi.advanceTimersByTime(249);
+    expect(fn).toHaveBeenCalledTimes(1);
+    vi.advanceTimersByTime(1);
+    expect(fn).toHaveBeenCalledTimes(2);
+  });
+
   it('refuses a rest that is negative or not finite', () => {
     expect(() => new AfterRest(-1)).toThrow(/restMs=-1/);
     expect(() => new AfterRest(Number.NaN)).toThrow(RangeError);

@@ -38,20 +38,24 @@ interface Inspect {
 /**
  * In the page, the moment its body's data-stage is the sweeps or the design map while it computes (a
  * mutation observer: polling can miss a short stage on a loaded machine), press Cancel. Resolves with
- * true once pressed, or with the state and stage the run ended in first.
+ * true once pressed, or with the state and stage the run ended in first. Armed before the edit that
+ * starts the run (call it, then edit, then await it): a whole run can take less than one round trip of
+ * the test driver.
  */
 function cancelAtSweepsOrMap(page: Page): Promise<boolean | string> {
   return page.evaluate(
     () =>
       new Promise<boolean | string>((resolve) => {
         const body = document.body;
+        let computing = false;
         const check = () => {
           const stage = body.dataset.stage ?? '';
+          if (body.dataset.state === 'computing') computing = true;
           if (body.dataset.state === 'computing' && (stage === 'sweeps' || stage === 'map')) {
             observer.disconnect();
             document.getElementById('cancel')!.click();
             resolve(true);
-          } else if (body.dataset.state === 'done' || body.dataset.state === 'error') {
+          } else if (computing && (body.dataset.state === 'done' || body.dataset.state === 'error')) {
             observer.disconnect();
             resolve(`${body.dataset.state} ${stage}`);
           }
@@ -539,11 +543,12 @@ describe.skipIf(!haveBrowser && !requireBrowser)('web page in headless Chromium'
 
     // Cancel during the next sweeps or design map: what finished stays, the page stays usable. (The tyre
     // width changes every design of the map; a cover-fraction edit would find the map kept from this run.)
+    const cancelling = cancelAtSweepsOrMap(page);
     await setNumberControl(page, 'tyreWidthMm', '26');
     expect(
       await page.evaluate(() => (window as unknown as Inspect).coversweep.state().case.wheel.tyre_width_m),
     ).toBe(0.026);
-    const cancelled = await cancelAtSweepsOrMap(page);
+    const cancelled = await cancelling;
     expect(cancelled, 'the sweeps and the map ended before Cancel could be pressed').toBe(true);
     expect(await settled(page)).toBe('done');
     expect(await page.locator('#status-text').textContent()).toContain('Cancelled');

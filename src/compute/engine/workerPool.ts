@@ -137,9 +137,12 @@ export class WorkerPool implements JobRunner {
     const workerCount = this.workers.length;
     // depth 0 takes every job; lane d > 0 only while more than d jobs per worker wait, so toward the end
     // no worker holds queued jobs while another has none.
+    // A lane that puts a job back takes the next one whatever its depth: the other lanes may have ended.
     const lane = async (slot: number, depth: number): Promise<void> => {
+      let putBack = false;
       while (!cancelled) {
-        if (depth > 0 && queue.length <= depth * workerCount) return;
+        if (depth > 0 && !putBack && queue.length <= depth * workerCount) return;
+        putBack = false;
         const next = queue.shift();
         if (!next) return;
         const w = this.worker(slot);
@@ -160,6 +163,7 @@ export class WorkerPool implements JobRunner {
         }
         if (outcome === 'retired' || (outcome instanceof Error && retiredOf.get(w)?.resolved)) {
           queue.unshift(next);
+          putBack = true;
           continue;
         }
         if (outcome instanceof Error) {
@@ -168,8 +172,10 @@ export class WorkerPool implements JobRunner {
           r.resolve();
           this.replace(slot, w);
           replaced++;
-          if (next.attempt === 0) queue.push({ job: next.job, attempt: 1 });
-          else options.onJobFailed?.(next.job, outcome.message || 'worker failed');
+          if (next.attempt === 0) {
+            queue.push({ job: next.job, attempt: 1 });
+            putBack = true;
+          } else options.onJobFailed?.(next.job, outcome.message || 'worker failed');
           continue;
         }
         options.onJobDone?.(next.job, outcome);

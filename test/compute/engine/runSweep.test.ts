@@ -68,7 +68,9 @@ describe('runSweep on a pool (in-process channel workers)', () => {
     const out = await runSweep(pool, cases, { jobsPerWorker: 3 });
     expect(out.workersReplaced).toBe(1);
     expect(out.failedCount).toBe(0);
-    expect(spawner.spawned()).toBeGreaterThanOrEqual(3);
+    // The dead worker's slot gets a fresh worker when it takes another job; the retried job may go to the
+    // other worker (each holds queued jobs while the queue is long), so 2 or 3 workers were spawned.
+    expect(spawner.spawned()).toBeGreaterThanOrEqual(2);
     expectSameAsDirect(cases, out.solutions);
     pool.close();
   });

@@ -108,6 +108,38 @@ describe('WorkerPool dealing (invariants of the pool, no model)', () => {
     expect([...done].sort((a, b) => a - b)).toEqual(Array.from({ length: 20 }, (_, i) => i));
   });
 
+  it('deals a job put back late (its worker died) even when the other lanes have ended', async () => {
+    // Job 3 waits behind job 2 in the second worker and kills it when reached, after every other job
+    // has been dealt: the lanes that could take it have ended, so the lane that puts it back takes it.
+    const fake = fakeWorkers(new Set([3]));
+    const pool = new WorkerPool(fake.spawn, 2);
+    const done: number[] = [];
+    const failed: number[] = [];
+    const run = pool.run(jobsOf(6), {
+      onJobDone: (job) => done.push(job.jobId),
+      onJobFailed: (job) => failed.push(job.jobId),
+    });
+    // Every other job first (job 2 held back), so the first worker's lanes end on an empty queue.
+    for (let i = 0; i < 50 && done.length < 4; i++) {
+      await tick();
+      // Each worker ends the job it solves (the first it holds), never one queued behind it.
+      for (const held of fake.held) if (held[0] !== undefined && held[0] !== 2) fake.finish(held[0]);
+    }
+    expect([...done].sort((a, b) => a - b)).toEqual([0, 1, 4, 5]);
+    fake.finish(2);
+    let ended = false;
+    void run.then(() => {
+      ended = true;
+    });
+    for (let i = 0; i < 50 && !ended; i++) {
+      await tick();
+      for (const id of [...fake.pending.keys()]) fake.finish(id);
+    }
+    expect(ended, 'the run ended').toBe(true);
+    expect(failed).toEqual([3]);
+    expect([...done].sort((a, b) => a - b)).toEqual([0, 1, 2, 4, 5]);
+  });
+
   it('charges a crash to the job that ran, not to the one queued behind it', async () => {
     // Job 0 kills every worker that reaches it; job 1 sits behind it in the first worker each time.
     const fake = fakeWorkers(new Set([0]));
