@@ -333,6 +333,7 @@ export class App implements ComputeHost, ActionsHost, StudyHost, ReportHost {
 
   private showTab(tab: TabId, focus: boolean): void {
     showTabPanel(tab, focus);
+    if (tab === 'map') this.view3dGlue.shown();
     if (tab === 'data') void this.dataGlue.panel().then((panel) => panel.shown());
     if (tab === 'road') void this.roadGlue.panel();
     if (tab === 'study') void this.studyGlue.panel();

@@ -23,19 +23,34 @@ export class View3dGlue {
   private view: WheelView | null = null;
   private readonly channel = new TaskChannel(pool);
   private started = false;
+  /** Numbers came while the view's tab was hidden: drawn when it is shown. */
+  private waiting = false;
   /** The yaw of the field last asked for (null before the first draw). */
   private drawnYawDeg: number | null = null;
 
   constructor(private readonly host: View3dHost) {}
 
-  /** The first numbers of a run are on screen: start the view, or redraw it. */
+  /** The first numbers of a run are on screen: start the view, or redraw it; while its tab is hidden,
+   * when the tab is shown (shown()). Its start-up (module, WebGL context, shader programs) and each
+   * redraw (a field solved on a task worker, then drawn) cost 100-250 ms of the page's thread and as much
+   * in the GPU process in software rendering; on a hidden tab they only slowed the next edit's run. */
   firstNumbersShown(): void {
+    if (byId('view3d').getClientRects().length === 0) {
+      this.waiting = true;
+      return;
+    }
+    this.waiting = false;
     if (!this.started) {
       this.started = true;
       void this.setUp();
     } else {
       void this.update();
     }
+  }
+
+  /** Its tab is shown: draw what came while it was hidden. */
+  shown(): void {
+    if (this.waiting) this.firstNumbersShown();
   }
 
   /** Follow the state's layer switches and its view yaw (a yaw change redraws the field now). */
@@ -87,6 +102,10 @@ export class View3dGlue {
   /** Draw the current design's field (a task on the pool; the latest request wins). */
   async update(): Promise<void> {
     if (!this.view || !this.host.results?.current) return;
+    if (byId('view3d').getClientRects().length === 0) {
+      this.waiting = true;
+      return;
+    }
     const yawDeg = this.host.state.view.view3dYawDeg;
     this.drawnYawDeg = yawDeg;
     const request = viewFieldRequest(this.host.state.case, yawDeg);

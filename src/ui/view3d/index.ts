@@ -127,8 +127,13 @@ export function createWheelView(container: HTMLElement, initialLayers: Partial<V
 
   // ---- rendering on demand ----
   let pending = 0;
+  // A new design's materials are compiled before it is drawn (compileAsync: with the browser's
+  // KHR_parallel_shader_compile the page's thread polls the programs instead of waiting for them; the
+  // view's first drawing waited 240 ms in one task in software rendering). Frames wait meanwhile.
+  let compiling: Promise<void> | null = null;
   const renderNow = () => {
     pending = 0;
+    if (compiling) return;
     for (const key of Object.keys(groups) as (keyof ViewLayers)[]) groups[key].visible = state[key];
     renderer.render(scene, camera);
     disposeRetired();
@@ -182,11 +187,21 @@ export function createWheelView(container: HTMLElement, initialLayers: Partial<V
     for (const build of BUILDERS) build(f, layerScene);
     overlay.fillLegend(f, legendInfo);
     if (first) resetCamera();
-    requestRender();
+    for (const key of Object.keys(groups) as (keyof ViewLayers)[]) groups[key].visible = state[key];
+    const done = renderer
+      .compileAsync(scene, camera)
+      .catch(() => undefined)
+      .then(() => {
+        if (compiling !== done) return; // a later design's compile draws
+        compiling = null;
+        requestRender();
+      });
+    compiling = done;
   }
 
   /** The view as a PNG at least `minWidthPx` device pixels wide (rendered again at a higher pixel ratio). */
-  function toPngBlob(minWidthPx = 0): Promise<Blob> {
+  async function toPngBlob(minWidthPx = 0): Promise<Blob> {
+    while (compiling) await compiling;
     const ratio = renderer.getPixelRatio();
     const cssWidth = Math.max(1, container.clientWidth);
     const wanted = Math.min(4, Math.max(ratio, minWidthPx / cssWidth));
