@@ -19,6 +19,11 @@ export interface View3dHost {
   setView(patch: Partial<ViewState>): void;
 }
 
+/** Whether the view's container is not laid out (its tab hidden). */
+function offScreen(): boolean {
+  return byId('view3d').getClientRects().length === 0;
+}
+
 export class View3dGlue {
   private view: WheelView | null = null;
   private readonly channel = new TaskChannel(pool);
@@ -35,7 +40,7 @@ export class View3dGlue {
    * redraw (a field solved on a task worker, then drawn) cost 100-250 ms of the page's thread and as much
    * in the GPU process in software rendering; on a hidden tab they only slowed the next edit's run. */
   firstNumbersShown(): void {
-    if (byId('view3d').getClientRects().length === 0) {
+    if (offScreen()) {
       this.waiting = true;
       return;
     }
@@ -102,7 +107,7 @@ export class View3dGlue {
   /** Draw the current design's field (a task on the pool; the latest request wins). */
   async update(): Promise<void> {
     if (!this.view || !this.host.results?.current) return;
-    if (byId('view3d').getClientRects().length === 0) {
+    if (offScreen()) {
       this.waiting = true;
       return;
     }

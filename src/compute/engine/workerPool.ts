@@ -26,8 +26,9 @@ const PREFETCH_DEPTH = 3;
  * draws while the workers solve, and a long draw left both workers idle (measured in a trace of a
  * tyre-width edit: 30-250 ms per worker). A worker that dies or throws is replaced and its job retried
  * once on a fresh worker (a job queued behind it goes back to the queue, not charged); a job that fails
- * twice is reported through onJobFailed and the run goes on. Cancelling stops dealing and terminates busy workers at once (they are respawned on the next
- * run): every finished job has already been delivered through onJobDone.
+ * twice is reported through onJobFailed and the run goes on. Cancelling stops dealing and terminates busy
+ * workers at once (they are respawned on the next run): every finished job has already been delivered
+ * through onJobDone.
  *
  * Tasks (runTask: the 3D view's field, a ride, a design study, the map's ride objectives, the reference
  * set) run on the pool's task workers (taskWorkers.ts), spawned on first use, so they neither wait for

@@ -131,10 +131,13 @@ export function createWheelView(container: HTMLElement, initialLayers: Partial<V
   // KHR_parallel_shader_compile the page's thread polls the programs instead of waiting for them; the
   // view's first drawing waited 240 ms in one task in software rendering). Frames wait meanwhile.
   let compiling: Promise<void> | null = null;
+  const showLayers = () => {
+    for (const key of Object.keys(groups) as (keyof ViewLayers)[]) groups[key].visible = state[key];
+  };
   const renderNow = () => {
     pending = 0;
     if (compiling) return;
-    for (const key of Object.keys(groups) as (keyof ViewLayers)[]) groups[key].visible = state[key];
+    showLayers();
     renderer.render(scene, camera);
     disposeRetired();
     overlay.placeLabels(camera);
@@ -187,7 +190,7 @@ export function createWheelView(container: HTMLElement, initialLayers: Partial<V
     for (const build of BUILDERS) build(f, layerScene);
     overlay.fillLegend(f, legendInfo);
     if (first) resetCamera();
-    for (const key of Object.keys(groups) as (keyof ViewLayers)[]) groups[key].visible = state[key];
+    showLayers(); // compileAsync compiles the visible objects' materials
     const done = renderer
       .compileAsync(scene, camera)
       .catch(() => undefined)

@@ -58,6 +58,25 @@ function fakeWorkers(killers: ReadonlySet<number> = new Set()) {
 const jobsOf = (n: number): SolveJob[] => Array.from({ length: n }, (_, jobId) => ({ jobId, cases: [] }));
 const tick = () => new Promise((ok) => setTimeout(ok, 5));
 
+/** A run of `count` jobs on `pool`, with the ids of the jobs done and failed as they land. */
+function runLogged(pool: WorkerPool, count: number) {
+  const done: number[] = [];
+  const failed: number[] = [];
+  const run = pool.run(jobsOf(count), {
+    onJobDone: (job) => done.push(job.jobId),
+    onJobFailed: (job) => failed.push(job.jobId),
+  });
+  return { run, done, failed };
+}
+
+/** Finish every job the fake workers hold, tick after tick, until `stop()` (at most 50 ticks). */
+async function finishAll(fake: ReturnType<typeof fakeWorkers>, stop: () => boolean): Promise<void> {
+  for (let i = 0; i < 50 && !stop(); i++) {
+    await tick();
+    for (const id of [...fake.pending.keys()]) fake.finish(id);
+  }
+}
+
 describe('WorkerPool dealing (invariants of the pool, no model)', () => {
   it('keeps a second job queued in each worker while more jobs wait than workers, none at the end', async () => {
     const fake = fakeWorkers();
@@ -112,13 +131,7 @@ describe('WorkerPool dealing (invariants of the pool, no model)', () => {
     // Job 3 waits behind job 2 in the second worker and kills it when reached, after every other job
     // has been dealt: the lanes that could take it have ended, so the lane that puts it back takes it.
     const fake = fakeWorkers(new Set([3]));
-    const pool = new WorkerPool(fake.spawn, 2);
-    const done: number[] = [];
-    const failed: number[] = [];
-    const run = pool.run(jobsOf(6), {
-      onJobDone: (job) => done.push(job.jobId),
-      onJobFailed: (job) => failed.push(job.jobId),
-    });
+    const { run, done, failed } = runLogged(new WorkerPool(fake.spawn, 2), 6);
     // Every other job first (job 2 held back), so the first worker's lanes end on an empty queue.
     for (let i = 0; i < 50 && done.length < 4; i++) {
       await tick();
@@ -131,10 +144,7 @@ describe('WorkerPool dealing (invariants of the pool, no model)', () => {
     void run.then(() => {
       ended = true;
     });
-    for (let i = 0; i < 50 && !ended; i++) {
-      await tick();
-      for (const id of [...fake.pending.keys()]) fake.finish(id);
-    }
+    await finishAll(fake, () => ended);
     expect(ended, 'the run ended').toBe(true);
     expect(failed).toEqual([3]);
     expect([...done].sort((a, b) => a - b)).toEqual([0, 1, 2, 4, 5]);
@@ -143,17 +153,8 @@ describe('WorkerPool dealing (invariants of the pool, no model)', () => {
   it('charges a crash to the job that ran, not to the one queued behind it', async () => {
     // Job 0 kills every worker that reaches it; job 1 sits behind it in the first worker each time.
     const fake = fakeWorkers(new Set([0]));
-    const pool = new WorkerPool(fake.spawn, 1);
-    const done: number[] = [];
-    const failed: number[] = [];
-    const run = pool.run(jobsOf(4), {
-      onJobDone: (job) => done.push(job.jobId),
-      onJobFailed: (job) => failed.push(job.jobId),
-    });
-    for (let i = 0; i < 50 && done.length + failed.length < 4; i++) {
-      await tick();
-      for (const id of [...fake.pending.keys()]) fake.finish(id);
-    }
+    const { run, done, failed } = runLogged(new WorkerPool(fake.spawn, 1), 4);
+    await finishAll(fake, () => done.length + failed.length >= 4);
     const summary = await run;
     expect(failed).toEqual([0]);
     expect([...done].sort((a, b) => a - b)).toEqual([1, 2, 3]);
